@@ -1,0 +1,49 @@
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { startServer, type RunningServer } from './server-process';
+
+// The login throttle runs only in the real server (jest loads a stub of @nestjs/throttler,
+// see packages/server/test/stubs), so it is checked here over HTTP.
+describe('login rate limit (real server)', () => {
+  let server: RunningServer;
+  beforeAll(async () => {
+    server = await startServer({ TACET_LOGIN_LIMIT_PER_MINUTE: '5' });
+  });
+  afterAll(async () => {
+    await server?.stop();
+  });
+
+  it('answers 429 JSON after the configured number of attempts per minute', async () => {
+    const statuses: number[] = [];
+    for (let i = 0; i < 7; i++) {
+      const res = await fetch(`${server.baseURL}/api/auth/login`, {
+        method: 'POST',
+        headers: { 'content-type': 'application/json' },
+        body: JSON.stringify({ email: 'engineer@tacet.test', password: 'wrong-password' }),
+      });
+      statuses.push(res.status);
+      if (res.status === 429) {
+        const body = await res.json();
+        expect(body.statusCode).toBe(429);
+        expect(typeof body.message).toBe('string');
+      }
+    }
+    expect(statuses.slice(0, 5)).toEqual([401, 401, 401, 401, 401]);
+    expect(statuses.slice(5)).toEqual([429, 429]);
+  });
+
+  it('sends the usual security headers', async () => {
+    const res = await fetch(`${server.baseURL}/api/health`);
+    expect(res.headers.get('x-content-type-options')).toBe('nosniff');
+    expect(res.headers.get('content-security-policy')).toBeTruthy();
+    expect(res.headers.get('x-powered-by')).toBeNull();
+  });
+
+  it('serves the single-page app for deep links and JSON 404 under /api', async () => {
+    const page = await fetch(`${server.baseURL}/projects`);
+    expect(page.status).toBe(200);
+    expect(await page.text()).toContain('<div id="root"');
+    const api = await fetch(`${server.baseURL}/api/no-such-route`);
+    expect(api.status).toBe(404);
+    expect((await api.json()).statusCode).toBe(404);
+  });
+});
