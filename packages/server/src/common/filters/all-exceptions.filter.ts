@@ -1,0 +1,72 @@
+import { Catch, HttpException, HttpStatus, Logger, type ArgumentsHost, type ExceptionFilter } from '@nestjs/common';
+import type { Request, Response } from 'express';
+
+export interface FieldError {
+  field: string;
+  message: string;
+}
+
+/** The body of every error response. */
+export interface ErrorBody {
+  statusCode: number;
+  message: string;
+  errors?: FieldError[];
+}
+
+/** `type` set by body-parser on the errors it raises. */
+function bodyParserErrorType(exception: HttpException): string | undefined {
+  const cause = exception.cause as { type?: unknown } | undefined;
+  return typeof cause?.type === 'string' ? cause.type : undefined;
+}
+
+function messageOf(response: string | object, fallback: string): string {
+  if (typeof response === 'string') return response;
+  const message = (response as { message?: unknown }).message;
+  if (Array.isArray(message)) return message.join('; ');
+  return typeof message === 'string' ? message : fallback;
+}
+
+/** Maps anything thrown to `{statusCode, message, errors?}`; unexpected errors give a bare 500. */
+export function toErrorBody(exception: unknown): ErrorBody {
+  if (!(exception instanceof HttpException)) {
+    return { statusCode: HttpStatus.INTERNAL_SERVER_ERROR, message: 'Internal server error' };
+  }
+  const statusCode = exception.getStatus();
+  const parserError = bodyParserErrorType(exception);
+  if (parserError === 'entity.parse.failed') {
+    return { statusCode, message: 'Request body is not valid JSON' };
+  }
+  if (statusCode === HttpStatus.PAYLOAD_TOO_LARGE) {
+    return { statusCode, message: 'Request body is too large' };
+  }
+  if (statusCode === HttpStatus.TOO_MANY_REQUESTS) {
+    return { statusCode, message: 'Too many requests; try again in a minute' };
+  }
+  const response = exception.getResponse();
+  const body: ErrorBody = { statusCode, message: messageOf(response, exception.message) };
+  const errors = typeof response === 'object' ? (response as { errors?: unknown }).errors : undefined;
+  if (Array.isArray(errors)) body.errors = errors as FieldError[];
+  return body;
+}
+
+/** The one exception filter of the app (registered in `configureApp`). */
+@Catch()
+export class AllExceptionsFilter implements ExceptionFilter {
+  private readonly logger = new Logger('Exceptions');
+
+  catch(exception: unknown, host: ArgumentsHost): void {
+    const http = host.switchToHttp();
+    const request = http.getRequest<Request>();
+    const response = http.getResponse<Response>();
+    const body = toErrorBody(exception);
+    if (body.statusCode >= 500 && !(exception instanceof HttpException)) {
+      const detail = exception instanceof Error ? exception.stack : String(exception);
+      this.logger.error(`${request.method} ${request.originalUrl} failed`, detail);
+    }
+    if (response.headersSent) {
+      response.end();
+      return;
+    }
+    response.status(body.statusCode).json(body);
+  }
+}

@@ -1,0 +1,54 @@
+import { Type } from 'class-transformer';
+import { IsNumber, IsString, MaxLength, ValidateNested } from 'class-validator';
+import { BadRequestException } from '@nestjs/common';
+import { createValidationPipe } from './validation.pipe.js';
+
+class Point {
+  @IsNumber()
+  x: number;
+}
+
+class Shape {
+  @IsString()
+  @MaxLength(5)
+  label: string;
+
+  @ValidateNested({ each: true })
+  @Type(() => Point)
+  points: Point[];
+}
+
+async function errorsFor(body: unknown) {
+  try {
+    await createValidationPipe().transform(body, { type: 'body', metatype: Shape });
+  } catch (error) {
+    expect(error).toBeInstanceOf(BadRequestException);
+    return (error as BadRequestException).getResponse();
+  }
+  throw new Error('expected a validation failure');
+}
+
+describe('createValidationPipe', () => {
+  it('reports each problem with a dotted field path', async () => {
+    await expect(errorsFor({ label: 'too long', points: [{ x: 1 }, { x: 'one' }] })).resolves.toEqual({
+      message: 'Validation failed',
+      errors: [
+        { field: 'label', message: 'label must be shorter than or equal to 5 characters' },
+        { field: 'points.1.x', message: 'x must be a number conforming to the specified constraints' },
+      ],
+    });
+  });
+
+  it('refuses unknown fields', async () => {
+    await expect(errorsFor({ label: 'ok', points: [], role: 'admin' })).resolves.toEqual({
+      message: 'Validation failed',
+      errors: [{ field: 'role', message: 'property role should not exist' }],
+    });
+  });
+
+  it('returns a DTO instance when the body is valid', async () => {
+    const value = await createValidationPipe().transform({ label: 'ok', points: [{ x: 2 }] }, { type: 'body', metatype: Shape });
+    expect(value).toBeInstanceOf(Shape);
+    expect(value.points[0]).toBeInstanceOf(Point);
+  });
+});

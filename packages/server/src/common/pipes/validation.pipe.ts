@@ -1,0 +1,22 @@
+import { BadRequestException, ValidationPipe, type ValidationError } from '@nestjs/common';
+import type { FieldError } from '../filters/all-exceptions.filter.js';
+
+/** Flattens class-validator errors to `[{field, message}]` with dotted property paths. */
+export function toFieldErrors(errors: ValidationError[], parent = ''): FieldError[] {
+  return errors.flatMap((error) => {
+    const field = parent ? `${parent}.${error.property}` : error.property;
+    const own = Object.values(error.constraints ?? {}).map((message) => ({ field, message }));
+    return [...own, ...toFieldErrors(error.children ?? [], field)];
+  });
+}
+
+/** The global pipe: unknown fields are refused, payloads become DTO instances. */
+export function createValidationPipe(): ValidationPipe {
+  return new ValidationPipe({
+    whitelist: true,
+    forbidNonWhitelisted: true,
+    transform: true,
+    exceptionFactory: (errors) =>
+      new BadRequestException({ message: 'Validation failed', errors: toFieldErrors(errors) }),
+  });
+}

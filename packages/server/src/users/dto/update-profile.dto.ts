@@ -1,0 +1,21 @@
+import { ApiPropertyOptional } from '@nestjs/swagger';
+import type { UnitSystem } from '@tacet/vibration';
+import { IsIn, IsNotEmpty, IsOptional, IsString, MaxLength } from 'class-validator';
+import { UNIT_SYSTEMS } from '../user.entity.js';
+import { Trim } from './dto-transforms.js';
+
+/** What every user may change on their own account. */
+export class UpdateProfileDto {
+  @ApiPropertyOptional({ maxLength: 200 })
+  @IsOptional()
+  @Trim()
+  @IsString()
+  @IsNotEmpty()
+  @MaxLength(200)
+  name?: string;
+
+  @ApiPropertyOptional({ enum: UNIT_SYSTEMS })
+  @IsOptional()
+  @IsIn(UNIT_SYSTEMS)
+  unitSystem?: UnitSystem;
+}

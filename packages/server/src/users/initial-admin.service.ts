@@ -1,0 +1,47 @@
+import { Injectable, Logger, type OnApplicationBootstrap } from '@nestjs/common';
+import { InjectRepository } from '@nestjs/typeorm';
+import type { Repository } from 'typeorm';
+import { AppConfig } from '../config/app-config.js';
+import { ConfigError } from '../config/environment.js';
+import { PasswordService } from './password.service.js';
+import { User } from './user.entity.js';
+import { normalizeEmail } from './users.service.js';
+
+/**
+ * Outside demo mode, makes sure an active admin exists: when none does, the account named by
+ * TACET_ADMIN_EMAIL / TACET_ADMIN_PASSWORD is created (or, if that email exists, re-activated
+ * as admin with that password). Without those settings the boot fails with a clear message.
+ */
+@Injectable()
+export class InitialAdminService implements OnApplicationBootstrap {
+  private readonly logger = new Logger(InitialAdminService.name);
+
+  constructor(
+    @InjectRepository(User) private readonly users: Repository<User>,
+    private readonly passwords: PasswordService,
+    private readonly config: AppConfig,
+  ) {}
+
+  async onApplicationBootstrap(): Promise<void> {
+    if (this.config.demo) return;
+    if (await this.users.existsBy({ role: 'admin', active: true })) return;
+    const admin = this.config.initialAdmin;
+    if (!admin) {
+      throw new ConfigError([
+        'No active admin exists: set TACET_ADMIN_EMAIL and TACET_ADMIN_PASSWORD to create the first admin',
+      ]);
+    }
+    const email = normalizeEmail(admin.email);
+    const passwordHash = await this.passwords.hash(admin.password);
+    const existing = await this.users.findOneBy({ email });
+    if (existing) {
+      await this.users.save(this.users.merge(existing, { role: 'admin', active: true, passwordHash }));
+      this.logger.warn(`No active admin existed: ${email} is now an active admin`);
+      return;
+    }
+    await this.users.save(
+      this.users.create({ email, name: 'Administrator', role: 'admin', unitSystem: 'SI', active: true, passwordHash }),
+    );
+    this.logger.log(`Created the first admin, ${email}`);
+  }
+}

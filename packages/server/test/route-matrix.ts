@@ -1,0 +1,54 @@
+import type { Role } from '../src/common/roles.js';
+
+/**
+ * Who may call which API route. The matrix test calls every route as each role and as an
+ * anonymous caller, and fails when a registered /api route is missing here (or a row names a
+ * route that no longer exists). A feature module adds one row per route it registers.
+ *
+ * - `public`: anyone, signed in or not;
+ * - `signed-in`: any signed-in role;
+ * - a list of roles: those roles (admin passes every @Roles check; list it anyway).
+ *
+ * Requests are sent with `body` (default `{}`) to the `path` with every `:param` replaced by
+ * `999999`, an id that does not exist: an allowed caller gets 2xx or a 4xx from validation
+ * or lookup, never 401/403, and nothing is changed.
+ */
+export type Access = 'public' | 'signed-in' | readonly Role[];
+
+export type Method = 'GET' | 'POST' | 'PUT' | 'PATCH' | 'DELETE';
+
+export interface RouteRule {
+  method: Method;
+  /** As registered with Express, e.g. `/api/users/:id`. */
+  path: string;
+  access: Access;
+  body?: object;
+}
+
+export const ROUTE_MATRIX: readonly RouteRule[] = [
+  // health
+  { method: 'GET', path: '/api/health', access: 'public' },
+
+  // API documentation (served by SwaggerModule)
+  { method: 'GET', path: '/api/docs', access: 'public' },
+  { method: 'GET', path: '/api/docs-json', access: 'public' },
+  { method: 'GET', path: '/api/docs-yaml', access: 'public' },
+
+  // auth
+  { method: 'POST', path: '/api/auth/login', access: 'public' },
+  { method: 'GET', path: '/api/auth/me', access: 'signed-in' },
+  { method: 'PATCH', path: '/api/auth/me', access: 'signed-in' },
+  { method: 'POST', path: '/api/auth/me/password', access: 'signed-in' },
+
+  // users
+  { method: 'GET', path: '/api/users', access: ['admin'] },
+  { method: 'POST', path: '/api/users', access: ['admin'] },
+  { method: 'GET', path: '/api/users/:id', access: ['admin'] },
+  { method: 'PATCH', path: '/api/users/:id', access: ['admin'] },
+  { method: 'DELETE', path: '/api/users/:id', access: ['admin'] },
+];
+
+/**
+ * Registered routes that are not API endpoints and need no row: Swagger UI's own files.
+ */
+export const NOT_IN_MATRIX = (path: string): boolean => path.startsWith('/api/docs/');
