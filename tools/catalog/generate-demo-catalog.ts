@@ -2,7 +2,7 @@
  * Generates Tacet's invented demo mount catalog, deterministically (seeded PRNG), in the catalog
  * CSV format of catalog/FORMAT.md (SI columns).
  *
- *   npx tsx tools/catalog/generate-demo-catalog.ts                     → catalog/demo-mounts.csv
+ *   npx tsx tools/catalog/generate-demo-catalog.ts   → catalog/demo-mounts.csv and catalog/demo-suppliers.csv
  *   npx tsx tools/catalog/generate-demo-catalog.ts --rows 100000 --out /tmp/big.csv --seed 7
  *
  * Every supplier, series and part number is invented. The ranges below are common practice for
@@ -12,22 +12,24 @@
  * elastomers with loss factors 0.1–0.25 and dynamic ratios 1.2–2.0; springs with about 50 % travel
  * beyond the rated deflection.
  */
-import { createWriteStream, mkdirSync } from 'node:fs';
-import { dirname, resolve } from 'node:path';
+import { createWriteStream, mkdirSync, writeFileSync } from 'node:fs';
+import { dirname, join, resolve } from 'node:path';
 import { fileURLToPath } from 'node:url';
 
 export interface DemoSupplier {
   name: string;
   code: string;
   email: string;
+  phone: string;
 }
 
+/** Invented suppliers; e-mail domains use the reserved `.example` TLD (RFC 2606). */
 export const DEMO_SUPPLIERS: DemoSupplier[] = [
-  { name: 'Quillmere Isolation', code: 'QM', email: 'quotes@quillmere.example' },
-  { name: 'Tamberlin Elastics', code: 'TE', email: 'sales@tamberlin.example' },
-  { name: 'Norrwick Spring & Wire', code: 'NW', email: 'orders@norrwick.example' },
-  { name: 'Calderfen Resilient Works', code: 'CF', email: 'rfq@calderfen.example' },
-  { name: 'Brightholm Mounting', code: 'BH', email: 'desk@brightholm.example' },
+  { name: 'Quillmere Isolation', code: 'QM', email: 'quotes@quillmere.example', phone: '+1 555 0101' },
+  { name: 'Tamberlin Elastics', code: 'TE', email: 'sales@tamberlin.example', phone: '+1 555 0102' },
+  { name: 'Norrwick Spring & Wire', code: 'NW', email: 'orders@norrwick.example', phone: '+1 555 0103' },
+  { name: 'Calderfen Resilient Works', code: 'CF', email: 'rfq@calderfen.example', phone: '+1 555 0104' },
+  { name: 'Brightholm Mounting', code: 'BH', email: 'desk@brightholm.example', phone: '+1 555 0105' },
 ];
 
 type MountType =
@@ -174,8 +176,16 @@ if (process.argv[1] && resolve(process.argv[1]) === fileURLToPath(import.meta.ur
     return i > 0 ? process.argv[i + 1] : undefined;
   };
   const root = fileURLToPath(new URL('../..', import.meta.url));
-  const out = resolve(arg('out') ?? `${root}/catalog/demo-mounts.csv`);
+  const out = resolve(arg('out') ?? join(root, 'catalog', 'demo-mounts.csv'));
   const rows = arg('rows') ? Number(arg('rows')) : undefined;
   const n = await writeDemoCatalog(out, Number(arg('seed') ?? 1), rows);
   console.log(`wrote ${n} mounts to ${out}`);
+  if (!arg('out')) {
+    const suppliersFile = join(root, 'catalog', 'demo-suppliers.csv');
+    writeFileSync(
+      suppliersFile,
+      csvLine(['name', 'contact_email', 'phone']) + DEMO_SUPPLIERS.map((s) => csvLine([s.name, s.email, s.phone])).join(''),
+    );
+    console.log(`wrote ${DEMO_SUPPLIERS.length} suppliers to ${suppliersFile}`);
+  }
 }
