@@ -1,0 +1,1 @@
+export * from './vibration-input-error.js';

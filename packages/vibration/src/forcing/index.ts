@@ -1,0 +1,3 @@
+export * from './disturbing-frequencies.js';
+export * from './unbalance-force.js';
+export * from './pressure-thrust.js';

@@ -1,0 +1,3 @@
+export * from './complex.js';
+export * from './frequency-grid.js';
+export * from './sdof-frf.js';

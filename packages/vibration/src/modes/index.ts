@@ -1,0 +1,3 @@
+export * from './mount-stiffness.js';
+export * from './rigid-body-modes.js';
+export * from './rocking-stability.js';

@@ -1,0 +1,3 @@
+export * from './constants.js';
+export * from './convert.js';
+export * from './display.js';
