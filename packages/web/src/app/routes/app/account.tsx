@@ -1,0 +1,5 @@
+import { AccountSettings } from '@/features/account/components/account-settings';
+
+export function Component() {
+  return <AccountSettings />;
+}

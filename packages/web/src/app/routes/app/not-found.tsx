@@ -1,0 +1,5 @@
+import { NotFound } from '@/components/errors/not-found';
+
+export function Component() {
+  return <NotFound />;
+}

@@ -1,0 +1,93 @@
+import { AxiosError, AxiosHeaders } from 'axios';
+
+import { errorMessage, errorStatus, fieldErrors, fieldLabel } from './api-errors';
+
+function apiError(status: number, data: unknown, code = 'ERR_BAD_REQUEST'): AxiosError {
+  const config = { headers: new AxiosHeaders() };
+  return new AxiosError('Request failed', code, config, {}, { status, statusText: '', data, headers: {}, config });
+}
+
+describe('errorMessage', () => {
+  it('lists every field problem with a readable field name', () => {
+    const error = apiError(400, {
+      statusCode: 400,
+      message: 'Validation failed',
+      errors: [
+        { field: 'email', message: 'email must be an email' },
+        { field: 'password', message: 'password must be longer than or equal to 10 characters' },
+        { field: 'criteria.minIsolationPct', message: 'must not be greater than 100' },
+      ],
+    });
+    expect(errorMessage(error)).toBe(
+      'Some fields need attention — Email: email must be an email; ' +
+        'Password: password must be longer than or equal to 10 characters; ' +
+        'Criteria › min isolation pct: must not be greater than 100.',
+    );
+  });
+
+  it('passes the server’s own sentence through', () => {
+    expect(errorMessage(apiError(401, { statusCode: 401, message: 'Email or password is incorrect' }))).toBe(
+      'Email or password is incorrect.',
+    );
+    expect(errorMessage(apiError(409, { statusCode: 409, message: 'A user with this email already exists' }))).toBe(
+      'A user with this email already exists.',
+    );
+  });
+
+  it('joins a list of messages', () => {
+    expect(errorMessage(apiError(400, { statusCode: 400, message: ['name should not be empty', 'role is invalid'] }))).toBe(
+      'Name should not be empty. Role is invalid.',
+    );
+  });
+
+  it('speaks plainly about server failures, throttling and lost connections', () => {
+    expect(errorMessage(apiError(500, { statusCode: 500, message: 'Internal server error' }, 'ERR_BAD_RESPONSE'))).toMatch(
+      /^Something went wrong on the server/,
+    );
+    expect(errorMessage(apiError(429, { statusCode: 429, message: 'ThrottlerException: Too Many Requests' }))).toBe(
+      'Too many attempts in a short time. Wait a minute, then try again.',
+    );
+    expect(errorMessage(new AxiosError('Network Error', 'ERR_NETWORK'))).toBe(
+      'Cannot reach the Tacet server. Check your connection and try again.',
+    );
+  });
+
+  it('falls back on the status when the body says nothing', () => {
+    expect(errorMessage(apiError(403, ''))).toBe('Your role does not allow this.');
+    expect(errorMessage(apiError(404, undefined))).toBe('That item no longer exists.');
+  });
+
+  it('handles errors that did not come from the API', () => {
+    expect(errorMessage(new Error('boom'))).toBe('Boom.');
+    expect(errorMessage('???')).toBe('Something went wrong. Try again.');
+  });
+});
+
+describe('fieldErrors', () => {
+  it('maps the first problem of each field for a form', () => {
+    const error = apiError(400, {
+      statusCode: 400,
+      message: 'Validation failed',
+      errors: [
+        { field: 'email', message: 'email must be an email' },
+        { field: 'email', message: 'email should not be empty' },
+        { field: 'name', message: 'name must be shorter' },
+      ],
+    });
+    expect(fieldErrors(error)).toEqual({ email: 'email must be an email', name: 'name must be shorter' });
+    expect(errorStatus(error)).toBe(400);
+  });
+
+  it('is empty for errors without field problems', () => {
+    expect(fieldErrors(apiError(409, { statusCode: 409, message: 'taken' }))).toEqual({});
+    expect(fieldErrors(new Error('x'))).toEqual({});
+  });
+});
+
+describe('fieldLabel', () => {
+  it('turns property paths into words', () => {
+    expect(fieldLabel('unitSystem')).toBe('Unit system');
+    expect(fieldLabel('mountPoints[2].x')).toBe('Mount points 2 › x');
+    expect(fieldLabel('part_number')).toBe('Part number');
+  });
+});

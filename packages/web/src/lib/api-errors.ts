@@ -1,0 +1,107 @@
+import axios from 'axios';
+
+/** One field problem as the server reports it; `field` is the dotted property path. */
+export interface ApiFieldError {
+  field: string;
+  message: string;
+}
+
+/** The server's error body: `{statusCode, message, errors?}`. */
+export interface ApiErrorBody {
+  statusCode: number;
+  message: string | string[];
+  errors?: ApiFieldError[];
+}
+
+function isApiErrorBody(value: unknown): value is ApiErrorBody {
+  if (typeof value !== 'object' || value === null) return false;
+  const message = (value as { message?: unknown }).message;
+  return typeof message === 'string' || Array.isArray(message);
+}
+
+/** `unitSystem` → "Unit system", `criteria.minIsolationPct` → "Criteria › min isolation pct". */
+export function fieldLabel(field: string): string {
+  const words = field
+    .split('.')
+    .map((part) =>
+      part
+        .replace(/\[(\d+)\]/g, ' $1')
+        .replace(/([a-z0-9])([A-Z])/g, '$1 $2')
+        .replace(/[_-]+/g, ' ')
+        .toLowerCase()
+        .trim(),
+    )
+    .filter(Boolean)
+    .join(' › ');
+  return words.charAt(0).toUpperCase() + words.slice(1);
+}
+
+function sentence(text: string): string {
+  const trimmed = text.trim();
+  if (!trimmed) return trimmed;
+  const capital = trimmed.charAt(0).toUpperCase() + trimmed.slice(1);
+  return /[.!?]$/.test(capital) ? capital : `${capital}.`;
+}
+
+/**
+ * The server's field problems keyed by field path (first message per field), ready for
+ * Formik's `setErrors`. Empty when the error carries none.
+ */
+export function fieldErrors(error: unknown): Record<string, string> {
+  if (!axios.isAxiosError(error) || !isApiErrorBody(error.response?.data)) return {};
+  const result: Record<string, string> = {};
+  for (const item of error.response.data.errors ?? []) {
+    if (item && typeof item.field === 'string' && !(item.field in result)) result[item.field] = item.message;
+  }
+  return result;
+}
+
+/** The HTTP status of a failed API call, if the server answered. */
+export function errorStatus(error: unknown): number | undefined {
+  return axios.isAxiosError(error) ? error.response?.status : undefined;
+}
+
+/** Turns whatever a failed call threw into one or two sentences a user understands. */
+export function errorMessage(error: unknown): string {
+  if (axios.isAxiosError(error)) {
+    const response = error.response;
+    if (!response) {
+      if (error.code === 'ECONNABORTED' || error.code === 'ETIMEDOUT') {
+        return 'The server took too long to answer. Try again in a moment.';
+      }
+      return 'Cannot reach the Tacet server. Check your connection and try again.';
+    }
+    const body = isApiErrorBody(response.data) ? response.data : undefined;
+    const status = response.status;
+    if (status >= 500) {
+      return 'Something went wrong on the server. Try again; if it keeps happening, tell your administrator.';
+    }
+    if (status === 429) {
+      return 'Too many attempts in a short time. Wait a minute, then try again.';
+    }
+    const fields = body?.errors?.filter((item) => item && typeof item.field === 'string') ?? [];
+    if (fields.length > 0) {
+      const details = fields.map((item) => `${fieldLabel(item.field)}: ${item.message}`).join('; ');
+      return `Some fields need attention — ${details}.`;
+    }
+    if (body) {
+      const messages = Array.isArray(body.message) ? body.message : [body.message];
+      const text = messages.filter((m) => typeof m === 'string' && m.trim()).map(sentence).join(' ');
+      if (text) return text;
+    }
+    switch (status) {
+      case 401:
+        return 'Your session has ended. Sign in again.';
+      case 403:
+        return 'Your role does not allow this.';
+      case 404:
+        return 'That item no longer exists.';
+      case 409:
+        return 'Someone else changed this in the meantime. Reload and try again.';
+      default:
+        return 'The request was not accepted. Check what you entered and try again.';
+    }
+  }
+  if (error instanceof Error && error.message) return sentence(error.message);
+  return 'Something went wrong. Try again.';
+}
