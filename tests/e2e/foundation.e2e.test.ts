@@ -41,7 +41,10 @@ describe('sign-in and role-aware navigation', () => {
     const engineer = await newPage(browser);
     await signIn(engineer, 'engineer@tacet.test');
     await engineer.goto('/account');
-    await expect(engineer.getByText('Erin Engineer').first().isVisible()).resolves.toBe(true);
+    const name = engineer.getByLabel('Name');
+    await name.waitFor();
+    expect(await name.inputValue()).toBe('Erin Engineer');
+    await expect(engineer.getByTestId('current-user-name').textContent()).resolves.toContain('Erin Engineer');
     await screenshot(engineer, 'account-engineer');
     await engineer.context().close();
 
