@@ -1,5 +1,5 @@
-import { PlaceholderPage } from '@/components/placeholder-page';
+import { OutboxPage } from '@/features/outbox/components/outbox-page';
 
 export function Component() {
-  return <PlaceholderPage title="Outbox" purpose="The e-mail Tacet has sent, as received by the local mail catcher in demo mode." />;
+  return <OutboxPage />;
 }
