@@ -30,8 +30,20 @@ export const routes: RouteObject[] = [
             errorElement: <RouteError />,
             children: [
               { index: true, handle: area('overview'), lazy: () => import('./routes/app/overview') },
-              { path: 'projects', handle: area('projects'), lazy: () => import('./routes/app/projects') },
-              { path: 'catalog', handle: area('catalog'), lazy: () => import('./routes/app/catalog') },
+              { path: 'projects', handle: area('projects'), lazy: () => import('./routes/app/projects/list') },
+              { path: 'projects/:projectId', handle: area('projects'), lazy: () => import('./routes/app/projects/project') },
+              { path: 'designs/:designId', handle: area('projects'), lazy: () => import('./routes/app/designs/design') },
+              {
+                path: 'catalog',
+                handle: area('catalog'),
+                lazy: () => import('./routes/app/catalog/layout'),
+                children: [
+                  { index: true, lazy: () => import('./routes/app/catalog/mounts') },
+                  // Catalog managers and admins only: the page itself says so to anyone else.
+                  { path: 'import', lazy: () => import('./routes/app/catalog/import') },
+                  { path: 'suppliers', lazy: () => import('./routes/app/catalog/suppliers') },
+                ],
+              },
               { path: 'purchasing', handle: area('purchasing'), lazy: () => import('./routes/app/purchasing') },
               { path: 'admin/users', handle: area('people'), lazy: () => import('./routes/app/admin/users') },
               { path: 'admin/outbox', handle: area('outbox'), lazy: () => import('./routes/app/admin/outbox') },

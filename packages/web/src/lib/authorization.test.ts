@@ -1,4 +1,14 @@
-import { AREAS, areasFor, canUseArea, isRole, ROLES, type AreaKey, type Role } from './authorization';
+import {
+  AREAS,
+  areasFor,
+  canDesign,
+  canUseArea,
+  canWriteCatalog,
+  isRole,
+  ROLES,
+  type AreaKey,
+  type Role,
+} from './authorization';
 
 // The role → area table from the product's role list (PRODUCT.md "Who uses it") and the
 // navigation brief. Written out in full so a change to the table must change this test too.
@@ -39,5 +49,17 @@ describe('authorization table', () => {
     expect(isRole('engineer')).toBe(true);
     expect(isRole('Engineer')).toBe(false);
     expect(isRole(undefined)).toBe(false);
+  });
+});
+
+describe('design rights', () => {
+  it('lets engineers and admins create and change designs, nobody else', () => {
+    expect(ROLES.filter((role) => canDesign(role))).toEqual(['admin', 'engineer']);
+  });
+});
+
+describe('catalog rights', () => {
+  it('lets catalog managers and admins change and import the catalog, nobody else', () => {
+    expect(ROLES.filter((role) => canWriteCatalog(role))).toEqual(['admin', 'catalog_manager']);
   });
 });

@@ -61,3 +61,17 @@ export function canUseArea(role: Role, key: AreaKey): boolean {
 export function areasFor(role: Role): Area[] {
   return AREAS.filter((area) => area.roles.includes(role));
 }
+
+/** Roles that create projects and designs, run selections and save designs (PRODUCT.md roles). */
+export const DESIGNER_ROLES: readonly Role[] = ['admin', 'engineer'];
+
+export function canDesign(role: Role): boolean {
+  return DESIGNER_ROLES.includes(role);
+}
+
+/** Roles that add, edit, retire and import catalog mounts and suppliers (PRODUCT.md roles). */
+export const CATALOG_WRITER_ROLES: readonly Role[] = ['admin', 'catalog_manager'];
+
+export function canWriteCatalog(role: Role): boolean {
+  return CATALOG_WRITER_ROLES.includes(role);
+}

@@ -14,6 +14,8 @@ export interface FakeRequest {
   /** Path below `/api`, without the query string, e.g. `/users/3`. */
   path: string;
   params: Record<string, string>;
+  /** The query string as the server would read it (`?page=2&q=abc` → `{page: '2', q: 'abc'}`). */
+  query: Record<string, string>;
   body: unknown;
   headers: Record<string, string>;
 }
@@ -21,6 +23,8 @@ export interface FakeRequest {
 export interface FakeReply {
   status: number;
   data?: unknown;
+  /** Response headers besides `content-type: application/json`, e.g. `content-disposition`. */
+  headers?: Record<string, string>;
 }
 
 export type FakeHandler = (request: FakeRequest) => FakeReply | Promise<FakeReply>;
@@ -77,7 +81,10 @@ export class FakeApi {
     for (const [key, value] of Object.entries(AxiosHeaders.from(config.headers).toJSON())) {
       if (typeof value === 'string') headers[key.toLowerCase()] = value;
     }
-    const request: FakeRequest = { method, path, params: {}, body: parseBody(config.data), headers };
+    const query = Object.fromEntries(
+      new URL(api.getUri({ url: config.url, params: config.params }), 'http://fake.invalid').searchParams,
+    );
+    const request: FakeRequest = { method, path, params: {}, query, body: parseBody(config.data), headers };
     this.requests.push(request);
 
     let reply: FakeReply | undefined;
@@ -100,7 +107,7 @@ export class FakeApi {
       data: reply.data ?? '',
       status: reply.status,
       statusText: String(reply.status),
-      headers: new AxiosHeaders({ 'content-type': 'application/json' }),
+      headers: new AxiosHeaders({ 'content-type': 'application/json', ...reply.headers }),
       config,
       request: {},
     };

@@ -1,0 +1,386 @@
+import { Alert, Button, Callout, Tab, Tabs, Tag } from '@blueprintjs/core';
+import { FloppyDiskIcon, LockIcon, RefreshIcon, UndoIcon } from '@blueprintjs/icons';
+import { Form, Formik, useFormikContext, type FormikHelpers, type FormikProps } from 'formik';
+import { useCallback, useEffect, useMemo, useRef, useState, type ReactNode } from 'react';
+import { useBlocker } from 'react-router-dom';
+
+import { PageHeader } from '@/components/page-header';
+import { errorMessage } from '@/lib/api-errors';
+import { useUser, type SessionUser } from '@/lib/auth';
+import { canDesign } from '@/lib/authorization';
+import { formatDateTime } from '@/lib/dates';
+import { useUnits } from '@/lib/units';
+import type { Candidate, Design } from '@/types/design-api';
+
+import { useSupplierOptions } from '../api/get-supplier-options';
+import { isEditConflict, useUpdateDesign } from '../api/update-design';
+import { useDesignFigures, type DesignFigures } from '../hooks/use-design-figures';
+import {
+  describeErrors,
+  designFormSchema,
+  sectionsWithErrors,
+  toDesignInput,
+  toFormValues,
+  type DesignFormValues,
+} from '../schemas/design-form';
+import { CriteriaPanel } from './criteria-panel';
+import { DesignStatusTag } from './design-status-tag';
+import { EquipmentPanel } from './equipment-panel';
+import { KeyFigures } from './key-figures';
+import { MountLayoutPanel } from './mount-layout-panel';
+import { OperatingPanel } from './operating-panel';
+
+export const CONFLICT_MESSAGE = 'This design was changed by someone else; reload it';
+
+/** What the selection part of the page (composed by the route) gets from the design. */
+export interface DesignSelectionContext {
+  design: Design;
+  /** Live figures of the current, possibly unsaved, input. */
+  figures: DesignFigures;
+  /** The user may run a selection (engineer, admin). */
+  canRun: boolean;
+  /** The user may choose a candidate and save (author or admin, draft only). */
+  canEdit: boolean;
+  /** The input differs from the saved one. */
+  dirty: boolean;
+  /**
+   * Saves unsaved input first; resolves with the saved design, or null when it could not be
+   * saved (the reasons are shown on the page).
+   */
+  saveIfNeeded: () => Promise<Design | null>;
+  /** Records a candidate as the chosen mounts (PUT with the version). */
+  choose: (candidate: Candidate) => Promise<boolean>;
+  choosing: boolean;
+}
+
+export type DesignTab = 'equipment' | 'layout' | 'running' | 'requirements' | 'selection';
+
+export interface DesignWorkspaceProps {
+  design: Design;
+  /** Fetches the design again (after a conflict); resolves with the fresh design. */
+  onReload: () => Promise<Design | undefined>;
+  renderSelection: (context: DesignSelectionContext) => ReactNode;
+  /** The tab shown first. */
+  initialTab?: DesignTab;
+}
+
+/** Why the signed-in user cannot change this design, or null when they can. */
+export function readOnlyReason(design: Design, user: SessionUser): string | null {
+  if (!canDesign(user.role)) return 'You can read this design; only engineers and administrators change designs.';
+  if (design.status !== 'draft') {
+    return design.status === 'in_review'
+      ? 'This revision is in review, so it cannot be changed now.'
+      : 'Released designs are frozen; a change starts a new revision.';
+  }
+  if (user.role !== 'admin' && design.author.id !== user.id) {
+    return `Only the author (${design.author.name}) or an administrator can change this draft.`;
+  }
+  return null;
+}
+
+function TabTitle({ text, problems }: { text: string; problems: boolean }) {
+  return (
+    <span className="tc-tab-title">
+      {text}
+      {problems ? (
+        <Tag minimal round intent="danger" className="tc-tab-badge" aria-label="has problems">
+          !
+        </Tag>
+      ) : null}
+    </span>
+  );
+}
+
+/** Warns before leaving the page (in the app or the browser) with unsaved input. */
+function UnsavedChangesGuard({ dirty }: { dirty: boolean }) {
+  const blocker = useBlocker(({ currentLocation, nextLocation }) => dirty && currentLocation.pathname !== nextLocation.pathname);
+  useEffect(() => {
+    if (!dirty) return undefined;
+    const warn = (event: BeforeUnloadEvent) => event.preventDefault();
+    window.addEventListener('beforeunload', warn);
+    return () => window.removeEventListener('beforeunload', warn);
+  }, [dirty]);
+  return (
+    <Alert
+      isOpen={blocker.state === 'blocked'}
+      intent="warning"
+      confirmButtonText="Leave without saving"
+      cancelButtonText="Stay"
+      onConfirm={() => blocker.proceed?.()}
+      onCancel={() => blocker.reset?.()}
+    >
+      <p>This design has unsaved changes. Leave the page and lose them?</p>
+    </Alert>
+  );
+}
+
+/** What the page-level state hands to the editor inside Formik. */
+interface EditorProps {
+  /** The design as loaded into the form: its version is the one a save sends. */
+  base: Design;
+  /** A newer version is on the server than the one being edited. */
+  newer: boolean;
+  readOnlyText: string | null;
+  canRun: boolean;
+  tab: DesignTab;
+  onTab: (tab: DesignTab) => void;
+  conflict: boolean;
+  failure: string | null;
+  reloading: boolean;
+  choosing: boolean;
+  onReload: (formik: FormikProps<DesignFormValues>) => Promise<void>;
+  onChoose: (candidate: Candidate, formik: FormikProps<DesignFormValues>) => Promise<boolean>;
+  renderSelection: DesignWorkspaceProps['renderSelection'];
+}
+
+function DesignEditor(props: EditorProps) {
+  const { base, newer, readOnlyText, canRun, tab, onTab, conflict, failure, reloading, choosing, renderSelection } = props;
+  const readOnly = readOnlyText !== null;
+  const formik = useFormikContext<DesignFormValues>();
+  const { values, errors, dirty, submitCount, resetForm, isSubmitting } = formik;
+  const units = useUnits();
+  const figures = useDesignFigures(values, units);
+  const suppliers = useSupplierOptions();
+  const problems = useMemo(() => sectionsWithErrors(errors), [errors]);
+  const problemList = useMemo(() => (submitCount > 0 ? describeErrors(errors, values) : []), [submitCount, errors, values]);
+
+  // The latest state for the callbacks handed to the selection panel (stable identities).
+  const latest = useRef({ formik, base, onChoose: props.onChoose });
+  latest.current = { formik, base, onChoose: props.onChoose };
+
+  const saveIfNeeded = useCallback(async (): Promise<Design | null> => {
+    const current = latest.current;
+    if (!current.formik.dirty) return current.base;
+    const saved = (await current.formik.submitForm()) as Design | null | undefined;
+    return saved ?? null;
+  }, []);
+  const choose = useCallback((candidate: Candidate) => latest.current.onChoose(candidate, latest.current.formik), []);
+
+  const context: DesignSelectionContext = {
+    design: base,
+    figures,
+    canRun,
+    canEdit: !readOnly,
+    dirty,
+    saveIfNeeded,
+    choose,
+    choosing,
+  };
+
+  const supplierList = suppliers.isError ? null : suppliers.data;
+
+  return (
+    <Form noValidate aria-label="Design input">
+      <PageHeader
+        title={base.name}
+        description={
+          <span className="tc-design-meta">
+            <span>Revision {base.revision}</span>
+            <DesignStatusTag status={base.status} />
+            <span aria-hidden="true">·</span>
+            <span>by {base.author.name}</span>
+            <span aria-hidden="true">·</span>
+            <span>updated {formatDateTime(base.updatedAt)}</span>
+          </span>
+        }
+        actions={
+          readOnly ? (
+            <Tag minimal large icon={<LockIcon />} className="tc-readonly-tag">
+              Read only
+            </Tag>
+          ) : (
+            <div className="tc-save-actions">
+              {dirty ? (
+                <Tag minimal intent="warning" className="tc-dirty-tag">
+                  Unsaved changes
+                </Tag>
+              ) : (
+                <span className="tc-muted tc-saved-note">All changes saved</span>
+              )}
+              {dirty ? (
+                <Button icon={<UndoIcon />} text="Discard" variant="minimal" onClick={() => resetForm()} disabled={isSubmitting} />
+              ) : null}
+              <Button
+                type="submit"
+                intent="primary"
+                icon={<FloppyDiskIcon />}
+                text="Save"
+                disabled={!dirty || choosing}
+                loading={isSubmitting}
+              />
+            </div>
+          )
+        }
+      />
+      {readOnlyText ? (
+        <Callout icon={<LockIcon />} className="tc-note" title="Read only">
+          {readOnlyText}
+        </Callout>
+      ) : null}
+      {conflict || newer ? (
+        <Callout intent="warning" title={CONFLICT_MESSAGE} role="alert" className="tc-note">
+          <p>
+            {conflict
+              ? 'Your changes were not saved: someone else saved this design since you opened it.'
+              : 'Someone else saved a newer version of this design since you opened it.'}{' '}
+            Reloading shows their version{dirty ? ' and discards your unsaved edits' : ''}.
+          </p>
+          <Button
+            icon={<RefreshIcon />}
+            intent="warning"
+            text="Reload"
+            loading={reloading}
+            onClick={() => void props.onReload(formik)}
+          />
+        </Callout>
+      ) : null}
+      {failure ? (
+        <Callout intent="danger" role="alert" className="tc-note" title="Not saved">
+          {failure}
+        </Callout>
+      ) : null}
+      {problemList.length > 0 ? (
+        <Callout intent="danger" title="Some input needs attention before it can be saved" role="alert" className="tc-note">
+          <ul className="tc-problem-list">
+            {problemList.map((problem) => (
+              <li key={problem}>{problem}</li>
+            ))}
+          </ul>
+        </Callout>
+      ) : null}
+      <KeyFigures figures={figures} chosen={base.chosen} units={units} />
+      <Tabs id="design-sections" selectedTabId={tab} onChange={(id) => onTab(id as DesignTab)} size="large" className="tc-design-tabs">
+        <Tab
+          id="equipment"
+          title={<TabTitle text="Equipment" problems={problems.has('components')} />}
+          panel={<EquipmentPanel readOnly={readOnly} figures={figures} />}
+        />
+        <Tab
+          id="layout"
+          title={<TabTitle text="Mount layout" problems={problems.has('mountPoints')} />}
+          panel={<MountLayoutPanel readOnly={readOnly} figures={figures} />}
+        />
+        <Tab
+          id="running"
+          title={<TabTitle text="Running conditions" problems={problems.has('operating')} />}
+          panel={<OperatingPanel readOnly={readOnly} figures={figures} />}
+        />
+        <Tab
+          id="requirements"
+          title={<TabTitle text="Requirements" problems={problems.has('criteria')} />}
+          panel={<CriteriaPanel readOnly={readOnly} suppliers={supplierList} />}
+        />
+        <Tab id="selection" title={<TabTitle text="Mount selection" problems={false} />} panel={<>{renderSelection(context)}</>} />
+      </Tabs>
+      {readOnly ? null : <UnsavedChangesGuard dirty={dirty} />}
+    </Form>
+  );
+}
+
+/**
+ * The design page body: header with save, key figures, the input tabs and the selection tab
+ * (rendered by the route). Everything shown is recomputed in the browser as the user types.
+ * A save sends the version the form was loaded from, so a concurrent change answers 409.
+ */
+export function DesignWorkspace({ design, onReload, renderSelection, initialTab = 'equipment' }: DesignWorkspaceProps) {
+  const user = useUser();
+  const units = useUnits();
+  const updateDesign = useUpdateDesign();
+  const [tab, setTab] = useState<DesignTab>(initialTab);
+  const [base, setBase] = useState<Design>(design);
+  const [conflict, setConflict] = useState(false);
+  const [failure, setFailure] = useState<string | null>(null);
+  const [reloading, setReloading] = useState(false);
+  const [choosing, setChoosing] = useState(false);
+
+  const readOnlyText = readOnlyReason(base, user);
+  const initialValues = useMemo(() => toFormValues(base.input, units), [base.input, units]);
+  const schema = useMemo(() => designFormSchema(units), [units]);
+  const newer = design.id === base.id && design.version > base.version;
+
+  const fail = (error: unknown) => {
+    // 409 also answers a frozen or in-review design and a duplicate name: those are said as they are.
+    if (isEditConflict(error) && !/frozen|in review|already exists/i.test(errorMessage(error))) setConflict(true);
+    else setFailure(errorMessage(error));
+  };
+
+  const save = async (values: DesignFormValues, helpers: FormikHelpers<DesignFormValues>): Promise<Design | null> => {
+    setFailure(null);
+    const input = toDesignInput(values, units);
+    if (!input) {
+      setFailure('Some input is incomplete. Fill in every required value, then save again.');
+      return null;
+    }
+    try {
+      const saved = await updateDesign.mutateAsync({ designId: base.id, version: base.version, input });
+      setBase(saved);
+      setConflict(false);
+      helpers.resetForm({ values: toFormValues(saved.input, units) });
+      return saved;
+    } catch (error) {
+      fail(error);
+      return null;
+    }
+  };
+
+  const choose = async (candidate: Candidate, formik: FormikProps<DesignFormValues>): Promise<boolean> => {
+    if (formik.dirty) {
+      setFailure('Save or discard the changed input before choosing mounts.');
+      return false;
+    }
+    setFailure(null);
+    setChoosing(true);
+    try {
+      const chosen =
+        candidate.kind === 'series' && candidate.seriesId
+          ? { chosenSeriesId: candidate.seriesId }
+          : { chosenMountId: candidate.mountId };
+      const saved = await updateDesign.mutateAsync({ designId: base.id, version: base.version, ...chosen });
+      setBase(saved);
+      setConflict(false);
+      return true;
+    } catch (error) {
+      fail(error);
+      return false;
+    } finally {
+      setChoosing(false);
+    }
+  };
+
+  const reload = async (formik: FormikProps<DesignFormValues>) => {
+    setReloading(true);
+    try {
+      const fresh = await onReload();
+      if (fresh) {
+        setBase(fresh);
+        formik.resetForm({ values: toFormValues(fresh.input, units) });
+      }
+      setConflict(false);
+      setFailure(null);
+    } catch (error) {
+      setFailure(errorMessage(error));
+    } finally {
+      setReloading(false);
+    }
+  };
+
+  return (
+    <Formik<DesignFormValues> key={`${base.id}:${units.system}`} initialValues={initialValues} validationSchema={schema} onSubmit={save}>
+      <DesignEditor
+        base={base}
+        newer={newer}
+        readOnlyText={readOnlyText}
+        canRun={canDesign(user.role)}
+        tab={tab}
+        onTab={setTab}
+        conflict={conflict}
+        failure={failure}
+        reloading={reloading}
+        choosing={choosing}
+        onReload={reload}
+        onChoose={choose}
+        renderSelection={renderSelection}
+      />
+    </Formik>
+  );
+}

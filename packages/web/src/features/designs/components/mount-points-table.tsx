@@ -1,0 +1,105 @@
+import { Button, HTMLTable } from '@blueprintjs/core';
+import { PlusIcon, TrashIcon } from '@blueprintjs/icons';
+import { FieldArray, useFormikContext } from 'formik';
+
+import { useUnits } from '@/lib/units';
+
+import { blankMountPoint, type DesignFormValues } from '../schemas/design-form';
+import { CellInput, ListError } from './form-cells';
+
+/** The next free label: A, B, … Z, then P27, P28 … */
+export function nextPointLabel(existing: readonly string[]): string {
+  const taken = new Set(existing.map((label) => label.trim().toUpperCase()));
+  for (let i = 0; i < 26; i++) {
+    const letter = String.fromCharCode(65 + i);
+    if (!taken.has(letter)) return letter;
+  }
+  let n = existing.length + 1;
+  while (taken.has(`P${n}`)) n++;
+  return `P${n}`;
+}
+
+export interface MountPointsTableProps {
+  readOnly: boolean;
+  /** Live loads with equal mounts [N], in row order, or null while they cannot be computed. */
+  loadsN: readonly number[] | null;
+}
+
+/** Where the mounts sit (plan position and height of their elastic centre) and the load each takes. */
+export function MountPointsTable({ readOnly, loadsN }: MountPointsTableProps) {
+  const { values } = useFormikContext<DesignFormValues>();
+  const units = useUnits();
+  const m = units.label('position');
+
+  return (
+    <FieldArray name="mountPoints">
+      {({ push, remove }) => (
+        <>
+          <HTMLTable compact className="tc-table tc-edit-table" aria-label="Mount points">
+            <thead>
+              <tr>
+                <th scope="col">Label</th>
+                <th scope="col">x ({m})</th>
+                <th scope="col">y ({m})</th>
+                <th scope="col">z ({m})</th>
+                <th scope="col" className="tc-number">
+                  Load, equal mounts
+                </th>
+                {readOnly ? null : (
+                  <th scope="col">
+                    <span className="tc-visually-hidden">Actions</span>
+                  </th>
+                )}
+              </tr>
+            </thead>
+            <tbody>
+              {values.mountPoints.map((row, index) => {
+                const name = row.label.trim() || `point ${index + 1}`;
+                const field = (key: string) => `mountPoints[${index}].${key}`;
+                const load = loadsN?.[index];
+                return (
+                  <tr key={index}>
+                    <td className="tc-cell-label">
+                      <CellInput name={field('label')} label={`Label of mount point ${index + 1}`} readOnly={readOnly} />
+                    </td>
+                    {(['x', 'y', 'z'] as const).map((axis) => (
+                      <td key={axis}>
+                        <CellInput name={field(axis)} label={`${axis} of point ${name}`} readOnly={readOnly} numeric />
+                      </td>
+                    ))}
+                    <td className={`tc-number${load !== undefined && load < 0 ? ' tc-text-danger' : ''}`}>
+                      {load === undefined ? '—' : units.format('force', load)}
+                    </td>
+                    {readOnly ? null : (
+                      <td className="tc-table-actions">
+                        <Button
+                          variant="minimal"
+                          size="small"
+                          icon={<TrashIcon />}
+                          aria-label={`Remove point ${name}`}
+                          title="Remove"
+                          disabled={values.mountPoints.length <= 3}
+                          onClick={() => remove(index)}
+                        />
+                      </td>
+                    )}
+                  </tr>
+                );
+              })}
+            </tbody>
+          </HTMLTable>
+          <ListError name="mountPoints" />
+          {readOnly ? null : (
+            <Button
+              className="tc-add-row"
+              icon={<PlusIcon />}
+              variant="outlined"
+              text="Add mount point"
+              onClick={() => push(blankMountPoint(nextPointLabel(values.mountPoints.map((p) => p.label))))}
+            />
+          )}
+        </>
+      )}
+    </FieldArray>
+  );
+}

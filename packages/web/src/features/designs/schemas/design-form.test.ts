@@ -1,0 +1,149 @@
+import { lbToKg } from '@tacet/vibration';
+
+import { unitsFor } from '@/lib/units';
+import { demoInput } from '@/testing/design-fakes';
+
+import {
+  describeErrors,
+  designFormSchema,
+  numberText,
+  parseList,
+  toDesignInput,
+  toFormValues,
+  type DesignFormValues,
+} from './design-form';
+
+const SI = unitsFor('SI');
+const US = unitsFor('US');
+
+function errorsOf(values: DesignFormValues, units = SI): Record<string, unknown> {
+  try {
+    designFormSchema(units).validateSync(values, { abortEarly: false });
+    return {};
+  } catch (error) {
+    const out: Record<string, unknown> = {};
+    for (const inner of (error as { inner: { path: string; message: string }[] }).inner) out[inner.path] ??= inner.message;
+    return out;
+  }
+}
+
+describe('design form values', () => {
+  it('round-trips the saved SI input exactly in SI units', () => {
+    const input = demoInput();
+    expect(toDesignInput(toFormValues(input, SI), SI)).toEqual(input);
+  });
+
+  it('shows US units and converts typed values back to SI', () => {
+    const values = toFormValues(demoInput(), US);
+    // 300 kg = 661.387 lb; 0.65 m = 25.5906 in (1 lb = 0.45359237 kg, 1 in = 25.4 mm: exact definitions).
+    expect(values.components[0]).toMatchObject({ mass: '661.387', x: '25.5906' });
+    expect(values.criteria.ambientTemp).toBe('77');
+
+    values.components[0]!.mass = '700';
+    values.mountPoints[0]!.x = '30';
+    values.criteria.ambientTemp = '104';
+    const input = toDesignInput(values, US)!;
+    expect(input.components[0]!.massKg).toBeCloseTo(lbToKg(700), 9);
+    expect(input.components[0]!.massKg).toBeCloseTo(317.515, 3);
+    expect(input.mountPoints[0]!.x).toBeCloseTo(0.762, 9);
+    expect(input.criteria.ambientTempC).toBeCloseTo(40, 9);
+    // Unchanged figures come back within the six significant figures shown.
+    expect(input.components[1]!.massKg).toBeCloseTo(450, 3);
+  });
+
+  it('keeps optional parts optional', () => {
+    const values = toFormValues(demoInput(), SI);
+    values.operating.vaneCount = '';
+    values.operating.lineFrequencyHz = ' ';
+    values.criteria.ambientTemp = '';
+    values.components[2] = { ...values.components[2]!, lx: '', ly: '', lz: '' };
+    const input = toDesignInput(values, SI)!;
+    expect(input.operating).toEqual({ speedRpm: 1480, orders: [1, 2] });
+    expect(input.criteria).not.toHaveProperty('ambientTempC');
+    expect(input.components[2]).not.toHaveProperty('box');
+  });
+
+  it('sends a speed range instead of a fixed speed', () => {
+    const values = toFormValues(demoInput(), SI);
+    values.operating = { ...values.operating, speedMode: 'range', speedMinRpm: '900', speedMaxRpm: '1480' };
+    expect(toDesignInput(values, SI)!.operating).toEqual({
+      speedRangeRpm: { min: 900, max: 1480 },
+      orders: [1, 2],
+      vaneCount: 6,
+      lineFrequencyHz: 50,
+    });
+  });
+
+  it('formats numbers for the input boxes without float noise', () => {
+    expect(numberText(0.1 + 0.2)).toBe('0.3');
+    expect(numberText(undefined)).toBe('');
+    expect(parseList('1, 2;3 4')).toEqual([1, 2, 3, 4]);
+    expect(parseList('1, two')).toBeUndefined();
+  });
+});
+
+describe('design form validation', () => {
+  it('accepts the demo input', () => {
+    expect(errorsOf(toFormValues(demoInput(), SI))).toEqual({});
+  });
+
+  it('asks for a positive mass and finite numbers, in words', () => {
+    const values = toFormValues(demoInput(), SI);
+    values.components[0]!.mass = '0';
+    values.components[1]!.x = 'abc';
+    values.components[2]!.mass = '';
+    const errors = errorsOf(values);
+    expect(errors['components[0].mass']).toBe('The mass must be more than 0');
+    expect(errors['components[1].x']).toBe('x must be a number');
+    expect(errors['components[2].mass']).toBe('Enter the mass');
+  });
+
+  it('wants all three box dimensions or none', () => {
+    const values = toFormValues(demoInput(), SI);
+    values.components[2]!.ly = '';
+    expect(errorsOf(values)['components[2].ly']).toBe('Give all three box dimensions, or none');
+  });
+
+  it('needs three mount points with their own labels', () => {
+    const values = toFormValues(demoInput(), SI);
+    values.mountPoints[1]!.label = 'A';
+    expect(errorsOf(values)['mountPoints']).toBe('Each mount point needs its own label');
+    values.mountPoints = values.mountPoints.slice(0, 2);
+    expect(errorsOf(values)['mountPoints']).toBe('Give at least 3 mount points');
+  });
+
+  it('checks speeds, orders and the utilisation window', () => {
+    const values = toFormValues(demoInput(), SI);
+    values.operating = { ...values.operating, speedMode: 'range', speedMinRpm: '1500', speedMaxRpm: '900', orders: '1, x' };
+    values.criteria.minUtilization = '0.9';
+    values.criteria.maxUtilization = '0.8';
+    const errors = errorsOf(values);
+    expect(errors['operating.speedMaxRpm']).toBe('The highest speed cannot be below the lowest');
+    expect(errors['operating.orders']).toBe('Orders: give numbers separated by commas');
+    expect(errors['criteria.maxUtilization']).toBe('The highest utilisation must be above the lowest');
+  });
+
+  it('needs something to isolate from', () => {
+    const values = toFormValues(demoInput(), SI);
+    values.operating = { ...values.operating, speedRpm: '', lineFrequencyHz: '', extraFrequenciesHz: '' };
+    expect(errorsOf(values)['operating.speedRpm']).toMatch(/Give a speed or a line frequency/);
+  });
+
+  it('limits the ambient temperature in the user’s unit', () => {
+    const values = toFormValues(demoInput(), US);
+    values.criteria.ambientTemp = '800';
+    expect(errorsOf(values, US)['criteria.ambientTemp']).toBe('The ambient temperature must be at most 752 °F');
+  });
+
+  it('describes problems with where they are', () => {
+    const values = toFormValues(demoInput(), SI);
+    const text = describeErrors(
+      { components: [undefined, { mass: 'The mass must be more than 0' }], mountPoints: 'Each mount point needs its own label' },
+      values,
+    );
+    expect(text).toEqual([
+      'Equipment, row 2 (Motor): The mass must be more than 0',
+      'Mount layout: Each mount point needs its own label',
+    ]);
+  });
+});

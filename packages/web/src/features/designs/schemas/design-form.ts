@@ -1,0 +1,460 @@
+import * as yup from 'yup';
+
+import type { Units } from '@/lib/units';
+import type { DesignComponent, DesignInput, MountPoint, OperatingConditions, Criteria } from '@/types/design-api';
+
+/**
+ * The design form holds what the user typed, as text in the user's units; `toDesignInput`
+ * turns it into the SI input the server stores. Limits mirror the server's checks (which have
+ * the final say) so that most mistakes are caught while typing.
+ */
+export const DESIGN_LIMITS = {
+  componentNameLength: 100,
+  labelLength: 40,
+  mountPoints: { min: 3, max: 64 },
+  components: 200,
+  orders: 10,
+  maxOrder: 100,
+  vaneCount: 200,
+  extraFrequencies: 20,
+  maxIsolationPct: 99.9,
+  maxUtilization: 1.5,
+  ambientTempC: { min: -100, max: 400 },
+} as const;
+
+export interface ComponentValues {
+  name: string;
+  mass: string;
+  x: string;
+  y: string;
+  z: string;
+  /** Optional uniform-box dimensions; all three blank = a point mass. */
+  lx: string;
+  ly: string;
+  lz: string;
+  /** Own inertia from the saved input, kept unchanged (kg·m²); not edited on this screen. */
+  inertia?: DesignComponent['inertia'];
+}
+
+export interface MountPointValues {
+  label: string;
+  x: string;
+  y: string;
+  z: string;
+}
+
+export type SpeedMode = 'fixed' | 'range';
+
+export interface OperatingValues {
+  speedMode: SpeedMode;
+  speedRpm: string;
+  speedMinRpm: string;
+  speedMaxRpm: string;
+  /** Shaft orders as a list, e.g. "1, 2". */
+  orders: string;
+  vaneCount: string;
+  lineFrequencyHz: string;
+  /** Further frequencies in Hz, e.g. "37.5, 75". */
+  extraFrequenciesHz: string;
+}
+
+export interface CriteriaValues {
+  minIsolationPct: string;
+  minUtilization: string;
+  maxUtilization: string;
+  /** In the user's temperature unit. */
+  ambientTemp: string;
+  weightMarginPct: string;
+  mountTypes: string[];
+  /** Supplier ids as text (checkbox values). */
+  supplierIds: string[];
+}
+
+export interface DesignFormValues {
+  components: ComponentValues[];
+  mountPoints: MountPointValues[];
+  operating: OperatingValues;
+  criteria: CriteriaValues;
+}
+
+// ---- SI → text ----
+
+/** A number for an input box: six significant figures, no trailing zeros, no float noise. */
+export function numberText(value: number | undefined | null): string {
+  if (value === undefined || value === null || !Number.isFinite(value)) return '';
+  return String(Number(value.toPrecision(6)));
+}
+
+function listText(values: readonly number[] | undefined): string {
+  return (values ?? []).map((v) => numberText(v)).join(', ');
+}
+
+export function blankComponent(): ComponentValues {
+  return { name: '', mass: '', x: '', y: '', z: '', lx: '', ly: '', lz: '' };
+}
+
+export function blankMountPoint(label = ''): MountPointValues {
+  return { label, x: '', y: '', z: '' };
+}
+
+/** The saved SI input → what the form shows in the user's units. */
+export function toFormValues(input: DesignInput, units: Units): DesignFormValues {
+  const position = (v: number) => numberText(units.toDisplay('position', v));
+  const { operating, criteria } = input;
+  return {
+    components: input.components.map((c) => ({
+      name: c.name,
+      mass: numberText(units.toDisplay('mass', c.massKg)),
+      x: position(c.cg.x),
+      y: position(c.cg.y),
+      z: position(c.cg.z),
+      lx: c.box ? position(c.box.lx) : '',
+      ly: c.box ? position(c.box.ly) : '',
+      lz: c.box ? position(c.box.lz) : '',
+      ...(c.inertia ? { inertia: c.inertia } : {}),
+    })),
+    mountPoints: input.mountPoints.map((p) => ({ label: p.label, x: position(p.x), y: position(p.y), z: position(p.z) })),
+    operating: {
+      speedMode: operating.speedRangeRpm ? 'range' : 'fixed',
+      speedRpm: numberText(operating.speedRpm),
+      speedMinRpm: numberText(operating.speedRangeRpm?.min),
+      speedMaxRpm: numberText(operating.speedRangeRpm?.max),
+      orders: listText(operating.orders),
+      vaneCount: numberText(operating.vaneCount),
+      lineFrequencyHz: numberText(operating.lineFrequencyHz),
+      extraFrequenciesHz: listText(operating.extraFrequenciesHz),
+    },
+    criteria: {
+      minIsolationPct: numberText(criteria.minIsolationPct),
+      minUtilization: numberText(criteria.minUtilization),
+      maxUtilization: numberText(criteria.maxUtilization),
+      ambientTemp: criteria.ambientTempC === undefined ? '' : numberText(units.toDisplay('temperature', criteria.ambientTempC)),
+      weightMarginPct: numberText(criteria.weightMarginPct),
+      mountTypes: [...(criteria.mountTypes ?? [])],
+      supplierIds: (criteria.supplierIds ?? []).map(String),
+    },
+  };
+}
+
+// ---- text → SI ----
+
+/** Text → finite number; blank or not a number → undefined. */
+export function parseNumber(text: string | undefined): number | undefined {
+  const trimmed = (text ?? '').trim();
+  if (trimmed === '') return undefined;
+  const value = Number(trimmed);
+  return Number.isFinite(value) ? value : undefined;
+}
+
+/** "1, 2; 3" → [1, 2, 3]; undefined when any entry is not a number. */
+export function parseList(text: string | undefined): number[] | undefined {
+  const parts = (text ?? '')
+    .split(/[,;\s]+/)
+    .map((part) => part.trim())
+    .filter(Boolean);
+  const values = parts.map((part) => Number(part));
+  return values.every((v) => Number.isFinite(v)) ? values : undefined;
+}
+
+function isBlank(text: string | undefined): boolean {
+  return (text ?? '').trim() === '';
+}
+
+/** The equipment in SI, or null while any row is incomplete or not a number. */
+export function parseComponents(rows: readonly ComponentValues[], units: Units): DesignComponent[] | null {
+  const out: DesignComponent[] = [];
+  for (const row of rows) {
+    const mass = parseNumber(row.mass);
+    const x = parseNumber(row.x);
+    const y = parseNumber(row.y);
+    const z = parseNumber(row.z);
+    if (mass === undefined || x === undefined || y === undefined || z === undefined) return null;
+    const component: DesignComponent = {
+      name: row.name.trim(),
+      massKg: units.toSi('mass', mass),
+      cg: { x: units.toSi('position', x), y: units.toSi('position', y), z: units.toSi('position', z) },
+    };
+    if (!(isBlank(row.lx) && isBlank(row.ly) && isBlank(row.lz))) {
+      const lx = parseNumber(row.lx);
+      const ly = parseNumber(row.ly);
+      const lz = parseNumber(row.lz);
+      if (lx === undefined || ly === undefined || lz === undefined) return null;
+      component.box = { lx: units.toSi('position', lx), ly: units.toSi('position', ly), lz: units.toSi('position', lz) };
+    }
+    if (row.inertia) component.inertia = row.inertia;
+    out.push(component);
+  }
+  return out;
+}
+
+/** The mount points in SI, or null while any row is incomplete. */
+export function parseMountPoints(rows: readonly MountPointValues[], units: Units): MountPoint[] | null {
+  const out: MountPoint[] = [];
+  for (const row of rows) {
+    const x = parseNumber(row.x);
+    const y = parseNumber(row.y);
+    const z = parseNumber(row.z);
+    if (x === undefined || y === undefined || z === undefined) return null;
+    out.push({
+      label: row.label.trim(),
+      x: units.toSi('position', x),
+      y: units.toSi('position', y),
+      z: units.toSi('position', z),
+    });
+  }
+  return out;
+}
+
+/** Operating conditions (rpm and Hz need no conversion), or null while incomplete. */
+export function parseOperating(values: OperatingValues): OperatingConditions | null {
+  const orders = parseList(values.orders);
+  if (!orders) return null;
+  const operating: OperatingConditions = { orders };
+  if (values.speedMode === 'range') {
+    const min = parseNumber(values.speedMinRpm);
+    const max = parseNumber(values.speedMaxRpm);
+    if (min === undefined || max === undefined) return null;
+    operating.speedRangeRpm = { min, max };
+  } else if (!isBlank(values.speedRpm)) {
+    const speed = parseNumber(values.speedRpm);
+    if (speed === undefined) return null;
+    operating.speedRpm = speed;
+  }
+  for (const key of ['vaneCount', 'lineFrequencyHz'] as const) {
+    if (isBlank(values[key])) continue;
+    const value = parseNumber(values[key]);
+    if (value === undefined) return null;
+    operating[key] = value;
+  }
+  if (!isBlank(values.extraFrequenciesHz)) {
+    const extra = parseList(values.extraFrequenciesHz);
+    if (!extra) return null;
+    operating.extraFrequenciesHz = extra;
+  }
+  return operating;
+}
+
+/** Criteria in SI, or null while a required figure is missing. */
+export function parseCriteria(values: CriteriaValues, units: Units): Criteria | null {
+  const minIsolationPct = parseNumber(values.minIsolationPct);
+  const minUtilization = parseNumber(values.minUtilization);
+  const maxUtilization = parseNumber(values.maxUtilization);
+  if (minIsolationPct === undefined || minUtilization === undefined || maxUtilization === undefined) return null;
+  const criteria: Criteria = { minIsolationPct, minUtilization, maxUtilization };
+  if (!isBlank(values.ambientTemp)) {
+    const temp = parseNumber(values.ambientTemp);
+    if (temp === undefined) return null;
+    criteria.ambientTempC = units.toSi('temperature', temp);
+  }
+  if (!isBlank(values.weightMarginPct)) {
+    const margin = parseNumber(values.weightMarginPct);
+    if (margin === undefined) return null;
+    criteria.weightMarginPct = margin;
+  }
+  if (values.mountTypes.length > 0) criteria.mountTypes = [...values.mountTypes];
+  if (values.supplierIds.length > 0) criteria.supplierIds = values.supplierIds.map(Number);
+  return criteria;
+}
+
+/** The whole form in SI, or null while any part is incomplete. Validate with the schema first. */
+export function toDesignInput(values: DesignFormValues, units: Units): DesignInput | null {
+  const components = parseComponents(values.components, units);
+  const mountPoints = parseMountPoints(values.mountPoints, units);
+  const operating = parseOperating(values.operating);
+  const criteria = parseCriteria(values.criteria, units);
+  if (!components || !mountPoints || !operating || !criteria) return null;
+  return { components, mountPoints, operating, criteria };
+}
+
+// ---- validation (yup) ----
+
+const blankToUndefined = (value: unknown, original: unknown) =>
+  typeof original === 'string' && original.trim() === '' ? undefined : value;
+
+function requiredNumber(what: string) {
+  return yup.number().transform(blankToUndefined).typeError(`${what} must be a number`).required(`Enter ${what}`);
+}
+
+function optionalNumber(what: string) {
+  return yup.number().transform(blankToUndefined).typeError(`${what} must be a number`).optional();
+}
+
+function listOf(what: string, { positive = true, max }: { positive?: boolean; max?: number } = {}) {
+  return yup
+    .string()
+    .test('numbers', `${what}: give numbers separated by commas`, (text) => parseList(text) !== undefined)
+    .test('positive', `${what} must all be more than 0`, (text) => !positive || (parseList(text) ?? []).every((v) => v > 0))
+    .test('count', `${what}: give at most ${max} values`, (text) => max === undefined || (parseList(text) ?? []).length <= max);
+}
+
+const componentSchema = yup.object({
+  name: yup
+    .string()
+    .trim()
+    .required('Name the component')
+    .max(DESIGN_LIMITS.componentNameLength, `Keep the name to ${DESIGN_LIMITS.componentNameLength} characters`),
+  mass: requiredNumber('the mass').positive('The mass must be more than 0'),
+  x: requiredNumber('x'),
+  y: requiredNumber('y'),
+  z: requiredNumber('z'),
+  lx: optionalNumber('Length').min(0, 'Dimensions cannot be negative'),
+  ly: optionalNumber('Width').min(0, 'Dimensions cannot be negative'),
+  lz: optionalNumber('Height').min(0, 'Dimensions cannot be negative'),
+}).test('box', 'Give all three box dimensions, or none', function (row) {
+  const given = [row.lx, row.ly, row.lz].filter((v) => v !== undefined).length;
+  if (given === 0 || given === 3) return true;
+  const missing = (['lx', 'ly', 'lz'] as const).find((key) => row[key] === undefined) ?? 'lx';
+  return this.createError({ path: `${this.path}.${missing}`, message: 'Give all three box dimensions, or none' });
+});
+
+const mountPointSchema = yup.object({
+  label: yup
+    .string()
+    .trim()
+    .required('Label the point')
+    .max(DESIGN_LIMITS.labelLength, `Keep the label to ${DESIGN_LIMITS.labelLength} characters`),
+  x: requiredNumber('x'),
+  y: requiredNumber('y'),
+  z: requiredNumber('z'),
+});
+
+const operatingSchema = yup.object({
+  speedMode: yup.mixed<SpeedMode>().oneOf(['fixed', 'range']).required(),
+  speedRpm: optionalNumber('The speed').when('speedMode', {
+    is: 'fixed',
+    then: (s) => s.positive('The speed must be more than 0'),
+  }),
+  speedMinRpm: optionalNumber('The lowest speed').when('speedMode', {
+    is: 'range',
+    then: (s) => s.required('Enter the lowest speed').positive('The lowest speed must be more than 0'),
+  }),
+  speedMaxRpm: optionalNumber('The highest speed').when(['speedMode', 'speedMinRpm'], ([mode, min], s) =>
+    mode === 'range'
+      ? s
+          .required('Enter the highest speed')
+          .positive('The highest speed must be more than 0')
+          .min(typeof min === 'number' ? min : 0, 'The highest speed cannot be below the lowest')
+      : s,
+  ),
+  orders: listOf('Orders', { max: DESIGN_LIMITS.orders }).test(
+    'max-order',
+    `Orders above ${DESIGN_LIMITS.maxOrder} are not accepted`,
+    (text) => (parseList(text) ?? []).every((v) => v <= DESIGN_LIMITS.maxOrder),
+  ),
+  vaneCount: optionalNumber('The vane count')
+    .integer('The vane count is a whole number')
+    .min(1, 'The vane count must be at least 1')
+    .max(DESIGN_LIMITS.vaneCount, `At most ${DESIGN_LIMITS.vaneCount} vanes`),
+  lineFrequencyHz: optionalNumber('The line frequency').positive('The line frequency must be more than 0'),
+  extraFrequenciesHz: listOf('Further frequencies', { max: DESIGN_LIMITS.extraFrequencies }),
+}).test('source', 'Give a speed or a line frequency: there is nothing to isolate from otherwise', function (values) {
+  const hasSpeed = values.speedMode === 'range' ? true : values.speedRpm !== undefined;
+  const hasOther = values.lineFrequencyHz !== undefined || (parseList(values.extraFrequenciesHz) ?? []).length > 0;
+  if (hasSpeed || hasOther) return true;
+  return this.createError({
+    path: `${this.path}.speedRpm`,
+    message: 'Give a speed or a line frequency: there is nothing to isolate from otherwise',
+  });
+});
+
+const criteriaSchema = yup.object({
+  minIsolationPct: requiredNumber('the minimum isolation')
+    .positive('The minimum isolation must be more than 0 %')
+    .max(DESIGN_LIMITS.maxIsolationPct, `The minimum isolation must be at most ${DESIGN_LIMITS.maxIsolationPct} %`),
+  minUtilization: requiredNumber('the lowest utilisation')
+    .positive('The lowest utilisation must be more than 0')
+    .max(DESIGN_LIMITS.maxUtilization, `At most ${DESIGN_LIMITS.maxUtilization}`),
+  maxUtilization: requiredNumber('the highest utilisation')
+    .positive('The highest utilisation must be more than 0')
+    .max(DESIGN_LIMITS.maxUtilization, `At most ${DESIGN_LIMITS.maxUtilization}`)
+    .when('minUtilization', ([min], s) =>
+      typeof min === 'number' ? s.moreThan(min, 'The highest utilisation must be above the lowest') : s,
+    ),
+  ambientTemp: optionalNumber('The ambient temperature'),
+  weightMarginPct: optionalNumber('The weight margin')
+    .min(0, 'The weight margin cannot be negative')
+    .max(100, 'The weight margin must be at most 100 %'),
+  mountTypes: yup.array(yup.string().required()).required(),
+  supplierIds: yup.array(yup.string().required()).required(),
+});
+
+/** Temperature limits depend on the unit system, so the schema is built per user. */
+export function designFormSchema(units: Units) {
+  const lowest = units.toDisplay('temperature', DESIGN_LIMITS.ambientTempC.min);
+  const highest = units.toDisplay('temperature', DESIGN_LIMITS.ambientTempC.max);
+  const unit = units.label('temperature');
+  return yup.object({
+    components: yup
+      .array(componentSchema)
+      .min(1, 'Add at least one component')
+      .max(DESIGN_LIMITS.components, `At most ${DESIGN_LIMITS.components} components`)
+      .required(),
+    mountPoints: yup
+      .array(mountPointSchema)
+      .min(DESIGN_LIMITS.mountPoints.min, `Give at least ${DESIGN_LIMITS.mountPoints.min} mount points`)
+      .max(DESIGN_LIMITS.mountPoints.max, `At most ${DESIGN_LIMITS.mountPoints.max} mount points`)
+      .test('unique-labels', 'Each mount point needs its own label', (rows) => {
+        const labels = (rows ?? []).map((row) => row.label?.trim()).filter(Boolean);
+        return new Set(labels).size === labels.length;
+      })
+      .required(),
+    operating: operatingSchema,
+    criteria: criteriaSchema.shape({
+      ambientTemp: optionalNumber('The ambient temperature')
+        .min(lowest, `The ambient temperature must be at least ${Math.round(lowest)} ${unit}`)
+        .max(highest, `The ambient temperature must be at most ${Math.round(highest)} ${unit}`),
+    }),
+  });
+}
+
+// ---- errors in words ----
+
+const SECTION_NAMES: Record<keyof DesignFormValues, string> = {
+  components: 'Equipment',
+  mountPoints: 'Mount layout',
+  operating: 'Running conditions',
+  criteria: 'Requirements',
+};
+
+/**
+ * Formik's nested error object → one sentence per problem, naming where it is
+ * ("Equipment, row 2 (Motor): The mass must be more than 0").
+ */
+export function describeErrors(errors: unknown, values: DesignFormValues): string[] {
+  const out: string[] = [];
+  if (!errors || typeof errors !== 'object') return out;
+  for (const section of Object.keys(SECTION_NAMES) as (keyof DesignFormValues)[]) {
+    const sectionErrors = (errors as Record<string, unknown>)[section];
+    if (!sectionErrors) continue;
+    const name = SECTION_NAMES[section];
+    if (typeof sectionErrors === 'string') {
+      out.push(`${name}: ${sectionErrors}`);
+      continue;
+    }
+    if (Array.isArray(sectionErrors)) {
+      sectionErrors.forEach((rowErrors, index) => {
+        if (!rowErrors) return;
+        const row = (values[section] as unknown as Record<string, string>[])[index];
+        const rowName = row?.name || row?.label;
+        const where = `${name}, row ${index + 1}${rowName ? ` (${rowName})` : ''}`;
+        if (typeof rowErrors === 'string') out.push(`${where}: ${rowErrors}`);
+        else for (const message of Object.values(rowErrors as Record<string, string>)) out.push(`${where}: ${message}`);
+      });
+      continue;
+    }
+    for (const message of Object.values(sectionErrors as Record<string, unknown>)) {
+      if (typeof message === 'string') out.push(`${name}: ${message}`);
+    }
+  }
+  return out;
+}
+
+/** Which tab (section) has problems, for the tab badges. */
+export function sectionsWithErrors(errors: unknown): Set<keyof DesignFormValues> {
+  const out = new Set<keyof DesignFormValues>();
+  if (!errors || typeof errors !== 'object') return out;
+  for (const section of Object.keys(SECTION_NAMES) as (keyof DesignFormValues)[]) {
+    if ((errors as Record<string, unknown>)[section]) out.add(section);
+  }
+  return out;
+}

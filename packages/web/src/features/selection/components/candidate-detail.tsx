@@ -1,0 +1,284 @@
+import { Button, Callout, HTMLTable, Tag } from '@blueprintjs/core';
+import { TickCircleIcon } from '@blueprintjs/icons';
+import { naturalFrequencyHz, stiffnessForNaturalFrequency } from '@tacet/vibration';
+import { useMemo } from 'react';
+
+import type { FrequencyMarker } from '@/components/charts/transmissibility-chart';
+import { useUnits } from '@/lib/units';
+import type { Candidate, ModeName } from '@/types/design-api';
+
+import { useCandidateDamping } from '../hooks/use-candidate-damping';
+import { CandidateCharts } from './candidate-charts';
+import {
+  formatDays,
+  formatFrequency,
+  formatMoney,
+  formatPct,
+  formatRatio,
+  formatTransmissibility,
+  KIND_LABELS,
+  shortLabel,
+} from './candidate-format';
+import { VerdictTag } from './candidates-table';
+
+/** A disturbing frequency as the design page lists it. */
+export interface DisturbingFrequencyLine {
+  frequencyHz: number;
+  label: string;
+  governing: boolean;
+}
+
+export const MODE_NAMES: Record<ModeName, string> = {
+  surge: 'surge — along x',
+  sway: 'sway — along y',
+  bounce: 'bounce — vertical',
+  roll: 'roll — about x',
+  pitch: 'pitch — about y',
+  yaw: 'yaw — about z',
+};
+
+export interface CandidateDetailProps {
+  candidate: Candidate;
+  heading: string;
+  /** The mass the server computed the candidate's fn with [kg]. */
+  referenceMassKg: number;
+  /** The mass of the input as it is now [kg], or null while incomplete. */
+  liveMassKg: number | null;
+  /** Live disturbing frequencies (for the chart lines and the isolation labels). */
+  frequencies: readonly DisturbingFrequencyLine[] | null;
+  targetTransmissibility: number | null;
+  isChosen: boolean;
+  /** The user may choose (draft, author or admin). */
+  canChoose: boolean;
+  /** Why choosing is not possible right now (e.g. the results are out of date). */
+  chooseBlockedReason: string | null;
+  choosing: boolean;
+  onChoose: () => void;
+}
+
+const SAME_MASS_TOLERANCE = 1e-9;
+
+/** Everything about one candidate: loads per point, the curves, the modes and the reasons. */
+export function CandidateDetail({
+  candidate,
+  heading,
+  referenceMassKg,
+  liveMassKg,
+  frequencies,
+  targetTransmissibility,
+  isChosen,
+  canChoose,
+  chooseBlockedReason,
+  choosing,
+  onChoose,
+}: CandidateDetailProps) {
+  const units = useUnits();
+  const damping = useCandidateDamping(candidate);
+
+  // Σk_dyn follows from the server's fn and mass; the live fn re-uses it with the current mass.
+  const stiffness = useMemo(
+    () => stiffnessForNaturalFrequency(candidate.verticalNaturalFrequencyHz, referenceMassKg),
+    [candidate.verticalNaturalFrequencyHz, referenceMassKg],
+  );
+  const massKg = liveMassKg ?? referenceMassKg;
+  const liveFn = useMemo(() => naturalFrequencyHz(stiffness, massKg), [stiffness, massKg]);
+  const massChanged = Math.abs(massKg - referenceMassKg) > SAME_MASS_TOLERANCE * referenceMassKg;
+
+  const markers = useMemo<FrequencyMarker[]>(
+    () => (frequencies ?? []).map((f) => ({ frequencyHz: f.frequencyHz, label: shortLabel(f.label), governing: f.governing })),
+    [frequencies],
+  );
+  const labelFor = (hz: number) => frequencies?.find((f) => Math.abs(f.frequencyHz - hz) <= 1e-6 * hz)?.label ?? '';
+
+  const dampingNote =
+    damping.source === 'loading'
+      ? 'Damping is being read from the catalog.'
+      : damping.description
+        ? `Damping: ${damping.description}${damping.source === 'catalog' ? ' (catalog)' : ''}${damping.varies ? '; the sizes differ, the first point’s is used' : ''}.`
+        : 'Damping unknown: drawn undamped.';
+
+  return (
+    <section className="tc-candidate-detail" aria-label={heading}>
+      <div className="tc-candidate-head">
+        <div>
+          <p className="tc-eyebrow">{heading}</p>
+          <h3 className="tc-candidate-title">{candidate.label}</h3>
+          <p className="tc-muted tc-candidate-sub">
+            {candidate.supplier.name} · {KIND_LABELS[candidate.kind]} · <VerdictTag passes={candidate.passes} />
+          </p>
+        </div>
+        <div className="tc-candidate-actions">
+          {isChosen ? (
+            <Tag large minimal intent="success" icon={<TickCircleIcon />}>
+              Chosen for this design
+            </Tag>
+          ) : canChoose ? (
+            <Button
+              intent="primary"
+              icon={<TickCircleIcon />}
+              text="Choose this"
+              loading={choosing}
+              disabled={chooseBlockedReason !== null}
+              title={chooseBlockedReason ?? undefined}
+              onClick={onChoose}
+            />
+          ) : null}
+        </div>
+      </div>
+      {!isChosen && canChoose && chooseBlockedReason ? <p className="tc-muted tc-note">{chooseBlockedReason}</p> : null}
+
+      <dl className="tc-facts tc-facts--grid" aria-label="Candidate figures">
+        <dt>Natural frequency, vertical</dt>
+        <dd>
+          {formatFrequency(candidate.verticalNaturalFrequencyHz)}
+          {massChanged ? (
+            <span className="tc-live-note" data-testid="live-fn">
+              {' '}
+              → {formatFrequency(liveFn)} with the mass now ({units.format('mass', massKg)})
+            </span>
+          ) : null}
+        </dd>
+        <dt>Resonance amplification</dt>
+        <dd>{formatRatio(candidate.resonanceAmplification)}</dd>
+        <dt>Level error</dt>
+        <dd>{units.format('deflection', candidate.levelErrorMm / 1000)}</dd>
+        <dt>Price, all points</dt>
+        <dd>{formatMoney(candidate.totalPrice, candidate.currency)}</dd>
+        <dt>Longest lead time</dt>
+        <dd>{formatDays(candidate.maxLeadTimeDays)}</dd>
+      </dl>
+
+      {candidate.reasons.length > 0 ? (
+        <Callout
+          intent={candidate.passes ? 'primary' : 'warning'}
+          title={candidate.passes ? 'Remarks' : 'Why it fails'}
+          className="tc-note"
+          data-testid="candidate-reasons"
+        >
+          <ul className="tc-problem-list">
+            {candidate.reasons.map((reason) => (
+              <li key={reason}>{reason}</li>
+            ))}
+          </ul>
+        </Callout>
+      ) : null}
+      {candidate.notes && candidate.notes.length > 0 ? (
+        <Callout title="Notes" className="tc-note" data-testid="candidate-notes">
+          <ul className="tc-problem-list">
+            {candidate.notes.map((note) => (
+              <li key={note}>{note}</li>
+            ))}
+          </ul>
+        </Callout>
+      ) : null}
+
+      <h4 className="tc-subsection-title">Per mount point</h4>
+      <HTMLTable compact striped className="tc-table" aria-label="Loads per point">
+        <thead>
+          <tr>
+            <th scope="col">Point</th>
+            <th scope="col">Part number</th>
+            <th scope="col" className="tc-number">
+              Load
+            </th>
+            <th scope="col" className="tc-number">
+              Utilisation
+            </th>
+            <th scope="col" className="tc-number">
+              Static deflection
+            </th>
+          </tr>
+        </thead>
+        <tbody>
+          {candidate.perPoint.map((point) => (
+            <tr key={point.label}>
+              <td>{point.label}</td>
+              <td>{point.partNumber}</td>
+              <td className="tc-number">{units.format('force', point.loadN)}</td>
+              <td className={`tc-number${point.utilization > 1 ? ' tc-text-danger' : ''}`}>{formatRatio(point.utilization)}</td>
+              <td className="tc-number">{units.format('deflection', point.staticDeflectionMm / 1000)}</td>
+            </tr>
+          ))}
+        </tbody>
+      </HTMLTable>
+
+      <h4 className="tc-subsection-title">Isolation at each disturbing frequency</h4>
+      <HTMLTable compact striped className="tc-table" aria-label="Isolation per frequency">
+        <thead>
+          <tr>
+            <th scope="col" className="tc-number">
+              Frequency
+            </th>
+            <th scope="col">Source</th>
+            <th scope="col" className="tc-number">
+              Transmissibility
+            </th>
+            <th scope="col" className="tc-number">
+              Isolation
+            </th>
+            <th scope="col" className="tc-number">
+              dB
+            </th>
+          </tr>
+        </thead>
+        <tbody>
+          {candidate.isolation.map((row, index) => (
+            <tr key={`${row.frequencyHz}-${index}`}>
+              <td className="tc-number">{formatFrequency(row.frequencyHz)}</td>
+              <td>{labelFor(row.frequencyHz)}</td>
+              <td className="tc-number">{formatTransmissibility(row.transmissibility)}</td>
+              <td className={`tc-number${row.efficiencyPct < 0 ? ' tc-text-danger' : ''}`}>{formatPct(row.efficiencyPct)}</td>
+              <td className="tc-number">{formatRatio(row.dB)}</td>
+            </tr>
+          ))}
+        </tbody>
+      </HTMLTable>
+
+      <div className="tc-charts">
+        <CandidateCharts
+          naturalFrequencyHz={liveFn}
+          massKg={massKg}
+          stiffnessNPerM={stiffness}
+          damping={damping.damping}
+          markers={markers}
+          targetTransmissibility={targetTransmissibility}
+          dampingNote={dampingNote}
+        />
+      </div>
+
+      {candidate.modes && candidate.modes.length > 0 ? (
+        <>
+          <h4 className="tc-subsection-title">Rigid-body modes</h4>
+          <HTMLTable compact striped className="tc-table" aria-label="Rigid-body modes">
+            <thead>
+              <tr>
+                <th scope="col" className="tc-number">
+                  Mode
+                </th>
+                <th scope="col" className="tc-number">
+                  Frequency
+                </th>
+                <th scope="col">Dominant motion</th>
+                <th scope="col">Coupling</th>
+              </tr>
+            </thead>
+            <tbody>
+              {candidate.modes.map((mode, index) => (
+                <tr key={index}>
+                  <td className="tc-number">{index + 1}</td>
+                  <td className="tc-number">{formatFrequency(mode.frequencyHz)}</td>
+                  <td>{MODE_NAMES[mode.dominant] ?? mode.dominant}</td>
+                  <td>{mode.coupled ? <Tag minimal>coupled</Tag> : <span className="tc-muted">—</span>}</td>
+                </tr>
+              ))}
+            </tbody>
+          </HTMLTable>
+          <p className="tc-muted tc-note">
+            Six modes of the machine as a rigid body on the mounts. Coupled: no single motion carries 90 % of the mode's
+            kinetic energy. Keep every mode well below the governing frequency.
+          </p>
+        </>
+      ) : null}
+    </section>
+  );
+}

@@ -1,0 +1,79 @@
+import type { Candidate } from '@/types/design-api';
+
+const hz3 = new Intl.NumberFormat('en-US', { minimumSignificantDigits: 3, maximumSignificantDigits: 3, useGrouping: false });
+const pct1 = new Intl.NumberFormat('en-US', { minimumFractionDigits: 1, maximumFractionDigits: 1 });
+const two = new Intl.NumberFormat('en-US', { minimumFractionDigits: 2, maximumFractionDigits: 2 });
+const t3 = new Intl.NumberFormat('en-US', { minimumSignificantDigits: 3, maximumSignificantDigits: 3 });
+
+export const NO_VALUE = '—';
+
+/** Stable identity of a candidate within a run. */
+export function candidateKey(candidate: Candidate): string {
+  return candidate.kind === 'series' ? `series:${candidate.seriesId ?? candidate.label}` : `mount:${candidate.mountId ?? candidate.label}`;
+}
+
+export function formatFrequency(hz: number): string {
+  return Number.isFinite(hz) ? `${hz3.format(hz)} Hz` : NO_VALUE;
+}
+
+export function formatPct(value: number): string {
+  return Number.isFinite(value) ? `${pct1.format(value)} %` : NO_VALUE;
+}
+
+export function formatRatio(value: number): string {
+  return Number.isFinite(value) ? two.format(value) : NO_VALUE;
+}
+
+export function formatTransmissibility(value: number): string {
+  return Number.isFinite(value) ? t3.format(value) : NO_VALUE;
+}
+
+export function formatMoney(amount: number | null, currency: string): string {
+  if (amount === null || !Number.isFinite(amount)) return NO_VALUE;
+  try {
+    return new Intl.NumberFormat('en-US', { style: 'currency', currency, maximumFractionDigits: 0 }).format(amount);
+  } catch {
+    return `${Math.round(amount).toLocaleString('en-US')} ${currency}`;
+  }
+}
+
+export function formatDays(days: number | null): string {
+  if (days === null || !Number.isFinite(days)) return NO_VALUE;
+  return days === 1 ? '1 day' : `${days} days`;
+}
+
+/** The lowest isolation efficiency over the disturbing frequencies [%]. */
+export function worstIsolationPct(candidate: Candidate): number {
+  return candidate.isolation.length === 0 ? NaN : Math.min(...candidate.isolation.map((i) => i.efficiencyPct));
+}
+
+export function utilizationRange(candidate: Candidate): [number, number] {
+  const values = candidate.perPoint.map((p) => p.utilization);
+  return values.length === 0 ? [NaN, NaN] : [Math.min(...values), Math.max(...values)];
+}
+
+export function formatUtilizationRange(candidate: Candidate): string {
+  const [low, high] = utilizationRange(candidate);
+  if (!Number.isFinite(low)) return NO_VALUE;
+  return low.toFixed(2) === high.toFixed(2) ? two.format(low) : `${two.format(low)}–${two.format(high)}`;
+}
+
+/** Why it fails, or else its first note, or that it meets every requirement. */
+export function firstReason(candidate: Candidate): string {
+  return candidate.reasons[0] ?? candidate.notes?.[0] ?? (candidate.passes ? 'Meets every requirement' : NO_VALUE);
+}
+
+export const KIND_LABELS: Record<Candidate['kind'], string> = {
+  uniform: 'One part',
+  series: 'Sized per point',
+};
+
+/** "1× shaft at 1480 rpm" → "1× shaft": short enough to sit beside a line on a chart. */
+export function shortLabel(label: string): string {
+  return label
+    .replace(/ at [\d.,]+ rpm \(minimum speed\)/, ', min speed')
+    .replace(/ at [\d.,]+ rpm \(maximum speed\)/, ', max speed')
+    .replace(/ at [\d.,]+ rpm.*$/, '')
+    .replace(/ \(\d+ (vanes|blades)\)/, '')
+    .replace(/ \(\d+(\.\d+)? Hz supply\)/, '');
+}
