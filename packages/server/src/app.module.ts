@@ -1,10 +1,16 @@
 import { Module, type DynamicModule } from '@nestjs/common';
 import { AuthModule } from './auth/auth.module.js';
+import { CatalogModule } from './catalog/catalog.module.js';
 import type { AppConfig } from './config/app-config.js';
 import { AppConfigModule } from './config/app-config.module.js';
 import { DatabaseModule } from './database/database.module.js';
 import { DemoModule } from './demo/demo.module.js';
+import { DesignsModule } from './designs/designs.module.js';
 import { HealthModule } from './health/health.module.js';
+import { MailModule } from './mail/mail.module.js';
+import { ProjectsModule } from './projects/projects.module.js';
+import { SelectionModule } from './selection/selection.module.js';
+import { SuppliersModule } from './suppliers/suppliers.module.js';
 import { UsersModule } from './users/users.module.js';
 import { webClientModules } from './web-client.js';
 
@@ -20,6 +26,12 @@ export class AppModule {
         UsersModule,
         AuthModule,
         HealthModule,
+        MailModule,
+        SuppliersModule,
+        CatalogModule,
+        ProjectsModule,
+        SelectionModule,
+        DesignsModule,
         DemoModule,
         ...webClientModules(config.webDist),
       ],

@@ -40,12 +40,51 @@ export const ROUTE_MATRIX: readonly RouteRule[] = [
   { method: 'PATCH', path: '/api/auth/me', access: 'signed-in' },
   { method: 'POST', path: '/api/auth/me/password', access: 'signed-in' },
 
+  // mail outbox (demo and test mode; the local mail catcher's messages)
+  { method: 'GET', path: '/api/outbox', access: ['admin'] },
+  { method: 'GET', path: '/api/outbox/:id', access: ['admin'] },
+  { method: 'GET', path: '/api/outbox/:id/attachments/:index', access: ['admin'] },
+
   // users
   { method: 'GET', path: '/api/users', access: ['admin'] },
   { method: 'POST', path: '/api/users', access: ['admin'] },
   { method: 'GET', path: '/api/users/:id', access: ['admin'] },
   { method: 'PATCH', path: '/api/users/:id', access: ['admin'] },
   { method: 'DELETE', path: '/api/users/:id', access: ['admin'] },
+
+  // suppliers
+  { method: 'GET', path: '/api/suppliers', access: 'signed-in' },
+  { method: 'POST', path: '/api/suppliers', access: ['catalog_manager', 'admin'] },
+  { method: 'GET', path: '/api/suppliers/:id', access: 'signed-in' },
+  { method: 'PATCH', path: '/api/suppliers/:id', access: ['catalog_manager', 'admin'] },
+
+  // catalog (mounts, import, export)
+  { method: 'GET', path: '/api/mounts', access: 'signed-in' },
+  { method: 'POST', path: '/api/mounts', access: ['catalog_manager', 'admin'] },
+  { method: 'POST', path: '/api/mounts/import', access: ['catalog_manager', 'admin'] },
+  { method: 'GET', path: '/api/mounts/imports', access: ['catalog_manager', 'admin'] },
+  { method: 'GET', path: '/api/mounts/imports/:id/errors.csv', access: ['catalog_manager', 'admin'] },
+  { method: 'GET', path: '/api/mounts/export.csv', access: 'signed-in' },
+  { method: 'GET', path: '/api/mounts/:id', access: 'signed-in' },
+  { method: 'PATCH', path: '/api/mounts/:id', access: ['catalog_manager', 'admin'] },
+  { method: 'DELETE', path: '/api/mounts/:id', access: ['catalog_manager', 'admin'] },
+
+  // projects (owner/admin checks for PATCH and DELETE are made by the service)
+  { method: 'GET', path: '/api/projects', access: 'signed-in' },
+  { method: 'POST', path: '/api/projects', access: ['engineer', 'admin'] },
+  { method: 'GET', path: '/api/projects/:id', access: 'signed-in' },
+  { method: 'PATCH', path: '/api/projects/:id', access: ['engineer', 'admin'] },
+  { method: 'DELETE', path: '/api/projects/:id', access: ['engineer', 'admin'] },
+
+  // designs (purchasers see released and superseded ones only; a draft is edited by its author or an admin)
+  { method: 'GET', path: '/api/projects/:id/designs', access: 'signed-in' },
+  { method: 'POST', path: '/api/projects/:id/designs', access: ['engineer', 'admin'] },
+  { method: 'GET', path: '/api/designs/:id', access: 'signed-in' },
+  { method: 'PUT', path: '/api/designs/:id', access: ['engineer', 'admin'] },
+  { method: 'POST', path: '/api/designs/:id/selection', access: ['engineer', 'admin'] },
+
+  // selection (stateless)
+  { method: 'POST', path: '/api/selection', access: ['engineer', 'admin'] },
 ];
 
 /**

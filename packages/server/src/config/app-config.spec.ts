@@ -117,4 +117,29 @@ describe('loadConfig', () => {
     // An explicit secret wins and the demo accounts need no admin settings.
     expect(loadConfig({ ...env, JWT_SECRET: SECRET }, cwd)).toMatchObject({ jwtSecret: SECRET, initialAdmin: undefined });
   });
+
+  it('sends mail from MAIL_FROM (default "Tacet <no-reply@tacet.test>") and refuses a malformed sender', () => {
+    const env = { JWT_SECRET: SECRET };
+    expect(loadConfig(env, cwd).mailFrom).toBe('Tacet <no-reply@tacet.test>');
+    expect(loadConfig({ ...env, MAIL_FROM: 'Mounts desk <desk@example.test>' }, cwd).mailFrom).toBe(
+      'Mounts desk <desk@example.test>',
+    );
+    expect(loadConfig({ ...env, MAIL_FROM: 'desk@example.test' }, cwd).mailFrom).toBe('desk@example.test');
+    for (const bad of ['Tacet', 'Tacet <desk>', 'a@b.test\r\nBcc: c@d.test']) {
+      expect(problemsOf({ ...env, MAIL_FROM: bad })).toEqual([
+        'MAIL_FROM must be an address such as "Tacet <no-reply@example.com>"',
+      ]);
+    }
+  });
+
+  it('runs the local mail catcher in demo mode and in test runs, never when SMTP_URL is set', () => {
+    const base = { JWT_SECRET: SECRET };
+    const smtp = { SMTP_URL: 'smtp://mail.example.test:2525' };
+    expect(loadConfig(base, cwd).mailCatcher).toBe(false);
+    expect(loadConfig({ ...base, NODE_ENV: 'production' }, cwd).mailCatcher).toBe(false);
+    expect(loadConfig({ ...base, TACET_DEMO: 'true' }, cwd).mailCatcher).toBe(true);
+    expect(loadConfig({ ...base, NODE_ENV: 'test' }, cwd).mailCatcher).toBe(true);
+    expect(loadConfig({ ...base, TACET_DEMO: 'true', ...smtp }, cwd).mailCatcher).toBe(false);
+    expect(loadConfig({ ...base, NODE_ENV: 'test', ...smtp }, cwd).mailCatcher).toBe(false);
+  });
 });

@@ -22,7 +22,15 @@ export class AppConfig {
   /** Demo mode: demo accounts and data are seeded. */
   readonly demo: boolean;
   readonly jwtSecret: string;
+  /** Real mail server; absent → the local mail catcher (demo and test mode) or no mail at all. */
   readonly smtpUrl?: string;
+  /** Sender of every e-mail (MAIL_FROM). */
+  readonly mailFrom: string;
+  /**
+   * Run the local mail catcher (a fake SMTP server whose messages the outbox shows): in demo
+   * mode and in test runs (NODE_ENV=test) when no SMTP_URL is set.
+   */
+  readonly mailCatcher: boolean;
   /** PostgreSQL URL; absent → SQLite file in the data folder. */
   readonly databaseUrl?: string;
   readonly loginLimitPerMinute: number;
@@ -76,6 +84,8 @@ export function loadConfig(rawEnv: Record<string, string | undefined>, cwd = pro
     demo,
     jwtSecret: env.JWT_SECRET ?? demoJwtSecret(dataDir),
     smtpUrl: env.SMTP_URL,
+    mailFrom: env.MAIL_FROM,
+    mailCatcher: !env.SMTP_URL && (demo || env.NODE_ENV === 'test'),
     databaseUrl: env.DATABASE_URL,
     loginLimitPerMinute: env.TACET_LOGIN_LIMIT_PER_MINUTE,
     initialAdmin:

@@ -23,6 +23,12 @@ export const DEMO_PASSWORD = 'tacet-demo';
 /** Minimum length of every user password (the demo password has exactly this length). */
 export const PASSWORD_MIN_LENGTH = 10;
 
+/** The sender used when MAIL_FROM is not set. */
+export const DEFAULT_MAIL_FROM = 'Tacet <no-reply@tacet.test>';
+
+/** `local@domain` or `Display name <local@domain>` (no line breaks, so no header injection). */
+const MAILBOX = /^(?:[^<>\r\n]*<[^\s<>@]+@[^\s<>@]+\.[^\s<>@]+>|[^\s<>@]+@[^\s<>@]+\.[^\s<>@]+)$/;
+
 const toBoolean = ({ value }: { value: unknown }): unknown => {
   if (value === 'true') return true;
   if (value === 'false') return false;
@@ -91,6 +97,16 @@ export class EnvironmentVariables {
   @IsOptional()
   @IsString()
   TACET_WEB_DIST?: string;
+
+  /** Sender of every e-mail Tacet sends: `Name <address>` or a bare address. */
+  @IsOptional()
+  @Matches(MAILBOX, { message: 'MAIL_FROM must be an address such as "Tacet <no-reply@example.com>"' })
+  MAIL_FROM: string = DEFAULT_MAIL_FROM;
+
+  /** Read only to recognise a test run (`test` keeps the local mail catcher on, like demo mode). */
+  @IsOptional()
+  @IsString()
+  NODE_ENV?: string;
 }
 
 /** Thrown when the environment is not usable; its message lists every problem. */

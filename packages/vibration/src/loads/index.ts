@@ -2,3 +2,4 @@ export { type MountLoadWarning, type MountLoadsInput, type MountLoadsResult, mou
 export * from './corner-mount-loads.js';
 export * from './mount-loads-batch.js';
 export * from './levelling.js';
+export * from './levelling-batch.js';

@@ -1,4 +1,6 @@
 import { CreateUser1764633600000 } from './1764633600000-create-user.js';
+import { CreateCatalog1764720000000 } from './1764720000000-create-catalog.js';
+import { CreateProjectDesign1764806400000 } from './1764806400000-create-project-design.js';
 
 /** Every migration, oldest first. A new migration is imported and appended here. */
-export const MIGRATIONS = [CreateUser1764633600000];
+export const MIGRATIONS = [CreateUser1764633600000, CreateCatalog1764720000000, CreateProjectDesign1764806400000];

@@ -1,0 +1,186 @@
+import { BadRequestException, ConflictException, ForbiddenException, Injectable, NotFoundException } from '@nestjs/common';
+import { InjectRepository } from '@nestjs/typeorm';
+import { isVibrationInputError } from '@tacet/vibration';
+import { In, type Repository } from 'typeorm';
+import { isUniqueViolation } from '../database/unique-violation.js';
+import { ProjectsService, visibleStatuses } from '../projects/projects.service.js';
+import type { DesignInput } from '../selection/dto/design-input.dto.js';
+import { designFrequencies } from '../selection/selection-problem.js';
+import { SelectionCatalogReader } from '../selection/selection-catalog.reader.js';
+import { SelectionService, type CandidateChoice } from '../selection/selection.service.js';
+import type { LabelledFrequency, SelectionResult } from '../selection/selection.types.js';
+import type { User } from '../users/user.entity.js';
+import { buildBom } from './bom.js';
+import { defaultDesignInput } from './default-design-input.js';
+import { Design } from './design.entity.js';
+import { DesignDto, DesignListItemDto } from './dto/design.dto.js';
+import type { CreateDesignDto } from './dto/create-design.dto.js';
+import type { UpdateDesignDto } from './dto/update-design.dto.js';
+
+export const STALE_VERSION = 'This design was changed by someone else; reload it';
+export const FROZEN = 'Released designs are frozen; start a new revision';
+export const IN_REVIEW = 'This design is in review; it can be changed again once it is back in draft';
+const DUPLICATE_NAME = 'A design with this name and revision already exists in this project';
+
+/** A DTO instance as the plain JSON that is stored (drops undefined fields and class prototypes). */
+const plain = <T>(value: T): T => JSON.parse(JSON.stringify(value)) as T;
+
+/** The columns a design write may change. */
+type DesignChanges = Partial<Pick<Design, 'name' | 'input' | 'chosen' | 'bom' | 'snapshot'>>;
+
+/** Designs of a project: revisions of one selection, with the optimistic lock on every write. */
+@Injectable()
+export class DesignsService {
+  constructor(
+    @InjectRepository(Design) private readonly designs: Repository<Design>,
+    private readonly projects: ProjectsService,
+    private readonly selection: SelectionService,
+    private readonly catalog: SelectionCatalogReader,
+  ) {}
+
+  async listForProject(user: User, projectId: number): Promise<DesignListItemDto[]> {
+    await this.projects.get(projectId);
+    const designs = await this.designs.find({
+      where: { projectId, status: In([...visibleStatuses(user)]) },
+      relations: { author: true },
+      order: { name: 'ASC', revision: 'ASC', id: 'ASC' },
+    });
+    return designs.map((design) => DesignListItemDto.from(design));
+  }
+
+  async create(user: User, projectId: number, dto: CreateDesignDto): Promise<DesignDto> {
+    const project = await this.projects.get(projectId);
+    if (project.archived) throw new ConflictException('This project is archived; restore it before adding designs');
+    const input = plain(dto.input ?? defaultDesignInput());
+    this.selection.assertComputable(input);
+    if (await this.designs.existsBy({ projectId, name: dto.name, revision: 1 })) throw new ConflictException(DUPLICATE_NAME);
+    let saved: Design;
+    try {
+      saved = await this.designs.save(
+        this.designs.create({
+          projectId,
+          name: dto.name,
+          revision: 1,
+          status: 'draft',
+          input,
+          chosen: null,
+          bom: null,
+          snapshot: null,
+          authorId: user.id,
+          checkerId: null,
+        }),
+      );
+    } catch (error) {
+      if (isUniqueViolation(error)) throw new ConflictException(DUPLICATE_NAME);
+      throw error;
+    }
+    return this.findOne(user, saved.id);
+  }
+
+  async findOne(user: User, id: number): Promise<DesignDto> {
+    const design = await this.getVisible(user, id);
+    return DesignDto.from(design, frequenciesOrNone(design.input));
+  }
+
+  /**
+   * Changes a draft with the optimistic lock: everything is computed first, then one
+   * `UPDATE … SET …, version = version + 1 WHERE id = ? AND version = ?`; no row changed means
+   * someone else saved in between (409) and nothing was written.
+   */
+  async update(user: User, id: number, dto: UpdateDesignDto): Promise<DesignDto> {
+    const design = await this.getVisible(user, id);
+    if (!(user.role === 'admin' || design.authorId === user.id)) {
+      throw new ForbiddenException('Only the author of this design or an admin can change it');
+    }
+    if (design.status === 'in_review') throw new ConflictException(IN_REVIEW);
+    if (design.status !== 'draft') throw new ConflictException(FROZEN);
+    if (dto.version !== design.version) throw new ConflictException(STALE_VERSION);
+
+    const changes: DesignChanges = {};
+    if (dto.name !== undefined) changes.name = dto.name;
+    const input = dto.input ? plain(dto.input) : design.input;
+    if (dto.input) {
+      this.selection.assertComputable(input);
+      changes.input = input;
+    }
+    const choice = choiceOf(dto);
+    if (choice) {
+      Object.assign(changes, await this.choose(input, choice));
+    } else if (dto.chosenMountId === null || dto.chosenSeriesId === null || dto.input) {
+      // an explicit clear, or a new input that makes the old choice stale
+      Object.assign(changes, { chosen: null, bom: null, snapshot: null });
+    }
+
+    let affected: number | undefined;
+    try {
+      const result = await this.designs
+        .createQueryBuilder()
+        .update(Design)
+        .set({ ...changes, version: () => '"version" + 1' })
+        .where('id = :id AND version = :version AND status = :status', { id, version: dto.version, status: 'draft' })
+        .execute();
+      affected = result.affected;
+    } catch (error) {
+      if (isUniqueViolation(error)) throw new ConflictException(DUPLICATE_NAME);
+      throw error;
+    }
+    if (!affected) throw new ConflictException(STALE_VERSION);
+    return this.findOne(user, id);
+  }
+
+  /** Selection over the saved input (any engineer may run it; nothing is stored). */
+  async runSelection(user: User, id: number, limit?: number): Promise<SelectionResult> {
+    const design = await this.getVisible(user, id);
+    return this.selection.selectForDesign(design.input, limit);
+  }
+
+  /** The chosen candidate, its bill of materials and the snapshot of its catalog data and figures. */
+  async choose(input: DesignInput, choice: CandidateChoice): Promise<Required<Pick<DesignChanges, 'chosen' | 'bom' | 'snapshot'>>> {
+    const { candidate, problem, frequencies } = await this.selection.evaluateChoice(input, choice);
+    const mounts = await this.catalog.snapshots(candidate.perPoint.map((p) => p.mountId));
+    return {
+      chosen: candidate,
+      bom: buildBom(candidate, mounts),
+      snapshot: {
+        takenAt: new Date().toISOString(),
+        mounts,
+        candidate,
+        massProperties: { massKg: problem.massKg, weightN: problem.weightN, cg: problem.cg, inertia: problem.inertia },
+        pointLoadsN: Array.from(problem.equalLoadsN),
+        disturbingFrequencies: frequencies,
+        criteria: input.criteria,
+      },
+    };
+  }
+
+  /** The design with its project and people, or 404 (also for a purchaser and an unreleased design). */
+  private async getVisible(user: User, id: number): Promise<Design> {
+    const design = await this.designs.findOne({ where: { id }, relations: { project: true, author: true, checker: true } });
+    if (!design || !visibleStatuses(user).includes(design.status)) throw new NotFoundException('Design not found');
+    return design;
+  }
+}
+
+function choiceOf(dto: UpdateDesignDto): CandidateChoice | null {
+  if (dto.chosenMountId !== undefined && dto.chosenMountId !== null) return { mountId: dto.chosenMountId };
+  if (dto.chosenSeriesId !== undefined && dto.chosenSeriesId !== null) {
+    if (!/^\d+:.+$/.test(dto.chosenSeriesId)) {
+      throw new BadRequestException({
+        message: 'Validation failed',
+        errors: [{ field: 'chosenSeriesId', message: 'chosenSeriesId must look like "<supplierId>:<series>"' }],
+      });
+    }
+    return { seriesId: dto.chosenSeriesId };
+  }
+  return null;
+}
+
+/** A stored input's disturbing frequencies (an input stored before a rule changed shows none rather than failing). */
+function frequenciesOrNone(input: DesignInput): LabelledFrequency[] {
+  try {
+    return designFrequencies(input.operating);
+  } catch (error) {
+    if (isVibrationInputError(error)) return [];
+    throw error;
+  }
+}

@@ -1,0 +1,45 @@
+import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
+import { Type } from 'class-transformer';
+import { IsInt, IsNotEmpty, IsOptional, IsString, MaxLength, Min, ValidateNested } from 'class-validator';
+import { DesignInputDto } from '../../selection/dto/design-input.dto.js';
+import { NotTogetherWith } from '../../selection/dto/validators.js';
+import { Trim } from '../../users/dto/dto-transforms.js';
+
+/**
+ * A change to a draft. `version` is the one the client read; a stale one gets 409. Choosing a
+ * candidate (`chosenMountId` or `chosenSeriesId`; `null` clears the choice) re-runs the
+ * selection for it on the server. A new `input` without a choice clears the old choice.
+ */
+export class UpdateDesignDto {
+  @ApiProperty({ example: 3 })
+  @IsInt()
+  @Min(1)
+  version: number;
+
+  @ApiPropertyOptional({ maxLength: 200 })
+  @IsOptional()
+  @Trim()
+  @IsString()
+  @IsNotEmpty()
+  @MaxLength(200)
+  name?: string;
+
+  @ApiPropertyOptional({ type: DesignInputDto })
+  @IsOptional()
+  @ValidateNested()
+  @Type(() => DesignInputDto)
+  input?: DesignInputDto;
+
+  @ApiPropertyOptional({ type: Number, nullable: true, description: 'a uniform candidate (one part number at every point)' })
+  @IsOptional()
+  @IsInt()
+  @Min(1)
+  @NotTogetherWith('chosenSeriesId')
+  chosenMountId?: number | null;
+
+  @ApiPropertyOptional({ type: String, nullable: true, description: 'a series candidate, `${supplierId}:${series}`' })
+  @IsOptional()
+  @IsString()
+  @MaxLength(200)
+  chosenSeriesId?: string | null;
+}

@@ -1,0 +1,333 @@
+import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
+import { Type } from 'class-transformer';
+import {
+  ArrayMaxSize,
+  ArrayMinSize,
+  ArrayUnique,
+  IsArray,
+  IsDefined,
+  IsIn,
+  IsInt,
+  IsNotEmpty,
+  IsOptional,
+  IsPositive,
+  IsString,
+  Max,
+  MaxLength,
+  Min,
+  ValidateNested,
+} from 'class-validator';
+import { MOUNT_TYPES, type MountType } from '../../catalog/mount-rules.js';
+import { IsAbove, IsFiniteNumber, NotTogetherWith } from './validators.js';
+
+/**
+ * The engineering input of a selection and of a saved design (SI: kg, m, Hz, °C). These DTOs
+ * are the server's final say on what is acceptable; the calculation library checks the rest
+ * (e.g. collinear mount points) and its errors come back as 400 with the field named.
+ */
+export const SELECTION_LIMITS = {
+  components: 200,
+  mountPoints: { min: 3, max: 64 },
+  frequencies: 50,
+  orders: 10,
+  extraFrequencies: 20,
+  labelLength: 40,
+  componentNameLength: 100,
+  /** |coordinate| in m. */
+  coordinate: 1000,
+  massKg: 1e7,
+  frequencyHz: 1e5,
+  speedRpm: 1e6,
+  vaneCount: 200,
+  utilization: 1.5,
+  limit: { default: 20, max: 200 },
+} as const;
+
+const COORDINATE = SELECTION_LIMITS.coordinate;
+
+export class Vec3Dto {
+  @ApiProperty({ example: 0.06, description: 'm, along the skid' })
+  @IsFiniteNumber()
+  @Min(-COORDINATE)
+  @Max(COORDINATE)
+  x: number;
+
+  @ApiProperty({ example: 0.015, description: 'm, lateral' })
+  @IsFiniteNumber()
+  @Min(-COORDINATE)
+  @Max(COORDINATE)
+  y: number;
+
+  @ApiProperty({ example: 0.3775, description: 'm, up' })
+  @IsFiniteNumber()
+  @Min(-COORDINATE)
+  @Max(COORDINATE)
+  z: number;
+}
+
+export class BoxDto {
+  @ApiProperty({ example: 1.2, description: 'm' })
+  @IsFiniteNumber()
+  @Min(0)
+  @Max(COORDINATE)
+  lx: number;
+
+  @ApiProperty({ example: 0.6, description: 'm' })
+  @IsFiniteNumber()
+  @Min(0)
+  @Max(COORDINATE)
+  ly: number;
+
+  @ApiProperty({ example: 0.5, description: 'm' })
+  @IsFiniteNumber()
+  @Min(0)
+  @Max(COORDINATE)
+  lz: number;
+}
+
+/**
+ * Own inertia about the component's CG [kg·m²]. Products of inertia follow the tensor
+ * convention of @tacet/vibration (ixy = −∫x·y dm).
+ */
+export class InertiaDto {
+  @ApiProperty({ example: 12.5 })
+  @IsFiniteNumber()
+  @Min(0)
+  ixx: number;
+
+  @ApiProperty({ example: 40 })
+  @IsFiniteNumber()
+  @Min(0)
+  iyy: number;
+
+  @ApiProperty({ example: 38 })
+  @IsFiniteNumber()
+  @Min(0)
+  izz: number;
+
+  @ApiPropertyOptional({ example: 0 })
+  @IsOptional()
+  @IsFiniteNumber()
+  ixy?: number;
+
+  @ApiPropertyOptional({ example: 0 })
+  @IsOptional()
+  @IsFiniteNumber()
+  ixz?: number;
+
+  @ApiPropertyOptional({ example: 0 })
+  @IsOptional()
+  @IsFiniteNumber()
+  iyz?: number;
+}
+
+export class ComponentDto {
+  @ApiProperty({ example: 'Pump', maxLength: SELECTION_LIMITS.componentNameLength })
+  @IsString()
+  @IsNotEmpty()
+  @MaxLength(SELECTION_LIMITS.componentNameLength)
+  name: string;
+
+  @ApiProperty({ example: 300, description: 'operating mass, kg (> 0)' })
+  @IsFiniteNumber()
+  @IsPositive()
+  @Max(SELECTION_LIMITS.massKg)
+  massKg: number;
+
+  @ApiProperty({ type: Vec3Dto, description: 'centre of gravity, m' })
+  @IsDefined()
+  @ValidateNested()
+  @Type(() => Vec3Dto)
+  cg: Vec3Dto;
+
+  @ApiPropertyOptional({ type: BoxDto, description: 'uniform box dimensions for its own inertia, m' })
+  @IsOptional()
+  @ValidateNested()
+  @Type(() => BoxDto)
+  box?: BoxDto;
+
+  @ApiPropertyOptional({ type: InertiaDto, description: 'own inertia about its CG, kg·m² (wins over box)' })
+  @IsOptional()
+  @ValidateNested()
+  @Type(() => InertiaDto)
+  inertia?: InertiaDto;
+}
+
+export class MountPointDto {
+  @ApiProperty({ example: 'A', maxLength: SELECTION_LIMITS.labelLength })
+  @IsString()
+  @IsNotEmpty()
+  @MaxLength(SELECTION_LIMITS.labelLength)
+  label: string;
+
+  @ApiProperty({ example: 0.8, description: 'm' })
+  @IsFiniteNumber()
+  @Min(-COORDINATE)
+  @Max(COORDINATE)
+  x: number;
+
+  @ApiProperty({ example: 0.45, description: 'm' })
+  @IsFiniteNumber()
+  @Min(-COORDINATE)
+  @Max(COORDINATE)
+  y: number;
+
+  @ApiProperty({ example: 0, description: 'm, height of the mount elastic centre' })
+  @IsFiniteNumber()
+  @Min(-COORDINATE)
+  @Max(COORDINATE)
+  z: number;
+}
+
+export class SpeedRangeDto {
+  @ApiProperty({ example: 900, description: 'rpm; governs 1×' })
+  @IsFiniteNumber()
+  @IsPositive()
+  @Max(SELECTION_LIMITS.speedRpm)
+  min: number;
+
+  @ApiProperty({ example: 1480, description: 'rpm' })
+  @IsFiniteNumber()
+  @IsPositive()
+  @Max(SELECTION_LIMITS.speedRpm)
+  @IsAbove('min', true)
+  max: number;
+}
+
+export class OperatingConditionsDto {
+  @ApiPropertyOptional({ example: 1480, description: 'fixed speed, rpm' })
+  @IsOptional()
+  @IsFiniteNumber()
+  @IsPositive()
+  @Max(SELECTION_LIMITS.speedRpm)
+  speedRpm?: number;
+
+  @ApiPropertyOptional({ type: SpeedRangeDto, description: 'variable-speed drive, rpm (instead of speedRpm)' })
+  @IsOptional()
+  @NotTogetherWith('speedRpm')
+  @ValidateNested()
+  @Type(() => SpeedRangeDto)
+  speedRangeRpm?: SpeedRangeDto;
+
+  @ApiProperty({ type: [Number], example: [1, 2], description: 'shaft orders' })
+  @IsArray()
+  @ArrayMaxSize(SELECTION_LIMITS.orders)
+  @IsFiniteNumber({ each: true })
+  @IsPositive({ each: true })
+  @Max(100, { each: true })
+  orders: number[];
+
+  @ApiPropertyOptional({ example: 6, description: 'pump vanes / fan blades → pass frequency' })
+  @IsOptional()
+  @IsInt()
+  @Min(1)
+  @Max(SELECTION_LIMITS.vaneCount)
+  vaneCount?: number;
+
+  @ApiPropertyOptional({ example: 50, description: 'supply frequency, Hz → 2× line' })
+  @IsOptional()
+  @IsFiniteNumber()
+  @IsPositive()
+  @Max(1000)
+  lineFrequencyHz?: number;
+
+  @ApiPropertyOptional({ type: [Number], example: [], description: 'further disturbing frequencies, Hz' })
+  @IsOptional()
+  @IsArray()
+  @ArrayMaxSize(SELECTION_LIMITS.extraFrequencies)
+  @IsFiniteNumber({ each: true })
+  @IsPositive({ each: true })
+  @Max(SELECTION_LIMITS.frequencyHz, { each: true })
+  extraFrequenciesHz?: number[];
+}
+
+export class CriteriaDto {
+  @ApiProperty({ example: 90, description: 'minimum isolation efficiency at every disturbing frequency, % (0 < x < 100)' })
+  @IsFiniteNumber()
+  @IsPositive()
+  @Max(99.9)
+  minIsolationPct: number;
+
+  @ApiProperty({ example: 0.5, description: 'lowest load / rated load at any point (0 < min < max)' })
+  @IsFiniteNumber()
+  @IsPositive()
+  @Max(SELECTION_LIMITS.utilization)
+  minUtilization: number;
+
+  @ApiProperty({ example: 1.0, description: `highest load / rated load at any point (≤ ${SELECTION_LIMITS.utilization})` })
+  @IsFiniteNumber()
+  @IsPositive()
+  @Max(SELECTION_LIMITS.utilization)
+  @IsAbove('minUtilization')
+  maxUtilization: number;
+
+  @ApiPropertyOptional({ example: 25, description: '°C; mounts whose range does not cover it are left out' })
+  @IsOptional()
+  @IsFiniteNumber()
+  @Min(-100)
+  @Max(400)
+  ambientTempC?: number;
+
+  @ApiPropertyOptional({ enum: MOUNT_TYPES, isArray: true })
+  @IsOptional()
+  @IsArray()
+  @ArrayMaxSize(MOUNT_TYPES.length)
+  @IsIn(MOUNT_TYPES, { each: true })
+  mountTypes?: MountType[];
+
+  @ApiPropertyOptional({ type: [Number] })
+  @IsOptional()
+  @IsArray()
+  @ArrayMaxSize(200)
+  @IsInt({ each: true })
+  @IsPositive({ each: true })
+  supplierIds?: number[];
+
+  @ApiPropertyOptional({ example: 10, description: 'allowance on the weight for overload checks, % (default 0)' })
+  @IsOptional()
+  @IsFiniteNumber()
+  @Min(0)
+  @Max(100)
+  weightMarginPct?: number;
+}
+
+const uniqueLabel = (point: MountPointDto) => point?.label;
+
+export class DesignInputDto {
+  @ApiProperty({ type: [ComponentDto] })
+  @IsArray()
+  @ArrayMinSize(1)
+  @ArrayMaxSize(SELECTION_LIMITS.components)
+  @ValidateNested({ each: true })
+  @Type(() => ComponentDto)
+  components: ComponentDto[];
+
+  @ApiProperty({ type: [MountPointDto] })
+  @IsArray()
+  @ArrayMinSize(SELECTION_LIMITS.mountPoints.min)
+  @ArrayMaxSize(SELECTION_LIMITS.mountPoints.max)
+  @ArrayUnique(uniqueLabel, { message: 'mountPoints must have unique labels' })
+  @ValidateNested({ each: true })
+  @Type(() => MountPointDto)
+  mountPoints: MountPointDto[];
+
+  @ApiProperty({ type: OperatingConditionsDto })
+  @IsDefined()
+  @ValidateNested()
+  @Type(() => OperatingConditionsDto)
+  operating: OperatingConditionsDto;
+
+  @ApiProperty({ type: CriteriaDto })
+  @IsDefined()
+  @ValidateNested()
+  @Type(() => CriteriaDto)
+  criteria: CriteriaDto;
+}
+
+/** The plain shapes (as stored in a design and sent by clients). */
+export type Vec3 = { x: number; y: number; z: number };
+export type Component = Omit<ComponentDto, never>;
+export type MountPoint = Omit<MountPointDto, never>;
+export type Criteria = Omit<CriteriaDto, never>;
+export type OperatingConditions = Omit<OperatingConditionsDto, never>;
+export type DesignInput = Omit<DesignInputDto, never>;

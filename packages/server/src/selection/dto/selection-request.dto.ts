@@ -1,0 +1,62 @@
+import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
+import { Type } from 'class-transformer';
+import {
+  ArrayMaxSize,
+  ArrayMinSize,
+  ArrayUnique,
+  IsArray,
+  IsDefined,
+  IsInt,
+  IsOptional,
+  IsPositive,
+  Max,
+  Min,
+  ValidateNested,
+} from 'class-validator';
+import { ComponentDto, CriteriaDto, MountPointDto, SELECTION_LIMITS } from './design-input.dto.js';
+import { IsFiniteNumber } from './validators.js';
+
+/** `limit`: passing candidates returned (and up to as many failing ones). */
+export class SelectionLimitDto {
+  @ApiPropertyOptional({ example: 20, default: SELECTION_LIMITS.limit.default, maximum: SELECTION_LIMITS.limit.max })
+  @IsOptional()
+  @IsInt()
+  @Min(1)
+  @Max(SELECTION_LIMITS.limit.max)
+  limit?: number;
+}
+
+/** Body of the stateless `POST /api/selection`. */
+export class SelectionRequestDto extends SelectionLimitDto {
+  @ApiProperty({ type: [ComponentDto] })
+  @IsArray()
+  @ArrayMinSize(1)
+  @ArrayMaxSize(SELECTION_LIMITS.components)
+  @ValidateNested({ each: true })
+  @Type(() => ComponentDto)
+  components: ComponentDto[];
+
+  @ApiProperty({ type: [MountPointDto] })
+  @IsArray()
+  @ArrayMinSize(SELECTION_LIMITS.mountPoints.min)
+  @ArrayMaxSize(SELECTION_LIMITS.mountPoints.max)
+  @ArrayUnique((point: MountPointDto) => point?.label, { message: 'mountPoints must have unique labels' })
+  @ValidateNested({ each: true })
+  @Type(() => MountPointDto)
+  mountPoints: MountPointDto[];
+
+  @ApiProperty({ type: [Number], example: [24.67, 49.33, 100], description: 'Hz, each > 0' })
+  @IsArray()
+  @ArrayMinSize(1)
+  @ArrayMaxSize(SELECTION_LIMITS.frequencies)
+  @IsFiniteNumber({ each: true })
+  @IsPositive({ each: true })
+  @Max(SELECTION_LIMITS.frequencyHz, { each: true })
+  disturbingFrequenciesHz: number[];
+
+  @ApiProperty({ type: CriteriaDto })
+  @IsDefined()
+  @ValidateNested()
+  @Type(() => CriteriaDto)
+  criteria: CriteriaDto;
+}

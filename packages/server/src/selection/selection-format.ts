@@ -1,0 +1,19 @@
+/** Number formatting for the words of reasons and labels (not for the figures, which stay unrounded). */
+
+/** At most `digits` decimals, trailing zeros dropped: 24.6667 → "24.67", 100 → "100". */
+export function formatNumber(value: number, digits = 2): string {
+  if (!Number.isFinite(value)) return String(value);
+  const fixed = value.toFixed(digits);
+  return fixed.includes('.') ? fixed.replace(/\.?0+$/, '') : fixed;
+}
+
+/** A frequency as the reasons name it: "24.67 Hz", "148 Hz". */
+export const formatHz = (hz: number): string => `${formatNumber(hz, hz >= 100 ? 1 : 2)} Hz`;
+
+/** A ratio as a whole percentage: 1.12 → "112 %". */
+export const formatPct = (ratio: number): string => `${Math.round(ratio * 100)} %`;
+
+/** A percentage value with one decimal: 85.14 → "85.1 %". */
+export const formatPctValue = (pct: number): string => `${formatNumber(pct, 1)} %`;
+
+export const formatMm = (mm: number): string => `${formatNumber(mm, 1)} mm`;

@@ -1,0 +1,209 @@
+import { BadRequestException } from '@nestjs/common';
+import {
+  disturbingFrequencies,
+  isInsideConvexHull,
+  isolationDb,
+  isVibrationInputError,
+  massProperties,
+  mountLoads,
+  prepareMountLayout,
+  transmissibilityFromEfficiency,
+  VibrationInputError,
+  type AssemblyComponent,
+  type InertiaTensor,
+  type MountLayout,
+} from '@tacet/vibration';
+import type { FieldError } from '../common/filters/all-exceptions.filter.js';
+import type { MountType } from '../catalog/mount-rules.js';
+import {
+  SELECTION_LIMITS,
+  type Component,
+  type Criteria,
+  type MountPoint,
+  type OperatingConditions,
+  type Vec3,
+} from './dto/design-input.dto.js';
+import { formatHz } from './selection-format.js';
+import type { LabelledFrequency } from './selection.types.js';
+
+/** What a selection needs, as the API receives it (frequency labels are optional). */
+export interface SelectionInput {
+  components: readonly Component[];
+  mountPoints: readonly MountPoint[];
+  frequencies: readonly { frequencyHz: number; label?: string }[];
+  criteria: Criteria;
+}
+
+/**
+ * Everything about the machine and the criteria that does not depend on the mount: computed
+ * once per request with @tacet/vibration, then shared by every candidate.
+ */
+export interface SelectionProblem {
+  points: readonly MountPoint[];
+  pointCount: number;
+  layout: MountLayout;
+  components: AssemblyComponent[];
+  massKg: number;
+  weightN: number;
+  cg: Vec3;
+  inertia: InertiaTensor;
+  /** Loads with equal stiffness at every point (identical mounts give exactly these), N. */
+  equalLoadsN: Float64Array;
+  minLoadN: number;
+  maxLoadN: number;
+  frequenciesHz: Float64Array;
+  frequencyLabels: (string | undefined)[];
+  criteria: Criteria;
+  /** 1 + weightMarginPct/100: applied to loads in the overload checks (utilisation above the window, deflection). */
+  marginFactor: number;
+  /** Highest transmissibility that still meets minIsolationPct. */
+  transmissibilityTarget: number;
+  /** The same target in dB (for the score). */
+  isolationDbTarget: number;
+  /** The CG lies inside the polygon of the mount points. */
+  cgInside: boolean;
+}
+
+/** What the SQL prefilter reads: only rows that could serve at least one point. */
+export interface PrefilterBounds {
+  minRatedLoadN: number;
+  maxRatedLoadN: number;
+  ambientTempC?: number;
+  mountTypes?: readonly MountType[];
+  supplierIds?: readonly number[];
+}
+
+/** A design component → the calculation library's component (own inertia wins over a box). */
+export function toAssemblyComponent(component: Component): AssemblyComponent {
+  const base = { name: component.name, massKg: component.massKg, cg: { ...component.cg } };
+  if (component.inertia) {
+    const j = component.inertia;
+    return { ...base, ownInertia: { xx: j.ixx, yy: j.iyy, zz: j.izz, xy: j.ixy ?? 0, xz: j.ixz ?? 0, yz: j.iyz ?? 0 } };
+  }
+  if (component.box) {
+    return { ...base, shape: 'box', dimensions: { x: component.box.lx, y: component.box.ly, z: component.box.lz } };
+  }
+  return base;
+}
+
+/** Renames a calculation-library field path to the API's: `points[2].x` → `mountPoints.2.x`. */
+function apiField(field: string): string {
+  const renamed = field.replace(/^points\b/, 'mountPoints').replace(/^machine\b/, 'operating');
+  return renamed.replace(/\[(\d+)\]/g, '.$1');
+}
+
+/**
+ * A calculation-library refusal as a 400 naming the field (`prefix` places it inside the body,
+ * e.g. `input` for a design).
+ */
+export function vibrationInputToBadRequest(error: VibrationInputError, prefix = ''): BadRequestException {
+  const own = error.message.startsWith(`${error.field}: `) ? error.message.slice(error.field.length + 2) : error.message;
+  const field = prefix ? `${prefix}.${apiField(error.field)}` : apiField(error.field);
+  const errors: FieldError[] = [{ field, message: `${field}: ${own}` }];
+  return new BadRequestException({ message: 'Validation failed', errors });
+}
+
+/** Runs `compute`, turning a VibrationInputError into a 400 that names the field. */
+export function withInputErrors<T>(compute: () => T, prefix = ''): T {
+  try {
+    return compute();
+  } catch (error) {
+    if (isVibrationInputError(error)) throw vibrationInputToBadRequest(error, prefix);
+    throw error;
+  }
+}
+
+/**
+ * Mass properties, layout, equal-stiffness loads and targets.
+ * @throws VibrationInputError (mass ≤ 0, fewer than 3 or collinear mount points...) with API field paths
+ */
+export function prepareProblem(input: SelectionInput): SelectionProblem {
+  const components = input.components.map(toAssemblyComponent);
+  const mass = massProperties(components);
+  const layout = prepareMountLayout(input.mountPoints);
+  const loads = mountLoads({ points: input.mountPoints, stiffnessNPerM: 1, weightN: mass.weightN, cg: mass.cg });
+  const frequenciesHz = new Float64Array(input.frequencies.length);
+  input.frequencies.forEach((f, i) => {
+    if (!(f.frequencyHz > 0) || !Number.isFinite(f.frequencyHz)) {
+      throw new VibrationInputError(`disturbingFrequenciesHz[${i}]`, 'must be a finite number > 0', 'not-positive');
+    }
+    frequenciesHz[i] = f.frequencyHz;
+  });
+  const criteria = input.criteria;
+  const transmissibilityTarget = transmissibilityFromEfficiency(criteria.minIsolationPct);
+  return {
+    points: input.mountPoints,
+    pointCount: layout.pointCount,
+    layout,
+    components,
+    massKg: mass.massKg,
+    weightN: mass.weightN,
+    cg: mass.cg,
+    inertia: mass.inertia,
+    equalLoadsN: new Float64Array(loads.loadsN),
+    minLoadN: Math.min(...loads.loadsN),
+    maxLoadN: Math.max(...loads.loadsN),
+    frequenciesHz,
+    frequencyLabels: input.frequencies.map((f) => f.label),
+    criteria,
+    marginFactor: 1 + (criteria.weightMarginPct ?? 0) / 100,
+    transmissibilityTarget,
+    isolationDbTarget: isolationDb(transmissibilityTarget),
+    cgInside: isInsideConvexHull(mass.cg, input.mountPoints),
+  };
+}
+
+/**
+ * The SQL prefilter: a size is worth reading when its rated load suits at least one point of
+ * the equal-stiffness solution, i.e. P_r ∈ [F_min·margin/u_max, F_max/u_min], and it suits the
+ * temperature, types and suppliers asked for. (Series loads re-solved with the picked sizes
+ * shift a little; a size just outside this window would sit at the edge of the utilisation
+ * window anyway.)
+ */
+export function prefilterBounds(problem: SelectionProblem): PrefilterBounds {
+  const { criteria } = problem;
+  return {
+    minRatedLoadN: (Math.max(problem.minLoadN, 0) * problem.marginFactor) / criteria.maxUtilization,
+    maxRatedLoadN: problem.maxLoadN / criteria.minUtilization,
+    ambientTempC: criteria.ambientTempC,
+    mountTypes: criteria.mountTypes?.length ? criteria.mountTypes : undefined,
+    supplierIds: criteria.supplierIds?.length ? criteria.supplierIds : undefined,
+  };
+}
+
+/**
+ * The disturbing frequencies of a design's operating conditions (lowest first), with labels:
+ * shaft orders, vane pass and 2× line from @tacet/vibration, plus the extra frequencies.
+ * @throws VibrationInputError with `operating.`-prefixed field paths
+ */
+export function designFrequencies(operating: OperatingConditions): LabelledFrequency[] {
+  let list: LabelledFrequency[];
+  try {
+    const hasSource =
+      operating.speedRpm !== undefined || operating.speedRangeRpm !== undefined || operating.lineFrequencyHz !== undefined;
+    list = hasSource
+      ? disturbingFrequencies({
+          speedRpm: operating.speedRpm,
+          speedRangeRpm: operating.speedRangeRpm ? { ...operating.speedRangeRpm } : undefined,
+          orders: operating.orders,
+          vaneCount: operating.vaneCount,
+          lineFrequencyHz: operating.lineFrequencyHz,
+        }).map(({ frequencyHz, label }) => ({ frequencyHz, label }))
+      : [];
+  } catch (error) {
+    if (isVibrationInputError(error) && !error.field.startsWith('operating')) {
+      const field = error.field === 'machine' ? 'operating' : `operating.${error.field}`;
+      const own = error.message.slice(error.field.length + 2);
+      throw new VibrationInputError(field, own, error.code);
+    }
+    throw error;
+  }
+  for (const hz of operating.extraFrequenciesHz ?? []) list.push({ frequencyHz: hz, label: `extra ${formatHz(hz)}` });
+  if (list.length === 0) {
+    throw new VibrationInputError('operating', 'gives no disturbing frequency: set a speed, a line frequency or extra frequencies', 'empty');
+  }
+  if (list.length > SELECTION_LIMITS.frequencies) {
+    throw new VibrationInputError('operating', `gives ${list.length} disturbing frequencies; at most ${SELECTION_LIMITS.frequencies}`);
+  }
+  return list.sort((a, b) => a.frequencyHz - b.frequencyHz);
+}
