@@ -6,8 +6,6 @@
  *
  *   npm run build -w @tacet/vibration && npm run build -w @tacet/server
  *   npx tsx tools/bench/selection.bench.ts            (--rows N, --requests N, --keep to keep the temp folder)
- *   npx tsx tools/bench/selection.bench.ts --covering-index
- *        what-if: adds an index covering the prefilter's columns (not in the schema) before measuring
  *
  * Steps: generate the invented catalog with writeDemoCatalog into a temp folder, start the built
  * server (demo mode, for its accounts) on a free port with that folder as its data folder,
@@ -324,17 +322,6 @@ async function main(): Promise<void> {
     console.log(
       `import: ${importBody.accepted} accepted, ${importBody.rejected} rejected, ${importBody.created} created in ${((performance.now() - t1) / 1000).toFixed(1)} s`,
     );
-
-    if (process.argv.includes('--covering-index')) {
-      const writer = new Database(join(dir, 'data', 'tacet.sqlite'));
-      writer.exec(
-        `CREATE INDEX IF NOT EXISTS "IDX_bench_mount_selection" ON "mount" ("active", "ratedLoadN", "supplierId", "series", ` +
-          `"verticalStiffnessNPerM", "dynamicStiffnessRatio", "dampingRatio", "lossFactor", "maxDeflectionMm", "unitPrice", ` +
-          `"currency", "leadTimeDays", "tempMinC", "tempMaxC", "mountType")`,
-      );
-      writer.close();
-      console.log('what-if: an index covering the prefilter columns was added (it is not part of the schema)');
-    }
 
     const engineer = await login(base, 'engineer@tacet.test');
     const bodies = SCENARIOS.map((s) =>

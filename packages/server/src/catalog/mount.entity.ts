@@ -20,9 +20,29 @@ export const MOUNT_DAMPING_CHECK =
  * One catalog part. Quantities in SI (N, N/m) except where the name carries the unit.
  * Rows are never deleted: a mount is retired (`active: false`).
  */
+/** Columns of the index the selection's prefilter reads (range on ratedLoadN, then the figures it needs). */
+export const MOUNT_SELECTION_INDEX_COLUMNS = [
+  'active',
+  'ratedLoadN',
+  'supplierId',
+  'series',
+  'verticalStiffnessNPerM',
+  'dynamicStiffnessRatio',
+  'dampingRatio',
+  'lossFactor',
+  'maxDeflectionMm',
+  'unitPrice',
+  'currency',
+  'leadTimeDays',
+  'tempMinC',
+  'tempMaxC',
+  'mountType',
+] as const;
+
 @Entity('mount')
 @Index('IDX_mount_supplier_part', ['supplierId', 'partNumber'], { unique: true })
-@Index('IDX_mount_active_load', ['active', 'ratedLoadN'])
+// Covers the selection prefilter: the active rows in a load window are read from the index alone.
+@Index('IDX_mount_selection', [...MOUNT_SELECTION_INDEX_COLUMNS])
 // Leading mountType (lookups by type); the other columns cover every filter of the catalog search.
 @Index('IDX_mount_type', ['mountType', 'active', 'ratedLoadN', 'supplierId', 'partNumber', 'series'])
 @Check('CHK_mount_damping', MOUNT_DAMPING_CHECK)

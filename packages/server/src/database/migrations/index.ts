@@ -1,6 +1,14 @@
 import { CreateUser1764633600000 } from './1764633600000-create-user.js';
 import { CreateCatalog1764720000000 } from './1764720000000-create-catalog.js';
 import { CreateProjectDesign1764806400000 } from './1764806400000-create-project-design.js';
+import { MountSelectionIndex1764849600000 } from './1764849600000-mount-selection-index.js';
+import { CreateReviewPurchasing1764892800000 } from './1764892800000-create-review-purchasing.js';
 
 /** Every migration, oldest first. A new migration is imported and appended here. */
-export const MIGRATIONS = [CreateUser1764633600000, CreateCatalog1764720000000, CreateProjectDesign1764806400000];
+export const MIGRATIONS = [
+  CreateUser1764633600000,
+  CreateCatalog1764720000000,
+  CreateProjectDesign1764806400000,
+  MountSelectionIndex1764849600000,
+  CreateReviewPurchasing1764892800000,
+];
