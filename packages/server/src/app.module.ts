@@ -8,6 +8,8 @@ import { DemoModule } from './demo/demo.module.js';
 import { DesignsModule } from './designs/designs.module.js';
 import { HealthModule } from './health/health.module.js';
 import { MailModule } from './mail/mail.module.js';
+import { PurchasingModule } from './purchasing/purchasing.module.js';
+import { ReviewModule } from './review/review.module.js';
 import { ProjectsModule } from './projects/projects.module.js';
 import { SelectionModule } from './selection/selection.module.js';
 import { SuppliersModule } from './suppliers/suppliers.module.js';
@@ -32,6 +34,8 @@ export class AppModule {
         ProjectsModule,
         SelectionModule,
         DesignsModule,
+        ReviewModule,
+        PurchasingModule,
         DemoModule,
         ...webClientModules(config.webDist),
       ],

@@ -83,6 +83,21 @@ export const ROUTE_MATRIX: readonly RouteRule[] = [
   { method: 'PUT', path: '/api/designs/:id', access: ['engineer', 'admin'] },
   { method: 'POST', path: '/api/designs/:id/selection', access: ['engineer', 'admin'] },
 
+  // review (author/checker rules are made by the service)
+  { method: 'POST', path: '/api/designs/:id/transitions', access: ['engineer', 'admin'], body: { to: 'in_review' } },
+  { method: 'POST', path: '/api/designs/:id/revisions', access: ['engineer', 'admin'] },
+  { method: 'GET', path: '/api/designs/:id/history', access: 'signed-in' },
+
+  // purchasing (exports: drafts only for their author or an admin; checked by the service)
+  { method: 'GET', path: '/api/purchasing/designs', access: ['purchaser', 'admin'] },
+  { method: 'GET', path: '/api/designs/:id/bom.csv', access: ['purchaser', 'engineer', 'admin'] },
+  { method: 'GET', path: '/api/designs/:id/bom.xlsx', access: ['purchaser', 'engineer', 'admin'] },
+  { method: 'GET', path: '/api/designs/:id/report.pdf', access: 'signed-in' },
+  { method: 'POST', path: '/api/designs/:id/rfqs', access: ['purchaser', 'admin'], body: { supplierId: 1 } },
+  { method: 'GET', path: '/api/designs/:id/rfqs', access: ['purchaser', 'admin'] },
+  { method: 'PATCH', path: '/api/rfqs/:id', access: ['purchaser', 'admin'], body: { status: 'quoted', quotedPrice: 1 } },
+  { method: 'POST', path: '/api/rfqs/:id/retry', access: ['purchaser', 'admin'] },
+
   // selection (stateless)
   { method: 'POST', path: '/api/selection', access: ['engineer', 'admin'] },
 ];

@@ -1,9 +1,12 @@
 import { CatalogImport } from '../catalog/catalog-import.entity.js';
 import { Mount } from '../catalog/mount.entity.js';
 import { Design } from '../designs/design.entity.js';
+import { Rfq } from '../purchasing/rfq.entity.js';
+import { RfqEvent } from '../purchasing/rfq-event.entity.js';
+import { DesignTransition } from '../review/design-transition.entity.js';
 import { Project } from '../projects/project.entity.js';
 import { Supplier } from '../suppliers/supplier.entity.js';
 import { User } from '../users/user.entity.js';
 
 /** Every entity. A feature's entity is imported and appended here (and in its module's forFeature). */
-export const ENTITIES = [User, Supplier, Mount, CatalogImport, Project, Design];
+export const ENTITIES = [User, Supplier, Mount, CatalogImport, Project, Design, DesignTransition, Rfq, RfqEvent];

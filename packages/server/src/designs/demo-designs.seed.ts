@@ -6,6 +6,7 @@ import { Project } from '../projects/project.entity.js';
 import type { DesignInput } from '../selection/dto/design-input.dto.js';
 import { SelectionCatalogReader } from '../selection/selection-catalog.reader.js';
 import { SelectionService, type CandidateChoice } from '../selection/selection.service.js';
+import { DesignTransition } from '../review/design-transition.entity.js';
 import { User } from '../users/user.entity.js';
 import type { DesignStatus } from './design-status.js';
 import { Design } from './design.entity.js';
@@ -98,7 +99,7 @@ export class DemoDesignsSeed implements DemoSeedStep {
         if (chosen) await this.designs.update({ id: existing.id, version: 1 }, chosen);
         continue;
       }
-      await this.designs.save(
+      const saved = await this.designs.save(
         this.designs.create({
           projectId: project.id,
           name: demo.name,
@@ -113,6 +114,13 @@ export class DemoDesignsSeed implements DemoSeedStep {
           checkerId: demo.withChecker ? checker.id : null,
         }),
       );
+      if (demo.status === 'released') {
+        // the review trail the demo release would have left (the entity belongs to review/)
+        await this.designs.manager.insert(DesignTransition, [
+          { designId: saved.id, userId: author.id, from: 'draft', to: 'in_review', comment: null },
+          { designId: saved.id, userId: checker.id, from: 'in_review', to: 'released', comment: null },
+        ]);
+      }
       this.logger.log(`Created the demo design "${demo.name}" (${demo.status}${chosen ? '' : ', no candidate chosen yet'})`);
     }
   }

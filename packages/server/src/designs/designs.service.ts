@@ -154,7 +154,7 @@ export class DesignsService {
   }
 
   /** The design with its project and people, or 404 (also for a purchaser and an unreleased design). */
-  private async getVisible(user: User, id: number): Promise<Design> {
+  async getVisible(user: User, id: number): Promise<Design> {
     const design = await this.designs.findOne({ where: { id }, relations: { project: true, author: true, checker: true } });
     if (!design || !visibleStatuses(user).includes(design.status)) throw new NotFoundException('Design not found');
     return design;

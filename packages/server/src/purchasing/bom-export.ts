@@ -1,0 +1,121 @@
+import { stringify } from 'csv-stringify/sync';
+import ExcelJS from 'exceljs';
+import type { BomLine } from '../selection/selection.types.js';
+
+/** Column names of the BOM CSV (our own; documented in the contract and DEVELOPERS.md). */
+export const BOM_CSV_COLUMNS = [
+  'supplier',
+  'part_number',
+  'quantity',
+  'mount_points',
+  'unit_price',
+  'extended_price',
+  'currency',
+  'lead_time_days',
+] as const;
+
+/** What a BOM export names and shows besides its lines. */
+export interface BomHeading {
+  projectName: string;
+  designName: string;
+  revision: number;
+  /** Not released: the export is marked DRAFT. */
+  draft: boolean;
+}
+
+export const DRAFT_MARK = 'DRAFT - not released; do not order from this bill of materials';
+
+/** A file name made only of letters, digits, dot, dash and underscore: `<project>-<design>-rev<n>-<suffix>`. */
+export function exportFileName(heading: Pick<BomHeading, 'projectName' | 'designName' | 'revision'>, suffix: string): string {
+  const safe = (text: string) =>
+    text
+      .normalize('NFKD')
+      .replace(/[^A-Za-z0-9._-]+/g, '-')
+      .replace(/-{2,}/g, '-')
+      .replace(/^[-.]+|[-.]+$/g, '')
+      .slice(0, 60) || 'design';
+  return `${safe(heading.projectName)}-${safe(heading.designName)}-rev${heading.revision}-${suffix}`;
+}
+
+/** Totals of a BOM per currency (lines without a price are left out of the amount and counted). */
+export interface BomTotal {
+  currency: string;
+  quantity: number;
+  amount: number;
+  unpricedLines: number;
+}
+
+export function bomTotals(lines: readonly BomLine[]): BomTotal[] {
+  const totals = new Map<string, BomTotal>();
+  for (const line of lines) {
+    const total = totals.get(line.currency) ?? { currency: line.currency, quantity: 0, amount: 0, unpricedLines: 0 };
+    total.quantity += line.quantity;
+    if (line.extendedPrice === null) total.unpricedLines += 1;
+    else total.amount = Math.round((total.amount + line.extendedPrice) * 100) / 100;
+    totals.set(line.currency, total);
+  }
+  return [...totals.values()];
+}
+
+/**
+ * The BOM as CSV: a header of BOM_CSV_COLUMNS, one row per line. Text that a spreadsheet would
+ * read as a formula (= + - @, tab, CR) is prefixed with a quote (csv-stringify `escape_formulas`).
+ * A draft gets one marking line before the header.
+ */
+export function bomCsv(lines: readonly BomLine[], draft: boolean): string {
+  const rows = lines.map((line) => [
+    line.supplier.name,
+    line.partNumber,
+    line.quantity,
+    line.mountPoints.join(' '),
+    line.unitPrice ?? '',
+    line.extendedPrice ?? '',
+    line.currency,
+    line.leadTimeDays ?? '',
+  ]);
+  const body = stringify(rows, { header: true, columns: [...BOM_CSV_COLUMNS], escape_formulas: true });
+  return draft ? `${stringify([[DRAFT_MARK]])}${body}` : body;
+}
+
+/** Headers of the XLSX sheet, with units. */
+export const BOM_XLSX_HEADERS = [
+  'Supplier',
+  'Part number',
+  'Quantity (pcs)',
+  'Mount points',
+  'Unit price',
+  'Extended price',
+  'Currency',
+  'Lead time (days)',
+] as const;
+
+/** The BOM as an XLSX workbook: a title row, a header row with units, the lines, a totals row per currency. */
+export async function bomXlsx(lines: readonly BomLine[], heading: BomHeading): Promise<Buffer> {
+  const workbook = new ExcelJS.Workbook();
+  workbook.creator = 'Tacet';
+  const sheet = workbook.addWorksheet('Bill of materials');
+  const title = `${heading.projectName} — ${heading.designName} — rev ${heading.revision}${heading.draft ? ` — ${DRAFT_MARK}` : ''}`;
+  sheet.addRow([title]).font = { bold: true, size: 13, color: heading.draft ? { argb: 'FFC00000' } : undefined };
+  const header = sheet.addRow([...BOM_XLSX_HEADERS]);
+  header.font = { bold: true };
+  for (const line of lines) {
+    sheet.addRow([
+      line.supplier.name,
+      line.partNumber,
+      line.quantity,
+      line.mountPoints.join(' '),
+      line.unitPrice,
+      line.extendedPrice,
+      line.currency,
+      line.leadTimeDays,
+    ]);
+  }
+  for (const total of bomTotals(lines)) {
+    const row = sheet.addRow([`Total (${total.currency})`, null, total.quantity, null, null, total.amount, total.currency, null]);
+    row.font = { bold: true };
+  }
+  sheet.getColumn(5).numFmt = '#,##0.00';
+  sheet.getColumn(6).numFmt = '#,##0.00';
+  [28, 18, 14, 18, 12, 14, 10, 16].forEach((width, index) => (sheet.getColumn(index + 1).width = width));
+  return Buffer.from(await workbook.xlsx.writeBuffer());
+}
