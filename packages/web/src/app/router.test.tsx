@@ -22,6 +22,7 @@ describe('routing and guards', () => {
   it.each([
     ['engineer', '/admin/users'],
     ['viewer', '/purchasing'],
+    ['engineer', '/purchasing/designs/7'],
     ['catalog_manager', '/projects'],
     ['purchaser', '/admin/outbox'],
   ] as const)('tells a %s that %s is not for their role', async (role, path) => {
@@ -36,10 +37,11 @@ describe('routing and guards', () => {
     expect(await screen.findByRole('heading', { name: 'Page not found' })).toBeInTheDocument();
   });
 
-  it.each([['/purchasing', 'Purchasing']])('shows %s as an area still to come', async (path, title) => {
-    renderApp({ signedInAs: 'admin', path });
-    expect(await screen.findByRole('heading', { name: title, level: 1 })).toBeInTheDocument();
-    expect(screen.getByText('Not built yet — this area arrives with a later release')).toBeInTheDocument();
+  it('opens the purchasing queue for an admin', async () => {
+    installFakeApi().on('get', '/purchasing/designs', { status: 200, data: [] });
+    renderApp({ signedInAs: 'admin', path: '/purchasing' });
+    expect(await screen.findByRole('heading', { name: 'Purchasing', level: 1 })).toBeInTheDocument();
+    expect(await screen.findByText('Nothing released yet')).toBeInTheDocument();
   });
 
   it('shows the overview with the cautions and the areas of the role', async () => {

@@ -44,7 +44,12 @@ export const routes: RouteObject[] = [
                   { path: 'suppliers', lazy: () => import('./routes/app/catalog/suppliers') },
                 ],
               },
-              { path: 'purchasing', handle: area('purchasing'), lazy: () => import('./routes/app/purchasing') },
+              { path: 'purchasing', handle: area('purchasing'), lazy: () => import('./routes/app/purchasing/queue') },
+              {
+                path: 'purchasing/designs/:designId',
+                handle: area('purchasing'),
+                lazy: () => import('./routes/app/purchasing/design'),
+              },
               { path: 'admin/users', handle: area('people'), lazy: () => import('./routes/app/admin/users') },
               { path: 'admin/outbox', handle: area('outbox'), lazy: () => import('./routes/app/admin/outbox') },
               { path: 'account', lazy: () => import('./routes/app/account') },

@@ -62,6 +62,8 @@ export interface DesignWorkspaceProps {
   renderSelection: (context: DesignSelectionContext) => ReactNode;
   /** The tab shown first. */
   initialTab?: DesignTab;
+  /** Shown under the page header, e.g. the check-and-release panel (composed by the route). */
+  review?: ReactNode;
 }
 
 /** Why the signed-in user cannot change this design, or null when they can. */
@@ -131,10 +133,11 @@ interface EditorProps {
   onReload: (formik: FormikProps<DesignFormValues>) => Promise<void>;
   onChoose: (candidate: Candidate, formik: FormikProps<DesignFormValues>) => Promise<boolean>;
   renderSelection: DesignWorkspaceProps['renderSelection'];
+  review?: ReactNode;
 }
 
 function DesignEditor(props: EditorProps) {
-  const { base, newer, readOnlyText, canRun, tab, onTab, conflict, failure, reloading, choosing, renderSelection } = props;
+  const { base, newer, readOnlyText, canRun, tab, onTab, conflict, failure, reloading, choosing, renderSelection, review } = props;
   const readOnly = readOnlyText !== null;
   const formik = useFormikContext<DesignFormValues>();
   const { values, errors, dirty, submitCount, resetForm, isSubmitting } = formik;
@@ -212,6 +215,7 @@ function DesignEditor(props: EditorProps) {
           )
         }
       />
+      {review}
       {readOnlyText ? (
         <Callout icon={<LockIcon />} className="tc-note" title="Read only">
           {readOnlyText}
@@ -282,7 +286,7 @@ function DesignEditor(props: EditorProps) {
  * (rendered by the route). Everything shown is recomputed in the browser as the user types.
  * A save sends the version the form was loaded from, so a concurrent change answers 409.
  */
-export function DesignWorkspace({ design, onReload, renderSelection, initialTab = 'equipment' }: DesignWorkspaceProps) {
+export function DesignWorkspace({ design, onReload, renderSelection, initialTab = 'equipment', review }: DesignWorkspaceProps) {
   const user = useUser();
   const units = useUnits();
   const updateDesign = useUpdateDesign();
@@ -380,6 +384,7 @@ export function DesignWorkspace({ design, onReload, renderSelection, initialTab 
         onReload={reload}
         onChoose={choose}
         renderSelection={renderSelection}
+        review={review}
       />
     </Formik>
   );

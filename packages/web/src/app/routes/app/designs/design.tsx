@@ -2,12 +2,15 @@ import '@/styles/workspace.css';
 
 import { Button, Callout } from '@blueprintjs/core';
 import { ChevronLeftIcon } from '@blueprintjs/icons';
-import { Link, useParams, useSearchParams } from 'react-router-dom';
+import { useQueryClient } from '@tanstack/react-query';
+import { Link, useNavigate, useParams, useSearchParams } from 'react-router-dom';
 
 import { NotFound } from '@/components/errors/not-found';
 import { PageLoader } from '@/components/page-loader';
-import { useDesign } from '@/features/designs/api/get-design';
+import { designQueryKey, useDesign } from '@/features/designs/api/get-design';
+import { projectDesignsQueryKey } from '@/features/designs/api/get-project-designs';
 import { DesignWorkspace, type DesignTab } from '@/features/designs/components/design-workspace';
+import { ReviewPanel } from '@/features/review/components/review-panel';
 import { SelectionPanel } from '@/features/selection/components/selection-panel';
 import { errorMessage, errorStatus } from '@/lib/api-errors';
 
@@ -15,13 +18,17 @@ const TABS: readonly DesignTab[] = ['equipment', 'layout', 'running', 'requireme
 
 /**
  * The design workspace: the design's input (designs feature) with the mount selection
- * (selection feature) in its last tab. `?tab=selection` opens that tab first.
+ * (selection feature) in its last tab, and check and release (review feature) under the
+ * header. `?tab=selection` opens that tab first. A change of status remounts the workspace, so
+ * it reads the design's new state (e.g. frozen once in review).
  */
 export function Component() {
   const designId = Number(useParams().designId);
   const valid = Number.isInteger(designId) && designId > 0;
   const design = useDesign(valid ? designId : 0);
   const [search] = useSearchParams();
+  const queryClient = useQueryClient();
+  const navigate = useNavigate();
   const requested = search.get('tab') as DesignTab | null;
   const initialTab = requested && TABS.includes(requested) ? requested : 'equipment';
 
@@ -42,10 +49,23 @@ export function Component() {
         <ChevronLeftIcon /> {design.data.projectName}
       </Link>
       <DesignWorkspace
-        key={design.data.id}
+        key={`${design.data.id}:${design.data.status}`}
         design={design.data}
         initialTab={initialTab}
         onReload={async () => (await design.refetch()).data}
+        review={
+          <ReviewPanel
+            design={design.data}
+            onChanged={(changed) => {
+              queryClient.setQueryData(designQueryKey(changed.id), changed);
+              void queryClient.invalidateQueries({ queryKey: projectDesignsQueryKey(changed.projectId) });
+            }}
+            onRevisionCreated={(created) => {
+              void queryClient.invalidateQueries({ queryKey: projectDesignsQueryKey(created.projectId) });
+              void navigate(`/designs/${created.id}`);
+            }}
+          />
+        }
         renderSelection={(context) => (
           <SelectionPanel
             designId={context.design.id}

@@ -1,0 +1,181 @@
+import { Alert, Button, Callout } from '@blueprintjs/core';
+import { ConfirmIcon, DuplicateIcon, SendMessageIcon, UndoIcon } from '@blueprintjs/icons';
+import { useState } from 'react';
+
+import { errorMessage, errorStatus } from '@/lib/api-errors';
+import { useUser } from '@/lib/auth';
+import type { Design } from '@/types/design-api';
+
+import { useCreateRevision } from '../api/create-revision';
+import { useTransitionDesign } from '../api/transition-design';
+import { reviewActions, type ActionRule } from '../schemas/review-rules';
+import type { TransitionTarget } from '../types';
+import { ReturnToDraftDialog } from './return-to-draft-dialog';
+import { ReviewHistory } from './review-history';
+import { ReviewStage } from './review-stage';
+
+import './review.css';
+
+export interface ReviewPanelProps {
+  design: Design;
+  /** The design as the server answered a transition (new status, checker, version). */
+  onChanged: (design: Design) => void;
+  /** A new draft revision was made from this one. */
+  onRevisionCreated: (design: Design) => void;
+}
+
+/** A refusal in words: the server's own sentence, with a lead-in for the status. */
+function refusal(error: unknown): string {
+  const status = errorStatus(error);
+  const text = errorMessage(error);
+  if (status === 403) return `Not allowed: ${text}`;
+  if (status === 409) return `Not possible now: ${text}`;
+  return text;
+}
+
+function Blocked({ rule, id }: { rule: ActionRule; id: string }) {
+  return rule.visible && rule.blockedBy ? (
+    <span className="tc-review-why" id={id}>
+      {rule.blockedBy}
+    </span>
+  ) : null;
+}
+
+/**
+ * "Check and release": the design's stage, the moves the signed-in user may make (each with
+ * the reason when it is not available), and the record of earlier moves.
+ */
+export function ReviewPanel({ design, onChanged, onRevisionCreated }: ReviewPanelProps) {
+  const user = useUser();
+  const transition = useTransitionDesign();
+  const revision = useCreateRevision();
+  const [returning, setReturning] = useState(false);
+  const [confirmRelease, setConfirmRelease] = useState(false);
+  const [failure, setFailure] = useState<string | null>(null);
+  const actions = reviewActions(design, user);
+  const busy = transition.isPending || revision.isPending;
+
+  const move = async (to: TransitionTarget, comment?: string): Promise<boolean> => {
+    setFailure(null);
+    try {
+      const updated = await transition.mutateAsync({ designId: design.id, to, comment });
+      onChanged(updated);
+      return true;
+    } catch (error) {
+      setFailure(refusal(error));
+      return false;
+    }
+  };
+
+  const startRevision = async () => {
+    setFailure(null);
+    try {
+      onRevisionCreated(await revision.mutateAsync(design.id));
+    } catch (error) {
+      setFailure(refusal(error));
+    }
+  };
+
+  return (
+    <section className="tc-review-panel" aria-labelledby="review-panel-title">
+      <div className="tc-review-head">
+        <h2 id="review-panel-title" className="tc-review-title">
+          Check and release
+        </h2>
+        <ReviewStage status={design.status} />
+        {design.checker && (design.status === 'released' || design.status === 'superseded') ? (
+          <span className="tc-muted">Checked and released by {design.checker.name}</span>
+        ) : null}
+      </div>
+
+      <div className="tc-review-actions">
+        {actions.sendForCheck.visible ? (
+          <span className="tc-review-action">
+            <Button
+              intent="primary"
+              icon={<SendMessageIcon />}
+              text="Send for check"
+              disabled={actions.sendForCheck.blockedBy !== null || busy}
+              loading={transition.isPending && transition.variables?.to === 'in_review'}
+              aria-describedby={actions.sendForCheck.blockedBy ? 'why-send' : undefined}
+              onClick={() => void move('in_review')}
+            />
+            <Blocked rule={actions.sendForCheck} id="why-send" />
+          </span>
+        ) : null}
+        {actions.release.visible ? (
+          <span className="tc-review-action">
+            <Button
+              intent="success"
+              icon={<ConfirmIcon />}
+              text="Release"
+              disabled={actions.release.blockedBy !== null || busy}
+              aria-describedby={actions.release.blockedBy ? 'why-release' : undefined}
+              onClick={() => setConfirmRelease(true)}
+            />
+            <Blocked rule={actions.release} id="why-release" />
+          </span>
+        ) : null}
+        {actions.returnToDraft.visible ? (
+          <Button icon={<UndoIcon />} text="Return to draft" disabled={busy} onClick={() => setReturning(true)} />
+        ) : null}
+        {actions.newRevision.visible ? (
+          <Button
+            icon={<DuplicateIcon />}
+            text="Start new revision"
+            loading={revision.isPending}
+            disabled={busy}
+            onClick={() => void startRevision()}
+          />
+        ) : null}
+        {actions.readOnlyNote ? <span className="tc-muted">{actions.readOnlyNote}</span> : null}
+      </div>
+
+      {failure ? (
+        <Callout intent="danger" role="alert" className="tc-note" title="The design did not move">
+          {failure}
+        </Callout>
+      ) : null}
+
+      <div className="tc-review-record">
+        <h3 className="tc-review-subtitle">Record</h3>
+        <ReviewHistory designId={design.id} />
+      </div>
+
+      {returning ? (
+        <ReturnToDraftDialog
+          isOpen
+          busy={transition.isPending}
+          onCancel={() => setReturning(false)}
+          onConfirm={(comment) => {
+            void move('draft', comment).then((moved) => {
+              if (moved) setReturning(false);
+            });
+          }}
+        />
+      ) : null}
+      <Alert
+        isOpen={confirmRelease}
+        intent="success"
+        icon={<ConfirmIcon />}
+        confirmButtonText="Release this revision"
+        cancelButtonText="Not yet"
+        onCancel={() => setConfirmRelease(false)}
+        onConfirm={() => {
+          setConfirmRelease(false);
+          void move('released');
+        }}
+      >
+        <p>
+          Release revision {design.revision} of {design.name}? You are recorded as its checker, the revision is frozen
+          and purchasers can order from it.
+        </p>
+        <p className="tc-muted">
+          Tacet sizes mounts for a rigid machine on linear mounts over a rigid support. Seismic and wind restraint,
+          snubbers, flexible connections and the supporting structure follow local codes and need review by a
+          qualified, licensed engineer.
+        </p>
+      </Alert>
+    </section>
+  );
+}
