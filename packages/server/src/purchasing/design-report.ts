@@ -1,7 +1,8 @@
 import { createRequire } from 'node:module';
+import { hystereticDamping, logSpace, transmissibility, viscousDamping, type Damping } from '@tacet/vibration';
 import PDFDocument from 'pdfkit';
 import type { Design } from '../designs/design.entity.js';
-import type { LabelledFrequency } from '../selection/selection.types.js';
+import type { LabelledFrequency, MountSnapshot } from '../selection/selection.types.js';
 import { bomTotals } from './bom-export.js';
 
 /** The caution every report carries (PRODUCT.md, "Cautions the product shows"). */
@@ -15,7 +16,10 @@ interface ReportFonts {
   bold: string;
 }
 
-/** Noto Sans (WOFF from @fontsource/noto-sans, which pdfkit's fontkit reads); Helvetica when the files are missing. */
+/**
+ * Noto Sans (WOFF from @fontsource/noto-sans, which pdfkit's fontkit reads); Helvetica when the files are missing.
+ * These are the Latin subsets: report text avoids Greek letters and math signs (no ζ, η, √), which they lack.
+ */
 function reportFonts(): ReportFonts {
   try {
     const require = createRequire(import.meta.url);
@@ -50,6 +54,7 @@ export function designReportPdf(design: Design, options: ReportOptions): Promise
     size: 'A4',
     margin: 50,
     compress: options.compress ?? true,
+    bufferPages: true,
     info: { Title: `${design.name} rev ${design.revision} — calculation report`, Author: design.author.name, Creator: 'Tacet' },
   });
   doc.registerFont('body', fonts.regular);
@@ -100,6 +105,30 @@ export function designReportPdf(design: Design, options: ReportOptions): Promise
     body(`Total: ${fmt(massKg, 1)} kg, centre of gravity (${fmt(cg.x, 3)}, ${fmt(cg.y, 3)}, ${fmt(cg.z, 3)}) m`);
   }
 
+  heading('Mount points (positions of the elastic centres)');
+  for (const point of design.input.mountPoints ?? []) {
+    body(`${point.label}: x ${fmt(point.x, 3)} m, y ${fmt(point.y, 3)} m, z ${fmt(point.z, 3)} m`);
+  }
+
+  const operating = design.input.operating;
+  if (operating) {
+    heading('Operating conditions');
+    if (operating.speedRangeRpm) body(`Speed range ${fmt(operating.speedRangeRpm.min, 0)}–${fmt(operating.speedRangeRpm.max, 0)} rpm (the lowest speed governs)`);
+    else if (operating.speedRpm !== undefined) body(`Speed ${fmt(operating.speedRpm, 0)} rpm`);
+    body(`Orders: ${(operating.orders ?? []).map((o) => `${o}×`).join(', ') || '—'}`);
+    if (operating.vaneCount) body(`Vanes or blades: ${operating.vaneCount}`);
+    if (operating.lineFrequencyHz) body(`Electrical line frequency: ${fmt(operating.lineFrequencyHz, 0)} Hz`);
+  }
+
+  const criteria = design.input.criteria;
+  if (criteria) {
+    heading('Criteria');
+    body(`Minimum isolation ${fmt(criteria.minIsolationPct, 1)} % at every disturbing frequency`);
+    body(`Load utilisation between ${fmt(criteria.minUtilization * 100, 0)} % and ${fmt(criteria.maxUtilization * 100, 0)} % of the rated load`);
+    if (criteria.ambientTempC !== undefined) body(`Ambient temperature ${fmt(criteria.ambientTempC, 0)} °C`);
+    if (criteria.mountTypes?.length) body(`Mount types: ${criteria.mountTypes.map((t) => t.replace(/_/g, ' ')).join(', ')}`);
+  }
+
   heading('Disturbing frequencies');
   for (const frequency of options.disturbingFrequencies) body(`${fmt(frequency.frequencyHz, 2)} Hz — ${frequency.label}`);
 
@@ -125,6 +154,14 @@ export function designReportPdf(design: Design, options: ReportOptions): Promise
       heading('Rigid-body modes');
       for (const mode of candidate.modes) body(`${fmt(mode.frequencyHz, 2)} Hz — mostly ${mode.dominant}${mode.coupled ? ' (coupled)' : ''}`);
     }
+    const mounts = snapshot?.mounts ?? [];
+    if (mounts.length) {
+      heading('Chosen mounts — catalog data as frozen');
+      for (const mount of mounts) body(mountLine(mount));
+    }
+    const damping = mounts.length ? dampingOf(mounts[0]) : undefined;
+    heading('Transmissibility');
+    transmissibilityChart(doc, candidate.verticalNaturalFrequencyHz, damping, options.disturbingFrequencies, criteria?.minIsolationPct);
     if (candidate.reasons.length) {
       heading('Checks not met');
       for (const reason of candidate.reasons) body(`• ${reason}`);
@@ -152,6 +189,106 @@ export function designReportPdf(design: Design, options: ReportOptions): Promise
   heading('Cautions');
   body(REPORT_CAUTION);
 
+  pageFooters(doc, `${design.project.name} — ${design.name}, revision ${design.revision}`);
   doc.end();
   return done;
+}
+
+function dampingOf(mount: MountSnapshot): Damping | undefined {
+  if (mount.dampingModel === 'hysteretic' && mount.lossFactor !== null) return hystereticDamping(mount.lossFactor);
+  if (mount.dampingRatio !== null) return viscousDamping(mount.dampingRatio);
+  return undefined;
+}
+
+function mountLine(m: MountSnapshot): string {
+  const damping = m.dampingModel === 'hysteretic' ? `loss factor ${m.lossFactor}` : `damping ratio ${m.dampingRatio}`;
+  return (
+    `${m.supplier.name} ${m.partNumber} (${m.mountType.replace(/_/g, ' ')}${m.series ? `, series ${m.series}` : ''}): ` +
+    `rated load ${fmt(m.ratedLoadN, 0)} N, vertical stiffness ${fmt(m.verticalStiffnessNPerM / 1000, 1)} N/mm` +
+    `${m.horizontalStiffnessNPerM === null ? '' : `, horizontal ${fmt(m.horizontalStiffnessNPerM / 1000, 1)} N/mm`}` +
+    `, dynamic-to-static ratio ${m.dynamicStiffnessRatio}, ${damping}` +
+    `${m.maxDeflectionMm === null ? '' : `, max deflection ${fmt(m.maxDeflectionMm, 1)} mm`}` +
+    `${m.tempMinC === null || m.tempMaxC === null ? '' : `, ${fmt(m.tempMinC, 0)}…${fmt(m.tempMaxC, 0)} °C`}`
+  );
+}
+
+/**
+ * Transmissibility of the chosen mounts against frequency, drawn as vectors (log–log): the curve
+ * from @tacet/vibration with the catalog damping, the T = 1 line, the isolation region above
+ * √2·fn shaded, the target transmissibility and the disturbing frequencies marked.
+ */
+function transmissibilityChart(
+  doc: PDFKit.PDFDocument,
+  fnHz: number,
+  damping: Damping | undefined,
+  frequencies: LabelledFrequency[],
+  minIsolationPct: number | undefined,
+): void {
+  const width = 440;
+  const height = 200;
+  if (doc.y + height + 40 > doc.page.height - doc.page.margins.bottom) doc.addPage();
+  const left = doc.page.margins.left + 40;
+  const top = doc.y + 6;
+  const fMin = Math.min(fnHz / 4, ...frequencies.map((f) => f.frequencyHz / 2));
+  const fMax = Math.max(fnHz * 20, ...frequencies.map((f) => f.frequencyHz * 2));
+  const [tMin, tMax] = [1e-4, 1e2];
+  const x = (f: number) => left + (width * Math.log10(f / fMin)) / Math.log10(fMax / fMin);
+  const y = (t: number) => top + (height * Math.log10(tMax / Math.min(tMax, Math.max(tMin, t)))) / Math.log10(tMax / tMin);
+
+  doc.save();
+  const crossover = Math.SQRT2 * fnHz;
+  doc.rect(x(crossover), top, left + width - x(crossover), height).fillOpacity(0.12).fill('#2f7d6d');
+  doc.fillOpacity(1);
+  doc.lineWidth(0.5).strokeColor('#999999');
+  for (let decade = -4; decade <= 2; decade++) {
+    doc.moveTo(left, y(10 ** decade)).lineTo(left + width, y(10 ** decade)).stroke();
+    doc.font('body').fontSize(7).fillColor('#555555').text(`1e${decade}`, left - 30, y(10 ** decade) - 4, { width: 26, align: 'right', lineBreak: false });
+  }
+  for (let decade = Math.ceil(Math.log10(fMin)); 10 ** decade <= fMax; decade++) {
+    doc.moveTo(x(10 ** decade), top).lineTo(x(10 ** decade), top + height).stroke();
+    doc.text(`${10 ** decade} Hz`, x(10 ** decade) - 20, top + height + 3, { width: 40, align: 'center', lineBreak: false });
+  }
+  doc.rect(left, top, width, height).lineWidth(0.8).strokeColor('#333333').stroke();
+  if (minIsolationPct !== undefined && minIsolationPct < 100) {
+    const target = 1 - minIsolationPct / 100;
+    doc.moveTo(left, y(target)).lineTo(left + width, y(target)).dash(4, { space: 3 }).strokeColor('#a05a00').stroke().undash();
+    doc.fillColor('#a05a00').text(`target T ${target.toPrecision(2)}`, left + width - 80, y(target) - 10, { width: 78, align: 'right', lineBreak: false });
+  }
+  doc.strokeColor('#c0392b').lineWidth(0.8);
+  for (const f of frequencies) {
+    doc.moveTo(x(f.frequencyHz), top).lineTo(x(f.frequencyHz), top + height).dash(2, { space: 2 }).stroke().undash();
+  }
+  const grid = logSpace(fMin, fMax, 300);
+  doc.lineWidth(1.4).strokeColor('#1d4f45');
+  grid.forEach((f, i) => {
+    const t = transmissibility(f / fnHz, damping);
+    if (i === 0) doc.moveTo(x(f), y(t));
+    else doc.lineTo(x(f), y(Number.isFinite(t) ? t : tMax));
+  });
+  doc.stroke();
+  doc.restore();
+  doc.font('body').fontSize(8).fillColor('black');
+  doc.x = doc.page.margins.left;
+  doc.y = top + height + 16;
+  doc.text(
+    `Transmissibility T (log) against frequency (log); natural frequency ${fmt(fnHz, 2)} Hz; shaded: isolation (above 1.414 × natural frequency); ` +
+      `red dashed lines: the disturbing frequencies${damping ? '' : '; drawn undamped (no damping data)'}.`,
+  );
+}
+
+/** "page i of n" and the design's identity at the foot of every page. */
+function pageFooters(doc: PDFKit.PDFDocument, identity: string): void {
+  const range = doc.bufferedPageRange();
+  for (let i = range.start; i < range.start + range.count; i++) {
+    doc.switchToPage(i);
+    const bottom = doc.page.margins.bottom;
+    doc.page.margins.bottom = 0; // writing inside the bottom margin must not open a new page
+    doc.font('body').fontSize(8).fillColor('#555555');
+    doc.text(`${identity} — page ${i + 1} of ${range.count}`, doc.page.margins.left, doc.page.height - 35, {
+      width: doc.page.width - doc.page.margins.left - doc.page.margins.right,
+      align: 'center',
+      lineBreak: false,
+    });
+    doc.page.margins.bottom = bottom;
+  }
 }
