@@ -113,6 +113,18 @@ describe('projects and designs (e2e)', () => {
       await t.http().patch(`/api/projects/${project.id}`).set(as('viewer')).send({ name: 'x' }).expect(403);
     });
 
+    it('refuses null for a project name or the archived flag (400, nothing changed)', async () => {
+      const project = await newProject();
+      const before = await t.http().get(`/api/projects/${project.id}`).set(as('engineer')).expect(200);
+      for (const body of [{ name: null }, { archived: null }]) {
+        const response = await t.http().patch(`/api/projects/${project.id}`).set(as('engineer')).send(body);
+        expect(response.status).toBe(400);
+        expect(response.body.errors[0].field).toBe(Object.keys(body)[0]);
+      }
+      const after = await t.http().get(`/api/projects/${project.id}`).set(as('engineer')).expect(200);
+      expect(after.body).toEqual(before.body);
+    });
+
     it('no design can be added to an archived project', async () => {
       const project = await newProject();
       await t.http().patch(`/api/projects/${project.id}`).set(as('engineer')).send({ archived: true }).expect(200);

@@ -87,7 +87,17 @@ describe('users (e2e)', () => {
       .expect(200);
     expect(response.body).toMatchObject({ id: created.id, email: created.email, name: 'Renamed', role: 'viewer', unitSystem: 'US', active: false });
 
-    for (const body of [{ email: 'new@example.test' }, { password: 'a long password' }, { role: 'root' }, { active: 'no' }]) {
+    for (const body of [
+      { email: 'new@example.test' },
+      { password: 'a long password' },
+      { role: 'root' },
+      { active: 'no' },
+      // null is not "absent": these fields cannot be cleared (a 400, not a NOT NULL failure)
+      { name: null },
+      { role: null },
+      { active: null },
+      { unitSystem: null },
+    ]) {
       const bad = await t.http().patch(`/api/users/${created.id}`).set(auth()).send(body);
       expect(bad.status).toBe(400);
       expect(bad.body.errors[0].field).toBe(Object.keys(body)[0]);

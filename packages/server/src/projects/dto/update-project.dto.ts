@@ -1,11 +1,12 @@
 import { ApiPropertyOptional } from '@nestjs/swagger';
 import { IsBoolean, IsNotEmpty, IsOptional, IsString, MaxLength } from 'class-validator';
+import { PresentOptional } from '../../common/decorators/present-optional.decorator.js';
 import { Trim } from '../../users/dto/dto-transforms.js';
 
-/** A partial change; `null` clears site, client or description. */
+/** A partial change; `null` clears site, client or description (name and archived cannot be cleared). */
 export class UpdateProjectDto {
   @ApiPropertyOptional({ maxLength: 200 })
-  @IsOptional()
+  @PresentOptional()
   @Trim()
   @IsString()
   @IsNotEmpty()
@@ -33,7 +34,7 @@ export class UpdateProjectDto {
   description?: string | null;
 
   @ApiPropertyOptional()
-  @IsOptional()
+  @PresentOptional()
   @IsBoolean()
   archived?: boolean;
 }

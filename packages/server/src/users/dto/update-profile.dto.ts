@@ -1,13 +1,14 @@
 import { ApiPropertyOptional } from '@nestjs/swagger';
 import type { UnitSystem } from '@tacet/vibration';
-import { IsIn, IsNotEmpty, IsOptional, IsString, MaxLength } from 'class-validator';
+import { IsIn, IsNotEmpty, IsString, MaxLength } from 'class-validator';
+import { PresentOptional } from '../../common/decorators/present-optional.decorator.js';
 import { UNIT_SYSTEMS } from '../user.entity.js';
 import { Trim } from './dto-transforms.js';
 
 /** What every user may change on their own account. */
 export class UpdateProfileDto {
   @ApiPropertyOptional({ maxLength: 200 })
-  @IsOptional()
+  @PresentOptional()
   @Trim()
   @IsString()
   @IsNotEmpty()
@@ -15,7 +16,7 @@ export class UpdateProfileDto {
   name?: string;
 
   @ApiPropertyOptional({ enum: UNIT_SYSTEMS })
-  @IsOptional()
+  @PresentOptional()
   @IsIn(UNIT_SYSTEMS)
   unitSystem?: UnitSystem;
 }

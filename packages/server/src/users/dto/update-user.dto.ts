@@ -1,6 +1,7 @@
 import { ApiPropertyOptional } from '@nestjs/swagger';
 import type { UnitSystem } from '@tacet/vibration';
-import { IsBoolean, IsIn, IsNotEmpty, IsOptional, IsString, MaxLength } from 'class-validator';
+import { IsBoolean, IsIn, IsNotEmpty, IsString, MaxLength } from 'class-validator';
+import { PresentOptional } from '../../common/decorators/present-optional.decorator.js';
 import { ROLES, type Role } from '../../common/roles.js';
 import { UNIT_SYSTEMS } from '../user.entity.js';
 import { Trim } from './dto-transforms.js';
@@ -8,7 +9,7 @@ import { Trim } from './dto-transforms.js';
 /** What an admin may change on a user (email is fixed; DELETE deactivates). */
 export class UpdateUserDto {
   @ApiPropertyOptional({ maxLength: 200 })
-  @IsOptional()
+  @PresentOptional()
   @Trim()
   @IsString()
   @IsNotEmpty()
@@ -16,17 +17,17 @@ export class UpdateUserDto {
   name?: string;
 
   @ApiPropertyOptional({ enum: ROLES })
-  @IsOptional()
+  @PresentOptional()
   @IsIn(ROLES)
   role?: Role;
 
   @ApiPropertyOptional()
-  @IsOptional()
+  @PresentOptional()
   @IsBoolean()
   active?: boolean;
 
   @ApiPropertyOptional({ enum: UNIT_SYSTEMS })
-  @IsOptional()
+  @PresentOptional()
   @IsIn(UNIT_SYSTEMS)
   unitSystem?: UnitSystem;
 }
