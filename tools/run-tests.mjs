@@ -41,7 +41,8 @@ function jestSuite(name, workspace) {
 }
 
 const suites = [
-  ['build', () => ({ passed: 0, failed: run('npm', ['run', 'build']) === 0 ? 0 : 1, silent: true })],
+  // Build (vibration → server → web) and typecheck every package, tests included.
+  ['build', () => ({ passed: 0, failed: run('npm', ['run', 'build']) === 0 && run('npm', ['run', 'typecheck']) === 0 ? 0 : 1, silent: true })],
   ['vibration', () => vitestSuite('vibration', 'packages/vibration')],
   ['reference', () => vitestSuite('reference', 'tests/reference')],
   ['server', () => jestSuite('server', '@tacet/server')],
