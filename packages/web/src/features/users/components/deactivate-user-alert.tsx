@@ -1,8 +1,6 @@
-import { Alert } from '@blueprintjs/core';
 import { DisableIcon } from '@blueprintjs/icons';
-import { useState } from 'react';
 
-import { errorMessage } from '@/lib/api-errors';
+import { ConfirmActionAlert } from '@/components/confirm-action-alert';
 
 import { useDeactivateUser } from '../api/deactivate-user';
 import type { User } from '../types';
@@ -16,34 +14,14 @@ export interface DeactivateUserAlertProps {
 /** Asks before deactivating: the person can no longer sign in, but everything they did stays. */
 export function DeactivateUserAlert({ user, onClose }: DeactivateUserAlertProps) {
   const deactivate = useDeactivateUser();
-  const [failure, setFailure] = useState<string | null>(null);
-
-  const close = () => {
-    setFailure(null);
-    onClose();
-  };
-
-  const confirm = async () => {
-    if (!user) return;
-    setFailure(null);
-    try {
-      await deactivate.mutateAsync(user.id);
-      close();
-    } catch (error) {
-      setFailure(errorMessage(error));
-    }
-  };
-
   return (
-    <Alert
+    <ConfirmActionAlert
       isOpen={user !== null}
-      intent="danger"
       icon={<DisableIcon />}
       confirmButtonText="Deactivate"
-      cancelButtonText="Cancel"
-      loading={deactivate.isPending}
-      onConfirm={() => void confirm()}
-      onCancel={close}
+      pending={deactivate.isPending}
+      onConfirm={() => (user ? deactivate.mutateAsync(user.id) : Promise.resolve())}
+      onClose={onClose}
     >
       {user ? (
         <>
@@ -54,13 +32,8 @@ export function DeactivateUserAlert({ user, onClose }: DeactivateUserAlertProps)
             {user.email} will no longer be able to sign in. Their projects, designs and history stay as they are, and
             an administrator can make the account active again.
           </p>
-          {failure ? (
-            <p className="tc-alert-error" role="alert">
-              {failure}
-            </p>
-          ) : null}
         </>
       ) : null}
-    </Alert>
+    </ConfirmActionAlert>
   );
 }
