@@ -302,7 +302,9 @@ async function main(): Promise<void> {
 
     const port = await freePort();
     const base = `http://127.0.0.1:${port}`;
-    child = spawn(process.execPath, [SERVER], {
+    // e.g. TACET_BENCH_SERVER_NODE_ARGS='--cpu-prof --cpu-prof-dir=/tmp/prof' to profile the server
+    const nodeArgs = (process.env.TACET_BENCH_SERVER_NODE_ARGS ?? '').split(' ').filter(Boolean);
+    child = spawn(process.execPath, [...nodeArgs, SERVER], {
       env: { ...process.env, PORT: String(port), TACET_DEMO: 'true', TACET_DATA_DIR: join(dir, 'data'), TACET_WEB_DIST: join(dir, 'no-web') },
       stdio: ['ignore', 'ignore', 'inherit'],
     });

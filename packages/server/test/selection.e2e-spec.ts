@@ -294,6 +294,35 @@ describe('selection (e2e)', () => {
     expect(c.isolation.map((i) => i.frequencyHz)).toEqual([2 * SHAFT_1480, SHAFT_1480]);
   });
 
+  it('sees every catalog change at once: an edit, a retirement, a restore, a retired supplier, an import', async () => {
+    const manager = await t.loginAs('catalog_manager');
+    const as = { Authorization: `Bearer ${manager}` };
+    const fresh = await createSupplier(t, manager, 'Selection Freshness Mounts');
+    const part = await createMount(t, manager, fresh.id, { partNumber: 'FRESH-3000', verticalStiffnessNPerM: 1.0e5 });
+    const run = async () => (await select(request({ criteria: { ...request().criteria, supplierIds: [fresh.id] } })).expect(200)).body.candidates as Candidate[];
+    const fn = (k: number) => Math.sqrt((4 * k) / 1000) / TWO_PI; // n_d = 1, four mounts, 1000 kg [CF]
+
+    expect(find(await run(), part.id).verticalNaturalFrequencyHz).toBeCloseTo(fn(1.0e5), 6);
+    await t.http().patch(`/api/mounts/${part.id}`).set(as).send({ verticalStiffnessNPerM: 1.2e5 }).expect(200);
+    expect(find(await run(), part.id).verticalNaturalFrequencyHz).toBeCloseTo(fn(1.2e5), 6);
+
+    await t.http().delete(`/api/mounts/${part.id}`).set(as).expect(200);
+    expect(await run()).toEqual([]);
+    await t.http().patch(`/api/mounts/${part.id}`).set(as).send({ active: true }).expect(200);
+    expect((await run()).map((c) => c.mountId)).toEqual([part.id]);
+
+    await t.http().patch(`/api/suppliers/${fresh.id}`).set(as).send({ active: false }).expect(200);
+    expect(await run()).toEqual([]);
+    await t.http().patch(`/api/suppliers/${fresh.id}`).set(as).send({ active: true }).expect(200);
+
+    const csv =
+      'supplier,part_number,mount_type,rated_load_n,vertical_stiffness_n_per_mm,damping_ratio\n' +
+      `${fresh.name},FRESH-IMPORTED,open_spring,3000,90,0.05\n`;
+    const imported = await t.http().post('/api/mounts/import').set(as).attach('file', Buffer.from(csv), 'fresh.csv').expect(200);
+    expect(imported.body.created).toBe(1);
+    expect((await run()).map((c) => c.label).join(' ')).toContain('FRESH-IMPORTED');
+  });
+
   it.each<[string, object, string]>([
     ['a zero mass', { components: [{ name: 'M', massKg: 0, cg: { x: 0, y: 0, z: 0 } }] }, 'components.0.massKg'],
     ['a negative mass', { components: [{ name: 'M', massKg: -5, cg: { x: 0, y: 0, z: 0 } }] }, 'components.0.massKg'],

@@ -1,5 +1,6 @@
 import { Module } from '@nestjs/common';
 import { TypeOrmModule } from '@nestjs/typeorm';
+import { CatalogRevisionModule } from '../catalog-revision/catalog-revision.module.js';
 import { SuppliersModule } from '../suppliers/suppliers.module.js';
 import { User } from '../users/user.entity.js';
 import { CatalogExportService } from './catalog-export.service.js';
@@ -14,7 +15,7 @@ import { MountsController } from './mounts.controller.js';
 import { MountsService } from './mounts.service.js';
 
 @Module({
-  imports: [TypeOrmModule.forFeature([Mount, CatalogImport, User]), SuppliersModule],
+  imports: [TypeOrmModule.forFeature([Mount, CatalogImport, User]), SuppliersModule, CatalogRevisionModule],
   // CatalogImportsController first: its static paths (/mounts/imports) must precede /mounts/:id.
   controllers: [CatalogImportsController, MountsController],
   providers: [

@@ -1,6 +1,7 @@
 import { BadRequestException, ConflictException, Injectable, NotFoundException } from '@nestjs/common';
 import { InjectRepository } from '@nestjs/typeorm';
-import { Brackets, In, type Repository, type SelectQueryBuilder } from 'typeorm';
+import { Brackets, In, type EntityManager, type Repository, type SelectQueryBuilder } from 'typeorm';
+import { CatalogRevisionService } from '../catalog-revision/catalog-revision.service.js';
 import type { FieldError } from '../common/filters/all-exceptions.filter.js';
 import { isUniqueViolation } from '../database/unique-violation.js';
 import { Supplier } from '../suppliers/supplier.entity.js';
@@ -42,6 +43,7 @@ export class MountsService {
   constructor(
     @InjectRepository(Mount) private readonly mounts: Repository<Mount>,
     @InjectRepository(Supplier) private readonly suppliers: Repository<Supplier>,
+    private readonly revision: CatalogRevisionService,
   ) {}
 
   /**
@@ -136,7 +138,9 @@ export class MountsService {
     if (await this.mounts.existsBy({ supplierId: values.supplierId, partNumber: values.partNumber })) {
       throw duplicatePart(values.partNumber);
     }
-    const saved = await this.writeOrConflict(values.partNumber, () => this.mounts.save(this.mounts.create(values)));
+    const saved = await this.writeOrConflict(values.partNumber, () =>
+      this.write((manager) => manager.save(Mount, manager.create(Mount, values))),
+    );
     return this.findOne(saved.id);
   }
 
@@ -159,7 +163,7 @@ export class MountsService {
       throw duplicatePart(next.partNumber);
     }
     if (Object.keys(changes).length > 0) {
-      await this.writeOrConflict(next.partNumber, () => this.mounts.update({ id }, changes));
+      await this.writeOrConflict(next.partNumber, () => this.write((manager) => manager.update(Mount, { id }, changes)));
     }
     return this.findOne(id);
   }
@@ -167,8 +171,17 @@ export class MountsService {
   /** DELETE retires: rows are never deleted (released designs keep their own snapshot). */
   async retire(id: number): Promise<Mount> {
     await this.findOne(id);
-    await this.mounts.update({ id }, { active: false });
+    await this.write((manager) => manager.update(Mount, { id }, { active: false }));
     return this.findOne(id);
+  }
+
+  /** A change to the catalog, in one transaction with the catalog revision it makes. */
+  private write<T>(change: (manager: EntityManager) => Promise<T>): Promise<T> {
+    return this.mounts.manager.transaction(async (manager) => {
+      const result = await change(manager);
+      await this.revision.bump(manager);
+      return result;
+    });
   }
 
   private assertConsistent(values: Pick<Mount, 'dampingRatio' | 'lossFactor' | 'tempMinC' | 'tempMaxC'>): void {

@@ -1,4 +1,5 @@
 import { CatalogImport } from '../catalog/catalog-import.entity.js';
+import { CatalogRevision } from '../catalog-revision/catalog-revision.entity.js';
 import { Mount } from '../catalog/mount.entity.js';
 import { Design } from '../designs/design.entity.js';
 import { Rfq } from '../purchasing/rfq.entity.js';
@@ -9,4 +10,4 @@ import { Supplier } from '../suppliers/supplier.entity.js';
 import { User } from '../users/user.entity.js';
 
 /** Every entity. A feature's entity is imported and appended here (and in its module's forFeature). */
-export const ENTITIES = [User, Supplier, Mount, CatalogImport, Project, Design, DesignTransition, Rfq, RfqEvent];
+export const ENTITIES = [User, Supplier, Mount, CatalogImport, Project, Design, DesignTransition, Rfq, RfqEvent, CatalogRevision];

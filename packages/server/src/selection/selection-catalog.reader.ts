@@ -4,7 +4,8 @@ import { DataSource } from 'typeorm';
 import { dampingModelOf } from '../catalog/mount-rules.js';
 import { Mount } from '../catalog/mount.entity.js';
 import { Supplier } from '../suppliers/supplier.entity.js';
-import { CATALOG_COLUMNS, DETAIL_COLUMNS, type CatalogTuple, type MountDetails } from './selection-engine.js';
+import { CatalogRevisionService } from '../catalog-revision/catalog-revision.service.js';
+import { CATALOG_COLUMNS, CATALOG_COLUMN_INDEX, DETAIL_COLUMNS, type CatalogTuple, type MountDetails } from './selection-engine.js';
 import type { PrefilterBounds } from './selection-problem.js';
 import type { MountSnapshot } from './selection.types.js';
 
@@ -13,24 +14,69 @@ const STATEMENT_CACHE_SIZE = 32;
 
 const num = (value: unknown): number | null => (value === null || value === undefined ? null : Number(value));
 
+/** The active catalog in memory, by ascending rated load (see SelectionCatalogReader.snapshot). */
+interface CatalogSnapshot {
+  revision: number;
+  /** CATALOG_COLUMNS tuples, as the selection engine reads them. */
+  rows: CatalogTuple[];
+  rated: Float64Array;
+  /** NaN where the supplier states no limit. */
+  tempMin: Float64Array;
+  tempMax: Float64Array;
+  mountType: string[];
+  supplierId: Int32Array;
+}
+
+/** Index of the first value ≥ x in an ascending array. */
+function firstAtLeast(values: Float64Array, x: number): number {
+  let lo = 0;
+  let hi = values.length;
+  while (lo < hi) {
+    const mid = (lo + hi) >>> 1;
+    if (values[mid] < x) lo = mid + 1;
+    else hi = mid;
+  }
+  return lo;
+}
+
+/** Index of the first value > x in an ascending array. */
+function firstAbove(values: Float64Array, x: number): number {
+  let lo = 0;
+  let hi = values.length;
+  while (lo < hi) {
+    const mid = (lo + hi) >>> 1;
+    if (values[mid] <= x) lo = mid + 1;
+    else hi = mid;
+  }
+  return lo;
+}
+
 /** `"m"."column"`: identifiers quoted the way SQLite and PostgreSQL both accept. */
 const column = (name: string): string => `"m"."${name}"`;
 
 /**
  * The selection's read access to the catalog, active mounts of active suppliers only.
  *
- * The hot query (the SQL prefilter) reads only the columns the ranking needs
- * (CATALOG_COLUMNS), as arrays, through a prepared statement: on SQLite a better-sqlite3
- * statement in raw mode on TypeORM's own connection (no entity, no object per row); on
- * PostgreSQL the same SQL through `DataSource.query`. Details (part number, type, horizontal
- * stiffness, temperature range) and supplier names are read afterwards for the few mounts
- * whose modes are computed or that are shown.
+ * The hot path (the prefilter) runs over an in-memory snapshot of the active catalog with the
+ * columns the ranking needs (CATALOG_COLUMNS, as arrays: no object per row), ordered by rated
+ * load so that the load window is a binary search. The snapshot is labelled with the catalog
+ * revision (CatalogRevisionService) and read again when another write — from this process or
+ * any other on the same database — moved it. Reads go through a prepared statement: on SQLite
+ * a better-sqlite3 statement in raw mode on TypeORM's own connection; on PostgreSQL the same
+ * SQL through `DataSource.query`. Details (part number, type, horizontal stiffness,
+ * temperature range) and supplier names are read afterwards for the few mounts whose modes are
+ * computed or that are shown.
  */
 @Injectable()
 export class SelectionCatalogReader {
   private readonly statements = new Map<string, BetterSqlite3.Statement>();
+  private cached: CatalogSnapshot | undefined;
+  private loading: { revision: number; promise: Promise<CatalogSnapshot> } | undefined;
 
-  constructor(private readonly dataSource: DataSource) {}
+  constructor(
+    private readonly dataSource: DataSource,
+    private readonly revision: CatalogRevisionService,
+  ) {}
 
   private get sqlite(): BetterSqlite3.Database | null {
     if (this.dataSource.options.type !== 'better-sqlite3') return null;
@@ -65,27 +111,79 @@ export class SelectionCatalogReader {
   }
 
   /**
-   * The SQL prefilter: rated load within the window that could suit at least one point, the
+   * The prefilter: rated load within the window that could suit at least one point, the
    * temperature range covering the ambient temperature (a range the supplier does not state
-   * passes), and the allowed types and suppliers.
+   * passes), and the allowed types and suppliers — over the in-memory snapshot of the catalog.
    */
-  prefiltered(bounds: PrefilterBounds): Promise<CatalogTuple[]> {
-    return this.tuples((param) => {
-      const where = [
-        `${column('active')} = ${param(true)}`,
-        `"s"."active" = ${param(true)}`,
-        `${column('ratedLoadN')} >= ${param(bounds.minRatedLoadN)}`,
-        `${column('ratedLoadN')} <= ${param(bounds.maxRatedLoadN)}`,
-      ];
-      if (bounds.ambientTempC !== undefined) {
-        const t = bounds.ambientTempC;
-        where.push(`(${column('tempMinC')} IS NULL OR ${column('tempMinC')} <= ${param(t)})`);
-        where.push(`(${column('tempMaxC')} IS NULL OR ${column('tempMaxC')} >= ${param(t)})`);
-      }
-      if (bounds.mountTypes) where.push(`${column('mountType')} IN (${bounds.mountTypes.map(param).join(', ')})`);
-      if (bounds.supplierIds) where.push(`${column('supplierId')} IN (${bounds.supplierIds.map(param).join(', ')})`);
-      return where.join(' AND ');
-    });
+  async prefiltered(bounds: PrefilterBounds): Promise<CatalogTuple[]> {
+    const snapshot = await this.snapshot();
+    const { rated, tempMin, tempMax, mountType, supplierId, rows } = snapshot;
+    const types = bounds.mountTypes ? new Set<string>(bounds.mountTypes) : null;
+    const suppliers = bounds.supplierIds ? new Set<number>(bounds.supplierIds) : null;
+    const t = bounds.ambientTempC;
+    const out: CatalogTuple[] = [];
+    const end = firstAbove(rated, bounds.maxRatedLoadN);
+    for (let i = firstAtLeast(rated, bounds.minRatedLoadN); i < end; i++) {
+      if (t !== undefined && (tempMin[i] > t || tempMax[i] < t)) continue; // NaN (not stated) compares false: passes
+      if (types && !types.has(mountType[i])) continue;
+      if (suppliers && !suppliers.has(supplierId[i])) continue;
+      out.push(rows[i]);
+    }
+    return out;
+  }
+
+  /**
+   * Active mounts of active suppliers with the columns the prefilter and ranking read, by rated
+   * load, kept in memory and read again when the catalog revision moved (one small query per
+   * selection). Concurrent selections share one read.
+   */
+  private async snapshot(): Promise<CatalogSnapshot> {
+    const revision = await this.revision.current();
+    if (this.cached?.revision === revision) return this.cached;
+    if (this.loading?.revision !== revision) {
+      const loading = this.readSnapshot(revision);
+      this.loading = { revision, promise: loading };
+      loading.then(
+        (snapshot) => {
+          if (!this.cached || this.cached.revision < snapshot.revision) this.cached = snapshot;
+          if (this.loading?.promise === loading) this.loading = undefined;
+        },
+        () => {
+          if (this.loading?.promise === loading) this.loading = undefined;
+        },
+      );
+    }
+    return this.loading!.promise;
+  }
+
+  /** Reads the whole active catalog, ordered by rated load (read after `revision`: never older than it). */
+  private async readSnapshot(revision: number): Promise<CatalogSnapshot> {
+    const filterColumns = ['mountType', 'tempMinC', 'tempMaxC'];
+    const tuples = await this.tuples(
+      (param) => `${column('active')} = ${param(true)} AND "s"."active" = ${param(true)} ORDER BY ${column('ratedLoadN')}, ${column('id')}`,
+      filterColumns,
+    );
+    const R = tuples.length;
+    const snapshot: CatalogSnapshot = {
+      revision,
+      rows: new Array<CatalogTuple>(R),
+      rated: new Float64Array(R),
+      tempMin: new Float64Array(R),
+      tempMax: new Float64Array(R),
+      mountType: new Array<string>(R),
+      supplierId: new Int32Array(R),
+    };
+    const at = CATALOG_COLUMNS.length;
+    for (let i = 0; i < R; i++) {
+      const tuple = tuples[i];
+      snapshot.rows[i] = tuple.slice(0, at);
+      snapshot.rated[i] = Number(tuple[CATALOG_COLUMN_INDEX.ratedLoadN]);
+      snapshot.supplierId[i] = Number(tuple[CATALOG_COLUMN_INDEX.supplierId]);
+      snapshot.mountType[i] = String(tuple[at]);
+      snapshot.tempMin[i] = tuple[at + 1] === null ? Number.NaN : Number(tuple[at + 1]);
+      snapshot.tempMax[i] = tuple[at + 2] === null ? Number.NaN : Number(tuple[at + 2]);
+    }
+    return snapshot;
   }
 
   /** Rows (with their details) of one active mount or one series, without the load / type filters: a choice made outside the list. */

@@ -2,6 +2,7 @@ import { ConflictException, Injectable, NotFoundException } from '@nestjs/common
 import { InjectRepository } from '@nestjs/typeorm';
 import { In, type Repository } from 'typeorm';
 import { Mount } from '../catalog/mount.entity.js';
+import { CatalogRevisionService } from '../catalog-revision/catalog-revision.service.js';
 import { isUniqueViolation } from '../database/unique-violation.js';
 import type { CreateSupplierDto } from './dto/create-supplier.dto.js';
 import type { UpdateSupplierDto } from './dto/update-supplier.dto.js';
@@ -28,6 +29,7 @@ export class SuppliersService {
   constructor(
     @InjectRepository(Supplier) private readonly suppliers: Repository<Supplier>,
     @InjectRepository(Mount) private readonly mounts: Repository<Mount>,
+    private readonly revision: CatalogRevisionService,
   ) {}
 
   /** Every supplier (retired ones too), sorted by name regardless of case. */
@@ -119,7 +121,12 @@ export class SuppliersService {
 
   private async saveOrConflict(supplier: Supplier): Promise<Supplier> {
     try {
-      return await this.suppliers.save(supplier);
+      // with the catalog revision: retiring a supplier takes its mounts out of the selection
+      return await this.suppliers.manager.transaction(async (manager) => {
+        const saved = await manager.save(Supplier, supplier);
+        await this.revision.bump(manager);
+        return saved;
+      });
     } catch (error) {
       if (isUniqueViolation(error)) throw new ConflictException(DUPLICATE_NAME);
       throw error;

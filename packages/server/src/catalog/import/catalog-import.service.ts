@@ -1,6 +1,7 @@
 import { setImmediate as nextTurn } from 'node:timers/promises';
 import { Injectable, Logger } from '@nestjs/common';
 import { DataSource, type EntityManager } from 'typeorm';
+import { CatalogRevisionService } from '../../catalog-revision/catalog-revision.service.js';
 import { Supplier } from '../../suppliers/supplier.entity.js';
 import { cleanSupplierName, supplierNameKey } from '../../suppliers/supplier-name.js';
 import { CatalogImport, type ImportMode } from '../catalog-import.entity.js';
@@ -64,6 +65,7 @@ export class CatalogImportService {
   constructor(
     private readonly dataSource: DataSource,
     private readonly writer: MountBatchWriter,
+    private readonly revision: CatalogRevisionService,
   ) {}
 
   /**
@@ -80,6 +82,7 @@ export class CatalogImportService {
       const result = await this.dataSource.transaction(async (manager) => {
         const pass = new ImportPass(this.writer, request, manager, true);
         const outcome = this.refuseIfInvalid(request, await pass.run()); // throwing rolls back
+        await this.revision.bump(manager);
         const saved = await manager.save(
           manager.create(CatalogImport, {
             userId: request.userId,

@@ -3,6 +3,7 @@ import { CreateCatalog1764720000000 } from './1764720000000-create-catalog.js';
 import { CreateProjectDesign1764806400000 } from './1764806400000-create-project-design.js';
 import { MountSelectionIndex1764849600000 } from './1764849600000-mount-selection-index.js';
 import { CreateReviewPurchasing1764892800000 } from './1764892800000-create-review-purchasing.js';
+import { CreateCatalogRevision1764979200000 } from './1764979200000-create-catalog-revision.js';
 
 /** Every migration, oldest first. A new migration is imported and appended here. */
 export const MIGRATIONS = [
@@ -11,4 +12,5 @@ export const MIGRATIONS = [
   CreateProjectDesign1764806400000,
   MountSelectionIndex1764849600000,
   CreateReviewPurchasing1764892800000,
+  CreateCatalogRevision1764979200000,
 ];
