@@ -58,7 +58,9 @@ export async function startServer(email = 'catalog@tacet.test'): Promise<BenchSe
   }
   const dataDir = mkdtempSync(join(tmpdir(), 'tacet-bench-'));
   const port = await freePort();
-  const child: ChildProcess = spawn(process.execPath, [SERVER_MAIN], {
+  // e.g. TACET_BENCH_SERVER_NODE_ARGS='--cpu-prof --cpu-prof-dir=/tmp/prof' to profile the server
+  const nodeArgs = (process.env.TACET_BENCH_SERVER_NODE_ARGS ?? '').split(' ').filter(Boolean);
+  const child: ChildProcess = spawn(process.execPath, [...nodeArgs, SERVER_MAIN], {
     cwd: ROOT,
     env: { ...process.env, TACET_DEMO: 'true', TACET_DATA_DIR: dataDir, PORT: String(port), TACET_WEB_DIST: join(dataDir, 'none') },
     stdio: ['ignore', 'ignore', 'inherit'],

@@ -1,5 +1,6 @@
 import { DataSource, type EntityManager } from 'typeorm';
 import type { MountValues } from './catalog-columns.js';
+import { databaseOptions } from '../../config/database.config.js';
 import { MountBatchWriter } from './mount-batch-writer.js';
 
 const values: MountValues = {
@@ -62,5 +63,35 @@ describe('MountBatchWriter', () => {
     expect(calls).toHaveLength(1);
     expect(calls[0].sql).toMatch(/VALUES \((\?, ){17}\?\) ON CONFLICT/);
     expect(calls[0].sql).toMatch(/"updatedAt" = datetime\('now'\)$/);
+  });
+
+  it('on an open SQLite connection, inserts then updates in place inside the caller\'s transaction (and restores a retired part)', async () => {
+    const dataSource = new DataSource({ ...databaseOptions({ dataDir: '.' }), database: ':memory:' } as never);
+    await dataSource.initialize(); // migrations
+    try {
+      await dataSource.query(`INSERT INTO "supplier" ("name", "nameKey") VALUES ('Wrenfield Example Mounts', 'wrenfield example mounts')`);
+      const writer = new MountBatchWriter();
+      const batch = [
+        { supplierId: 1, values },
+        { supplierId: 1, values: { ...values, partNumber: 'WX-2', dampingRatio: null, lossFactor: 0.2 } },
+      ];
+      await dataSource.transaction((manager) => writer.upsert(manager, batch));
+      await dataSource.query(`UPDATE "mount" SET "active" = 0 WHERE "partNumber" = 'WX-2'`);
+      // a rolled-back transaction leaves nothing behind
+      await expect(
+        dataSource.transaction(async (manager) => {
+          await writer.upsert(manager, [{ supplierId: 1, values: { ...values, partNumber: 'WX-3' } }]);
+          throw new Error('crash');
+        }),
+      ).rejects.toThrow('crash');
+      await dataSource.transaction((manager) => writer.upsert(manager, [{ supplierId: 1, values: { ...batch[1].values, ratedLoadN: 1500 } }]));
+      const rows = await dataSource.query(`SELECT "partNumber", "ratedLoadN", "lossFactor", "dampingRatio", "active" FROM "mount" ORDER BY "id"`);
+      expect(rows).toEqual([
+        { partNumber: 'WX-1', ratedLoadN: 1200, lossFactor: null, dampingRatio: 0.01, active: 1 },
+        { partNumber: 'WX-2', ratedLoadN: 1500, lossFactor: 0.2, dampingRatio: null, active: 1 },
+      ]);
+    } finally {
+      await dataSource.destroy();
+    }
   });
 });
