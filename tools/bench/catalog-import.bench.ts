@@ -20,6 +20,7 @@ import { fileURLToPath } from 'node:url';
 import Database from 'better-sqlite3';
 import { parse } from 'csv-parse';
 import { writeDemoCatalog } from '../catalog/generate-demo-catalog.js';
+import { reportFigure } from './bench-result.js';
 import { memoryOf, mib, ms, startServer, uploadCatalog } from './catalog-bench-support.js';
 
 const ROWS = 100_000;
@@ -114,6 +115,8 @@ async function main(): Promise<void> {
     console.log(`Tacet import (HTTP, new catalog):   ${ms(first.ms)}  created ${first.body.created}, updated ${first.body.updated}, rejected ${first.body.rejected}; server peak RSS growth ${mib(first.peakGrowthMiB)}`);
     console.log(`Tacet import (HTTP, all updates):   ${ms(second.ms)}  created ${second.body.created}, updated ${second.body.updated}`);
     console.log(`bare csv-parse + prepared inserts:  ${ms(bare.ms)}  ${bare.rows} rows; peak RSS growth ${mib(bare.peakGrowthMiB)}`);
+    reportFigure({ figure: `catalog import, ${ROWS} rows (HTTP, new catalog)`, value: first.ms, unit: 'ms', target: TARGET_MS, bare: bare.ms, ratioTarget: TARGET_RATIO });
+    reportFigure({ figure: `catalog import, ${ROWS} rows: server peak RSS growth`, value: first.peakGrowthMiB, unit: 'MiB', bare: bare.peakGrowthMiB });
     console.log(`ratio Tacet / bare: ${ratio.toFixed(2)}× (target ≤ ${TARGET_RATIO}×); time target < ${TARGET_MS} ms: ${first.ms < TARGET_MS ? 'met' : 'NOT met'}; ratio target: ${ratio <= TARGET_RATIO ? 'met' : 'NOT met'}`);
   } finally {
     rmSync(work, { recursive: true, force: true });

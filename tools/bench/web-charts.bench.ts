@@ -14,6 +14,7 @@
  */
 import { spawnSync } from 'node:child_process';
 import { fileURLToPath } from 'node:url';
+import { reportFigure } from './bench-result.js';
 
 const RUNS = 30;
 const SAMPLES = 1000;
@@ -96,3 +97,4 @@ console.log(`transmissibility chart, ${SAMPLES} points, one redraw (median of ${
 console.log(`  chart (React + Victory → SVG markup): ${chartMs.toFixed(2)} ms   target < 50 ms`);
 console.log(`  bare loop (same curve → one path):    ${bareMs.toFixed(3)} ms`);
 console.log(`  ratio chart / bare: ${(chartMs / bareMs).toFixed(0)}×`);
+reportFigure({ figure: `transmissibility chart redraw, ${SAMPLES} points`, value: chartMs, unit: 'ms', target: 50, bare: bareMs });
