@@ -62,9 +62,15 @@ export interface DesignWorkspaceProps {
   renderSelection: (context: DesignSelectionContext) => ReactNode;
   /** The tab shown first. */
   initialTab?: DesignTab;
-  /** Shown under the page header, e.g. the check-and-release panel (composed by the route). */
-  review?: ReactNode;
+  /**
+   * Shown under the page header, e.g. the check-and-release panel (composed by the route); it
+   * gets whether there are unsaved edits and a way to save them first.
+   */
+  renderReview?: (context: DesignReviewContext) => ReactNode;
 }
+
+/** What the review part of the page gets from the workspace. */
+export type DesignReviewContext = Pick<DesignSelectionContext, 'dirty' | 'saveIfNeeded'>;
 
 /** Why the signed-in user cannot change this design, or null when they can. */
 export function readOnlyReason(design: Design, user: SessionUser): string | null {
@@ -133,11 +139,11 @@ interface EditorProps {
   onReload: (formik: FormikProps<DesignFormValues>) => Promise<void>;
   onChoose: (candidate: Candidate, formik: FormikProps<DesignFormValues>) => Promise<boolean>;
   renderSelection: DesignWorkspaceProps['renderSelection'];
-  review?: ReactNode;
+  renderReview?: DesignWorkspaceProps['renderReview'];
 }
 
 function DesignEditor(props: EditorProps) {
-  const { base, newer, readOnlyText, canRun, tab, onTab, conflict, failure, reloading, choosing, renderSelection, review } = props;
+  const { base, newer, readOnlyText, canRun, tab, onTab, conflict, failure, reloading, choosing, renderSelection, renderReview } = props;
   const readOnly = readOnlyText !== null;
   const formik = useFormikContext<DesignFormValues>();
   const { values, errors, dirty, submitCount, resetForm, isSubmitting } = formik;
@@ -215,7 +221,7 @@ function DesignEditor(props: EditorProps) {
           )
         }
       />
-      {review}
+      {renderReview?.({ dirty, saveIfNeeded })}
       {readOnlyText ? (
         <Callout icon={<LockIcon />} className="tc-note" title="Read only">
           {readOnlyText}
@@ -286,7 +292,7 @@ function DesignEditor(props: EditorProps) {
  * (rendered by the route). Everything shown is recomputed in the browser as the user types.
  * A save sends the version the form was loaded from, so a concurrent change answers 409.
  */
-export function DesignWorkspace({ design, onReload, renderSelection, initialTab = 'equipment', review }: DesignWorkspaceProps) {
+export function DesignWorkspace({ design, onReload, renderSelection, initialTab = 'equipment', renderReview }: DesignWorkspaceProps) {
   const user = useUser();
   const units = useUnits();
   const updateDesign = useUpdateDesign();
@@ -384,7 +390,7 @@ export function DesignWorkspace({ design, onReload, renderSelection, initialTab 
         onReload={reload}
         onChoose={choose}
         renderSelection={renderSelection}
-        review={review}
+        renderReview={renderReview}
       />
     </Formik>
   );

@@ -69,6 +69,34 @@ describe('Check and release panel', () => {
     expect(await screen.findByText('This revision is in review, so it cannot be changed now.')).toBeInTheDocument();
   });
 
+  it('saves unsaved edits before sending for check, so the checker sees them and nothing is lost', async () => {
+    const { user, fake, server } = openDesign({ status: 'draft' });
+    const region = await panel();
+    const mass = screen.getByLabelText('Mass of Pump');
+    await user.clear(mass);
+    await user.type(mass, '400');
+
+    await user.click(within(region).getByRole('button', { name: 'Send for check' }));
+
+    await waitFor(() => expect(fake.calls('post', '/designs/:id/transitions')).toHaveLength(1));
+    const writes = fake.requests.filter((r) => r.method !== 'get').map((r) => r.method);
+    expect(writes).toEqual(['put', 'post']); // the save first, then the move
+    expect(server.design.input.components[0]!.massKg).toBe(400);
+    expect(await screen.findByText('This revision is in review, so it cannot be changed now.')).toBeInTheDocument();
+    expect(screen.getByLabelText('Mass of Pump')).toHaveValue('400');
+  });
+
+  it('does not send for check when the unsaved edits cannot be saved, and says why', async () => {
+    const { user, fake } = openDesign({ status: 'draft' });
+    const region = await panel();
+    await user.clear(screen.getByLabelText('Mass of Pump')); // a required value left empty
+
+    await user.click(within(region).getByRole('button', { name: 'Send for check' }));
+
+    expect(await within(region).findByText(/Your changes could not be saved, so the design was not sent for check/)).toBeInTheDocument();
+    expect(fake.calls('post', '/designs/:id/transitions')).toHaveLength(0);
+  });
+
   it('says why a draft without chosen mounts cannot be sent', async () => {
     openDesign({ status: 'draft', chosen: null });
     const region = await panel();

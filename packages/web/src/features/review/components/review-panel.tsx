@@ -22,6 +22,10 @@ export interface ReviewPanelProps {
   onChanged: (design: Design) => void;
   /** A new draft revision was made from this one. */
   onRevisionCreated: (design: Design) => void;
+  /** The input on the page has edits not saved yet. */
+  unsavedEdits?: boolean;
+  /** Saves those edits; resolves with the saved design, or null when they could not be saved. */
+  saveEdits?: () => Promise<Design | null>;
 }
 
 /** A refusal in words: the server's own sentence, with a lead-in for the status. */
@@ -45,18 +49,28 @@ function Blocked({ rule, id }: { rule: ActionRule; id: string }) {
  * "Check and release": the design's stage, the moves the signed-in user may make (each with
  * the reason when it is not available), and the record of earlier moves.
  */
-export function ReviewPanel({ design, onChanged, onRevisionCreated }: ReviewPanelProps) {
+export function ReviewPanel({ design, onChanged, onRevisionCreated, unsavedEdits = false, saveEdits }: ReviewPanelProps) {
   const user = useUser();
   const transition = useTransitionDesign();
   const revision = useCreateRevision();
   const [returning, setReturning] = useState(false);
   const [confirmRelease, setConfirmRelease] = useState(false);
   const [failure, setFailure] = useState<string | null>(null);
+  const [saving, setSaving] = useState(false);
   const actions = reviewActions(design, user);
-  const busy = transition.isPending || revision.isPending;
+  const busy = transition.isPending || revision.isPending || saving;
 
   const move = async (to: TransitionTarget, comment?: string): Promise<boolean> => {
     setFailure(null);
+    // The checker checks what the author sees: unsaved edits are saved first, or nothing is sent.
+    if (to === 'in_review' && unsavedEdits && saveEdits) {
+      setSaving(true);
+      const saved = await saveEdits().finally(() => setSaving(false));
+      if (!saved) {
+        setFailure('Your changes could not be saved, so the design was not sent for check. Correct the input and try again.');
+        return false;
+      }
+    }
     try {
       const updated = await transition.mutateAsync({ designId: design.id, to, comment });
       onChanged(updated);
@@ -96,7 +110,8 @@ export function ReviewPanel({ design, onChanged, onRevisionCreated }: ReviewPane
               icon={<SendMessageIcon />}
               text="Send for check"
               disabled={actions.sendForCheck.blockedBy !== null || busy}
-              loading={transition.isPending && transition.variables?.to === 'in_review'}
+              title={unsavedEdits ? 'Saves your changes, then sends the design for check' : undefined}
+              loading={saving || (transition.isPending && transition.variables?.to === 'in_review')}
               aria-describedby={actions.sendForCheck.blockedBy ? 'why-send' : undefined}
               onClick={() => void move('in_review')}
             />

@@ -53,9 +53,11 @@ export function Component() {
         design={design.data}
         initialTab={initialTab}
         onReload={async () => (await design.refetch()).data}
-        review={
+        renderReview={(context) => (
           <ReviewPanel
             design={design.data}
+            unsavedEdits={context.dirty}
+            saveEdits={context.saveIfNeeded}
             onChanged={(changed) => {
               queryClient.setQueryData(designQueryKey(changed.id), changed);
               void queryClient.invalidateQueries({ queryKey: projectDesignsQueryKey(changed.projectId) });
@@ -65,7 +67,7 @@ export function Component() {
               void navigate(`/designs/${created.id}`);
             }}
           />
-        }
+        )}
         renderSelection={(context) => (
           <SelectionPanel
             designId={context.design.id}
