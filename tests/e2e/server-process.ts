@@ -23,18 +23,6 @@ export function freePort(): Promise<number> {
   });
 }
 
-function ensureChromium(): void {
-  if (existsSync(CHROMIUM)) return;
-  if (process.getuid?.() === 0) {
-    console.log('Chromium is missing: installing Debian\'s chromium with apt-get…');
-    spawnSync('apt-get', ['update', '-qq'], { stdio: 'inherit' });
-    spawnSync('apt-get', ['install', '-y', '-qq', 'chromium'], { stdio: 'inherit' });
-  }
-  if (!existsSync(CHROMIUM)) {
-    throw new Error(`Browser tests need Debian's Chromium at ${CHROMIUM}: run "sudo apt-get install -y chromium".`);
-  }
-}
-
 async function waitForHealth(url: string, child: ChildProcess): Promise<void> {
   const deadline = Date.now() + 60_000;
   while (Date.now() < deadline) {

@@ -163,7 +163,7 @@ export async function writeDemoCatalog(path: string, seed = 1, rows?: number): P
   out.write(csvLine(HEADER));
   let n = 0;
   for (const row of demoCatalogRows(seed, rows)) {
-    if (!out.write(csvLine(row))) await new Promise((r) => out.once('drain', r));
+    if (!out.write(csvLine(row))) await new Promise<void>((r) => out.once('drain', () => r()));
     n++;
   }
   await new Promise<void>((r, j) => out.end((e?: Error | null) => (e ? j(e) : r())));

@@ -1,5 +1,6 @@
 import { Catch, HttpException, HttpStatus, Logger, type ArgumentsHost, type ExceptionFilter } from '@nestjs/common';
 import type { Request, Response } from 'express';
+import { storageFailureOf } from './storage-failure.js';
 
 export interface FieldError {
   field: string;
@@ -26,9 +27,15 @@ function messageOf(response: string | object, fallback: string): string {
   return typeof message === 'string' ? message : fallback;
 }
 
-/** Maps anything thrown to `{statusCode, message, errors?}`; unexpected errors give a bare 500. */
+/**
+ * Maps anything thrown to `{statusCode, message, errors?}`: a failure of the storage underneath
+ * (read-only, full, I/O error, busy, unreachable; see storage-failure.ts) gives 503 with words
+ * for the user, other unexpected errors a bare 500.
+ */
 export function toErrorBody(exception: unknown): ErrorBody {
   if (!(exception instanceof HttpException)) {
+    const storage = storageFailureOf(exception);
+    if (storage) return { statusCode: HttpStatus.SERVICE_UNAVAILABLE, message: storage.message };
     return { statusCode: HttpStatus.INTERNAL_SERVER_ERROR, message: 'Internal server error' };
   }
   const statusCode = exception.getStatus();
@@ -59,7 +66,13 @@ export class AllExceptionsFilter implements ExceptionFilter {
     const request = http.getRequest<Request>();
     const response = http.getResponse<Response>();
     const body = toErrorBody(exception);
-    if (body.statusCode >= 500 && !(exception instanceof HttpException)) {
+    const storage = exception instanceof HttpException ? null : storageFailureOf(exception);
+    if (storage) {
+      // Expected in operation (full disk, read-only volume, database restart): one line, no stack.
+      const detail = exception instanceof Error ? exception.message : String(exception);
+      this.logger.warn(`${request.method} ${request.originalUrl}: the data store refused it (${storage.code}: ${detail})`);
+      if (!response.headersSent) response.setHeader('Retry-After', String(storage.retryAfterSeconds));
+    } else if (body.statusCode >= 500 && !(exception instanceof HttpException)) {
       const detail = exception instanceof Error ? exception.stack : String(exception);
       this.logger.error(`${request.method} ${request.originalUrl} failed`, detail);
     }

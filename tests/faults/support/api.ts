@@ -1,0 +1,99 @@
+import { openAsBlob } from 'node:fs';
+import { basename } from 'node:path';
+
+export const DEMO_PASSWORD = 'tacet-demo';
+
+export interface Reply<T = unknown> {
+  status: number;
+  headers: Headers;
+  body: T;
+  text: string;
+}
+
+/** A signed-in client of the Tacet API (fetch, JSON). */
+export class Api {
+  constructor(
+    public baseURL: string,
+    readonly token: string,
+  ) {}
+
+  static async signIn(baseURL: string, email: string): Promise<Api> {
+    const res = await fetch(`${baseURL}/api/auth/login`, {
+      method: 'POST',
+      headers: { 'content-type': 'application/json' },
+      body: JSON.stringify({ email, password: DEMO_PASSWORD }),
+    });
+    if (res.status !== 200) throw new Error(`sign-in as ${email} answered ${res.status}: ${await res.text()}`);
+    const { accessToken } = (await res.json()) as { accessToken: string };
+    return new Api(baseURL, accessToken);
+  }
+
+  /** The same account against another server (the token stays valid: the secret is in the data folder). */
+  on(baseURL: string): Api {
+    return new Api(baseURL, this.token);
+  }
+
+  async request<T = any>(method: string, path: string, body?: unknown, timeoutMs = 60_000): Promise<Reply<T>> {
+    const res = await fetch(`${this.baseURL}${path}`, {
+      method,
+      headers: { authorization: `Bearer ${this.token}`, ...(body === undefined ? {} : { 'content-type': 'application/json' }) },
+      body: body === undefined ? undefined : JSON.stringify(body),
+      signal: AbortSignal.timeout(timeoutMs),
+    });
+    const text = await res.text();
+    let parsed: unknown = text;
+    if ((res.headers.get('content-type') ?? '').includes('json') && text) parsed = JSON.parse(text);
+    return { status: res.status, headers: res.headers, body: parsed as T, text };
+  }
+
+  get<T = any>(path: string): Promise<Reply<T>> {
+    return this.request<T>('GET', path);
+  }
+  post<T = any>(path: string, body: unknown): Promise<Reply<T>> {
+    return this.request<T>('POST', path, body);
+  }
+  put<T = any>(path: string, body: unknown): Promise<Reply<T>> {
+    return this.request<T>('PUT', path, body);
+  }
+
+  /** The body of a GET as bytes (e.g. the catalog export). */
+  async bytes(path: string): Promise<Buffer> {
+    const res = await fetch(`${this.baseURL}${path}`, { headers: { authorization: `Bearer ${this.token}` } });
+    if (res.status !== 200) throw new Error(`GET ${path} answered ${res.status}`);
+    return Buffer.from(await res.arrayBuffer());
+  }
+
+  /** Uploads a catalog CSV file (POST /api/mounts/import). */
+  async importCatalog(file: string, timeoutMs = 120_000): Promise<Reply> {
+    const form = new FormData();
+    form.append('file', await openAsBlob(file, { type: 'text/csv' }), basename(file));
+    const res = await fetch(`${this.baseURL}/api/mounts/import`, {
+      method: 'POST',
+      headers: { authorization: `Bearer ${this.token}` },
+      body: form,
+      signal: AbortSignal.timeout(timeoutMs),
+    });
+    const text = await res.text();
+    return { status: res.status, headers: res.headers, body: text ? JSON.parse(text) : null, text };
+  }
+}
+
+/** A small, valid design input whose first mass carries `tag`, so a stored design tells which save it came from. */
+export function taggedInput(tag: number): Record<string, unknown> {
+  return {
+    components: [{ name: 'Machine', massKg: 500 + tag, cg: { x: 0, y: 0, z: 0.4 } }],
+    mountPoints: [
+      { label: 'A', x: 0.8, y: 0.45, z: 0 },
+      { label: 'B', x: 0.8, y: -0.45, z: 0 },
+      { label: 'C', x: -0.8, y: 0.45, z: 0 },
+      { label: 'D', x: -0.8, y: -0.45, z: 0 },
+    ],
+    operating: { speedRpm: 1480, orders: [1, 2], lineFrequencyHz: 50 },
+    criteria: { minIsolationPct: 90, minUtilization: 0.5, maxUtilization: 1.0 },
+  };
+}
+
+/** The tag of a design input made by `taggedInput`. */
+export function tagOfInput(input: { components: Array<{ massKg: number }> }): number {
+  return input.components[0].massKg - 500;
+}
