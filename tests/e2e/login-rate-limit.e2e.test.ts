@@ -47,3 +47,34 @@ describe('login rate limit (real server)', () => {
     expect((await api.json()).statusCode).toBe(404);
   });
 });
+
+// Behind load balancers every connection comes from a balancer: with TACET_TRUST_PROXY the
+// limit counts per client address from X-Forwarded-For; without it the header is ignored, so a
+// client cannot dodge the limit by inventing addresses.
+describe('login rate limit behind a load balancer (real server)', () => {
+  const attempt = (server: RunningServer, forwardedFor: string) =>
+    fetch(`${server.baseURL}/api/auth/login`, {
+      method: 'POST',
+      headers: { 'content-type': 'application/json', 'x-forwarded-for': forwardedFor },
+      body: JSON.stringify({ email: 'engineer@tacet.test', password: 'wrong-password' }),
+    }).then((res) => res.status);
+  const servers: RunningServer[] = [];
+  afterAll(async () => {
+    for (const server of servers) await server.stop();
+  });
+
+  it('with TACET_TRUST_PROXY=1 counts each client address on its own', async () => {
+    const server = await startServer({ TACET_LOGIN_LIMIT_PER_MINUTE: '2', TACET_TRUST_PROXY: '1' });
+    servers.push(server);
+    const first = [await attempt(server, '203.0.113.7'), await attempt(server, '203.0.113.7'), await attempt(server, '203.0.113.7')];
+    expect(first).toEqual([401, 401, 429]);
+    expect(await attempt(server, '203.0.113.8')).toBe(401); // another client behind the same balancer
+  });
+
+  it('without it ignores X-Forwarded-For', async () => {
+    const server = await startServer({ TACET_LOGIN_LIMIT_PER_MINUTE: '2' });
+    servers.push(server);
+    const statuses = [await attempt(server, '203.0.113.7'), await attempt(server, '203.0.113.8'), await attempt(server, '203.0.113.9')];
+    expect(statuses).toEqual([401, 401, 429]);
+  });
+});

@@ -31,6 +31,7 @@ describe('loadConfig', () => {
       demo: false,
       jwtSecret: SECRET,
       loginLimitPerMinute: 20,
+      trustProxyHops: 0,
       initialAdmin: { email: 'a@b.test', password: 'long enough!' },
     });
     expect(config.webDist).toMatch(/packages[/\\]web[/\\]dist$/);
@@ -47,6 +48,7 @@ describe('loadConfig', () => {
         SMTP_URL: 'smtp://mail.example.test:2525',
         DATABASE_URL: 'postgresql://tacet@db.example.test/tacet',
         TACET_LOGIN_LIMIT_PER_MINUTE: '5',
+        TACET_TRUST_PROXY: '2',
         TACET_WEB_DIST: 'web',
         TACET_ADMIN_EMAIL: '',
       },
@@ -58,6 +60,7 @@ describe('loadConfig', () => {
       smtpUrl: 'smtp://mail.example.test:2525',
       databaseUrl: 'postgresql://tacet@db.example.test/tacet',
       loginLimitPerMinute: 5,
+      trustProxyHops: 2,
       webDist: join(cwd, 'web'),
       initialAdmin: undefined,
     });
@@ -94,6 +97,7 @@ describe('loadConfig', () => {
       DATABASE_URL: 'mysql://db/tacet',
       SMTP_URL: 'mail.example.test',
       TACET_LOGIN_LIMIT_PER_MINUTE: '0',
+      TACET_TRUST_PROXY: 'yes',
     });
     expect(problems).toEqual(
       expect.arrayContaining([
@@ -102,6 +106,7 @@ describe('loadConfig', () => {
         'DATABASE_URL must be a postgres:// URL',
         'SMTP_URL must be an smtp:// or smtps:// URL',
         'TACET_LOGIN_LIMIT_PER_MINUTE must not be less than 1',
+        'TACET_TRUST_PROXY must be an integer (the number of proxies in front of the server)',
       ]),
     );
     expect(new ConfigError(problems).message).toMatch(/^Invalid configuration:\n {2}- /);

@@ -34,6 +34,8 @@ export class AppConfig {
   /** PostgreSQL URL; absent → SQLite file in the data folder. */
   readonly databaseUrl?: string;
   readonly loginLimitPerMinute: number;
+  /** Proxies in front of the server whose X-Forwarded-For is believed (Express `trust proxy`); 0: none. */
+  readonly trustProxyHops: number;
   /** First admin, created outside demo mode when no admin exists. */
   readonly initialAdmin?: { email: string; password: string };
   /** Absolute path of the built web client (may not exist). */
@@ -88,6 +90,7 @@ export function loadConfig(rawEnv: Record<string, string | undefined>, cwd = pro
     mailCatcher: !env.SMTP_URL && (demo || env.NODE_ENV === 'test'),
     databaseUrl: env.DATABASE_URL,
     loginLimitPerMinute: env.TACET_LOGIN_LIMIT_PER_MINUTE,
+    trustProxyHops: env.TACET_TRUST_PROXY,
     initialAdmin:
       !demo && env.TACET_ADMIN_EMAIL && env.TACET_ADMIN_PASSWORD
         ? { email: env.TACET_ADMIN_EMAIL, password: env.TACET_ADMIN_PASSWORD }

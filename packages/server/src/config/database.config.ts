@@ -2,6 +2,7 @@ import { join } from 'node:path';
 import type { DataSourceOptions } from 'typeorm';
 import { ENTITIES } from '../database/entities.js';
 import { MIGRATIONS } from '../database/migrations/index.js';
+import { POSTGRES_SESSION_OPTIONS } from '../database/postgres-utc.js';
 
 /** SQLite file name inside the data folder. */
 export const SQLITE_FILE = 'tacet.sqlite';
@@ -23,7 +24,8 @@ export function databaseOptions({ dataDir, databaseUrl }: DatabaseSettings): Dat
     synchronize: false,
   } as const;
   if (databaseUrl) {
-    return { ...common, type: 'postgres', url: databaseUrl };
+    // sessions in UTC, like the timestamps they stamp (see useUtcTimestamps)
+    return { ...common, type: 'postgres', url: databaseUrl, extra: { options: POSTGRES_SESSION_OPTIONS } };
   }
   return {
     ...common,

@@ -79,6 +79,18 @@ export class EnvironmentVariables {
   @IsInt({ message: 'TACET_LOGIN_LIMIT_PER_MINUTE must be an integer' })
   TACET_LOGIN_LIMIT_PER_MINUTE: number = 20;
 
+  /**
+   * Proxies (load balancers) in front of the server whose X-Forwarded-For is believed: the
+   * client address (for the sign-in limit) is then the one the nearest of them saw. 0: none,
+   * the connection's own address counts (a client cannot pick its address).
+   */
+  @IsOptional()
+  @Type(() => Number)
+  @Min(0)
+  @Max(10)
+  @IsInt({ message: 'TACET_TRUST_PROXY must be an integer (the number of proxies in front of the server)' })
+  TACET_TRUST_PROXY: number = 0;
+
   @ValidateIf((env: EnvironmentVariables) => !env.TACET_DEMO && env.TACET_ADMIN_PASSWORD !== undefined)
   @Transform(({ value }) => (typeof value === 'string' ? value.trim() : value))
   @IsDefined({ message: 'TACET_ADMIN_EMAIL is required when TACET_ADMIN_PASSWORD is set' })

@@ -1,6 +1,7 @@
 import { Injectable, Module } from '@nestjs/common';
 import { DiscoveryModule } from '@nestjs/core';
 import { Test } from '@nestjs/testing';
+import { DataSource } from 'typeorm';
 import { AppConfig } from '../config/app-config.js';
 import { DemoSeed, type DemoSeedStep } from './demo-seed-step.js';
 import { DemoSeedService } from './demo-seed.service.js';
@@ -40,7 +41,12 @@ class AccountsModule {}
 async function boot(demo: boolean) {
   const moduleRef = await Test.createTestingModule({
     imports: [DiscoveryModule, ProjectsModule, AccountsModule],
-    providers: [DemoSeedService, { provide: AppConfig, useValue: new AppConfig({ demo } as AppConfig) }],
+    providers: [
+      DemoSeedService,
+      { provide: AppConfig, useValue: new AppConfig({ demo } as AppConfig) },
+      // SQLite: the start-up lock just runs the steps
+      { provide: DataSource, useValue: { options: { type: 'better-sqlite3' } } },
+    ],
   }).compile();
   const app = moduleRef.createNestApplication({ logger: false });
   await app.init(); // onApplicationBootstrap

@@ -1,6 +1,8 @@
 import { Injectable, Logger, type OnApplicationBootstrap } from '@nestjs/common';
 import { DiscoveryService } from '@nestjs/core';
+import { DataSource } from 'typeorm';
 import { AppConfig } from '../config/app-config.js';
+import { withStartupLock } from '../database/startup-lock.js';
 import { DemoSeed, type DemoSeedStep } from './demo-seed-step.js';
 
 /** Runs every `@DemoSeed` step, in order, when the server starts in demo mode. */
@@ -11,10 +13,12 @@ export class DemoSeedService implements OnApplicationBootstrap {
   constructor(
     private readonly discovery: DiscoveryService,
     private readonly config: AppConfig,
+    private readonly dataSource: DataSource,
   ) {}
 
   async onApplicationBootstrap(): Promise<void> {
-    if (this.config.demo) await this.seed();
+    // Under the start-up lock: processes starting at once on one PostgreSQL seed one by one.
+    if (this.config.demo) await withStartupLock(this.dataSource, () => this.seed());
   }
 
   /** The discovered steps, in the order they run. */

@@ -1,5 +1,5 @@
 import { jest } from '@jest/globals';
-import type { Repository } from 'typeorm';
+import type { DataSource, Repository } from 'typeorm';
 import { buildUser, fakePasswords } from '../../test/factories/user.factory.js';
 import { AppConfig } from '../config/app-config.js';
 import { ConfigError } from '../config/environment.js';
@@ -21,6 +21,7 @@ function setup(rows: User[], config: Partial<AppConfig>) {
     repository as unknown as Repository<User>,
     fakePasswords() as unknown as PasswordService,
     new AppConfig({ demo: false, ...config } as AppConfig),
+    { options: { type: 'better-sqlite3' } } as DataSource, // SQLite: the start-up lock just runs the work
   );
   (service as unknown as { logger: object }).logger = { log: () => undefined, warn: () => undefined };
   return { service, repository };

@@ -1,8 +1,9 @@
 import { Injectable, Logger, type OnApplicationBootstrap } from '@nestjs/common';
 import { InjectRepository } from '@nestjs/typeorm';
-import type { Repository } from 'typeorm';
+import { DataSource, type Repository } from 'typeorm';
 import { AppConfig } from '../config/app-config.js';
 import { ConfigError } from '../config/environment.js';
+import { withStartupLock } from '../database/startup-lock.js';
 import { PasswordService } from './password.service.js';
 import { User } from './user.entity.js';
 import { normalizeEmail } from './users.service.js';
@@ -20,10 +21,16 @@ export class InitialAdminService implements OnApplicationBootstrap {
     @InjectRepository(User) private readonly users: Repository<User>,
     private readonly passwords: PasswordService,
     private readonly config: AppConfig,
+    private readonly dataSource: DataSource,
   ) {}
 
   async onApplicationBootstrap(): Promise<void> {
     if (this.config.demo) return;
+    // Under the start-up lock: of processes starting at once on one PostgreSQL, one creates the admin.
+    await withStartupLock(this.dataSource, () => this.ensureAdmin());
+  }
+
+  private async ensureAdmin(): Promise<void> {
     if (await this.users.existsBy({ role: 'admin', active: true })) return;
     const admin = this.config.initialAdmin;
     if (!admin) {
