@@ -72,7 +72,7 @@ describe('backupSqlite', () => {
     await expect(backupSqlite(join(dir, 'missing.sqlite'), join(dir, 'out'))).rejects.toThrow(BackupError);
     const notADatabase = join(dir, 'junk.sqlite');
     writeFileSync(notADatabase, 'this is not a database file, just text that is long enough '.repeat(20));
-    await expect(backupSqlite(notADatabase, join(dir, 'out'))).rejects.toThrow();
+    await expect(backupSqlite(notADatabase, join(dir, 'out'))).rejects.toThrow(/not a database/);
     expect(existsSync(join(dir, 'out')) ? readdirSync(join(dir, 'out')) : []).toEqual([]);
   });
 

@@ -67,6 +67,8 @@ export async function backupSqlite(source: string, folder: string, now = new Dat
     return { file, bytes: statSync(file).size, pages };
   } catch (error) {
     for (const leftover of [partial, `${partial}-wal`, `${partial}-shm`, `${partial}-journal`]) rmSync(leftover, { force: true });
-    throw error;
+    if (error instanceof BackupError) throw error;
+    // e.g. SQLITE_NOTADB: "file is not a database"
+    throw new BackupError(`The backup of ${source} failed: ${error instanceof Error ? error.message : String(error)}`, { cause: error });
   }
 }

@@ -17,6 +17,7 @@ import {
   ValidateIf,
   type ValidationOptions,
 } from 'class-validator';
+import { IsId } from '../../common/decorators/is-id.decorator.js';
 import { CURRENCY_PATTERN, MOUNT_LIMITS, MOUNT_TYPES } from '../mount-rules.js';
 
 /**
@@ -77,7 +78,7 @@ const positive = (description: string, example: number): Omit<FieldSpec, 'requir
 export const MOUNT_FIELDS = {
   supplierId: {
     api: { type: Number, description: 'Id of the supplier', example: 3 },
-    rules: () => [IsInt(), Min(1)],
+    rules: () => [IsId()],
     required: true,
     nullable: false,
   },
@@ -99,7 +100,7 @@ export const MOUNT_FIELDS = {
     nullable: true,
   },
   mountType: {
-    api: { enum: MOUNT_TYPES, description: 'Kind of mount', example: 'open_spring' },
+    api: { enum: MOUNT_TYPES, enumName: 'MountType', description: 'Kind of mount', example: 'open_spring' },
     rules: () => [IsIn(MOUNT_TYPES)],
     required: true,
     nullable: false,

@@ -1,6 +1,7 @@
 import { ApiPropertyOptional } from '@nestjs/swagger';
 import { Transform } from 'class-transformer';
 import { ArrayMaxSize, IsBoolean, IsIn, IsInt, IsNumber, IsOptional, IsString, Matches, Max, MaxLength, Min } from 'class-validator';
+import { IsId } from '../../common/decorators/is-id.decorator.js';
 import { MOUNT_TYPES, type MountType } from '../mount-rules.js';
 
 /** Fields `sort` accepts (a leading `-` sorts descending). */
@@ -21,6 +22,9 @@ export type MountSortField = (typeof MOUNT_SORT_FIELDS)[number];
 export const DEFAULT_MOUNT_SORT = 'supplier,partNumber';
 
 export const MAX_PAGE_SIZE = 500;
+
+/** Highest page number (a million pages of one mount; keeps the row offset an exact integer). */
+export const MAX_PAGE = 1_000_000;
 
 const SORT_KEY = `-?(?:${MOUNT_SORT_FIELDS.join('|')})`;
 const SORT_PATTERN = new RegExp(`^${SORT_KEY}(?:,${SORT_KEY}){0,3}$`);
@@ -56,6 +60,7 @@ export class SearchMountsQueryDto {
 
   @ApiPropertyOptional({
     enum: MOUNT_TYPES,
+    enumName: 'MountType',
     isArray: true,
     description: 'Mount types; repeat the parameter or separate with commas',
   })
@@ -69,8 +74,7 @@ export class SearchMountsQueryDto {
   @IsOptional()
   @Transform(toNumberList)
   @ArrayMaxSize(100)
-  @Min(1, { each: true })
-  @IsInt({ each: true })
+  @IsId({ each: true })
   supplierId?: number[];
 
   @ApiPropertyOptional({ description: 'Smallest rated load, N', minimum: 0 })
@@ -87,10 +91,11 @@ export class SearchMountsQueryDto {
   @IsNumber({ allowNaN: false, allowInfinity: false })
   maxLoadN?: number;
 
-  @ApiPropertyOptional({ minimum: 1, default: 1 })
+  @ApiPropertyOptional({ minimum: 1, maximum: MAX_PAGE, default: 1 })
   @IsOptional()
   @Transform(toNumber)
   @Min(1)
+  @Max(MAX_PAGE)
   @IsInt()
   page: number = 1;
 

@@ -1,7 +1,7 @@
 import { Type } from 'class-transformer';
 import { IsNumber, IsString, MaxLength, ValidateNested } from 'class-validator';
 import { BadRequestException } from '@nestjs/common';
-import { createValidationPipe } from './validation.pipe.js';
+import { MAX_FIELD_ERRORS, createValidationPipe } from './validation.pipe.js';
 
 class Point {
   @IsNumber()
@@ -44,6 +44,13 @@ describe('createValidationPipe', () => {
       message: 'Validation failed',
       errors: [{ field: 'role', message: 'property role should not exist' }],
     });
+  });
+
+  it(`lists at most ${MAX_FIELD_ERRORS} field errors`, async () => {
+    const points = Array.from({ length: MAX_FIELD_ERRORS + 20 }, () => ({ x: 'one' }));
+    const response = (await errorsFor({ label: 'ok', points })) as { errors: Array<{ field: string }> };
+    expect(response.errors).toHaveLength(MAX_FIELD_ERRORS);
+    expect(response.errors[0].field).toBe('points.0.x');
   });
 
   it('returns a DTO instance when the body is valid', async () => {

@@ -10,6 +10,9 @@ export function toFieldErrors(errors: ValidationError[], parent = ''): FieldErro
   });
 }
 
+/** Field errors listed in one answer (a body of 1,000 wrong items would otherwise list ten thousand). */
+export const MAX_FIELD_ERRORS = 100;
+
 /** The global pipe: unknown fields are refused, payloads become DTO instances. */
 export function createValidationPipe(): ValidationPipe {
   return new ValidationPipe({
@@ -17,6 +20,6 @@ export function createValidationPipe(): ValidationPipe {
     forbidNonWhitelisted: true,
     transform: true,
     exceptionFactory: (errors) =>
-      new BadRequestException({ message: 'Validation failed', errors: toFieldErrors(errors) }),
+      new BadRequestException({ message: 'Validation failed', errors: toFieldErrors(errors).slice(0, MAX_FIELD_ERRORS) }),
   });
 }

@@ -1,6 +1,7 @@
 import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
 import { Type } from 'class-transformer';
 import { IsInt, IsNotEmpty, IsOptional, IsString, MaxLength, Min, ValidateNested } from 'class-validator';
+import { IsId } from '../../common/decorators/is-id.decorator.js';
 import { DesignInputDto } from '../../selection/dto/design-input.dto.js';
 import { NotTogetherWith } from '../../selection/dto/validators.js';
 import { Trim } from '../../users/dto/dto-transforms.js';
@@ -32,8 +33,7 @@ export class UpdateDesignDto {
 
   @ApiPropertyOptional({ type: Number, nullable: true, description: 'a uniform candidate (one part number at every point)' })
   @IsOptional()
-  @IsInt()
-  @Min(1)
+  @IsId()
   @NotTogetherWith('chosenSeriesId')
   chosenMountId?: number | null;
 
