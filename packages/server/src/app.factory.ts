@@ -1,9 +1,12 @@
-import { Logger } from '@nestjs/common';
+import { Logger, type INestApplication } from '@nestjs/common';
 import type { NestExpressApplication } from '@nestjs/platform-express';
-import { DocumentBuilder, SwaggerModule } from '@nestjs/swagger';
+import { DocumentBuilder, SwaggerModule, type OpenAPIObject } from '@nestjs/swagger';
 import compression from 'compression';
 import helmet from 'helmet';
+import { ApiErrorDto } from './common/dto/api-error.dto.js';
 import { AllExceptionsFilter } from './common/filters/all-exceptions.filter.js';
+import { BodyShapePipe } from './common/pipes/body-shape.pipe.js';
+import { IdParamPipe } from './common/pipes/id-param.pipe.js';
 import { createValidationPipe } from './common/pipes/validation.pipe.js';
 import { AppConfig } from './config/app-config.js';
 import { hasWebClient } from './web-client.js';
@@ -13,19 +16,28 @@ export const API_PREFIX = 'api';
 /** Largest JSON body accepted; larger → 413. */
 export const JSON_BODY_LIMIT = '1mb';
 
-function setupOpenApi(app: NestExpressApplication): void {
-  const document = SwaggerModule.createDocument(
+/**
+ * The API contract: the OpenAPI document of every controller of `app` (global prefix already
+ * set by `configureApp`). Served at /api/docs; `tools/api-types` generates the web's types from it.
+ */
+export function createOpenApiDocument(app: INestApplication): OpenAPIObject {
+  return SwaggerModule.createDocument(
     app,
     new DocumentBuilder()
       .setTitle('Tacet API')
       .setDescription(
         'Selection and sizing of resilient isolation mounts. SI units throughout. ' +
-          'Errors are `{statusCode, message, errors?}`.',
+          'Errors are `{statusCode, message, errors?}` (schema `ApiErrorDto`).',
       )
       .setVersion('0.1.0')
       .addBearerAuth()
       .build(),
+    { extraModels: [ApiErrorDto] },
   );
+}
+
+function setupOpenApi(app: NestExpressApplication): void {
+  const document = createOpenApiDocument(app);
   SwaggerModule.setup(`${API_PREFIX}/docs`, app, document, { jsonDocumentUrl: `${API_PREFIX}/docs-json` });
 }
 
@@ -38,12 +50,16 @@ export function configureApp(app: NestExpressApplication): NestExpressApplicatio
   app.use(helmet());
   app.use(compression());
   app.useBodyParser('json', { limit: JSON_BODY_LIMIT });
-  app.useGlobalPipes(createValidationPipe());
+  // The shape checks first: class-transformer and class-validator recurse into whatever they get,
+  // and an id beyond a 32-bit integer must not reach PostgreSQL.
+  app.useGlobalPipes(new BodyShapePipe(), new IdParamPipe(), createValidationPipe());
   app.useGlobalFilters(new AllExceptionsFilter());
   app.enableShutdownHooks();
   setupOpenApi(app);
 
-  const { webDist } = app.get(AppConfig);
+  const { webDist, trustProxyHops } = app.get(AppConfig);
+  // Behind load balancers: the client address (sign-in limit) from their X-Forwarded-For.
+  if (trustProxyHops > 0) app.set('trust proxy', trustProxyHops);
   if (!hasWebClient(webDist)) {
     new Logger('WebClient').log(
       `No built web client in ${webDist}; serving the API only (build it with: npm run build -w @tacet/web)`,

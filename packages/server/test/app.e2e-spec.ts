@@ -5,6 +5,7 @@ import { Logger } from '@nestjs/common';
 import { DataSource } from 'typeorm';
 import { HealthService } from '../src/health/health.service.js';
 import { createTestApp, makeTempDir, type TestApp } from './utils/create-test-app.js';
+import { itPostgresOnly, itSqliteOnly } from './utils/test-database.js';
 
 describe('application (e2e)', () => {
   let t: TestApp;
@@ -60,7 +61,9 @@ describe('application (e2e)', () => {
     expect(Object.keys(document.components.schemas.CreateUserDto.properties).sort()).toEqual(
       ['email', 'name', 'password', 'role', 'unitSystem'].sort(),
     );
-    expect(document.components.schemas.UserDto.properties.role.enum).toEqual([
+    // Named enums: one `Role` schema that every DTO refers to (typed once in the web).
+    expect(document.components.schemas.UserDto.properties.role).toEqual({ allOf: [{ $ref: '#/components/schemas/Role' }] });
+    expect(document.components.schemas.Role.enum).toEqual([
       'admin',
       'catalog_manager',
       'engineer',
@@ -74,12 +77,20 @@ describe('application (e2e)', () => {
     expect(ui.type).toBe('text/html');
   });
 
-  it('opens SQLite in WAL mode with a busy timeout and foreign keys on', async () => {
+  itSqliteOnly('reads SQLite PRAGMAs', 'opens SQLite in WAL mode with a busy timeout and foreign keys on', async () => {
     const dataSource = t.app.get(DataSource);
     expect(dataSource.options.type).toBe('better-sqlite3');
     expect(await dataSource.query('PRAGMA journal_mode')).toEqual([{ journal_mode: 'wal' }]);
     expect(await dataSource.query('PRAGMA busy_timeout')).toEqual([{ timeout: 5000 }]);
     expect(await dataSource.query('PRAGMA foreign_keys')).toEqual([{ foreign_keys: 1 }]);
+  });
+
+  itPostgresOnly('the PostgreSQL pass', 'runs on the PostgreSQL database that DATABASE_URL names, migrated', async () => {
+    const dataSource = t.app.get(DataSource);
+    expect(dataSource.options.type).toBe('postgres');
+    const [{ name }] = await dataSource.query('SELECT current_database() AS name');
+    expect(name).toMatch(/^tacet_t_[0-9a-f]+$/);
+    expect(await dataSource.showMigrations()).toBe(false); // nothing pending
   });
 });
 

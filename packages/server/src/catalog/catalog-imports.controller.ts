@@ -84,7 +84,7 @@ export class CatalogImportsController {
 
   @Get('imports/:id/errors.csv')
   @ApiProduces('text/csv')
-  @ApiOkResponse({ description: 'The rejected rows: row, column, message, then the original fields' })
+  @ApiOkResponse({ schema: { type: 'string', format: 'binary' }, description: 'The rejected rows: row, column, message, then the original fields' })
   @ApiNotFoundResponse({ description: 'No such import, or it has no error report' })
   async errorReport(@Param('id', ParseIntPipe) id: number): Promise<StreamableFile> {
     const { fileName, csv } = await this.imports.errorReport(id);

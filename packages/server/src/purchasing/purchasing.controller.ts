@@ -33,7 +33,7 @@ export class PurchasingController {
   @Get('designs/:id/bom.csv')
   @Roles('purchaser', 'engineer', 'admin')
   @ApiProduces('text/csv')
-  @ApiOkResponse({ description: 'supplier,part_number,quantity,mount_points,unit_price,extended_price,currency,lead_time_days' })
+  @ApiOkResponse({ schema: { type: 'string', format: 'binary' }, description: 'supplier,part_number,quantity,mount_points,unit_price,extended_price,currency,lead_time_days' })
   @ApiConflictResponse({ description: 'Not released (only its author or an admin exports a draft, marked DRAFT)' })
   async bomCsv(@CurrentUser() user: User, @Param('id', ParseIntPipe) id: number): Promise<StreamableFile> {
     return download(await this.purchasing.bomCsv(user, id));
@@ -42,7 +42,7 @@ export class PurchasingController {
   @Get('designs/:id/bom.xlsx')
   @Roles('purchaser', 'engineer', 'admin')
   @ApiProduces('application/vnd.openxmlformats-officedocument.spreadsheetml.sheet')
-  @ApiOkResponse({ description: 'Title row, header row with units, lines, totals row' })
+  @ApiOkResponse({ schema: { type: 'string', format: 'binary' }, description: 'Title row, header row with units, lines, totals row' })
   @ApiConflictResponse({ description: 'Not released (only its author or an admin exports a draft, marked DRAFT)' })
   async bomXlsx(@CurrentUser() user: User, @Param('id', ParseIntPipe) id: number): Promise<StreamableFile> {
     return download(await this.purchasing.bomXlsx(user, id));
@@ -50,7 +50,7 @@ export class PurchasingController {
 
   @Get('designs/:id/report.pdf')
   @ApiProduces('application/pdf')
-  @ApiOkResponse({ description: 'Calculation report; unreleased designs carry a DRAFT watermark' })
+  @ApiOkResponse({ schema: { type: 'string', format: 'binary' }, description: 'Calculation report; unreleased designs carry a DRAFT watermark' })
   @ApiForbiddenResponse({ description: 'An unreleased design, asked for by a role other than engineer or admin' })
   async report(@CurrentUser() user: User, @Param('id', ParseIntPipe) id: number): Promise<StreamableFile> {
     return download(await this.purchasing.report(user, id));

@@ -1,17 +1,15 @@
 import axios from 'axios';
 
-/** One field problem as the server reports it; `field` is the dotted property path. */
-export interface ApiFieldError {
-  field: string;
-  message: string;
-}
+import type { ApiSchemas } from '@/api/schema';
 
-/** The server's error body: `{statusCode, message, errors?}`. */
-export interface ApiErrorBody {
-  statusCode: number;
-  message: string | string[];
-  errors?: ApiFieldError[];
-}
+/** One field problem as the server reports it; `field` is the dotted property path. */
+export type ApiFieldError = ApiSchemas['ApiFieldErrorDto'];
+
+/**
+ * The server's error body `{statusCode, message, errors?}` (its `ApiErrorDto`); a list of
+ * messages, the framework's own shape, is read as well.
+ */
+export type ApiErrorBody = Omit<ApiSchemas['ApiErrorDto'], 'message'> & { message: string | string[] };
 
 function isApiErrorBody(value: unknown): value is ApiErrorBody {
   if (typeof value !== 'object' || value === null) return false;

@@ -1,32 +1,21 @@
 import { useQuery, useQueryClient } from '@tanstack/react-query';
-import type { UnitSystem } from '@tacet/vibration';
 import { createContext, useCallback, useContext, useEffect, useMemo, useState, type ReactNode } from 'react';
 
+import type { ApiSchemas } from '@/api/schema';
+
 import { api, setUnauthorizedHandler } from './api-client';
-import type { Role } from './authorization';
 import { clearToken, getToken, setToken } from './session';
 
 /**
  * The signed-in user as the session knows it: the fields `POST /api/auth/login` returns.
  * `GET /api/auth/me` returns these plus `active`, `createdAt` and `updatedAt`.
  */
-export interface SessionUser {
-  id: number;
-  email: string;
-  name: string;
-  role: Role;
-  unitSystem: UnitSystem;
-}
+export type SessionUser = ApiSchemas['SignedInUserDto'];
 
-export interface LoginInput {
-  email: string;
-  password: string;
-}
+/** Body of `POST /api/auth/login`. */
+export type LoginInput = ApiSchemas['LoginDto'];
 
-export interface LoginResponse {
-  accessToken: string;
-  user: SessionUser;
-}
+export type LoginResponse = ApiSchemas['LoginResponseDto'];
 
 export async function loginWithEmailAndPassword(input: LoginInput): Promise<LoginResponse> {
   const { data } = await api.post<LoginResponse>('/auth/login', input);

@@ -1,10 +1,13 @@
+import { roleValues, type ApiSchemas } from '@/api/schema';
+
 /**
  * Who may use which area of the app. This is the client's single table of roles and areas:
  * the navigation, the route guards and the overview all read it. The server enforces the
  * same rules on every API route; hiding here only keeps the screen honest.
  */
-export const ROLES = ['admin', 'catalog_manager', 'engineer', 'purchaser', 'viewer'] as const;
-export type Role = (typeof ROLES)[number];
+export const ROLES = roleValues;
+/** A role as the API names it (generated from the server's OpenAPI document). */
+export type Role = ApiSchemas['Role'];
 
 export const ROLE_LABELS: Record<Role, string> = {
   admin: 'Administrator',

@@ -1,4 +1,4 @@
-import type { CatalogImportRecord, ImportResult, Mount, MountType } from '@/features/catalog/types';
+import type { CatalogImportRecord, ImportPreviewRow, ImportResult, Mount, MountType } from '@/features/catalog/types';
 import type { Supplier } from '@/features/suppliers/types';
 
 import type { FakeApi, FakeRequest } from './fake-api';
@@ -141,6 +141,33 @@ export function serveCatalog(fake: FakeApi, initial: { mounts?: Mount[]; supplie
     })
     .on('get', '/suppliers', () => ({ status: 200, data: [...suppliers].sort((a, b) => a.name.localeCompare(b.name)) }));
   return { mounts, suppliers, listCalls: () => fake.calls('get', '/mounts') };
+}
+
+/** An accepted row of an import preview as the server sends it (every field, null where empty). */
+export function makePreviewRow(
+  overrides: Partial<ImportPreviewRow> & Pick<ImportPreviewRow, 'row' | 'partNumber'>,
+): ImportPreviewRow {
+  return {
+    action: 'create',
+    supplierName: QUILLMERE.name,
+    series: null,
+    mountType: 'open_spring',
+    ratedLoadN: 1000,
+    verticalStiffnessNPerM: 40_000,
+    horizontalStiffnessNPerM: null,
+    dynamicStiffnessRatio: 1,
+    dampingModel: 'viscous',
+    dampingRatio: 0.01,
+    lossFactor: null,
+    maxDeflectionMm: null,
+    tempMinC: null,
+    tempMaxC: null,
+    heightMm: null,
+    unitPrice: null,
+    currency: 'USD',
+    leadTimeDays: null,
+    ...overrides,
+  };
 }
 
 export function makeImportResult(overrides: Partial<ImportResult> = {}): ImportResult {

@@ -1,3 +1,4 @@
+import type { ApiSchemas } from '@/api/schema';
 import type { SessionUser } from '@/lib/auth';
 import type { Role } from '@/lib/authorization';
 
@@ -10,12 +11,8 @@ export const TEST_USERS: Record<Role, SessionUser> = {
   viewer: { id: 6, email: 'viewer@tacet.test', name: 'Vic Viewer', role: 'viewer', unitSystem: 'SI' },
 };
 
-/** An account as `GET /api/users` lists it (mirrors the server's `User` schema). */
-export interface UserRecord extends SessionUser {
-  active: boolean;
-  createdAt: string;
-  updatedAt: string;
-}
+/** An account as `GET /api/users` lists it (the server's `UserDto`). */
+export type UserRecord = ApiSchemas['UserDto'];
 
 let nextId = 100;
 

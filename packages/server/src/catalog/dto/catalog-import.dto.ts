@@ -23,7 +23,7 @@ export class CatalogImportDto {
   @ApiProperty({ type: ImportUserDto })
   user: ImportUserDto;
 
-  @ApiProperty({ enum: IMPORT_MODES })
+  @ApiProperty({ enum: IMPORT_MODES, enumName: 'ImportMode' })
   mode: ImportMode;
 
   @ApiProperty()

@@ -15,6 +15,7 @@ export class ImportQueryDto {
 
   @ApiPropertyOptional({
     enum: ON_INVALID,
+    enumName: 'ImportOnInvalid',
     default: 'refuse',
     description: 'refuse: any invalid row writes nothing (422); skip: write the valid rows, report the others',
   })

@@ -20,7 +20,7 @@ export class ImportPreviewRowDto implements ImportPreviewRow {
   @ApiProperty({ description: "The file's row", example: 2 })
   row: number;
 
-  @ApiProperty({ enum: ['create', 'update'] })
+  @ApiProperty({ enum: ['create', 'update'], enumName: 'ImportRowAction' })
   action: 'create' | 'update';
 
   @ApiProperty({ example: 'Quillmere Isolation' })
@@ -32,7 +32,7 @@ export class ImportPreviewRowDto implements ImportPreviewRow {
   @ApiProperty({ type: String, nullable: true })
   series: string | null;
 
-  @ApiProperty({ enum: MOUNT_TYPES })
+  @ApiProperty({ enum: MOUNT_TYPES, enumName: 'MountType' })
   mountType: MountType;
 
   @ApiProperty({ description: 'N' })
@@ -47,7 +47,7 @@ export class ImportPreviewRowDto implements ImportPreviewRow {
   @ApiProperty()
   dynamicStiffnessRatio: number;
 
-  @ApiProperty({ enum: DAMPING_MODELS })
+  @ApiProperty({ enum: DAMPING_MODELS, enumName: 'DampingModel' })
   dampingModel: DampingModel;
 
   @nullableNumber()

@@ -26,7 +26,7 @@ export class MountDto {
   @ApiProperty({ type: String, nullable: true, example: 'S1' })
   series: string | null;
 
-  @ApiProperty({ enum: MOUNT_TYPES })
+  @ApiProperty({ enum: MOUNT_TYPES, enumName: 'MountType' })
   mountType: MountType;
 
   @ApiProperty({ description: 'Rated static load, N', example: 2400 })
@@ -41,7 +41,7 @@ export class MountDto {
   @ApiProperty({ description: 'Dynamic-to-static stiffness ratio', example: 1 })
   dynamicStiffnessRatio: number;
 
-  @ApiProperty({ enum: DAMPING_MODELS, description: 'viscous ↔ dampingRatio, hysteretic ↔ lossFactor' })
+  @ApiProperty({ enum: DAMPING_MODELS, enumName: 'DampingModel', description: 'viscous ↔ dampingRatio, hysteretic ↔ lossFactor' })
   dampingModel: DampingModel;
 
   @nullableNumber('Viscous damping ratio ζ (viscous model only)')

@@ -11,7 +11,7 @@ export class DesignListItemDto {
   @ApiProperty() id: number;
   @ApiProperty() name: string;
   @ApiProperty() revision: number;
-  @ApiProperty({ enum: DESIGN_STATUSES }) status: DesignStatus;
+  @ApiProperty({ enum: DESIGN_STATUSES, enumName: 'DesignStatus' }) status: DesignStatus;
   @ApiProperty({ type: String, format: 'date-time' }) updatedAt: string;
   @ApiProperty({ type: UserRefDto }) author: UserRefDto;
 
@@ -50,7 +50,7 @@ export class DesignDto {
   @ApiProperty() projectName: string;
   @ApiProperty() name: string;
   @ApiProperty() revision: number;
-  @ApiProperty({ enum: DESIGN_STATUSES }) status: DesignStatus;
+  @ApiProperty({ enum: DESIGN_STATUSES, enumName: 'DesignStatus' }) status: DesignStatus;
   @ApiProperty({ description: 'optimistic lock: send it back with PUT' }) version: number;
   @ApiProperty({ type: DesignInputDto }) input: DesignInput;
   @ApiProperty({ type: [LabelledFrequencyDto], description: 'derived from input.operating, lowest first' })

@@ -1,6 +1,8 @@
 import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
 import { Type } from 'class-transformer';
-import { IsDate, IsIn, IsInt, IsNumber, IsOptional, IsPositive, IsString, MaxLength, Min } from 'class-validator';
+import { IsDate, IsIn, IsNumber, IsOptional, IsPositive, IsString, MaxLength } from 'class-validator';
+import { IsId } from '../../common/decorators/is-id.decorator.js';
+import { DESIGN_STATUSES, type DesignStatus } from '../../designs/design-status.js';
 import { UserRefDto } from '../../projects/dto/project.dto.js';
 import { SupplierRefDto } from '../../selection/dto/selection-response.dto.js';
 import type { RfqEvent } from '../rfq-event.entity.js';
@@ -8,7 +10,7 @@ import { RFQ_RECORDABLE, RFQ_STATUSES, type RfqProgressStatus, type RfqStatus } 
 import type { Rfq } from '../rfq.entity.js';
 
 export class CreateRfqDto {
-  @ApiProperty() @IsInt() @Min(1) supplierId: number;
+  @ApiProperty() @IsId() supplierId: number;
 
   @ApiPropertyOptional({ maxLength: 2000, description: 'Added to the e-mail above the list of lines' })
   @IsOptional()
@@ -18,7 +20,7 @@ export class CreateRfqDto {
 }
 
 export class UpdateRfqDto {
-  @ApiProperty({ enum: RFQ_RECORDABLE }) @IsIn(RFQ_RECORDABLE) status: RfqProgressStatus;
+  @ApiProperty({ enum: RFQ_RECORDABLE, enumName: 'RfqProgressStatus' }) @IsIn(RFQ_RECORDABLE) status: RfqProgressStatus;
 
   @ApiPropertyOptional({ description: 'Required with status quoted; in the design BOM currency' })
   @IsOptional()
@@ -37,7 +39,7 @@ export class UpdateRfqDto {
 
 export class RfqEventDto {
   @ApiProperty({ type: String, format: 'date-time' }) at: string;
-  @ApiProperty({ enum: RFQ_STATUSES }) status: RfqStatus;
+  @ApiProperty({ enum: RFQ_STATUSES, enumName: 'RfqStatus' }) status: RfqStatus;
   @ApiProperty({ type: UserRefDto }) user: UserRefDto;
   @ApiProperty({ type: String, nullable: true }) note: string | null;
 }
@@ -46,7 +48,7 @@ export class RfqDto {
   @ApiProperty() id: number;
   @ApiProperty() designId: number;
   @ApiProperty({ type: SupplierRefDto }) supplier: SupplierRefDto;
-  @ApiProperty({ enum: RFQ_STATUSES }) status: RfqStatus;
+  @ApiProperty({ enum: RFQ_STATUSES, enumName: 'RfqStatus' }) status: RfqStatus;
   @ApiProperty({ type: String, nullable: true }) messageId: string | null;
   @ApiProperty({ type: String, nullable: true }) failureReason: string | null;
   @ApiProperty({ type: Number, nullable: true }) quotedPrice: number | null;
@@ -93,7 +95,7 @@ export class PurchasingDesignDto {
   @ApiProperty() projectName: string;
   @ApiProperty() name: string;
   @ApiProperty() revision: number;
-  @ApiProperty() status: string;
+  @ApiProperty({ enum: DESIGN_STATUSES, enumName: 'DesignStatus' }) status: DesignStatus;
   @ApiProperty({ type: String, format: 'date-time', nullable: true }) releasedAt: string | null;
   @ApiProperty() lineCount: number;
   @ApiProperty({ type: Number, nullable: true, description: 'Sum of extended prices (null when the lines mix currencies)' })

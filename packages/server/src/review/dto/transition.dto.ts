@@ -8,7 +8,7 @@ export const TRANSITION_TARGETS = ['in_review', 'draft', 'released'] as const;
 export type TransitionTarget = (typeof TRANSITION_TARGETS)[number];
 
 export class TransitionDto {
-  @ApiProperty({ enum: TRANSITION_TARGETS })
+  @ApiProperty({ enum: TRANSITION_TARGETS, enumName: 'TransitionTarget' })
   @IsIn(TRANSITION_TARGETS)
   to: TransitionTarget;
 
@@ -23,9 +23,9 @@ export class HistoryEntryDto {
   @ApiProperty() id: number;
   @ApiProperty({ type: String, format: 'date-time' }) at: string;
   @ApiProperty({ type: UserRefDto }) user: UserRefDto;
-  @ApiProperty({ enum: DESIGN_STATUSES, nullable: true, description: 'null when the entry starts a revision' })
+  @ApiProperty({ enum: DESIGN_STATUSES, enumName: 'DesignStatus', nullable: true, description: 'null when the entry starts a revision' })
   from: DesignStatus | null;
-  @ApiProperty({ enum: DESIGN_STATUSES }) to: DesignStatus;
+  @ApiProperty({ enum: DESIGN_STATUSES, enumName: 'DesignStatus' }) to: DesignStatus;
   @ApiProperty({ type: String, nullable: true }) comment: string | null;
 
   static from(entry: DesignTransition): HistoryEntryDto {

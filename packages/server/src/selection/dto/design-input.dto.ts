@@ -268,7 +268,7 @@ export class CriteriaDto {
   @Max(400)
   ambientTempC?: number;
 
-  @ApiPropertyOptional({ enum: MOUNT_TYPES, isArray: true })
+  @ApiPropertyOptional({ enum: MOUNT_TYPES, enumName: 'MountType', isArray: true })
   @IsOptional()
   @IsArray()
   @ArrayMaxSize(MOUNT_TYPES.length)

@@ -27,7 +27,7 @@ export class CandidateIsolationDto {
 
 export class CandidateModeDto {
   @ApiProperty() frequencyHz: number;
-  @ApiProperty({ enum: RIGID_BODY_DOFS }) dominant: string;
+  @ApiProperty({ enum: RIGID_BODY_DOFS, enumName: 'RigidBodyMode' }) dominant: string;
   @ApiProperty() coupled: boolean;
 }
 
@@ -40,7 +40,7 @@ export class ScoreTermsDto {
 }
 
 export class CandidateDto {
-  @ApiProperty({ enum: ['uniform', 'series'] }) kind: 'uniform' | 'series';
+  @ApiProperty({ enum: ['uniform', 'series'], enumName: 'CandidateKind' }) kind: 'uniform' | 'series';
   @ApiPropertyOptional() mountId?: number;
   @ApiPropertyOptional({ description: '`${supplierId}:${series}`' }) seriesId?: string;
   @ApiProperty() label: string;

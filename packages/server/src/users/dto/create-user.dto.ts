@@ -20,7 +20,7 @@ export class CreateUserDto {
   @MaxLength(200)
   name: string;
 
-  @ApiProperty({ enum: ROLES })
+  @ApiProperty({ enum: ROLES, enumName: 'Role' })
   @IsIn(ROLES)
   role: Role;
 
@@ -30,7 +30,7 @@ export class CreateUserDto {
   @MaxLength(200)
   password: string;
 
-  @ApiPropertyOptional({ enum: UNIT_SYSTEMS, default: 'SI' })
+  @ApiPropertyOptional({ enum: UNIT_SYSTEMS, enumName: 'UnitSystem', default: 'SI' })
   @IsOptional()
   @IsIn(UNIT_SYSTEMS)
   unitSystem?: UnitSystem;

@@ -15,7 +15,7 @@ export class UpdateProfileDto {
   @MaxLength(200)
   name?: string;
 
-  @ApiPropertyOptional({ enum: UNIT_SYSTEMS })
+  @ApiPropertyOptional({ enum: UNIT_SYSTEMS, enumName: 'UnitSystem' })
   @PresentOptional()
   @IsIn(UNIT_SYSTEMS)
   unitSystem?: UnitSystem;

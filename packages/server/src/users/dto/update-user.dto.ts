@@ -16,7 +16,7 @@ export class UpdateUserDto {
   @MaxLength(200)
   name?: string;
 
-  @ApiPropertyOptional({ enum: ROLES })
+  @ApiPropertyOptional({ enum: ROLES, enumName: 'Role' })
   @PresentOptional()
   @IsIn(ROLES)
   role?: Role;
@@ -26,7 +26,7 @@ export class UpdateUserDto {
   @IsBoolean()
   active?: boolean;
 
-  @ApiPropertyOptional({ enum: UNIT_SYSTEMS })
+  @ApiPropertyOptional({ enum: UNIT_SYSTEMS, enumName: 'UnitSystem' })
   @PresentOptional()
   @IsIn(UNIT_SYSTEMS)
   unitSystem?: UnitSystem;

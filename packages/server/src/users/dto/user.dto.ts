@@ -14,10 +14,10 @@ export class UserDto {
   @ApiProperty({ example: 'Erin Engineer' })
   name: string;
 
-  @ApiProperty({ enum: ROLES })
+  @ApiProperty({ enum: ROLES, enumName: 'Role' })
   role: Role;
 
-  @ApiProperty({ enum: UNIT_SYSTEMS })
+  @ApiProperty({ enum: UNIT_SYSTEMS, enumName: 'UnitSystem' })
   unitSystem: UnitSystem;
 
   @ApiProperty()

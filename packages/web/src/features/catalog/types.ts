@@ -1,65 +1,30 @@
 /**
- * The catalog as the API returns it (see the catalog API contract; SI units throughout:
- * N, N/m, °C; lengths whose name ends in `Mm` in millimetres).
+ * The catalog as the API returns it (SI units throughout: N, N/m, °C; lengths whose name ends in
+ * `Mm` in millimetres). The API shapes are aliases of the types generated from the server's
+ * OpenAPI document (`@/api/schema`, `npm run api-types`); the query and sort types below are the
+ * catalog page's own state.
  */
+import { mountTypeValues, type ApiSchemas, type operations } from '@/api/schema';
 
-export const MOUNT_TYPES = [
-  'elastomer_pad',
-  'elastomer_mount',
-  'open_spring',
-  'housed_spring',
-  'restrained_spring',
-  'air_spring',
-  'wire_rope',
-] as const;
-
-export type MountType = (typeof MOUNT_TYPES)[number];
+/** Mount kinds, in the server's order. */
+export const MOUNT_TYPES = mountTypeValues;
+export type MountType = ApiSchemas['MountType'];
 
 /** viscous ↔ damping ratio ζ; hysteretic (structural) ↔ loss factor η. */
-export type DampingModel = 'viscous' | 'hysteretic';
+export type DampingModel = ApiSchemas['DampingModel'];
 
-export interface SupplierRef {
-  id: number;
-  name: string;
-}
+export type SupplierRef = ApiSchemas['MountSupplierDto'];
 
 /** A supplier as a choice in a filter or a form (composed in by the route). */
-export interface SupplierOption extends SupplierRef {
-  active: boolean;
-}
+export type SupplierOption = Pick<ApiSchemas['SupplierDto'], 'id' | 'name' | 'active'>;
 
 /** `GET /api/mounts/:id`, one item of `GET /api/mounts`. */
-export interface Mount {
-  id: number;
-  supplier: SupplierRef;
-  partNumber: string;
-  series: string | null;
-  mountType: MountType;
-  ratedLoadN: number;
-  verticalStiffnessNPerM: number;
-  horizontalStiffnessNPerM: number | null;
-  dynamicStiffnessRatio: number;
-  dampingModel: DampingModel;
-  /** Set for viscous damping, else null. */
-  dampingRatio: number | null;
-  /** Set for hysteretic damping, else null. */
-  lossFactor: number | null;
-  maxDeflectionMm: number | null;
-  tempMinC: number | null;
-  tempMaxC: number | null;
-  heightMm: number | null;
-  unitPrice: number | null;
-  currency: string;
-  leadTimeDays: number | null;
-  active: boolean;
-  createdAt: string;
-  updatedAt: string;
-}
+export type Mount = ApiSchemas['MountDto'];
 
-export interface MountPage {
-  items: Mount[];
-  total: number;
-}
+export type MountPage = ApiSchemas['MountPageDto'];
+
+/** The query parameters of `GET /api/mounts`. */
+export type MountSearchParams = NonNullable<operations['MountsController_search']['parameters']['query']>;
 
 /** Fields `GET /api/mounts` can sort by. */
 export const MOUNT_SORT_FIELDS = [
@@ -72,7 +37,7 @@ export const MOUNT_SORT_FIELDS = [
   'unitPrice',
   'leadTimeDays',
   'updatedAt',
-] as const;
+] as const satisfies readonly (keyof Mount)[];
 
 export type MountSortField = (typeof MOUNT_SORT_FIELDS)[number];
 
@@ -97,73 +62,21 @@ export interface MountQuery {
 }
 
 /** Body of `POST /api/mounts`. Exactly one of `dampingRatio` / `lossFactor`. */
-export interface MountInput {
-  supplierId: number;
-  partNumber: string;
-  series?: string | null;
-  mountType: MountType;
-  ratedLoadN: number;
-  verticalStiffnessNPerM: number;
-  horizontalStiffnessNPerM?: number | null;
-  dynamicStiffnessRatio?: number;
-  dampingRatio?: number | null;
-  lossFactor?: number | null;
-  maxDeflectionMm?: number | null;
-  tempMinC?: number | null;
-  tempMaxC?: number | null;
-  heightMm?: number | null;
-  unitPrice?: number | null;
-  currency?: string;
-  leadTimeDays?: number | null;
-}
+export type MountInput = ApiSchemas['CreateMountDto'];
 
 /** Body of `PATCH /api/mounts/:id`: any of the writable fields, and `active` to restore. */
-export type MountChanges = Partial<MountInput> & { active?: boolean };
+export type MountChanges = ApiSchemas['UpdateMountDto'];
 
 /** One problem of an imported file: the file's own row number (header = 1) and column. */
-export interface ImportProblem {
-  row: number;
-  column: string;
-  message: string;
-}
+export type ImportProblem = ApiSchemas['ImportProblemDto'];
 
 /** An accepted row of an import preview: SI values in the Mount field names. */
-export interface ImportPreviewRow
-  extends Partial<Omit<Mount, 'id' | 'supplier' | 'active' | 'createdAt' | 'updatedAt'>> {
-  row?: number;
-  supplierName: string;
-  partNumber: string;
-  mountType: MountType;
-  ratedLoadN: number;
-  verticalStiffnessNPerM: number;
-  action: 'create' | 'update';
-}
+export type ImportPreviewRow = ApiSchemas['ImportPreviewRowDto'];
 
-/** `POST /api/mounts/import` (200, and the body of its 422). */
-export interface ImportResult {
-  accepted: number;
-  rejected: number;
-  /** Accepted rows that add a mount / update one (would, for a dry run or a refused file). */
-  created: number;
-  updated: number;
-  errors: ImportProblem[];
-  errorsTruncated: boolean;
-  importId: number | null;
-  preview: ImportPreviewRow[];
-}
+/** `POST /api/mounts/import` (200; the body of its 422 adds `statusCode` and `message`). */
+export type ImportResult = ApiSchemas['ImportResultDto'];
 
-export type ImportMode = 'all_or_nothing' | 'skip_invalid';
+export type ImportMode = ApiSchemas['ImportMode'];
 
 /** `GET /api/mounts/imports`, newest first. */
-export interface CatalogImportRecord {
-  id: number;
-  fileName: string;
-  createdAt: string;
-  user: { id: number; name: string } | null;
-  mode: ImportMode;
-  accepted: number;
-  rejected: number;
-  created: number;
-  updated: number;
-  hasErrorReport: boolean;
-}
+export type CatalogImportRecord = ApiSchemas['CatalogImportDto'];

@@ -1,25 +1,14 @@
 /**
- * The outbox as the API returns it (mirrors the server's `OutboxMessageSummaryDto` and
- * `OutboxMessageDto`, `GET /api/outbox` and `GET /api/outbox/:id`). Demo and test mode only.
+ * The outbox as the API returns it (`GET /api/outbox`, `GET /api/outbox/:id`; demo and test mode
+ * only). Aliases of the types generated from the server's OpenAPI document (`@/api/schema`).
  */
-export interface OutboxAttachment {
-  filename: string;
-  /** Bytes. */
-  size: number;
-}
+import type { ApiSchemas } from '@/api/schema';
 
-export interface OutboxMessageSummary {
-  id: number;
-  /** The To header as text, e.g. `Quotes <quotes@example.test>, sales@example.test`. */
-  to: string;
-  subject: string;
-  /** ISO 8601 date-time. */
-  receivedAt: string;
-  attachments: OutboxAttachment[];
-}
+/** An attachment's file name and size in bytes. */
+export type OutboxAttachment = ApiSchemas['OutboxAttachmentDto'];
 
-export interface OutboxMessage extends OutboxMessageSummary {
-  from: string;
-  /** The plain-text body. */
-  text: string;
-}
+/** One captured message in the list; `to` is the To header as text, `receivedAt` ISO 8601. */
+export type OutboxMessageSummary = ApiSchemas['OutboxMessageSummaryDto'];
+
+/** One captured message with its sender and plain-text body. */
+export type OutboxMessage = ApiSchemas['OutboxMessageDto'];

@@ -1,71 +1,33 @@
-import type { DesignStatus, PersonRef, SupplierRef } from '@/types/design-api';
+/**
+ * The purchasing API's shapes: aliases of the types generated from the server's OpenAPI document
+ * (`@/api/schema`, `npm run api-types`); the inputs of the mutations add the ids they address.
+ */
+import { rfqProgressStatusValues, rfqStatusValues, type ApiSchemas } from '@/api/schema';
 
 /** Requests for quotation by state, as the purchasing queue counts them. */
-export interface RfqCounts {
-  requested: number;
-  quoted: number;
-  ordered: number;
-  received: number;
-  failed: number;
-}
+export type RfqCounts = ApiSchemas['RfqCountsDto'];
 
-/** One released design in the purchasing queue (`GET /api/purchasing/designs`). */
-export interface PurchasingDesign {
-  designId: number;
-  projectId: number;
-  projectName: string;
-  name: string;
-  revision: number;
-  status: DesignStatus;
-  releasedAt: string | null;
-  lineCount: number;
-  /** Sum of the extended prices; null when unknown or the lines mix currencies. */
-  total: number | null;
-  currency: string | null;
-  rfqs: RfqCounts;
-}
+/**
+ * One released design in the purchasing queue (`GET /api/purchasing/designs`); `total` is the
+ * sum of the extended prices, null when unknown or the lines mix currencies.
+ */
+export type PurchasingDesign = ApiSchemas['PurchasingDesignDto'];
 
-export const RFQ_STATUSES = ['requested', 'quoted', 'ordered', 'received', 'failed'] as const;
-export type RfqStatus = (typeof RFQ_STATUSES)[number];
+/** Every state of a request for quotation, in the server's order. */
+export const RFQ_STATUSES = rfqStatusValues;
+export type RfqStatus = ApiSchemas['RfqStatus'];
 
 /** The states a purchaser records by hand (`PATCH /api/rfqs/:id`), in their forward order. */
-export const RECORDED_STATUSES = ['quoted', 'ordered', 'received'] as const;
-export type RecordedRfqStatus = (typeof RECORDED_STATUSES)[number];
+export const RECORDED_STATUSES = rfqProgressStatusValues;
+export type RecordedRfqStatus = ApiSchemas['RfqProgressStatus'];
 
-export interface RfqHistoryEntry {
-  at: string;
-  status: RfqStatus;
-  user: PersonRef | null;
-  note: string | null;
-}
+export type RfqHistoryEntry = ApiSchemas['RfqEventDto'];
 
 /** A request for quotation sent to one supplier for one released design. */
-export interface Rfq {
-  id: number;
-  designId: number;
-  supplier: SupplierRef;
-  status: RfqStatus;
-  messageId: string | null;
-  failureReason: string | null;
-  quotedPrice: number | null;
-  quotedAt: string | null;
-  createdBy: PersonRef;
-  createdAt: string;
-  updatedAt: string;
-  history: RfqHistoryEntry[];
-}
+export type Rfq = ApiSchemas['RfqDto'];
 
-export interface SendRfqInput {
-  designId: number;
-  supplierId: number;
-  message?: string;
-}
+/** `POST /api/designs/:id/rfqs`: the design and the body. */
+export type SendRfqInput = ApiSchemas['CreateRfqDto'] & { designId: number };
 
-export interface UpdateRfqInput {
-  rfqId: number;
-  designId: number;
-  status: RecordedRfqStatus;
-  quotedPrice?: number;
-  quotedAt?: string;
-  note?: string;
-}
+/** `PATCH /api/rfqs/:id`: the request, its design (to refresh) and the body. */
+export type UpdateRfqInput = ApiSchemas['UpdateRfqDto'] & { rfqId: number; designId: number };

@@ -1,21 +1,17 @@
-import type { DesignStatus, PersonRef } from '@/types/design-api';
+/**
+ * The review API's shapes: aliases of the types generated from the server's OpenAPI document
+ * (`@/api/schema`, `npm run api-types`).
+ */
+import type { ApiSchemas } from '@/api/schema';
 
-/** One step in a design's record (`GET /api/designs/:id/history`), oldest first. */
-export interface DesignHistoryEntry {
-  id: number;
-  at: string;
-  user: PersonRef;
-  /** The state before; null for the record of a revision's creation. */
-  from: DesignStatus | null;
-  to: DesignStatus;
-  comment: string | null;
-}
+/**
+ * One step in a design's record (`GET /api/designs/:id/history`), oldest first; `from` is null
+ * for the record of a revision's creation.
+ */
+export type DesignHistoryEntry = ApiSchemas['HistoryEntryDto'];
 
 /** The states a design can be moved to by a transition (`POST /api/designs/:id/transitions`). */
-export type TransitionTarget = 'in_review' | 'draft' | 'released';
+export type TransitionTarget = ApiSchemas['TransitionTarget'];
 
-export interface TransitionInput {
-  designId: number;
-  to: TransitionTarget;
-  comment?: string;
-}
+/** What the review panel sends: the design and the body of the transition. */
+export type TransitionInput = ApiSchemas['TransitionDto'] & { designId: number };

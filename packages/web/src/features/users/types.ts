@@ -1,32 +1,14 @@
-import type { SessionUser } from '@/lib/auth';
-import type { Role } from '@/lib/authorization';
-import type { UnitSystem } from '@tacet/vibration';
-
 /**
- * A user account as the API returns it. Mirrors the server's OpenAPI `User` schema
- * (`GET /api/users`, `/api/users/:id`, `/api/auth/me`); the password hash is never sent.
+ * User accounts as the API returns and takes them (`GET /api/users`, `/api/users/:id`,
+ * `/api/auth/me`; the password hash is never sent). Aliases of the types generated from the
+ * server's OpenAPI document (`@/api/schema`, `npm run api-types`).
  */
-export interface User extends SessionUser {
-  active: boolean;
-  /** ISO 8601 date-time. */
-  createdAt: string;
-  /** ISO 8601 date-time. */
-  updatedAt: string;
-}
+import type { ApiSchemas } from '@/api/schema';
 
-/** Body of `POST /api/users` (mirrors the server's `CreateUserDto`). */
-export interface CreateUserInput {
-  email: string;
-  name: string;
-  role: Role;
-  password: string;
-  unitSystem?: UnitSystem;
-}
+export type User = ApiSchemas['UserDto'];
 
-/** Body of `PATCH /api/users/:id` (mirrors the server's `UpdateUserDto`). */
-export interface UpdateUserInput {
-  name?: string;
-  role?: Role;
-  active?: boolean;
-  unitSystem?: UnitSystem;
-}
+/** Body of `POST /api/users`. */
+export type CreateUserInput = ApiSchemas['CreateUserDto'];
+
+/** Body of `PATCH /api/users/:id`. */
+export type UpdateUserInput = ApiSchemas['UpdateUserDto'];

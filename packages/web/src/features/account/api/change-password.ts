@@ -1,12 +1,10 @@
 import { useMutation } from '@tanstack/react-query';
 
+import type { ApiSchemas } from '@/api/schema';
 import { api } from '@/lib/api-client';
 
 /** Body of `POST /api/auth/me/password`. */
-export interface ChangePasswordInput {
-  currentPassword: string;
-  newPassword: string;
-}
+export type ChangePasswordInput = ApiSchemas['ChangePasswordDto'];
 
 /** Answers 204; a wrong current password answers 400 "Current password is incorrect". */
 export async function changePassword(input: ChangePasswordInput): Promise<void> {

@@ -1,14 +1,11 @@
 import { useMutation } from '@tanstack/react-query';
-import type { UnitSystem } from '@tacet/vibration';
 
+import type { ApiSchemas } from '@/api/schema';
 import { api } from '@/lib/api-client';
 import { useAuth, type SessionUser } from '@/lib/auth';
 
 /** Body of `PATCH /api/auth/me`: a user may change only their own name and unit preference. */
-export interface UpdateProfileInput {
-  name?: string;
-  unitSystem?: UnitSystem;
-}
+export type UpdateProfileInput = ApiSchemas['UpdateProfileDto'];
 
 export async function updateProfile(input: UpdateProfileInput): Promise<SessionUser> {
   const { data } = await api.patch<SessionUser>('/auth/me', input);

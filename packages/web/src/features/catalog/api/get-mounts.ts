@@ -2,7 +2,7 @@ import { keepPreviousData, queryOptions, useQuery } from '@tanstack/react-query'
 
 import { api } from '@/lib/api-client';
 
-import type { MountPage, MountQuery } from '../types';
+import type { MountPage, MountQuery, MountSearchParams } from '../types';
 
 /** Every catalog query key starts here, so one invalidation refreshes lists and details. */
 export const mountsQueryKey = ['mounts'] as const;
@@ -13,8 +13,8 @@ function compact(value: number): string {
 }
 
 /** The query string of `GET /api/mounts` for a catalog query; empty filters are left out. */
-export function mountsSearchParams(query: MountQuery): Record<string, string> {
-  const params: Record<string, string> = {
+export function mountsSearchParams(query: MountQuery): Partial<Record<keyof MountSearchParams, string>> {
+  const params: Partial<Record<keyof MountSearchParams, string>> = {
     page: String(query.page),
     pageSize: String(query.pageSize),
   };

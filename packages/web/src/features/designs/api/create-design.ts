@@ -1,17 +1,14 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 
+import type { ApiSchemas } from '@/api/schema';
 import { api } from '@/lib/api-client';
-import type { Design, DesignInput } from '@/types/design-api';
+import type { Design } from '@/types/design-api';
 
 import { designQueryKey } from './get-design';
 import { projectDesignsQueryKey } from './get-project-designs';
 
-export interface CreateDesignInput {
-  projectId: number;
-  name: string;
-  /** Omitted: the server starts the design from its default input. */
-  input?: DesignInput;
-}
+/** The project and the body (`input` omitted: the server starts from its default input). */
+export type CreateDesignInput = ApiSchemas['CreateDesignDto'] & { projectId: number };
 
 /** `POST /api/projects/:id/designs` (engineer, admin) → 201 Design (revision 1, draft, version 1). */
 export async function createDesign({ projectId, ...body }: CreateDesignInput): Promise<Design> {

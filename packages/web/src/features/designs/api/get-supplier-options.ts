@@ -1,11 +1,10 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 
+import type { ApiSchemas } from '@/api/schema';
 import { api } from '@/lib/api-client';
 import type { SupplierRef } from '@/types/design-api';
 
-interface SupplierRow extends SupplierRef {
-  active?: boolean;
-}
+type SupplierRow = Pick<ApiSchemas['SupplierDto'], 'id' | 'name' | 'active'>;
 
 /**
  * `GET /api/suppliers` reduced to what the criteria need (id and name of active suppliers).

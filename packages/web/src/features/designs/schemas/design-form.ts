@@ -1,7 +1,15 @@
 import * as yup from 'yup';
 
 import type { Units } from '@/lib/units';
-import type { DesignComponent, DesignInput, MountPoint, OperatingConditions, Criteria } from '@/types/design-api';
+import {
+  MOUNT_TYPES,
+  type Criteria,
+  type DesignComponent,
+  type DesignInput,
+  type MountPoint,
+  type MountType,
+  type OperatingConditions,
+} from '@/types/design-api';
 
 /**
  * The design form holds what the user typed, as text in the user's units; `toDesignInput`
@@ -234,6 +242,11 @@ export function parseOperating(values: OperatingValues): OperatingConditions | n
   return operating;
 }
 
+/** The form keeps the ticked kinds as text; the API takes only the catalog's kinds. */
+function isMountType(value: string): value is MountType {
+  return (MOUNT_TYPES as readonly string[]).includes(value);
+}
+
 /** Criteria in SI, or null while a required figure is missing. */
 export function parseCriteria(values: CriteriaValues, units: Units): Criteria | null {
   const minIsolationPct = parseNumber(values.minIsolationPct);
@@ -251,7 +264,8 @@ export function parseCriteria(values: CriteriaValues, units: Units): Criteria | 
     if (margin === undefined) return null;
     criteria.weightMarginPct = margin;
   }
-  if (values.mountTypes.length > 0) criteria.mountTypes = [...values.mountTypes];
+  const mountTypes = values.mountTypes.filter(isMountType);
+  if (mountTypes.length > 0) criteria.mountTypes = mountTypes;
   if (values.supplierIds.length > 0) criteria.supplierIds = values.supplierIds.map(Number);
   return criteria;
 }

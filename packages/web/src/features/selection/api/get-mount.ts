@@ -1,16 +1,13 @@
 import { queryOptions, useQueries } from '@tanstack/react-query';
 
+import type { ApiSchemas } from '@/api/schema';
 import { api } from '@/lib/api-client';
 
 /** The part of a catalog mount the candidate detail needs (its damping). */
-export interface MountDampingData {
-  id: number;
-  partNumber: string;
-  dampingModel?: 'viscous' | 'hysteretic';
-  dampingRatio: number | null;
-  lossFactor: number | null;
-  dynamicStiffnessRatio?: number;
-}
+export type MountDampingData = Pick<
+  ApiSchemas['MountDto'],
+  'id' | 'partNumber' | 'dampingModel' | 'dampingRatio' | 'lossFactor' | 'dynamicStiffnessRatio'
+>;
 
 /** `GET /api/mounts/:id` (any signed-in role). */
 export async function getMount(mountId: number): Promise<MountDampingData> {

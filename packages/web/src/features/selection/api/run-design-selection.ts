@@ -1,13 +1,11 @@
 import { useMutation } from '@tanstack/react-query';
 
+import type { ApiSchemas } from '@/api/schema';
 import { api } from '@/lib/api-client';
 import type { SelectionResult } from '@/types/design-api';
 
-export interface RunDesignSelectionInput {
-  designId: number;
-  /** Most candidates to return (server default 20, at most 200). */
-  limit?: number;
-}
+/** The design and the body; `limit` is the most candidates to return (server default 20, at most 200). */
+export type RunDesignSelectionInput = ApiSchemas['RunDesignSelectionDto'] & { designId: number };
 
 /**
  * `POST /api/designs/:id/selection` (engineer, admin): ranks the catalog for the design's saved

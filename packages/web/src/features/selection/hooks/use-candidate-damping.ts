@@ -1,7 +1,7 @@
 import { hystereticDamping, viscousDamping, type Damping } from '@tacet/vibration';
 import { useMemo } from 'react';
 
-import type { Candidate, CandidateDamping } from '@/types/design-api';
+import type { Candidate } from '@/types/design-api';
 
 import { useMounts, type MountDampingData } from '../api/get-mount';
 
@@ -9,15 +9,11 @@ export interface CandidateDampingState {
   /** The damping the curves use; undefined = undamped (unknown). */
   damping: Damping | undefined;
   /** Where it came from, for the chart caption. */
-  source: 'candidate' | 'catalog' | 'unknown' | 'loading';
+  source: 'catalog' | 'unknown' | 'loading';
   /** Sizes of a series differ in damping: the curves use the first point's. */
   varies: boolean;
   /** e.g. "loss factor η = 0.12" */
   description: string | null;
-}
-
-function fromCandidate(d: CandidateDamping): Damping {
-  return d.model === 'viscous' ? viscousDamping(d.dampingRatio) : hystereticDamping(d.lossFactor);
 }
 
 /** A catalog row's damping: a loss factor means hysteretic, a damping ratio viscous. */
@@ -41,12 +37,12 @@ function sameDamping(a: Damping | undefined, b: Damping | undefined): boolean {
 }
 
 /**
- * The damping of a candidate's mounts: sent with the candidate when the server includes it,
- * otherwise read from the catalog rows of its parts. Unknown (catalog unreachable) → undamped.
+ * The damping of a candidate's mounts, read from the catalog rows of its parts (a candidate
+ * carries none). Unknown (catalog unreachable) → undamped.
  */
 export function useCandidateDamping(candidate: Candidate | null): CandidateDampingState {
   const mountIds = useMemo(
-    () => (candidate && !candidate.damping ? [...new Set(candidate.perPoint.map((p) => p.mountId))] : []),
+    () => (candidate ? [...new Set(candidate.perPoint.map((p) => p.mountId))] : []),
     [candidate],
   );
   const mounts = useMounts(mountIds, mountIds.length > 0);
@@ -56,10 +52,6 @@ export function useCandidateDamping(candidate: Candidate | null): CandidateDampi
 
   return useMemo<CandidateDampingState>(() => {
     if (!candidate) return { damping: undefined, source: 'unknown', varies: false, description: null };
-    if (candidate.damping) {
-      const damping = fromCandidate(candidate.damping);
-      return { damping, source: 'candidate', varies: false, description: describeDamping(damping) };
-    }
     if (loading) return { damping: undefined, source: 'loading', varies: false, description: null };
     const dampings = loaded.map((m) => (m ? mountDamping(m) : undefined));
     const first = dampings[0];

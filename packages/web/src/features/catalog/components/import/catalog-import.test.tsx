@@ -1,6 +1,6 @@
 import { screen, waitFor, within } from '@testing-library/react';
 
-import { makeImportRecord, makeImportResult } from '@/testing/catalog-fakes';
+import { makeImportRecord, makeImportResult, makePreviewRow } from '@/testing/catalog-fakes';
 import { installFakeApi, type FakeApi, type FakeRequest } from '@/testing/fake-api';
 import { renderApp } from '@/testing/render';
 
@@ -24,8 +24,8 @@ const PROBLEMS = [
 ];
 
 const PREVIEW = [
-  { row: 2, supplierName: 'Quillmere Isolation', partNumber: 'QM-S9-01000', mountType: 'open_spring' as const, ratedLoadN: 1000, verticalStiffnessNPerM: 40_000, dampingRatio: 0.01, lossFactor: null, action: 'create' as const },
-  { row: 3, supplierName: 'Quillmere Isolation', partNumber: 'QM-S9-02000', mountType: 'open_spring' as const, ratedLoadN: 2000, verticalStiffnessNPerM: 80_000, dampingRatio: 0.01, lossFactor: null, action: 'update' as const },
+  makePreviewRow({ row: 2, supplierName: 'Quillmere Isolation', partNumber: 'QM-S9-01000', ratedLoadN: 1000, verticalStiffnessNPerM: 40_000, action: 'create' }),
+  makePreviewRow({ row: 3, supplierName: 'Quillmere Isolation', partNumber: 'QM-S9-02000', ratedLoadN: 2000, verticalStiffnessNPerM: 80_000, action: 'update' }),
 ];
 
 const CHECKED = makeImportResult({ accepted: 2, rejected: 2, created: 1, updated: 1, errors: PROBLEMS, preview: PREVIEW });
