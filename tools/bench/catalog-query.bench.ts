@@ -9,8 +9,9 @@
  * (GET /api/mounts with text + types + load range + sort: the items and the total), and the
  * same page and total are read with bare better-sqlite3 prepared statements on the same database
  * file (the same two steps as the server: the page's ids with the total, then those rows), with
- * the same parameter sets. The HTTP time includes the request itself (an upper
- * bound of the server time). Target (PRODUCT.md-style page budget): p95 under 30 ms.
+ * the same parameter sets. Server time is the server's own `Server-Timing` header (from the
+ * request's arrival to its answer's headers); the HTTP time adds the client and loopback. Target
+ * (the catalog issue): a page under 30 ms of server time, p95.
  */
 import { mkdtempSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
@@ -99,6 +100,7 @@ async function main(): Promise<void> {
 
     const list = queries(WARMUP + REQUESTS);
     const http: number[] = [];
+    const serverTimes: number[] = [];
     let totals = 0;
     for (const [index, query] of list.entries()) {
       const params = new URLSearchParams({ q: query.q, type: query.types.join(','), minLoadN: String(query.minLoadN), maxLoadN: String(query.maxLoadN), sort: query.sort, pageSize: '50' });
@@ -108,7 +110,10 @@ async function main(): Promise<void> {
       const elapsed = performance.now() - t0;
       if (response.status !== 200) throw new Error(`search failed: ${response.status} ${JSON.stringify(body)}`);
       totals += body.total;
-      if (index >= WARMUP) http.push(elapsed);
+      if (index >= WARMUP) {
+        http.push(elapsed);
+        serverTimes.push(serverTiming(response));
+      }
     }
 
     const db = new Database(join(server.dataDir, 'tacet.sqlite'), { readonly: true });
@@ -122,15 +127,25 @@ async function main(): Promise<void> {
     db.close();
 
     const p95 = percentile(http, 95);
+    const serverP95 = percentile(serverTimes, 95);
     console.log(`catalog: ${ROWS} imported + 500 demo mounts; ${REQUESTS} filtered pages of 50 (text + types + load range + sort), mean total ${(totals / list.length).toFixed(0)} matches`);
     console.log(`Tacet GET /api/mounts (HTTP, loopback): p50 ${ms(percentile(http, 50))}, p95 ${ms(p95)}`);
+    console.log(`  of which in the server (Server-Timing): p50 ${ms(percentile(serverTimes, 50))}, p95 ${ms(serverP95)}`);
     console.log(`bare prepared statements (ids + total, rows): p50 ${ms(percentile(bare, 50))}, p95 ${ms(percentile(bare, 95))}`);
-    console.log(`ratio p95 Tacet / bare: ${(p95 / percentile(bare, 95)).toFixed(2)}×; target p95 < ${TARGET_P95_MS} ms: ${p95 < TARGET_P95_MS ? 'met' : 'NOT met'}`);
-    reportFigure({ figure: `catalog page of 50 from ${ROWS + 500} mounts, HTTP p95`, value: p95, unit: 'ms', target: TARGET_P95_MS, bare: percentile(bare, 95) });
+    console.log(`ratio server p95 / bare: ${(serverP95 / percentile(bare, 95)).toFixed(2)}×; target server p95 < ${TARGET_P95_MS} ms: ${serverP95 < TARGET_P95_MS ? 'met' : 'NOT met'}`);
+    reportFigure({ figure: `catalog page of 50 from ${ROWS + 500} mounts, server p95`, value: serverP95, unit: 'ms', target: TARGET_P95_MS, bare: percentile(bare, 95) });
+    reportFigure({ figure: `catalog page of 50 from ${ROWS + 500} mounts, HTTP p95`, value: p95, unit: 'ms', bare: percentile(bare, 95) });
   } finally {
     await server.stop();
     rmSync(work, { recursive: true, force: true });
   }
+}
+
+/** The server's own time for a request, from its `Server-Timing: app;dur=<ms>` header. */
+function serverTiming(response: Response): number {
+  const match = /app;dur=([\d.]+)/.exec(response.headers.get('server-timing') ?? '');
+  if (!match) throw new Error('no Server-Timing header: build the server first (npm run build)');
+  return Number(match[1]);
 }
 
 /** A catalog manager's token on the same server (the import needs that role). */

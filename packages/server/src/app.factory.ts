@@ -3,6 +3,7 @@ import type { NestExpressApplication } from '@nestjs/platform-express';
 import { DocumentBuilder, SwaggerModule, type OpenAPIObject } from '@nestjs/swagger';
 import compression from 'compression';
 import helmet from 'helmet';
+import responseTime from 'response-time';
 import { ApiErrorDto } from './common/dto/api-error.dto.js';
 import { AllExceptionsFilter } from './common/filters/all-exceptions.filter.js';
 import { BodyShapePipe } from './common/pipes/body-shape.pipe.js';
@@ -47,6 +48,9 @@ function setupOpenApi(app: NestExpressApplication): void {
  */
 export function configureApp(app: NestExpressApplication): NestExpressApplication {
   app.setGlobalPrefix(API_PREFIX);
+  // Server-Timing: app;dur=<ms> — the time spent in the server, shown by browsers' developer
+  // tools and read by the benchmarks (tools/bench) to tell it from the network.
+  app.use(responseTime((_req, res, ms) => res.setHeader('Server-Timing', `app;dur=${ms.toFixed(2)}`)));
   app.use(helmet());
   app.use(compression());
   app.useBodyParser('json', { limit: JSON_BODY_LIMIT });

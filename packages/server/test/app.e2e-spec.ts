@@ -46,6 +46,11 @@ describe('application (e2e)', () => {
     expect(response.headers['x-powered-by']).toBeUndefined();
   });
 
+  it('says how long the server took in a Server-Timing header', async () => {
+    const response = await t.http().get('/api/health');
+    expect(response.headers['server-timing']).toMatch(/^app;dur=\d+\.\d{2}$/);
+  });
+
   it('compresses large responses', async () => {
     const response = await t.http().get('/api/docs-json').set('Accept-Encoding', 'gzip');
     expect(response.headers['content-encoding']).toBe('gzip');

@@ -1,3 +1,4 @@
+import { createSecretKey } from 'node:crypto';
 import { Injectable, UnauthorizedException } from '@nestjs/common';
 import { PassportStrategy } from '@nestjs/passport';
 import passportJwt from 'passport-jwt';
@@ -17,7 +18,9 @@ export class JwtStrategy extends PassportStrategy(Strategy) {
   ) {
     super({
       jwtFromRequest: ExtractJwt.fromAuthHeaderAsBearerToken(),
-      secretOrKey: config.jwtSecret,
+      // A KeyObject, not the string: jsonwebtoken would otherwise first try (and fail) to read the
+      // string as a public key on every request, at about a millisecond each.
+      secretOrKey: createSecretKey(Buffer.from(config.jwtSecret, 'utf8')) as unknown as string,
       algorithms: [JWT_ALGORITHM],
       ignoreExpiration: false,
     });
