@@ -86,6 +86,26 @@ describe('Check and release panel', () => {
     expect(screen.getByLabelText('Mass of Pump')).toHaveValue('400');
   });
 
+  it('stops after saving when the changed input cleared the chosen mounts, and says what to do', async () => {
+    const { user, fake, server } = openDesign({ status: 'draft' });
+    // The server clears the choice when the input changes.
+    fake.on('put', '/designs/:id', ({ body }) => {
+      const update = body as { input?: Design['input'] };
+      server.design = { ...server.design, input: update.input ?? server.design.input, chosen: null, version: server.design.version + 1 };
+      return { status: 200, data: server.design };
+    });
+    const region = await panel();
+    const mass = screen.getByLabelText('Mass of Pump');
+    await user.clear(mass);
+    await user.type(mass, '400');
+
+    await user.click(within(region).getByRole('button', { name: 'Send for check' }));
+
+    expect(await within(region).findByText(/Your changes were saved. A changed input clears the chosen mounts/)).toBeInTheDocument();
+    expect(fake.calls('post', '/designs/:id/transitions')).toHaveLength(0);
+    expect(server.design.input.components[0]!.massKg).toBe(400);
+  });
+
   it('does not send for check when the unsaved edits cannot be saved, and says why', async () => {
     const { user, fake } = openDesign({ status: 'draft' });
     const region = await panel();

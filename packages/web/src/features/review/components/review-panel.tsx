@@ -70,6 +70,12 @@ export function ReviewPanel({ design, onChanged, onRevisionCreated, unsavedEdits
         setFailure('Your changes could not be saved, so the design was not sent for check. Correct the input and try again.');
         return false;
       }
+      if (design.chosen && !saved.chosen) {
+        setFailure(
+          'Your changes were saved. A changed input clears the chosen mounts: run the selection again and choose mounts, then send the design for check.',
+        );
+        return false;
+      }
     }
     try {
       const updated = await transition.mutateAsync({ designId: design.id, to, comment });
