@@ -29,7 +29,10 @@ function countVitest(out, status) {
   const j = JSON.parse(readFileSync(out, 'utf8'));
   // Suites that fail to load count as failures too.
   const failedFiles = (j.testResults ?? []).filter((f) => f.status === 'failed' && (f.assertionResults ?? []).length === 0).length;
-  return { passed: j.numPassedTests ?? 0, failed: (j.numFailedTests ?? 0) + failedFiles + (status !== 0 && !j.numFailedTests && !failedFiles ? 1 : 0) };
+  return {
+    passed: j.numPassedTests ?? 0,
+    failed: (j.numFailedTests ?? 0) + failedFiles + (status !== 0 && !j.numFailedTests && !failedFiles ? 1 : 0),
+  };
 }
 
 function jestSuite(name, workspace, env = {}) {
@@ -39,7 +42,11 @@ function jestSuite(name, workspace, env = {}) {
   const j = JSON.parse(readFileSync(out, 'utf8'));
   const brokenSuites = j.numRuntimeErrorTestSuites ?? 0;
   const skipped = j.numPendingTests ? `${j.numPendingTests} skipped, see their titles` : undefined;
-  return { passed: j.numPassedTests, failed: j.numFailedTests + brokenSuites + (status !== 0 && !j.numFailedTests && !brokenSuites ? 1 : 0), note: skipped };
+  return {
+    passed: j.numPassedTests,
+    failed: j.numFailedTests + brokenSuites + (status !== 0 && !j.numFailedTests && !brokenSuites ? 1 : 0),
+    note: skipped,
+  };
 }
 
 /**
@@ -56,7 +63,8 @@ async function serverPgSuite() {
     stopTestPostgres(dir);
     console.error(error.message);
     const missing = error instanceof PostgresNotInstalledError;
-    if (missing && process.env.CI !== 'true') return { passed: 0, failed: 0, note: 'skipped: PostgreSQL is not installed (apt-get install postgresql)' };
+    if (missing && process.env.CI !== 'true')
+      return { passed: 0, failed: 0, note: 'skipped: PostgreSQL is not installed (apt-get install postgresql)' };
     return { passed: 0, failed: 1, note: missing ? 'PostgreSQL is not installed' : 'the test PostgreSQL did not start' };
   }
   try {
@@ -69,9 +77,21 @@ async function serverPgSuite() {
 
 const suites = [
   // Build (vibration → server → web) and typecheck every package, tests included.
-  ['build', () => ({ passed: 0, failed: run('npm', ['run', 'build']) === 0 && run('npm', ['run', 'typecheck']) === 0 ? 0 : 1, silent: true })],
+  [
+    'build',
+    () => ({ passed: 0, failed: run('npm', ['run', 'build']) === 0 && run('npm', ['run', 'typecheck']) === 0 ? 0 : 1, silent: true }),
+  ],
+  // Formatting is checked, never rewritten here (npm run format rewrites).
+  [
+    'format',
+    () => (run('npx', ['prettier', '--check', '.', '--log-level', 'warn']) === 0 ? { passed: 1, failed: 0 } : { passed: 0, failed: 1 }),
+  ],
   // The web's generated API types match the server's OpenAPI document (tools/api-types).
-  ['api-types', () => (run('node', ['tools/api-types/generate.mjs', '--check', '--no-build']) === 0 ? { passed: 1, failed: 0 } : { passed: 0, failed: 1 })],
+  [
+    'api-types',
+    () =>
+      run('node', ['tools/api-types/generate.mjs', '--check', '--no-build']) === 0 ? { passed: 1, failed: 0 } : { passed: 0, failed: 1 },
+  ],
   ['vibration', () => vitestSuite('vibration', 'packages/vibration')],
   ['reference', () => vitestSuite('reference', 'tests/reference')],
   ['server', () => jestSuite('server', '@tacet/server', { TACET_TEST_DATABASE_URL: '' })], // on SQLite, whatever the shell says
@@ -82,7 +102,11 @@ const suites = [
   // Kill -9, full and read-only storage, restarts and the online backup, against the built server.
   ['faults', () => vitestSuite('faults', 'tests/faults')],
   // A short load run (the full one: npm run test:load); one test, passed or failed.
-  ['load', () => (run('node', ['tools/load/run.mjs', '--duration', '8', '--clients', '10']) === 0 ? { passed: 1, failed: 0 } : { passed: 0, failed: 1 })],
+  [
+    'load',
+    () =>
+      run('node', ['tools/load/run.mjs', '--duration', '8', '--clients', '10']) === 0 ? { passed: 1, failed: 0 } : { passed: 0, failed: 1 },
+  ],
 ];
 
 const results = [];

@@ -131,7 +131,10 @@ async function purchaserRequestsQuotation(browser: Browser): Promise<void> {
   expect(supplierName).not.toBe('');
   await supplier.getByLabel('Message to the supplier (optional)').fill('Please quote delivery to site within six weeks.');
   await supplier.getByRole('button', { name: 'Send request for quotation' }).click();
-  await supplier.getByRole('list', { name: `Requests to ${supplierName}` }).getByText('Requested', { exact: true }).waitFor();
+  await supplier
+    .getByRole('list', { name: `Requests to ${supplierName}` })
+    .getByText('Requested', { exact: true })
+    .waitFor();
   await shot(page, 'purchasing-07-rfq-sent');
   await page.context().close();
 }

@@ -64,7 +64,9 @@ describe('kill -9 during design saves', () => {
       running = false;
       await Promise.all(writers);
       expect(exit.signal).toBe('SIGKILL');
-      console.log(`round ${round}: killed after ${delay} ms; ${sent.length} saves sent so far, last acknowledged version ${acknowledged.version}`);
+      console.log(
+        `round ${round}: killed after ${delay} ms; ${sent.length} saves sent so far, last acknowledged version ${acknowledged.version}`,
+      );
 
       server = await startServer(dataDir);
       engineer = engineer.on(server.baseURL);

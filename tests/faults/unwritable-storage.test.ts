@@ -64,7 +64,11 @@ describe('storage that refuses writes', () => {
 
     // Room again: the same writes succeed, from the version the refused save did not change.
     expect((await engineer.post('/api/projects', { name: 'After the disk was freed' })).status).toBe(201);
-    const saved = await engineer.put(`/api/designs/${design.id}`, { version: design.version, name: 'Skid A renamed', input: taggedInput(2) });
+    const saved = await engineer.put(`/api/designs/${design.id}`, {
+      version: design.version,
+      name: 'Skid A renamed',
+      input: taggedInput(2),
+    });
     expect(saved.status).toBe(200);
     expect(saved.body.version).toBe(design.version + 1);
     expect((await manager.importCatalog(smallCsv)).status).toBe(200);
@@ -79,37 +83,59 @@ describe('storage that refuses writes', () => {
   const nobody = { name: 'nobody', group: 'nogroup' };
   const canRunAsNobody =
     process.getuid?.() === 0 &&
-    spawnSync('setpriv', ['--reuid', nobody.name, '--regid', nobody.group, '--clear-groups', process.execPath, '-e',
-      `require('fs').accessSync(${JSON.stringify(SERVER_MAIN)}, require('fs').constants.R_OK)`]).status === 0;
+    spawnSync('setpriv', [
+      '--reuid',
+      nobody.name,
+      '--regid',
+      nobody.group,
+      '--clear-groups',
+      process.execPath,
+      '-e',
+      `require('fs').accessSync(${JSON.stringify(SERVER_MAIN)}, require('fs').constants.R_OK)`,
+    ]).status === 0;
 
-  it.skipIf(!canRunAsNobody)('a read-only database: writes get 503 "not writable", reads go on; writable again, writes succeed', async () => {
-    const dataDir = copyOfTemplate(inject('templateDir'));
-    const othersBefore = digestOf(dataDir, ALL_TABLES.filter((table) => table !== 'project'));
-    const projectsBefore = countOf(dataDir, 'project');
-    const { uid, gid } = idsOf(nobody.name);
-    chownSync(dataDir, uid, gid);
-    for (const file of readdirSync(dataDir)) chownSync(join(dataDir, file), uid, gid);
-    chmodSync(join(dataDir, SQLITE_FILE), 0o444);
+  it.skipIf(!canRunAsNobody)(
+    'a read-only database: writes get 503 "not writable", reads go on; writable again, writes succeed',
+    async () => {
+      const dataDir = copyOfTemplate(inject('templateDir'));
+      const othersBefore = digestOf(
+        dataDir,
+        ALL_TABLES.filter((table) => table !== 'project'),
+      );
+      const projectsBefore = countOf(dataDir, 'project');
+      const { uid, gid } = idsOf(nobody.name);
+      chownSync(dataDir, uid, gid);
+      for (const file of readdirSync(dataDir)) chownSync(join(dataDir, file), uid, gid);
+      chmodSync(join(dataDir, SQLITE_FILE), 0o444);
 
-    const readOnly = await startServer(dataDir, { user: nobody });
-    const engineer = await Api.signIn(readOnly.baseURL, 'engineer@tacet.test');
-    expectStorageRefusal(await engineer.post('/api/projects', { name: 'On a read-only disk' }), /^The data store is not writable right now \(it is read-only\)/);
-    const projects = await engineer.get('/api/projects');
-    expect(projects.status).toBe(200);
-    expect(projects.body.length).toBeGreaterThan(0);
-    expect(readOnly.log()).toMatch(/the data store refused it \(SQLITE_READONLY/);
-    await readOnly.stop();
+      const readOnly = await startServer(dataDir, { user: nobody });
+      const engineer = await Api.signIn(readOnly.baseURL, 'engineer@tacet.test');
+      expectStorageRefusal(
+        await engineer.post('/api/projects', { name: 'On a read-only disk' }),
+        /^The data store is not writable right now \(it is read-only\)/,
+      );
+      const projects = await engineer.get('/api/projects');
+      expect(projects.status).toBe(200);
+      expect(projects.body.length).toBeGreaterThan(0);
+      expect(readOnly.log()).toMatch(/the data store refused it \(SQLITE_READONLY/);
+      await readOnly.stop();
 
-    // Writable again: the database and the -wal/-shm files the read-only run left beside it.
-    for (const file of readdirSync(dataDir).filter((name) => name.startsWith(SQLITE_FILE))) chmodSync(join(dataDir, file), 0o644);
-    const writable = await startServer(dataDir, { user: nobody });
-    const again = engineer.on(writable.baseURL);
-    expect((await again.post('/api/projects', { name: 'Writable again' })).status).toBe(201);
-    await writable.stop();
-    expect(integrityOf(dataDir)).toBe('ok');
-    expect(countOf(dataDir, 'project')).toBe(projectsBefore + 1); // only the write made once writable
-    expect(digestOf(dataDir, ALL_TABLES.filter((table) => table !== 'project'))).toBe(othersBefore);
-  });
+      // Writable again: the database and the -wal/-shm files the read-only run left beside it.
+      for (const file of readdirSync(dataDir).filter((name) => name.startsWith(SQLITE_FILE))) chmodSync(join(dataDir, file), 0o644);
+      const writable = await startServer(dataDir, { user: nobody });
+      const again = engineer.on(writable.baseURL);
+      expect((await again.post('/api/projects', { name: 'Writable again' })).status).toBe(201);
+      await writable.stop();
+      expect(integrityOf(dataDir)).toBe('ok');
+      expect(countOf(dataDir, 'project')).toBe(projectsBefore + 1); // only the write made once writable
+      expect(
+        digestOf(
+          dataDir,
+          ALL_TABLES.filter((table) => table !== 'project'),
+        ),
+      ).toBe(othersBefore);
+    },
+  );
 });
 
 function idsOf(user: string): { uid: number; gid: number } {

@@ -12,7 +12,11 @@ import { type ResilientMount, boxInertia, massProperties, rigidBodyModes, rotati
 
 const layoutArb = fc.record({
   massKg: fc.double({ min: 50, max: 5000, noNaN: true }),
-  dims: fc.tuple(fc.double({ min: 0.3, max: 3, noNaN: true }), fc.double({ min: 0.3, max: 2, noNaN: true }), fc.double({ min: 0.2, max: 1.5, noNaN: true })),
+  dims: fc.tuple(
+    fc.double({ min: 0.3, max: 3, noNaN: true }),
+    fc.double({ min: 0.3, max: 2, noNaN: true }),
+    fc.double({ min: 0.2, max: 1.5, noNaN: true }),
+  ),
   // a second lumped mass makes the inertia tensor non-diagonal
   extra: fc.record({
     massKg: fc.double({ min: 1, max: 500, noNaN: true }),

@@ -28,10 +28,13 @@ describe('rigid-frame loads (property)', () => {
   it('loads sum to W and their moments equal W·x_G and W·y_G; a CG inside the polygon gives no polygon warning', () => {
     fc.assert(
       fc.property(
-        fc.array(fc.record({ p: point, k: fc.double({ min: 1e4, max: 1e7, noNaN: true }), w: fc.double({ min: 0.05, max: 1, noNaN: true }) }), {
-          minLength: 3,
-          maxLength: 10,
-        }),
+        fc.array(
+          fc.record({ p: point, k: fc.double({ min: 1e4, max: 1e7, noNaN: true }), w: fc.double({ min: 0.05, max: 1, noNaN: true }) }),
+          {
+            minLength: 3,
+            maxLength: 10,
+          },
+        ),
         fc.double({ min: 100, max: 1e6, noNaN: true }),
         (mounts, weightN) => {
           const points = mounts.map((m) => m.p);
@@ -87,7 +90,11 @@ describe('transmissibility (property)', () => {
 describe('rigid-body modes (property)', () => {
   const layout = fc.record({
     massKg: fc.double({ min: 50, max: 5000, noNaN: true }),
-    inertia: fc.tuple(fc.double({ min: 5, max: 2000, noNaN: true }), fc.double({ min: 5, max: 2000, noNaN: true }), fc.double({ min: 5, max: 2000, noNaN: true })),
+    inertia: fc.tuple(
+      fc.double({ min: 5, max: 2000, noNaN: true }),
+      fc.double({ min: 5, max: 2000, noNaN: true }),
+      fc.double({ min: 5, max: 2000, noNaN: true }),
+    ),
     mounts: fc.array(
       fc.record({
         p: point,
@@ -107,7 +114,10 @@ describe('rigid-body modes (property)', () => {
         const [ixx, iyy, izz] = l.inertia;
         const inertia = { xx: ixx, yy: iyy, zz: izz, xy: 0, xz: 0, yz: 0 };
         const mounts = (scale: number) =>
-          l.mounts.map((m) => ({ position: { x: m.p.x, y: m.p.y, z: m.z }, stiffness: { x: m.kh * scale, y: m.kh * scale, z: m.kv * scale } }));
+          l.mounts.map((m) => ({
+            position: { x: m.p.x, y: m.p.y, z: m.z },
+            stiffness: { x: m.kh * scale, y: m.kh * scale, z: m.kv * scale },
+          }));
         const a = rigidBodyModes({ massKg: l.massKg, inertia, mounts: mounts(1) });
         const b = rigidBodyModes({ massKg: l.massKg, inertia, mounts: mounts(l.s) });
         for (let i = 0; i < 6; i++) {

@@ -101,7 +101,11 @@ export async function startServer(email = 'catalog@tacet.test'): Promise<BenchSe
 }
 
 /** POST /api/mounts/import with the file; returns the status and body. */
-export async function uploadCatalog(server: BenchServer, path: string, query = ''): Promise<{ status: number; body: Record<string, unknown> }> {
+export async function uploadCatalog(
+  server: BenchServer,
+  path: string,
+  query = '',
+): Promise<{ status: number; body: Record<string, unknown> }> {
   const form = new FormData();
   form.append('file', await openAsBlob(path, { type: 'text/csv' }), 'bench-catalog.csv');
   const response = await fetch(`${server.url}/api/mounts/import${query}`, {

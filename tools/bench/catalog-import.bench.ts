@@ -58,8 +58,25 @@ async function baseline(csvPath: string, ddlPath: string, dbPath: string): Promi
     }
     const k = num(r[5]) as number;
     const kh = num(r[6]);
-    insertMount.run(supplierId, r[1], r[2] || null, r[3], num(r[4]), k * 1000, kh === null ? null : kh * 1000, num(r[7]) ?? 1,
-      num(r[8]), num(r[9]), num(r[10]), num(r[11]), num(r[12]), num(r[13]), num(r[14]), r[15] || 'USD', num(r[16]));
+    insertMount.run(
+      supplierId,
+      r[1],
+      r[2] || null,
+      r[3],
+      num(r[4]),
+      k * 1000,
+      kh === null ? null : kh * 1000,
+      num(r[7]) ?? 1,
+      num(r[8]),
+      num(r[9]),
+      num(r[10]),
+      num(r[11]),
+      num(r[12]),
+      num(r[13]),
+      num(r[14]),
+      r[15] || 'USD',
+      num(r[16]),
+    );
     rows++;
   }
   db.exec('COMMIT');
@@ -105,19 +122,39 @@ async function main(): Promise<void> {
     }
 
     // --- the bare baseline, in a fresh process -------------------------------------------
-    const child = spawnSync(process.execPath, [...process.execArgv, fileURLToPath(import.meta.url), '--baseline', csvPath, ddlPath, join(work, 'bare.sqlite')], {
-      encoding: 'utf8',
-    });
+    const child = spawnSync(
+      process.execPath,
+      [...process.execArgv, fileURLToPath(import.meta.url), '--baseline', csvPath, ddlPath, join(work, 'bare.sqlite')],
+      {
+        encoding: 'utf8',
+      },
+    );
     if (child.status !== 0) throw new Error(`baseline failed: ${child.stderr}`);
     const bare = JSON.parse(child.stdout.trim().split('\n').pop() as string) as BaselineResult;
 
     const ratio = first.ms / bare.ms;
-    console.log(`Tacet import (HTTP, new catalog):   ${ms(first.ms)}  created ${first.body.created}, updated ${first.body.updated}, rejected ${first.body.rejected}; server peak RSS growth ${mib(first.peakGrowthMiB)}`);
+    console.log(
+      `Tacet import (HTTP, new catalog):   ${ms(first.ms)}  created ${first.body.created}, updated ${first.body.updated}, rejected ${first.body.rejected}; server peak RSS growth ${mib(first.peakGrowthMiB)}`,
+    );
     console.log(`Tacet import (HTTP, all updates):   ${ms(second.ms)}  created ${second.body.created}, updated ${second.body.updated}`);
     console.log(`bare csv-parse + prepared inserts:  ${ms(bare.ms)}  ${bare.rows} rows; peak RSS growth ${mib(bare.peakGrowthMiB)}`);
-    reportFigure({ figure: `catalog import, ${ROWS} rows (HTTP, new catalog)`, value: first.ms, unit: 'ms', target: TARGET_MS, bare: bare.ms, ratioTarget: TARGET_RATIO });
-    reportFigure({ figure: `catalog import, ${ROWS} rows: server peak RSS growth`, value: first.peakGrowthMiB, unit: 'MiB', bare: bare.peakGrowthMiB });
-    console.log(`ratio Tacet / bare: ${ratio.toFixed(2)}× (target ≤ ${TARGET_RATIO}×); time target < ${TARGET_MS} ms: ${first.ms < TARGET_MS ? 'met' : 'NOT met'}; ratio target: ${ratio <= TARGET_RATIO ? 'met' : 'NOT met'}`);
+    reportFigure({
+      figure: `catalog import, ${ROWS} rows (HTTP, new catalog)`,
+      value: first.ms,
+      unit: 'ms',
+      target: TARGET_MS,
+      bare: bare.ms,
+      ratioTarget: TARGET_RATIO,
+    });
+    reportFigure({
+      figure: `catalog import, ${ROWS} rows: server peak RSS growth`,
+      value: first.peakGrowthMiB,
+      unit: 'MiB',
+      bare: bare.peakGrowthMiB,
+    });
+    console.log(
+      `ratio Tacet / bare: ${ratio.toFixed(2)}× (target ≤ ${TARGET_RATIO}×); time target < ${TARGET_MS} ms: ${first.ms < TARGET_MS ? 'met' : 'NOT met'}; ratio target: ${ratio <= TARGET_RATIO ? 'met' : 'NOT met'}`,
+    );
   } finally {
     rmSync(work, { recursive: true, force: true });
   }

@@ -35,7 +35,13 @@ interface Query {
 }
 
 const TEXTS = ['s1', 'qm-', 'elastics', 'e2v', 'h1', '0300', 'spring', 'r1v3'];
-const TYPE_SETS = [['open_spring'], ['open_spring', 'housed_spring'], ['elastomer_pad', 'elastomer_mount'], ['restrained_spring'], ['wire_rope', 'air_spring', 'elastomer_mount']];
+const TYPE_SETS = [
+  ['open_spring'],
+  ['open_spring', 'housed_spring'],
+  ['elastomer_pad', 'elastomer_mount'],
+  ['restrained_spring'],
+  ['wire_rope', 'air_spring', 'elastomer_mount'],
+];
 const SORTS: Query['sort'][] = ['supplier,partNumber', '-ratedLoadN', 'unitPrice'];
 
 /** Deterministic parameter sets (seeded LCG). */
@@ -103,7 +109,14 @@ async function main(): Promise<void> {
     const serverTimes: number[] = [];
     let totals = 0;
     for (const [index, query] of list.entries()) {
-      const params = new URLSearchParams({ q: query.q, type: query.types.join(','), minLoadN: String(query.minLoadN), maxLoadN: String(query.maxLoadN), sort: query.sort, pageSize: '50' });
+      const params = new URLSearchParams({
+        q: query.q,
+        type: query.types.join(','),
+        minLoadN: String(query.minLoadN),
+        maxLoadN: String(query.maxLoadN),
+        sort: query.sort,
+        pageSize: '50',
+      });
       const t0 = performance.now();
       const response = await fetch(`${server.url}/api/mounts?${params}`, { headers: { Authorization: `Bearer ${server.token}` } });
       const body = (await response.json()) as { items: unknown[]; total: number };
@@ -128,12 +141,22 @@ async function main(): Promise<void> {
 
     const p95 = percentile(http, 95);
     const serverP95 = percentile(serverTimes, 95);
-    console.log(`catalog: ${ROWS} imported + 500 demo mounts; ${REQUESTS} filtered pages of 50 (text + types + load range + sort), mean total ${(totals / list.length).toFixed(0)} matches`);
+    console.log(
+      `catalog: ${ROWS} imported + 500 demo mounts; ${REQUESTS} filtered pages of 50 (text + types + load range + sort), mean total ${(totals / list.length).toFixed(0)} matches`,
+    );
     console.log(`Tacet GET /api/mounts (HTTP, loopback): p50 ${ms(percentile(http, 50))}, p95 ${ms(p95)}`);
     console.log(`  of which in the server (Server-Timing): p50 ${ms(percentile(serverTimes, 50))}, p95 ${ms(serverP95)}`);
     console.log(`bare prepared statements (ids + total, rows): p50 ${ms(percentile(bare, 50))}, p95 ${ms(percentile(bare, 95))}`);
-    console.log(`ratio server p95 / bare: ${(serverP95 / percentile(bare, 95)).toFixed(2)}×; target server p95 < ${TARGET_P95_MS} ms: ${serverP95 < TARGET_P95_MS ? 'met' : 'NOT met'}`);
-    reportFigure({ figure: `catalog page of 50 from ${ROWS + 500} mounts, server p95`, value: serverP95, unit: 'ms', target: TARGET_P95_MS, bare: percentile(bare, 95) });
+    console.log(
+      `ratio server p95 / bare: ${(serverP95 / percentile(bare, 95)).toFixed(2)}×; target server p95 < ${TARGET_P95_MS} ms: ${serverP95 < TARGET_P95_MS ? 'met' : 'NOT met'}`,
+    );
+    reportFigure({
+      figure: `catalog page of 50 from ${ROWS + 500} mounts, server p95`,
+      value: serverP95,
+      unit: 'ms',
+      target: TARGET_P95_MS,
+      bare: percentile(bare, 95),
+    });
     reportFigure({ figure: `catalog page of 50 from ${ROWS + 500} mounts, HTTP p95`, value: p95, unit: 'ms', bare: percentile(bare, 95) });
   } finally {
     await server.stop();

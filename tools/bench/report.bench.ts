@@ -33,9 +33,13 @@ function barePdf(pages: number, linesPerPage: number): Promise<Buffer> {
   const done = new Promise<Buffer>((resolve) => doc.on('end', () => resolve(Buffer.concat(chunks))));
   for (let p = 0; p < pages; p++) {
     if (p > 0) doc.addPage();
-    doc.font('bold').fontSize(14).text(`Page ${p + 1}`);
+    doc
+      .font('bold')
+      .fontSize(14)
+      .text(`Page ${p + 1}`);
     doc.font('body').fontSize(9);
-    for (let l = 0; l < linesPerPage; l++) doc.text(`Point P${l} load 2452.4 N, utilisation 0.82, deflection 24.5 mm, T 0.081`, 50, 80 + l * 12);
+    for (let l = 0; l < linesPerPage; l++)
+      doc.text(`Point P${l} load 2452.4 N, utilisation 0.82, deflection 24.5 mm, T 0.081`, 50, 80 + l * 12);
   }
   doc.end();
   return done;
@@ -44,7 +48,10 @@ function barePdf(pages: number, linesPerPage: number): Promise<Buffer> {
 const server = await startServer('buyer@tacet.test');
 try {
   const auth = { Authorization: `Bearer ${server.token}` };
-  const queue = (await (await fetch(`${server.url}/api/purchasing/designs`, { headers: auth })).json()) as { designId: number; name: string }[];
+  const queue = (await (await fetch(`${server.url}/api/purchasing/designs`, { headers: auth })).json()) as {
+    designId: number;
+    name: string;
+  }[];
   if (!Array.isArray(queue) || queue.length === 0) throw new Error('the demo has no released design');
   const design = queue[0];
   const times: number[] = [];
@@ -68,7 +75,12 @@ try {
   console.log(`report of "${design.name}": ${pages} pages, ${(bytes / 1024).toFixed(0)} KiB; ${REQUESTS} requests one at a time`);
   console.log(`Tacet GET /api/designs/:id/report.pdf (HTTP): median ${ms(median(times))}, p95 ${ms(percentile(times, 95))}`);
   console.log(`bare pdfkit, ${pages} pages of text, same fonts: median ${ms(median(bare))}, p95 ${ms(percentile(bare, 95))}`);
-  reportFigure({ figure: `calculation report PDF (${pages} pages), HTTP p95`, value: percentile(times, 95), unit: 'ms', bare: percentile(bare, 95) });
+  reportFigure({
+    figure: `calculation report PDF (${pages} pages), HTTP p95`,
+    value: percentile(times, 95),
+    unit: 'ms',
+    bare: percentile(bare, 95),
+  });
 } finally {
   await server.stop();
 }

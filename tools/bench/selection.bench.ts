@@ -52,8 +52,7 @@ interface Scenario {
   components: { name: string; massKg: number; cg: { x: number; y: number; z: number }; box?: { lx: number; ly: number; lz: number } }[];
   mountPoints: { label: string; x: number; y: number; z: number }[];
 }
-const row = (xs: number[], ys: number[]) =>
-  xs.flatMap((x, i) => ys.map((y, j) => ({ label: `P${i * ys.length + j + 1}`, x, y, z: 0 })));
+const row = (xs: number[], ys: number[]) => xs.flatMap((x, i) => ys.map((y, j) => ({ label: `P${i * ys.length + j + 1}`, x, y, z: 0 })));
 const SCENARIOS: Scenario[] = [
   {
     name: '4 points',
@@ -204,7 +203,7 @@ function bareSelection(db: Database.Database, scenario: Scenario): number {
     if (worst > tTarget) ok = false;
     const meanDefl = mass.weightN / (n * k);
     score[r] =
-      0.4 * Math.min(1, Math.max(0, -20 * Math.log10(worst) / dbTarget)) +
+      0.4 * Math.min(1, Math.max(0, (-20 * Math.log10(worst)) / dbTarget)) +
       0.2 * (1 - Math.min(1, Math.abs(sumU / n - 0.8) / 0.3)) +
       0.15 * (1 - Math.min(1, spread / k / meanDefl)) +
       (row[C.unitPrice] === null ? 0 : 0.15) +
@@ -214,7 +213,7 @@ function bareSelection(db: Database.Database, scenario: Scenario): number {
   // series: group by supplier + series, per-point sizes for a level skid
   const groups = new Map<string, number[]>();
   for (let r = 0; r < R; r++) {
-    const s = (rows[r][C.series] as string | null);
+    const s = rows[r][C.series] as string | null;
     if (!s) continue;
     const key = `${rows[r][C.supplierId]}:${s}`;
     const list = groups.get(key);
@@ -236,7 +235,19 @@ function bareSelection(db: Database.Database, scenario: Scenario): number {
     if (list.length < 2) continue;
     let target = 0;
     for (let s = from; s < p; s++) target += rated[s] / kv[s];
-    selectSizesForLevellingInto(layout, mass.weightN, mass.cg.x, mass.cg.y, loads, rated, kv, from, p, (0.8 * target) / (p - from), workspace);
+    selectSizesForLevellingInto(
+      layout,
+      mass.weightN,
+      mass.cg.x,
+      mass.cg.y,
+      loads,
+      rated,
+      kv,
+      from,
+      p,
+      (0.8 * target) / (p - from),
+      workspace,
+    );
     levelled += workspace.levelErrorM;
   }
   // the rigid-body modes of the 2×limit best (as the server does)
@@ -299,14 +310,22 @@ async function main(): Promise<void> {
     const csv = join(dir, 'bench-mounts.csv');
     const t0 = performance.now();
     const written = await writeDemoCatalog(csv, 7, ROWS);
-    console.log(`catalog: ${written} invented mounts (${(statSync(csv).size / 1e6).toFixed(1)} MB) in ${((performance.now() - t0) / 1000).toFixed(1)} s`);
+    console.log(
+      `catalog: ${written} invented mounts (${(statSync(csv).size / 1e6).toFixed(1)} MB) in ${((performance.now() - t0) / 1000).toFixed(1)} s`,
+    );
 
     const port = await freePort();
     const base = `http://127.0.0.1:${port}`;
     // e.g. TACET_BENCH_SERVER_NODE_ARGS='--cpu-prof --cpu-prof-dir=/tmp/prof' to profile the server
     const nodeArgs = (process.env.TACET_BENCH_SERVER_NODE_ARGS ?? '').split(' ').filter(Boolean);
     child = spawn(process.execPath, [...nodeArgs, SERVER], {
-      env: { ...process.env, PORT: String(port), TACET_DEMO: 'true', TACET_DATA_DIR: join(dir, 'data'), TACET_WEB_DIST: join(dir, 'no-web') },
+      env: {
+        ...process.env,
+        PORT: String(port),
+        TACET_DEMO: 'true',
+        TACET_DATA_DIR: join(dir, 'data'),
+        TACET_WEB_DIST: join(dir, 'no-web'),
+      },
       stdio: ['ignore', 'ignore', 'inherit'],
     });
     await waitForHealth(base, child);
@@ -328,7 +347,13 @@ async function main(): Promise<void> {
 
     const engineer = await login(base, 'engineer@tacet.test');
     const bodies = SCENARIOS.map((s) =>
-      JSON.stringify({ components: s.components, mountPoints: s.mountPoints, disturbingFrequenciesHz: FREQUENCIES, criteria: CRITERIA, limit: LIMIT }),
+      JSON.stringify({
+        components: s.components,
+        mountPoints: s.mountPoints,
+        disturbingFrequenciesHz: FREQUENCIES,
+        criteria: CRITERIA,
+        limit: LIMIT,
+      }),
     );
     const http: number[][] = SCENARIOS.map(() => []);
     const server: number[][] = SCENARIOS.map(() => []);
@@ -379,7 +404,14 @@ async function main(): Promise<void> {
     console.log(
       `${'all'.padEnd(10)} ${''.padStart(10)} ${fmt(percentile(all.http, 50))}   ${fmt(p95)}   ${fmt(percentile(all.server, 50))}     ${fmt(percentile(all.server, 95))}    ${fmt(percentile(all.bare, 50))}   ${fmt(percentile(all.bare, 95))}   ${ratio.toFixed(2).padStart(6)}×`,
     );
-    reportFigure({ figure: `selection over ${ROWS} mounts, 4-8 points, HTTP p95`, value: p95, unit: 'ms', target: 100, bare: percentile(all.bare, 95), ratioTarget: 2 });
+    reportFigure({
+      figure: `selection over ${ROWS} mounts, 4-8 points, HTTP p95`,
+      value: p95,
+      unit: 'ms',
+      target: 100,
+      bare: percentile(all.bare, 95),
+      ratioTarget: 2,
+    });
     console.log(
       `\ntarget p95 < 100 ms through HTTP: ${p95 < 100 ? 'met' : 'NOT met'} (${p95.toFixed(1)} ms); within 2× of the bare loop: ${ratio <= 2 ? 'met' : 'NOT met'} (${ratio.toFixed(2)}×)` +
         (sink === -1 ? '' : ''),

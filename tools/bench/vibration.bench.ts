@@ -56,7 +56,7 @@ function time(fn: () => void, runs: number, warmup: number): number {
 
 // ---- candidate data (invented), allocated once -------------------------------------------
 let seed = 12345;
-const rnd = () => ((seed = (seed * 1103515245 + 12345) % 2147483648) / 2147483648);
+const rnd = () => (seed = (seed * 1103515245 + 12345) % 2147483648) / 2147483648;
 const stiffness = new Float64Array(CANDIDATES * N);
 const dynRatio = new Float64Array(CANDIDATES);
 const damping = new Float64Array(CANDIDATES);
@@ -160,7 +160,9 @@ function modesBare(): number[] {
       [0, 1, 0, -rz, 0, rx],
       [0, 0, 1, ry, -rx, 0],
     ];
-    for (let a = 0; a < 6; a++) for (let b = 0; b < 6; b++) K.set(a, b, K.get(a, b) + T[0][a] * kd[0] * T[0][b] + T[1][a] * kd[1] * T[1][b] + T[2][a] * kd[2] * T[2][b]);
+    for (let a = 0; a < 6; a++)
+      for (let b = 0; b < 6; b++)
+        K.set(a, b, K.get(a, b) + T[0][a] * kd[0] * T[0][b] + T[1][a] * kd[1] * T[1][b] + T[2][a] * kd[2] * T[2][b]);
   }
   const L = new CholeskyDecomposition(M).lowerTriangularMatrix;
   const Li = inverse(L);
@@ -184,8 +186,22 @@ const modesDiff = Math.max(...libFreqs.map((f, i) => Math.abs(f - bareFreqs[i]))
 const selLib = time(selectionLibrary, 15, 5);
 const selBare = time(selectionBare, 15, 5);
 const SOLVES = 2000;
-const modLib = time(() => { for (let i = 0; i < SOLVES; i++) modesLibrary(); }, 7, 2) / SOLVES;
-const modBare = time(() => { for (let i = 0; i < SOLVES; i++) modesBare(); }, 7, 2) / SOLVES;
+const modLib =
+  time(
+    () => {
+      for (let i = 0; i < SOLVES; i++) modesLibrary();
+    },
+    7,
+    2,
+  ) / SOLVES;
+const modBare =
+  time(
+    () => {
+      for (let i = 0; i < SOLVES; i++) modesBare();
+    },
+    7,
+    2,
+  ) / SOLVES;
 
 const rows = [
   ['selection kernel: loads + fn + T, 100,000 × 6 points × 3 freqs', selLib, selBare, 20],
@@ -196,8 +212,12 @@ const num = (v: number) => (v < 1 ? v.toFixed(4) : v.toFixed(2)).padStart(10);
 console.log(`@tacet/vibration benchmark — Node ${process.version}, medians`);
 console.log(`${pad('case', 66)}${'library ms'.padStart(10)}${'bare ms'.padStart(10)}${'ratio'.padStart(8)}${'target ms'.padStart(11)}  ok`);
 for (const [name, lib, bare, target] of rows) {
-  console.log(`${pad(name, 66)}${num(lib)}${num(bare)}${(lib / bare).toFixed(2).padStart(8)}${String(target).padStart(11)}  ${lib < target ? 'yes' : 'NO'}`);
+  console.log(
+    `${pad(name, 66)}${num(lib)}${num(bare)}${(lib / bare).toFixed(2).padStart(8)}${String(target).padStart(11)}  ${lib < target ? 'yes' : 'NO'}`,
+  );
 }
-console.log(`same figures: selection max |Δ| = ${maxDiff.toExponential(1)} (loads/W, T); modes max |Δf| = ${modesDiff.toExponential(1)} Hz`);
+console.log(
+  `same figures: selection max |Δ| = ${maxDiff.toExponential(1)} (loads/W, T); modes max |Δf| = ${modesDiff.toExponential(1)} Hz`,
+);
 if (!Number.isFinite(sinkLib + sinkBare)) console.log('unexpected non-finite result');
 for (const [name, lib, bare, target] of rows) reportFigure({ figure: name, value: lib, unit: 'ms', target, bare });

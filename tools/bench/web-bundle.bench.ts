@@ -31,7 +31,15 @@ const server = await startServer();
 const browser = await chromium.launch({
   executablePath: process.env.TACET_CHROMIUM ?? '/usr/bin/chromium',
   headless: true,
-  args: ['--no-sandbox', '--disable-gpu', '--disable-quic', '--no-first-run', '--disable-background-networking', '--disable-component-update', '--disable-sync'],
+  args: [
+    '--no-sandbox',
+    '--disable-gpu',
+    '--disable-quic',
+    '--no-first-run',
+    '--disable-background-networking',
+    '--disable-component-update',
+    '--disable-sync',
+  ],
 });
 try {
   const page = await (await browser.newContext({ baseURL: server.baseURL })).newPage();
@@ -46,11 +54,20 @@ try {
   await page.waitForLoadState('networkidle');
   const home = await scripts(page);
   const kb = (bytes: number) => bytes / 1000;
-  console.log(`sign-in screen: ${signIn.count} scripts, ${kb(signIn.encoded).toFixed(1)} kB gzipped (${kb(signIn.decoded).toFixed(0)} kB decoded)`);
-  console.log(`engineer's first page after sign-in (cumulative): ${home.count} scripts, ${kb(home.encoded).toFixed(1)} kB gzipped (${kb(home.decoded).toFixed(0)} kB decoded)`);
+  console.log(
+    `sign-in screen: ${signIn.count} scripts, ${kb(signIn.encoded).toFixed(1)} kB gzipped (${kb(signIn.decoded).toFixed(0)} kB decoded)`,
+  );
+  console.log(
+    `engineer's first page after sign-in (cumulative): ${home.count} scripts, ${kb(home.encoded).toFixed(1)} kB gzipped (${kb(home.decoded).toFixed(0)} kB decoded)`,
+  );
   console.log(`target: under ${TARGET_KB} kB gzipped`);
   reportFigure({ figure: 'first screen JavaScript (sign-in), gzipped', value: kb(signIn.encoded), unit: 'kB', target: TARGET_KB });
-  reportFigure({ figure: 'JavaScript after sign-in, engineer home (cumulative), gzipped', value: kb(home.encoded), unit: 'kB', target: TARGET_KB });
+  reportFigure({
+    figure: 'JavaScript after sign-in, engineer home (cumulative), gzipped',
+    value: kb(home.encoded),
+    unit: 'kB',
+    target: TARGET_KB,
+  });
 } finally {
   await browser.close();
   await server.stop();

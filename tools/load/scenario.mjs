@@ -190,7 +190,8 @@ export async function runVirtualClient(ctx, own) {
         own.acknowledged = { version: save.body.version, name, tag };
       } else if (save?.status === 409) {
         const fresh = await call('design read', 'GET', `/api/designs/${own.designId}`, { token, expect: [200] });
-        if (fresh?.status === 200) own.acknowledged = { version: fresh.body.version, name: fresh.body.name, tag: tagOfInput(fresh.body.input) };
+        if (fresh?.status === 200)
+          own.acknowledged = { version: fresh.body.version, name: fresh.body.name, tag: tagOfInput(fresh.body.input) };
       }
     } else {
       await call('design read', 'GET', `/api/designs/${own.designId}`, { token, expect: [200] });

@@ -57,7 +57,13 @@ export class Recorder {
     const rows = [...this.kinds].sort(([a], [b]) => a.localeCompare(b)).map(([kind, e]) => row(kind, e.latencies, e.statuses));
     const all = new Map();
     for (const { statuses } of this.kinds.values()) for (const [s, n] of statuses) all.set(s, (all.get(s) ?? 0) + n);
-    rows.push(row('all', [...this.kinds.values()].flatMap((e) => e.latencies), all));
+    rows.push(
+      row(
+        'all',
+        [...this.kinds.values()].flatMap((e) => e.latencies),
+        all,
+      ),
+    );
     return rows;
   }
 }

@@ -65,9 +65,7 @@ export function configureApp(app: NestExpressApplication): NestExpressApplicatio
   // Behind load balancers: the client address (sign-in limit) from their X-Forwarded-For.
   if (trustProxyHops > 0) app.set('trust proxy', trustProxyHops);
   if (!hasWebClient(webDist)) {
-    new Logger('WebClient').log(
-      `No built web client in ${webDist}; serving the API only (build it with: npm run build -w @tacet/web)`,
-    );
+    new Logger('WebClient').log(`No built web client in ${webDist}; serving the API only (build it with: npm run build -w @tacet/web)`);
   }
   return app;
 }

@@ -20,7 +20,11 @@ describe('application (e2e)', () => {
   });
 
   it('answers unknown /api routes with a JSON 404', async () => {
-    for (const [method, path] of [['get', '/api/nope'], ['post', '/api/users/1/nope'], ['get', '/api']] as const) {
+    for (const [method, path] of [
+      ['get', '/api/nope'],
+      ['post', '/api/users/1/nope'],
+      ['get', '/api'],
+    ] as const) {
       const response = await t.http()[method](path);
       expect(response.status).toBe(404);
       expect(response.type).toBe('application/json');
@@ -68,13 +72,7 @@ describe('application (e2e)', () => {
     );
     // Named enums: one `Role` schema that every DTO refers to (typed once in the web).
     expect(document.components.schemas.UserDto.properties.role).toEqual({ allOf: [{ $ref: '#/components/schemas/Role' }] });
-    expect(document.components.schemas.Role.enum).toEqual([
-      'admin',
-      'catalog_manager',
-      'engineer',
-      'purchaser',
-      'viewer',
-    ]);
+    expect(document.components.schemas.Role.enum).toEqual(['admin', 'catalog_manager', 'engineer', 'purchaser', 'viewer']);
     expect(document.paths['/api/auth/login'].post.responses['200'].content['application/json'].schema).toEqual({
       $ref: '#/components/schemas/LoginResponseDto',
     });

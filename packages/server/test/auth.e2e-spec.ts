@@ -60,18 +60,17 @@ describe('auth (e2e)', () => {
       ['an over-long password', { email: 'a@tacet.test', password: 'p'.repeat(201) }, ['password']],
       ['an unknown field', { email: 'a@tacet.test', password: 'x', role: 'admin' }, ['role']],
     ])('answers 400 with errors[].field for %s', async (_case, body, fields) => {
-      const response = await t.http().post('/api/auth/login').send(body as object);
+      const response = await t
+        .http()
+        .post('/api/auth/login')
+        .send(body as object);
       expect(response.status).toBe(400);
       expect(response.body).toMatchObject({ statusCode: 400, message: 'Validation failed' });
       expect([...new Set(response.body.errors.map((e: { field: string }) => e.field))].sort()).toEqual(fields);
     });
 
     it('answers 400 "Request body is not valid JSON" for a malformed body', async () => {
-      const response = await t
-        .http()
-        .post('/api/auth/login')
-        .set('Content-Type', 'application/json')
-        .send('{"email": "admin@tacet.test",');
+      const response = await t.http().post('/api/auth/login').set('Content-Type', 'application/json').send('{"email": "admin@tacet.test",');
       expect(response.status).toBe(400);
       expect(response.body).toEqual({ statusCode: 400, message: 'Request body is not valid JSON' });
     });

@@ -62,7 +62,15 @@ describe('catalog import (e2e)', () => {
     it('dry run previews every row and writes nothing', async () => {
       const before = await snapshot();
       const response = await uploadExample('good-si.csv', 'dryRun=true').expect(200);
-      expect(response.body).toMatchObject({ accepted: 6, rejected: 0, created: 6, updated: 0, errors: [], errorsTruncated: false, importId: null });
+      expect(response.body).toMatchObject({
+        accepted: 6,
+        rejected: 0,
+        created: 6,
+        updated: 0,
+        errors: [],
+        errorsTruncated: false,
+        importId: null,
+      });
       expect(response.body.preview).toHaveLength(6);
       expect(response.body.preview[0]).toEqual({
         row: 2,
@@ -86,7 +94,12 @@ describe('catalog import (e2e)', () => {
         currency: 'USD',
         leadTimeDays: 21,
       });
-      expect(response.body.preview[3]).toMatchObject({ partNumber: 'OX-E1-00800', dampingModel: 'hysteretic', lossFactor: 0.15, dampingRatio: null });
+      expect(response.body.preview[3]).toMatchObject({
+        partNumber: 'OX-E1-00800',
+        dampingModel: 'hysteretic',
+        lossFactor: 0.15,
+        dampingRatio: null,
+      });
       expect(await snapshot()).toEqual(before);
     });
 
@@ -124,8 +137,10 @@ describe('catalog import (e2e)', () => {
     });
 
     it('updates the mounts with the same supplier and part number (upsert), supplier names matched regardless of case', async () => {
-      const changed = readFileSync(example('good-si.csv'), 'utf8')
-        .replace('Wrenfield Example Mounts,WX-S1-01200,S1,open_spring,1200,40,36,1,0.008,,45,-40,120,110,42.5,USD,21', 'wrenfield  EXAMPLE mounts,WX-S1-01200,S1,open_spring,1250,41,36,1,0.009,,45,-40,120,110,44,USD,25');
+      const changed = readFileSync(example('good-si.csv'), 'utf8').replace(
+        'Wrenfield Example Mounts,WX-S1-01200,S1,open_spring,1200,40,36,1,0.008,,45,-40,120,110,42.5,USD,21',
+        'wrenfield  EXAMPLE mounts,WX-S1-01200,S1,open_spring,1250,41,36,1,0.009,,45,-40,120,110,44,USD,25',
+      );
       const dry = await upload(changed, { query: 'dryRun=true' }).expect(200);
       expect(dry.body).toMatchObject({ created: 0, updated: 6 });
       expect(dry.body.preview.every((row: { action: string }) => row.action === 'update')).toBe(true);
@@ -195,7 +210,10 @@ describe('catalog import (e2e)', () => {
     it('stores formula payloads as plain text', async () => {
       const response = await uploadExample('formula-injection.csv').expect(200);
       expect(response.body).toMatchObject({ accepted: 3, created: 3 });
-      expect(await findMount("=cmd|' /C calc'!A0")).toMatchObject({ series: '+SUM(A1:A9)', supplier: { name: 'Wrenfield Example Mounts' } });
+      expect(await findMount("=cmd|' /C calc'!A0")).toMatchObject({
+        series: '+SUM(A1:A9)',
+        supplier: { name: 'Wrenfield Example Mounts' },
+      });
       expect(await findMount('@HYPERLINK(0)')).toMatchObject({ series: '-S9' });
       expect(await findMount('WF-S1-02000')).toMatchObject({ supplier: { name: '=2+5' } });
     });
@@ -261,7 +279,13 @@ describe('catalog import (e2e)', () => {
       expect(await findMount('WB-S1-01300')).toBeUndefined();
 
       const history = (await t.http().get('/api/mounts/imports').set(auth())).body;
-      expect(history[0]).toMatchObject({ id: response.body.importId, mode: 'skip_invalid', accepted: 3, rejected: 8, hasErrorReport: true });
+      expect(history[0]).toMatchObject({
+        id: response.body.importId,
+        mode: 'skip_invalid',
+        accepted: 3,
+        rejected: 8,
+        hasErrorReport: true,
+      });
 
       const report = await t.http().get(`/api/mounts/imports/${response.body.importId}/errors.csv`).set(auth()).expect(200);
       expect(report.headers['content-type']).toBe('text/csv; charset=utf-8');
@@ -291,7 +315,13 @@ describe('catalog import (e2e)', () => {
   describe('files that are not a catalog CSV (422, nothing written)', () => {
     it.each<[string, string | Buffer, string, string, unknown[]]>([
       ['a spreadsheet file name', 'supplier\n', 'prices.xlsx', 'The file must be a CSV file (.csv or .txt); prices.xlsx is not', []],
-      ['binary junk', Buffer.from(Array.from({ length: 8192 }, (_, i) => (i * 131 + 7) % 256)), 'junk.csv', 'The file is not a UTF-8 text CSV', []],
+      [
+        'binary junk',
+        Buffer.from(Array.from({ length: 8192 }, (_, i) => (i * 131 + 7) % 256)),
+        'junk.csv',
+        'The file is not a UTF-8 text CSV',
+        [],
+      ],
       ['UTF-16 text', Buffer.from('\ufeffsupplier,part_number\n', 'utf16le'), 'utf16.csv', 'The file is not a UTF-8 text CSV', []],
       ['an empty file', '', 'empty.csv', 'The file is empty', []],
       ['blank lines only', '\n \n\n', 'blank.txt', 'The file is empty', []],
@@ -412,11 +442,29 @@ describe('demo catalog seeding (e2e)', () => {
       const first = await createTestApp({ dataDir });
       const admin = await first.loginAs('admin');
       const count = async (t: TestApp) =>
-        (await t.http().get('/api/mounts').query({ pageSize: 1, includeRetired: true }).set({ Authorization: `Bearer ${admin}` })).body.total;
+        (
+          await t
+            .http()
+            .get('/api/mounts')
+            .query({ pageSize: 1, includeRetired: true })
+            .set({ Authorization: `Bearer ${admin}` })
+        ).body.total;
       expect(await count(first)).toBe(500);
-      const history = (await first.http().get('/api/mounts/imports').set({ Authorization: `Bearer ${admin}` })).body;
-      expect(history).toEqual([expect.objectContaining({ fileName: 'demo-mounts.csv', user: expect.objectContaining({ name: 'Ada Admin' }), created: 500 })]);
-      const suppliers = (await first.http().get('/api/suppliers').set({ Authorization: `Bearer ${admin}` })).body;
+      const history = (
+        await first
+          .http()
+          .get('/api/mounts/imports')
+          .set({ Authorization: `Bearer ${admin}` })
+      ).body;
+      expect(history).toEqual([
+        expect.objectContaining({ fileName: 'demo-mounts.csv', user: expect.objectContaining({ name: 'Ada Admin' }), created: 500 }),
+      ]);
+      const suppliers = (
+        await first
+          .http()
+          .get('/api/suppliers')
+          .set({ Authorization: `Bearer ${admin}` })
+      ).body;
       expect(suppliers).toHaveLength(5);
       expect(suppliers.find((s: { name: string }) => s.name === 'Quillmere Isolation')).toMatchObject({
         contactEmail: 'quotes@quillmere.example',
@@ -428,8 +476,22 @@ describe('demo catalog seeding (e2e)', () => {
       const second = await createTestApp({ dataDir });
       try {
         expect(await count(second)).toBe(500);
-        expect((await second.http().get('/api/mounts/imports').set({ Authorization: `Bearer ${admin}` })).body).toHaveLength(1);
-        expect((await second.http().get('/api/suppliers').set({ Authorization: `Bearer ${admin}` })).body).toHaveLength(5);
+        expect(
+          (
+            await second
+              .http()
+              .get('/api/mounts/imports')
+              .set({ Authorization: `Bearer ${admin}` })
+          ).body,
+        ).toHaveLength(1);
+        expect(
+          (
+            await second
+              .http()
+              .get('/api/suppliers')
+              .set({ Authorization: `Bearer ${admin}` })
+          ).body,
+        ).toHaveLength(5);
       } finally {
         await second.close();
       }
@@ -442,15 +504,25 @@ describe('demo catalog seeding (e2e)', () => {
     const dir = makeTempDir();
     mkdirSync(dir, { recursive: true });
     writeFileSync(join(dir, 'demo-suppliers.csv'), 'name,contact_email,phone\nOther Example Supplier,desk@other.example,+1 555 0199\n');
-    writeFileSync(join(dir, 'demo-mounts.csv'), csvOf([mountRow({ supplier: 'Other Example Supplier' }), mountRow({ supplier: 'Other Example Supplier' })]));
+    writeFileSync(
+      join(dir, 'demo-mounts.csv'),
+      csvOf([mountRow({ supplier: 'Other Example Supplier' }), mountRow({ supplier: 'Other Example Supplier' })]),
+    );
     const previous = process.env.TACET_DEMO_CATALOG_DIR;
     process.env.TACET_DEMO_CATALOG_DIR = dir;
     let t: TestApp | undefined;
     try {
       t = await createTestApp();
       const token = await t.loginAs('viewer');
-      const suppliers = (await t.http().get('/api/suppliers').set({ Authorization: `Bearer ${token}` })).body;
-      expect(suppliers).toEqual([expect.objectContaining({ name: 'Other Example Supplier', contactEmail: 'desk@other.example', mountCount: 2 })]);
+      const suppliers = (
+        await t
+          .http()
+          .get('/api/suppliers')
+          .set({ Authorization: `Bearer ${token}` })
+      ).body;
+      expect(suppliers).toEqual([
+        expect.objectContaining({ name: 'Other Example Supplier', contactEmail: 'desk@other.example', mountCount: 2 }),
+      ]);
     } finally {
       if (previous === undefined) delete process.env.TACET_DEMO_CATALOG_DIR;
       else process.env.TACET_DEMO_CATALOG_DIR = previous;

@@ -23,9 +23,28 @@ interface MountJson {
 }
 
 const MOUNT_KEYS = [
-  'id', 'supplier', 'partNumber', 'series', 'mountType', 'ratedLoadN', 'verticalStiffnessNPerM', 'horizontalStiffnessNPerM',
-  'dynamicStiffnessRatio', 'dampingModel', 'dampingRatio', 'lossFactor', 'maxDeflectionMm', 'tempMinC', 'tempMaxC', 'heightMm',
-  'unitPrice', 'currency', 'leadTimeDays', 'active', 'createdAt', 'updatedAt',
+  'id',
+  'supplier',
+  'partNumber',
+  'series',
+  'mountType',
+  'ratedLoadN',
+  'verticalStiffnessNPerM',
+  'horizontalStiffnessNPerM',
+  'dynamicStiffnessRatio',
+  'dampingModel',
+  'dampingRatio',
+  'lossFactor',
+  'maxDeflectionMm',
+  'tempMinC',
+  'tempMaxC',
+  'heightMm',
+  'unitPrice',
+  'currency',
+  'leadTimeDays',
+  'active',
+  'createdAt',
+  'updatedAt',
 ].sort();
 
 describe('catalog (e2e)', () => {
@@ -101,14 +120,25 @@ describe('catalog (e2e)', () => {
       expect(loads).toEqual([...loads].sort((a, b) => b - a));
 
       const someSupplier = springs.body.items[0].supplier;
-      const bySupplier = await search({ supplierId: someSupplier.id, type: 'open_spring', q: 's1', minLoadN: 1000, sort: 'unitPrice' }).expect(200);
+      const bySupplier = await search({
+        supplierId: someSupplier.id,
+        type: 'open_spring',
+        q: 's1',
+        minLoadN: 1000,
+        sort: 'unitPrice',
+      }).expect(200);
       expect(bySupplier.body.items.every((m: MountJson) => m.supplier.id === someSupplier.id && m.mountType === 'open_spring')).toBe(true);
       const prices = bySupplier.body.items.map((m: MountJson) => m.unitPrice);
       expect(prices).toEqual([...prices].sort((a, b) => a - b));
     });
 
     it('sorts empty values last in both directions', async () => {
-      const created = await t.http().post('/api/mounts').set(as(manager)).send(mountBody(supplierId, { unitPrice: null })).expect(201);
+      const created = await t
+        .http()
+        .post('/api/mounts')
+        .set(as(manager))
+        .send(mountBody(supplierId, { unitPrice: null }))
+        .expect(201);
       for (const sort of ['unitPrice', '-unitPrice']) {
         const page = await search({ supplierId, sort, pageSize: 500 }).expect(200);
         expect(page.body.items.at(-1).id).toBe(created.body.id);
@@ -161,8 +191,17 @@ describe('catalog (e2e)', () => {
     });
 
     it('refuses a second mount with the same supplier and part number (409)', async () => {
-      await t.http().post('/api/mounts').set(as(manager)).send(mountBody(supplierId, { partNumber: 'AX-DUP' })).expect(201);
-      const response = await t.http().post('/api/mounts').set(as(manager)).send(mountBody(supplierId, { partNumber: 'AX-DUP' }));
+      await t
+        .http()
+        .post('/api/mounts')
+        .set(as(manager))
+        .send(mountBody(supplierId, { partNumber: 'AX-DUP' }))
+        .expect(201);
+      const response = await t
+        .http()
+        .post('/api/mounts')
+        .set(as(manager))
+        .send(mountBody(supplierId, { partNumber: 'AX-DUP' }));
       expect(response.status).toBe(409);
       expect(response.body).toEqual({ statusCode: 409, message: 'This supplier already has a mount with part number AX-DUP' });
     });
@@ -191,14 +230,26 @@ describe('catalog (e2e)', () => {
     });
 
     it('PATCH changes fields, clears optional ones with null, and switches the damping model', async () => {
-      const { body: mount } = await t.http().post('/api/mounts').set(as(manager)).send(mountBody(supplierId, { unitPrice: 10 })).expect(201);
+      const { body: mount } = await t
+        .http()
+        .post('/api/mounts')
+        .set(as(manager))
+        .send(mountBody(supplierId, { unitPrice: 10 }))
+        .expect(201);
       const patched = await t
         .http()
         .patch(`/api/mounts/${mount.id}`)
         .set(as(manager))
         .send({ lossFactor: 0.18, unitPrice: null, series: null, ratedLoadN: 2100 })
         .expect(200);
-      expect(patched.body).toMatchObject({ dampingModel: 'hysteretic', lossFactor: 0.18, dampingRatio: null, unitPrice: null, series: null, ratedLoadN: 2100 });
+      expect(patched.body).toMatchObject({
+        dampingModel: 'hysteretic',
+        lossFactor: 0.18,
+        dampingRatio: null,
+        unitPrice: null,
+        series: null,
+        ratedLoadN: 2100,
+      });
       expect(Date.parse(patched.body.updatedAt)).toBeGreaterThanOrEqual(Date.parse(mount.updatedAt));
 
       for (const [body, field] of [
@@ -212,13 +263,23 @@ describe('catalog (e2e)', () => {
         expect(bad.status).toBe(400);
         expect(bad.body.errors.map((e: { field: string }) => e.field)).toContain(field);
       }
-      await t.http().post('/api/mounts').set(as(manager)).send(mountBody(supplierId, { partNumber: 'AX-TAKEN' })).expect(201);
+      await t
+        .http()
+        .post('/api/mounts')
+        .set(as(manager))
+        .send(mountBody(supplierId, { partNumber: 'AX-TAKEN' }))
+        .expect(201);
       const clash = await t.http().patch(`/api/mounts/${mount.id}`).set(as(manager)).send({ partNumber: 'AX-TAKEN' });
       expect(clash.status).toBe(409);
     });
 
     it('DELETE retires: hidden from searches unless asked for, restored with PATCH active:true', async () => {
-      const { body: mount } = await t.http().post('/api/mounts').set(as(manager)).send(mountBody(supplierId, { partNumber: 'AX-RETIRE' })).expect(201);
+      const { body: mount } = await t
+        .http()
+        .post('/api/mounts')
+        .set(as(manager))
+        .send(mountBody(supplierId, { partNumber: 'AX-RETIRE' }))
+        .expect(201);
       const retired = await t.http().delete(`/api/mounts/${mount.id}`).set(as(manager)).expect(200);
       expect(retired.body).toMatchObject({ id: mount.id, active: false });
       expect((await search({ q: 'AX-RETIRE' })).body.total).toBe(0);
@@ -259,9 +320,16 @@ describe('catalog (e2e)', () => {
     expect(Object.keys(schemas.MountDto.properties).sort()).toEqual(MOUNT_KEYS);
     expect(schemas.MountDto.properties.mountType).toMatchObject({ allOf: [{ $ref: '#/components/schemas/MountType' }] });
     expect(schemas.MountType.enum).toHaveLength(7);
-    expect(Object.keys(schemas.ImportResultDto.properties).sort()).toEqual(
-      ['accepted', 'created', 'errors', 'errorsTruncated', 'importId', 'preview', 'rejected', 'updated'],
-    );
+    expect(Object.keys(schemas.ImportResultDto.properties).sort()).toEqual([
+      'accepted',
+      'created',
+      'errors',
+      'errorsTruncated',
+      'importId',
+      'preview',
+      'rejected',
+      'updated',
+    ]);
     const importRoute = document.paths['/api/mounts/import'].post;
     expect(Object.keys(importRoute.requestBody.content)).toEqual(['multipart/form-data']);
     expect(importRoute.parameters.map((p: { name: string }) => p.name).sort()).toEqual(['dryRun', 'onInvalid']);
@@ -269,17 +337,28 @@ describe('catalog (e2e)', () => {
     const searchParams = document.paths['/api/mounts'].get.parameters.map((p: { name: string }) => p.name).sort();
     expect(searchParams).toEqual(['includeRetired', 'maxLoadN', 'minLoadN', 'page', 'pageSize', 'q', 'sort', 'supplierId', 'type']);
     expect(Object.keys(schemas.CreateMountDto.properties)).not.toContain('active');
-    expect(schemas.CreateMountDto.required.sort()).toEqual(['mountType', 'partNumber', 'ratedLoadN', 'supplierId', 'verticalStiffnessNPerM']);
+    expect(schemas.CreateMountDto.required.sort()).toEqual([
+      'mountType',
+      'partNumber',
+      'ratedLoadN',
+      'supplierId',
+      'verticalStiffnessNPerM',
+    ]);
     expect(schemas.UpdateMountDto.required).toBeUndefined();
   });
 
   describe('GET /api/mounts/export.csv', () => {
     const exportCsv = async () => {
-      const response = await t.http().get('/api/mounts/export.csv').set(as(viewer)).buffer(true).parse((res, done) => {
-        const chunks: Buffer[] = [];
-        res.on('data', (chunk: Buffer) => chunks.push(chunk));
-        res.on('end', () => done(null, Buffer.concat(chunks)));
-      });
+      const response = await t
+        .http()
+        .get('/api/mounts/export.csv')
+        .set(as(viewer))
+        .buffer(true)
+        .parse((res, done) => {
+          const chunks: Buffer[] = [];
+          res.on('data', (chunk: Buffer) => chunks.push(chunk));
+          res.on('end', () => done(null, Buffer.concat(chunks)));
+        });
       expect(response.status).toBe(200);
       return { response, bytes: response.body as Buffer };
     };
@@ -295,7 +374,25 @@ describe('catalog (e2e)', () => {
       const active = (await search({ pageSize: 1 })).body.total;
       expect(rows.length - 1).toBe(active);
       const demo = rows.find((row) => row[1] === 'QM-P1-00160');
-      expect(demo).toEqual(['Quillmere Isolation', 'QM-P1-00160', 'P1', 'elastomer_pad', '160', '52.07', '20.01', '1.98', '', '0.248', '4.9', '-30', '80', '12', '4.27', 'USD', '8']);
+      expect(demo).toEqual([
+        'Quillmere Isolation',
+        'QM-P1-00160',
+        'P1',
+        'elastomer_pad',
+        '160',
+        '52.07',
+        '20.01',
+        '1.98',
+        '',
+        '0.248',
+        '4.9',
+        '-30',
+        '80',
+        '12',
+        '4.27',
+        'USD',
+        '8',
+      ]);
     });
 
     it('guards text against spreadsheet formulas, never numbers, and the import reads it back as the same text', async () => {
@@ -315,11 +412,23 @@ describe('catalog (e2e)', () => {
       // Mounts from US columns and from the API hold values that N/mm text must carry exactly.
       await upload(readFileSync(example('good-us.csv'))).expect(200);
       await upload(readFileSync(example('crlf-bom.csv'))).expect(200);
-      await t.http().post('/api/mounts').set(as(manager)).send(mountBody(supplierId, { verticalStiffnessNPerM: 123_456.789_012_345_6, horizontalStiffnessNPerM: Math.PI * 1e4 })).expect(201);
+      await t
+        .http()
+        .post('/api/mounts')
+        .set(as(manager))
+        .send(mountBody(supplierId, { verticalStiffnessNPerM: 123_456.789_012_345_6, horizontalStiffnessNPerM: Math.PI * 1e4 }))
+        .expect(201);
       const figures = async () =>
-        (await t.app.get(DataSource).createQueryBuilder().select('*').from(Mount, 'm').where('m.active = :active', { active: true }).orderBy('m.id').getRawMany()).map(
-          ({ updatedAt: _updatedAt, ...rest }: Record<string, unknown>) => rest,
-        );
+        (
+          await t.app
+            .get(DataSource)
+            .createQueryBuilder()
+            .select('*')
+            .from(Mount, 'm')
+            .where('m.active = :active', { active: true })
+            .orderBy('m.id')
+            .getRawMany()
+        ).map(({ updatedAt: _updatedAt, ...rest }: Record<string, unknown>) => rest);
       const before = await figures();
       const { bytes } = await exportCsv();
       const rowCount = parse(bytes, { bom: true }).length - 1;
@@ -332,7 +441,12 @@ describe('catalog (e2e)', () => {
     });
 
     it('leaves out retired mounts and the mounts of retired suppliers', async () => {
-      const { body: supplier } = await t.http().post('/api/suppliers').set(as(manager)).send({ name: 'Retiring Example Supplier' }).expect(201);
+      const { body: supplier } = await t
+        .http()
+        .post('/api/suppliers')
+        .set(as(manager))
+        .send({ name: 'Retiring Example Supplier' })
+        .expect(201);
       await upload(csvOf([mountRow({ supplier: 'Retiring Example Supplier', part_number: 'RX-1' })])).expect(200);
       const has = async (part: string) => parse((await exportCsv()).bytes, { bom: true }).some((row: string[]) => row[1] === part);
       expect(await has('RX-1')).toBe(true);

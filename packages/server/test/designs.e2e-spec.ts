@@ -140,9 +140,7 @@ describe('projects and designs (e2e)', () => {
       await t.http().get(`/api/projects/${project.id}`).set(as('engineer')).expect(404);
       await get(design.id).expect(404);
 
-      const demo = (await t.http().get('/api/projects').set(as('admin'))).body.find(
-        (p: { name: string }) => p.name === DEMO_PROJECT.name,
-      );
+      const demo = (await t.http().get('/api/projects').set(as('admin'))).body.find((p: { name: string }) => p.name === DEMO_PROJECT.name);
       const refused = await t.http().delete(`/api/projects/${demo.id}`).set(as('admin'));
       expect(refused.status).toBe(409);
       expect(refused.body.message).toBe('A project with a released design cannot be deleted; archive it instead');
@@ -150,7 +148,12 @@ describe('projects and designs (e2e)', () => {
 
     it('answers 400 for a blank or over-long name', async () => {
       await t.http().post('/api/projects').set(as('engineer')).send({ name: '   ' }).expect(400);
-      await t.http().post('/api/projects').set(as('engineer')).send({ name: 'n'.repeat(201) }).expect(400);
+      await t
+        .http()
+        .post('/api/projects')
+        .set(as('engineer'))
+        .send({ name: 'n'.repeat(201) })
+        .expect(400);
     });
   });
 
@@ -291,10 +294,22 @@ describe('projects and designs (e2e)', () => {
     });
 
     it.each<[string, object, string]>([
-      ['speed and speed range together', { operating: { speedRpm: 1480, speedRangeRpm: { min: 900, max: 1480 }, orders: [1] } }, 'input.operating.speedRangeRpm'],
-      ['a speed range upside down', { operating: { speedRangeRpm: { min: 1480, max: 900 }, orders: [1] } }, 'input.operating.speedRangeRpm.max'],
+      [
+        'speed and speed range together',
+        { operating: { speedRpm: 1480, speedRangeRpm: { min: 900, max: 1480 }, orders: [1] } },
+        'input.operating.speedRangeRpm',
+      ],
+      [
+        'a speed range upside down',
+        { operating: { speedRangeRpm: { min: 1480, max: 900 }, orders: [1] } },
+        'input.operating.speedRangeRpm.max',
+      ],
       ['a zero order', { operating: { speedRpm: 1480, orders: [0] } }, 'input.operating.orders'],
-      ['a negative extra frequency', { operating: { speedRpm: 1480, orders: [1], extraFrequenciesHz: [-3] } }, 'input.operating.extraFrequenciesHz'],
+      [
+        'a negative extra frequency',
+        { operating: { speedRpm: 1480, orders: [1], extraFrequenciesHz: [-3] } },
+        'input.operating.extraFrequenciesHz',
+      ],
       ['a missing criteria block', { criteria: undefined }, 'input.criteria'],
     ])('PUT answers 400 naming the field for %s', async (_case, overrides, field) => {
       const design = await newDesign((await newProject()).id);
@@ -348,7 +363,10 @@ describe('projects and designs (e2e)', () => {
       await t.http().patch(`/api/mounts/${spring.id}`).set(as('catalog_manager')).send({ unitPrice: 42.5 }).expect(200);
 
       // a new input without a choice clears the stale choice; null clears it explicitly
-      const cleared = await put(design.id, { version: 2, input: input({ criteria: { minIsolationPct: 95, minUtilization: 0.5, maxUtilization: 1, supplierIds: [supplier.id] } }) });
+      const cleared = await put(design.id, {
+        version: 2,
+        input: input({ criteria: { minIsolationPct: 95, minUtilization: 0.5, maxUtilization: 1, supplierIds: [supplier.id] } }),
+      });
       expect(cleared.body).toMatchObject({ version: 3, chosen: null, bom: [] });
       await put(design.id, { version: 3, chosenMountId: spring.id }).expect(200);
       const explicit = await put(design.id, { version: 4, chosenMountId: null });
@@ -368,7 +386,13 @@ describe('projects and designs (e2e)', () => {
       expect(response.status).toBe(200);
       expect(response.body.chosen).toMatchObject({ kind: 'series', seriesId: `${supplier.id}:DTLV` });
       const parts = response.body.chosen.perPoint.map((p: { partNumber: string }) => p.partNumber);
-      const bom = response.body.bom as { partNumber: string; quantity: number; mountPoints: string[]; unitPrice: number; extendedPrice: number }[];
+      const bom = response.body.bom as {
+        partNumber: string;
+        quantity: number;
+        mountPoints: string[];
+        unitPrice: number;
+        extendedPrice: number;
+      }[];
       expect(bom.reduce((n, line) => n + line.quantity, 0)).toBe(4);
       for (const line of bom) {
         expect(line.mountPoints).toEqual(['A', 'B', 'C', 'D'].filter((_, i) => parts[i] === line.partNumber));

@@ -7,7 +7,15 @@ import { Mount } from '../src/catalog/mount.entity.js';
 import { SI_HEADER, csvOf, mountRow } from './factories/catalog.factory.js';
 import { createTestApp, type TestApp } from './utils/create-test-app.js';
 import { changedTables, dbFingerprint, type DbFingerprint } from './utils/db-fingerprint.js';
-import { EDGE_NUMBERS, FORMULA_PAYLOADS, FUZZ_RUNS, NUMERIC_TEXT, UNICODE_SAMPLES, fuzzParameters, fuzzTimeout } from './utils/hostile-input.js';
+import {
+  EDGE_NUMBERS,
+  FORMULA_PAYLOADS,
+  FUZZ_RUNS,
+  NUMERIC_TEXT,
+  UNICODE_SAMPLES,
+  fuzzParameters,
+  fuzzTimeout,
+} from './utils/hostile-input.js';
 
 /**
  * Hostile files against the catalog import (POST /api/mounts/import, catalog/FORMAT.md):
@@ -39,30 +47,75 @@ interface Column {
 
 const decimal = (min: number, max: number) => fc.double({ min, max, noNaN: true, noDefaultInfinity: true }).map((value) => String(value));
 const COLUMNS: Record<string, Column> = {
-  supplier: { kind: 'supplier', valid: fc.constantFrom('Fuzzwell Mounts', '  fuzzwell   MOUNTS ', '=Formula Springs', '@Home Isolation', 'Ωmega Mounts 🚀', 'Zero\u200bWidth Mounts', 'Ärger Lager') },
+  supplier: {
+    kind: 'supplier',
+    valid: fc.constantFrom(
+      'Fuzzwell Mounts',
+      '  fuzzwell   MOUNTS ',
+      '=Formula Springs',
+      '@Home Isolation',
+      'Ωmega Mounts 🚀',
+      'Zero\u200bWidth Mounts',
+      'Ärger Lager',
+    ),
+  },
   part_number: { kind: 'part', valid: fc.constantFrom('') },
   series: { kind: 'text', field: 'series', valid: fc.constantFrom('', 'S1', '-S2', '+S3', '@S4', "'=S5", 'שלום', '"Q" series', 'a,b') },
   mount_type: { kind: 'type', field: 'mountType', valid: fc.constantFrom(...MOUNT_TYPES, 'OPEN_SPRING', ' Housed_Spring ') },
   rated_load_n: { kind: 'number', field: 'ratedLoadN', factor: 1, valid: decimal(1e-3, 1e6) },
   rated_load_lbf: { kind: 'number', field: 'ratedLoadN', factor: N_PER_LBF, valid: decimal(1e-3, 2e5) },
   vertical_stiffness_n_per_mm: { kind: 'number', field: 'verticalStiffnessNPerM', factor: 1000, valid: decimal(1e-3, 1e6) },
-  vertical_stiffness_lbf_per_in: { kind: 'number', field: 'verticalStiffnessNPerM', factor: N_PER_M_PER_LBF_PER_IN, valid: decimal(1e-3, 1e6) },
-  horizontal_stiffness_n_per_mm: { kind: 'number', field: 'horizontalStiffnessNPerM', factor: 1000, valid: fc.oneof(fc.constant(''), decimal(1e-3, 1e6)) },
+  vertical_stiffness_lbf_per_in: {
+    kind: 'number',
+    field: 'verticalStiffnessNPerM',
+    factor: N_PER_M_PER_LBF_PER_IN,
+    valid: decimal(1e-3, 1e6),
+  },
+  horizontal_stiffness_n_per_mm: {
+    kind: 'number',
+    field: 'horizontalStiffnessNPerM',
+    factor: 1000,
+    valid: fc.oneof(fc.constant(''), decimal(1e-3, 1e6)),
+  },
   dynamic_stiffness_ratio: { kind: 'number', field: 'dynamicStiffnessRatio', factor: 1, valid: fc.oneof(fc.constant(''), decimal(1, 5)) },
   damping_ratio: { kind: 'number', field: 'dampingRatio', factor: 1, valid: decimal(1e-6, 0.999) },
   loss_factor: { kind: 'number', field: 'lossFactor', factor: 1, valid: decimal(1e-6, 2) },
   max_deflection_mm: { kind: 'number', field: 'maxDeflectionMm', factor: 1, valid: fc.oneof(fc.constant(''), decimal(0.01, 500)) },
   max_deflection_in: { kind: 'number', field: 'maxDeflectionMm', factor: MM_PER_IN, valid: fc.oneof(fc.constant(''), decimal(0.001, 20)) },
-  temp_min_c: { kind: 'number', field: 'tempMinC', factor: 1, valid: fc.oneof(fc.constant(''), fc.integer({ min: -80, max: 0 }).map(String)) },
-  temp_max_c: { kind: 'number', field: 'tempMaxC', factor: 1, valid: fc.oneof(fc.constant(''), fc.integer({ min: 1, max: 250 }).map(String)) },
+  temp_min_c: {
+    kind: 'number',
+    field: 'tempMinC',
+    factor: 1,
+    valid: fc.oneof(fc.constant(''), fc.integer({ min: -80, max: 0 }).map(String)),
+  },
+  temp_max_c: {
+    kind: 'number',
+    field: 'tempMaxC',
+    factor: 1,
+    valid: fc.oneof(fc.constant(''), fc.integer({ min: 1, max: 250 }).map(String)),
+  },
   height_mm: { kind: 'number', field: 'heightMm', factor: 1, valid: fc.oneof(fc.constant(''), decimal(0.1, 2000)) },
   unit_price: { kind: 'number', field: 'unitPrice', factor: 1, valid: fc.oneof(fc.constant(''), decimal(0, 1e5), fc.constant('0')) },
   currency: { kind: 'currency', field: 'currency', valid: fc.constantFrom('', 'USD', 'eur', ' Gbp ') },
-  lead_time_days: { kind: 'number', field: 'leadTimeDays', factor: 1, valid: fc.oneof(fc.constant(''), fc.integer({ min: 0, max: 730 }).map(String)) },
+  lead_time_days: {
+    kind: 'number',
+    field: 'leadTimeDays',
+    factor: 1,
+    valid: fc.oneof(fc.constant(''), fc.integer({ min: 0, max: 730 }).map(String)),
+  },
 };
 
 const SI_MINIMAL = ['supplier', 'part_number', 'mount_type', 'rated_load_n', 'vertical_stiffness_n_per_mm', 'damping_ratio'];
-const US_SET = ['supplier', 'part_number', 'series', 'mount_type', 'rated_load_lbf', 'vertical_stiffness_lbf_per_in', 'loss_factor', 'max_deflection_in'];
+const US_SET = [
+  'supplier',
+  'part_number',
+  'series',
+  'mount_type',
+  'rated_load_lbf',
+  'vertical_stiffness_lbf_per_in',
+  'loss_factor',
+  'max_deflection_in',
+];
 
 /** Cells no valid row holds (or holds only by chance: any cell may still be accepted, the checks read it back). */
 const hostileCell: fc.Arbitrary<string> = fc.oneof(
@@ -184,7 +237,12 @@ function build(spec: FileSpec): { bytes: Buffer; rows: WrittenRow[] } {
 }
 
 type Mode = 'refuse' | 'skip' | 'dry-run' | 'dry-run skip';
-const QUERY: Record<Mode, string> = { refuse: '', skip: '?onInvalid=skip', 'dry-run': '?dryRun=true', 'dry-run skip': '?dryRun=true&onInvalid=skip' };
+const QUERY: Record<Mode, string> = {
+  refuse: '',
+  skip: '?onInvalid=skip',
+  'dry-run': '?dryRun=true',
+  'dry-run skip': '?dryRun=true&onInvalid=skip',
+};
 const modeArb = fc.constantFrom<Mode>('refuse', 'skip', 'skip', 'skip', 'dry-run', 'dry-run skip');
 
 /** A text cell as stored: trimmed, the export's `'` guard before a formula character removed. */
@@ -218,7 +276,10 @@ function mountProblems(mount: Record<string, unknown>, cells: Record<string, str
   if (zeta !== null && !(zeta > 0 && zeta < 1)) problems.push(`dampingRatio = ${zeta}`);
   if (eta !== null && !(eta > 0 && eta <= 2)) problems.push(`lossFactor = ${eta}`);
   const [tMin, tMax] = [number('tempMinC'), number('tempMaxC')];
-  for (const [field, value] of [['tempMinC', tMin], ['tempMaxC', tMax]] as const) {
+  for (const [field, value] of [
+    ['tempMinC', tMin],
+    ['tempMaxC', tMax],
+  ] as const) {
     if (value !== null && !(value >= -80 && value <= 250)) problems.push(`${field} = ${value}`);
   }
   if (tMin !== null && tMax !== null && !(tMin < tMax)) problems.push(`tempMinC ${tMin} not below tempMaxC ${tMax}`);
@@ -229,7 +290,11 @@ function mountProblems(mount: Record<string, unknown>, cells: Record<string, str
   if (!/^[A-Z]{3}$/.test(String(mount.currency))) problems.push(`currency = ${mount.currency}`);
   if (!MOUNT_TYPES.includes(String(mount.mountType))) problems.push(`mountType = ${mount.mountType}`);
   const supplier = (mount.supplier as { name: string }).name;
-  for (const [field, text, max] of [['partNumber', mount.partNumber, 80], ['series', mount.series, 80], ['supplier', supplier, 120]] as const) {
+  for (const [field, text, max] of [
+    ['partNumber', mount.partNumber, 80],
+    ['series', mount.series, 80],
+    ['supplier', supplier, 120],
+  ] as const) {
     if (text === null) continue;
     if (typeof text !== 'string' || CONTROL.test(text) || text.length > max || (field !== 'series' && text.trim() === '')) {
       problems.push(`${field} = ${JSON.stringify(text)}`);
@@ -243,7 +308,8 @@ function mountProblems(mount: Record<string, unknown>, cells: Record<string, str
     const stored = mount[column.field];
     if (column.kind === 'number') {
       if (cell.trim() === '') continue;
-      if (typeof stored !== 'number' || !close(stored, Number(cell.trim()) * (column.factor ?? 1))) problems.push(`${name} "${cell}" stored as ${stored}`);
+      if (typeof stored !== 'number' || !close(stored, Number(cell.trim()) * (column.factor ?? 1)))
+        problems.push(`${name} "${cell}" stored as ${stored}`);
     } else if (column.kind === 'text') {
       const expected = storedText(cell) || null;
       if (stored !== expected) problems.push(`${name} "${cell}" stored as ${JSON.stringify(stored)}`);
@@ -296,7 +362,11 @@ describe('hostile catalog files (e2e)', () => {
   };
 
   /** After rows were written: listed rows are not in the catalog, the others are, valid and as written; the export guards formulas. */
-  const checkWritten = async (rows: WrittenRow[] | null, result: { errors: Array<{ row: number }>; accepted: number; rejected: number }, what: string) => {
+  const checkWritten = async (
+    rows: WrittenRow[] | null,
+    result: { errors: Array<{ row: number }>; accepted: number; rejected: number },
+    what: string,
+  ) => {
     const exported = await exportRows();
     for (const cells of exported.slice(1)) {
       const unguarded = cells.filter((cell) => FORMULA_START.test(cell) && !PLAIN_NUMBER.test(cell));
@@ -306,7 +376,9 @@ describe('hostile catalog files (e2e)', () => {
     const refused = new Set(result.errors.map((error) => error.row));
     const accepted = rows.filter((row) => !refused.has(row.row));
     if (accepted.length !== result.accepted || rows.length - accepted.length !== result.rejected) {
-      throw new Error(`counts: ${accepted.length} rows without problems, ${rows.length - accepted.length} with, answered ${JSON.stringify(result)}: ${what}`);
+      throw new Error(
+        `counts: ${accepted.length} rows without problems, ${rows.length - accepted.length} with, answered ${JSON.stringify(result)}: ${what}`,
+      );
     }
     const mounts = t.app.get(DataSource).getRepository(Mount);
     const acceptedTokens = new Set(accepted.map((row) => row.token));
@@ -326,7 +398,8 @@ describe('hostile catalog files (e2e)', () => {
       seen.rowsReadBack++;
       if (FORMULA_START.test(partNumber)) seen.formulaRowsReadBack++;
       const expectedCell = FORMULA_START.test(partNumber) ? `'${partNumber}` : partNumber;
-      if (!exportedParts.has(expectedCell)) throw new Error(`row ${row.row}: the export has no part_number cell ${JSON.stringify(expectedCell)}: ${what}`);
+      if (!exportedParts.has(expectedCell))
+        throw new Error(`row ${row.row}: the export has no part_number cell ${JSON.stringify(expectedCell)}: ${what}`);
     }
   };
 
@@ -337,41 +410,51 @@ describe('hostile catalog files (e2e)', () => {
   }, 120_000);
   afterAll(() => t?.close());
 
-  it('random CSV from the real header: never a 5xx, all or nothing by mode, accepted rows valid and guarded in the export', async () => {
-    await fc.assert(
-      fc.asyncProperty(fileArb, modeArb, async (spec, mode) => {
-        const { bytes, rows } = build(spec);
-        const what = `${mode} import of ${JSON.stringify(bytes.toString('utf8'))}`;
-        const response = await upload(bytes, QUERY[mode]);
-        await check(what, response, mode.startsWith('dry-run'));
-        seen.files++;
-        if (response.status === 200 && !mode.startsWith('dry-run')) seen.written++;
-        // (a cut-off file holds fewer rows than were generated: only the export is checked then)
-        if (response.status === 200 && !mode.startsWith('dry-run')) await checkWritten(spec.corruption ? null : rows, response.body, what);
-        if (response.status === 200 && mode === 'refuse' && response.body.rejected !== 0) throw new Error(`refuse mode wrote a file with problems: ${what}`);
-      }),
-      fuzzParameters(6),
-    );
-    expect(seen.rowsReadBack).toBeGreaterThan(0);
-    expect(seen.formulaRowsReadBack).toBeGreaterThan(0);
-    expect(seen.refusedRows).toBeGreaterThan(0);
-  }, fuzzTimeout(FUZZ_RUNS * 6 * 3));
+  it(
+    'random CSV from the real header: never a 5xx, all or nothing by mode, accepted rows valid and guarded in the export',
+    async () => {
+      await fc.assert(
+        fc.asyncProperty(fileArb, modeArb, async (spec, mode) => {
+          const { bytes, rows } = build(spec);
+          const what = `${mode} import of ${JSON.stringify(bytes.toString('utf8'))}`;
+          const response = await upload(bytes, QUERY[mode]);
+          await check(what, response, mode.startsWith('dry-run'));
+          seen.files++;
+          if (response.status === 200 && !mode.startsWith('dry-run')) seen.written++;
+          // (a cut-off file holds fewer rows than were generated: only the export is checked then)
+          if (response.status === 200 && !mode.startsWith('dry-run'))
+            await checkWritten(spec.corruption ? null : rows, response.body, what);
+          if (response.status === 200 && mode === 'refuse' && response.body.rejected !== 0)
+            throw new Error(`refuse mode wrote a file with problems: ${what}`);
+        }),
+        fuzzParameters(6),
+      );
+      expect(seen.rowsReadBack).toBeGreaterThan(0);
+      expect(seen.formulaRowsReadBack).toBeGreaterThan(0);
+      expect(seen.refusedRows).toBeGreaterThan(0);
+    },
+    fuzzTimeout(FUZZ_RUNS * 6 * 3),
+  );
 
-  it('random bytes, bare or after the real header: never a 5xx, and nothing written unless the rows are valid', async () => {
-    const header = Buffer.from(`${SI_HEADER.join(',')}\n`);
-    const files = fc.record({
-      bytes: fc.uint8Array({ maxLength: 2000 }),
-      withHeader: fc.boolean(),
-      mode: modeArb,
-    });
-    await fc.assert(
-      fc.asyncProperty(files, async ({ bytes, withHeader, mode }) => {
-        const content = withHeader ? Buffer.concat([header, Buffer.from(bytes)]) : Buffer.from(bytes);
-        await check(`${mode} import of ${content.length} random bytes`, await upload(content, QUERY[mode]), mode.startsWith('dry-run'));
-      }),
-      fuzzParameters(2),
-    );
-  }, fuzzTimeout(FUZZ_RUNS * 2));
+  it(
+    'random bytes, bare or after the real header: never a 5xx, and nothing written unless the rows are valid',
+    async () => {
+      const header = Buffer.from(`${SI_HEADER.join(',')}\n`);
+      const files = fc.record({
+        bytes: fc.uint8Array({ maxLength: 2000 }),
+        withHeader: fc.boolean(),
+        mode: modeArb,
+      });
+      await fc.assert(
+        fc.asyncProperty(files, async ({ bytes, withHeader, mode }) => {
+          const content = withHeader ? Buffer.concat([header, Buffer.from(bytes)]) : Buffer.from(bytes);
+          await check(`${mode} import of ${content.length} random bytes`, await upload(content, QUERY[mode]), mode.startsWith('dry-run'));
+        }),
+        fuzzParameters(2),
+      );
+    },
+    fuzzTimeout(FUZZ_RUNS * 2),
+  );
 
   it('takes .csv and .txt files whatever their content type, and refuses any other name with 422, writing nothing', async () => {
     const names: Array<[string, boolean]> = [
@@ -387,7 +470,12 @@ describe('hostile catalog files (e2e)', () => {
       ['.csv.', false],
       ['catalog.csv%00.exe', false],
     ];
-    const types = ['text/csv', 'application/octet-stream', 'image/png', 'application/vnd.openxmlformats-officedocument.spreadsheetml.sheet'];
+    const types = [
+      'text/csv',
+      'application/octet-stream',
+      'image/png',
+      'application/vnd.openxmlformats-officedocument.spreadsheetml.sheet',
+    ];
     for (const [index, [name, acceptable]] of names.entries()) {
       const contentType = types[index % types.length];
       const row = mountRow({ supplier: 'Fuzz Name Mounts' });
@@ -397,32 +485,73 @@ describe('hostile catalog files (e2e)', () => {
     }
   });
 
-  it('refuses what is not one multipart CSV upload with a 4xx, writing nothing', async () => {
-    const csv = csvOf([mountRow()]);
-    const attempts: Array<[string, () => Promise<Response>]> = [
-      ['the CSV as the raw body', async () => t.http().post('/api/mounts/import').set(auth()).set('Content-Type', 'text/csv').send(csv)],
-      ['JSON', async () => t.http().post('/api/mounts/import').set(auth()).send({ file: csv })],
-      ['multipart without a boundary', async () => t.http().post('/api/mounts/import').set(auth()).set('Content-Type', 'multipart/form-data').send(csv)],
-      ['cut-off multipart', async () => t.http().post('/api/mounts/import').set(auth()).set('Content-Type', 'multipart/form-data; boundary=b').send(`--b\r\nContent-Disposition: form-data; name="file"; filename="c.csv"\r\n\r\n${csv}`)],
-      ['the file in another field', async () => t.http().post('/api/mounts/import').set(auth()).attach('upload', Buffer.from(csv), 'c.csv')],
-      ['two files', async () => t.http().post('/api/mounts/import').set(auth()).attach('file', Buffer.from(csv), 'a.csv').attach('file', Buffer.from(csv), 'b.csv')],
-      ['eleven extra fields', async () => {
-        let call = t.http().post('/api/mounts/import').set(auth());
-        for (let i = 0; i < 11; i++) call = call.field(`f${i}`, 'x');
-        return call.attach('file', Buffer.from(csv), 'c.csv');
-      }],
-      ['an empty file', async () => upload(Buffer.alloc(0))],
-      ['only byte-order marks and blank lines', async () => upload(Buffer.from('\ufeff\ufeff\n\r\n\n'))],
-      ['a header and no rows', async () => upload(Buffer.from(`${SI_HEADER.join(',')}\r\n`))],
-      ['65 columns', async () => upload(Buffer.from(`${[...SI_HEADER, ...Array.from({ length: 48 }, (_, i) => `extra_${i}`)].join(',')}\nx\n`))],
-      ['a field over 1 MB', async () => upload(Buffer.from(`${SI_HEADER.join(',')}\n"${'x'.repeat(1_000_100)}"\n`))],
-      ['1,200 invalid rows (problems capped)', async () => upload(Buffer.from(csvOf(Array.from({ length: 1200 }, () => mountRow({ rated_load_n: '-1', damping_ratio: 'NaN' })))))],
-      ['a valid row after 1,200 invalid ones', async () => upload(Buffer.from(csvOf([...Array.from({ length: 1200 }, () => mountRow({ rated_load_n: 'x' })), mountRow()])))],
-    ];
-    for (const [what, attempt] of attempts) {
-      const response = await attempt();
-      await check(what, response, false);
-      expect({ what, refused: response.status >= 400 && response.status < 500 }).toEqual({ what, refused: true });
-    }
-  }, fuzzTimeout(20));
+  it(
+    'refuses what is not one multipart CSV upload with a 4xx, writing nothing',
+    async () => {
+      const csv = csvOf([mountRow()]);
+      const attempts: Array<[string, () => Promise<Response>]> = [
+        ['the CSV as the raw body', async () => t.http().post('/api/mounts/import').set(auth()).set('Content-Type', 'text/csv').send(csv)],
+        ['JSON', async () => t.http().post('/api/mounts/import').set(auth()).send({ file: csv })],
+        [
+          'multipart without a boundary',
+          async () => t.http().post('/api/mounts/import').set(auth()).set('Content-Type', 'multipart/form-data').send(csv),
+        ],
+        [
+          'cut-off multipart',
+          async () =>
+            t
+              .http()
+              .post('/api/mounts/import')
+              .set(auth())
+              .set('Content-Type', 'multipart/form-data; boundary=b')
+              .send(`--b\r\nContent-Disposition: form-data; name="file"; filename="c.csv"\r\n\r\n${csv}`),
+        ],
+        [
+          'the file in another field',
+          async () => t.http().post('/api/mounts/import').set(auth()).attach('upload', Buffer.from(csv), 'c.csv'),
+        ],
+        [
+          'two files',
+          async () =>
+            t
+              .http()
+              .post('/api/mounts/import')
+              .set(auth())
+              .attach('file', Buffer.from(csv), 'a.csv')
+              .attach('file', Buffer.from(csv), 'b.csv'),
+        ],
+        [
+          'eleven extra fields',
+          async () => {
+            let call = t.http().post('/api/mounts/import').set(auth());
+            for (let i = 0; i < 11; i++) call = call.field(`f${i}`, 'x');
+            return call.attach('file', Buffer.from(csv), 'c.csv');
+          },
+        ],
+        ['an empty file', async () => upload(Buffer.alloc(0))],
+        ['only byte-order marks and blank lines', async () => upload(Buffer.from('\ufeff\ufeff\n\r\n\n'))],
+        ['a header and no rows', async () => upload(Buffer.from(`${SI_HEADER.join(',')}\r\n`))],
+        [
+          '65 columns',
+          async () => upload(Buffer.from(`${[...SI_HEADER, ...Array.from({ length: 48 }, (_, i) => `extra_${i}`)].join(',')}\nx\n`)),
+        ],
+        ['a field over 1 MB', async () => upload(Buffer.from(`${SI_HEADER.join(',')}\n"${'x'.repeat(1_000_100)}"\n`))],
+        [
+          '1,200 invalid rows (problems capped)',
+          async () =>
+            upload(Buffer.from(csvOf(Array.from({ length: 1200 }, () => mountRow({ rated_load_n: '-1', damping_ratio: 'NaN' }))))),
+        ],
+        [
+          'a valid row after 1,200 invalid ones',
+          async () => upload(Buffer.from(csvOf([...Array.from({ length: 1200 }, () => mountRow({ rated_load_n: 'x' })), mountRow()]))),
+        ],
+      ];
+      for (const [what, attempt] of attempts) {
+        const response = await attempt();
+        await check(what, response, false);
+        expect({ what, refused: response.status >= 400 && response.status < 500 }).toEqual({ what, refused: true });
+      }
+    },
+    fuzzTimeout(20),
+  );
 });

@@ -27,7 +27,9 @@ import {
 const key = (method: string, path: string) => `${method} ${path}`;
 
 /** Every route that takes a JSON body (the multipart import gets its own fuzz in fuzz-import.e2e-spec.ts too). */
-const BODY_ROUTES = ROUTE_MATRIX.filter((rule) => ['POST', 'PUT', 'PATCH'].includes(rule.method)).map((rule) => key(rule.method, rule.path));
+const BODY_ROUTES = ROUTE_MATRIX.filter((rule) => ['POST', 'PUT', 'PATCH'].includes(rule.method)).map((rule) =>
+  key(rule.method, rule.path),
+);
 
 /** Routes with a path parameter. */
 const PARAM_ROUTES = ROUTE_MATRIX.filter((rule) => rule.path.includes(':'));
@@ -68,7 +70,8 @@ describe('hostile JSON input (e2e)', () => {
   };
 
   const shown = (value: unknown): string => {
-    const text = typeof value === 'string' ? value : Buffer.isBuffer(value) ? `<${value.length} bytes>` : JSON.stringify(value) ?? String(value);
+    const text =
+      typeof value === 'string' ? value : Buffer.isBuffer(value) ? `<${value.length} bytes>` : (JSON.stringify(value) ?? String(value));
     return text.length > 300 ? `${text.slice(0, 300)}… (${text.length} characters)` : text;
   };
 
@@ -78,7 +81,11 @@ describe('hostile JSON input (e2e)', () => {
     if (response.status >= 500) throw new Error(`5xx: ${what}`);
     if (response.status >= 400) {
       const body = response.body as { statusCode?: unknown; message?: unknown };
-      if (!/^application\/json/.test(String(response.headers['content-type'])) || body.statusCode !== response.status || typeof body.message !== 'string') {
+      if (
+        !/^application\/json/.test(String(response.headers['content-type'])) ||
+        body.statusCode !== response.status ||
+        typeof body.message !== 'string'
+      ) {
         throw new Error(`4xx without the JSON error shape: ${what}`);
       }
     }
@@ -125,81 +132,104 @@ describe('hostile JSON input (e2e)', () => {
     expect(withQuery.sort()).toEqual(Object.keys(targets.queries).sort());
   });
 
-  it('sends each example request successfully (so the mutations start from a body the route accepts)', async () => {
-    const refused: string[] = [];
-    for (const [route, target] of Object.entries(targets.bodies)) {
-      if (route === 'POST /api/mounts/import') continue; // multipart: fuzz-import.e2e-spec.ts
-      const method = route.split(' ')[0] as Method;
-      const response = await request(method, target.url, target.as).send((await target.body()) as object);
-      // 409: the example was sent before (e.g. the same new user, a transition already made)
-      if (response.status >= 400 && response.status !== 409) refused.push(`${route} → ${response.status} ${response.text}`);
-      await check({ method, url: target.url, describe: 'the example body' }, response);
-    }
-    expect(refused).toEqual([]);
-  }, fuzzTimeout(30));
+  it(
+    'sends each example request successfully (so the mutations start from a body the route accepts)',
+    async () => {
+      const refused: string[] = [];
+      for (const [route, target] of Object.entries(targets.bodies)) {
+        if (route === 'POST /api/mounts/import') continue; // multipart: fuzz-import.e2e-spec.ts
+        const method = route.split(' ')[0] as Method;
+        const response = await request(method, target.url, target.as).send((await target.body()) as object);
+        // 409: the example was sent before (e.g. the same new user, a transition already made)
+        if (response.status >= 400 && response.status !== 409) refused.push(`${route} → ${response.status} ${response.text}`);
+        await check({ method, url: target.url, describe: 'the example body' }, response);
+      }
+      expect(refused).toEqual([]);
+    },
+    fuzzTimeout(30),
+  );
 
   describe.each(BODY_ROUTES)('%s', (route) => {
     const method = route.split(' ')[0] as Method;
 
-    it('answers malformed, pathological and mistyped bodies with a 4xx JSON error and changes nothing', async () => {
-      const target = targets.bodies[route];
-      for (const raw of RAW_BODIES) await sendRaw(method, target.url, target.as, raw);
-    }, fuzzTimeout(RAW_BODIES.length));
+    it(
+      'answers malformed, pathological and mistyped bodies with a 4xx JSON error and changes nothing',
+      async () => {
+        const target = targets.bodies[route];
+        for (const raw of RAW_BODIES) await sendRaw(method, target.url, target.as, raw);
+      },
+      fuzzTimeout(RAW_BODIES.length),
+    );
 
-    it('answers mutations of a valid body without a 5xx, and a refused one changes nothing', async () => {
-      const target = targets.bodies[route];
-      const seed = await target.body();
-      await fc.assert(
-        fc.asyncProperty(mutationsOf(seed), async (body) => sendJson(method, target.url, target.as, body)),
-        fuzzParameters(target.runsFactor),
-      );
-    }, fuzzTimeout(FUZZ_RUNS * 3));
+    it(
+      'answers mutations of a valid body without a 5xx, and a refused one changes nothing',
+      async () => {
+        const target = targets.bodies[route];
+        const seed = await target.body();
+        await fc.assert(
+          fc.asyncProperty(mutationsOf(seed), async (body) => sendJson(method, target.url, target.as, body)),
+          fuzzParameters(target.runsFactor),
+        );
+      },
+      fuzzTimeout(FUZZ_RUNS * 3),
+    );
   });
 
-  it('answers every number of every example body set to 2^31, 2^53 + 2 or 1e308 without a 5xx (ids and counts are 32-bit columns)', async () => {
-    const failures: string[] = [];
-    for (const [route, target] of Object.entries(targets.bodies)) {
-      const method = route.split(' ')[0] as Method;
-      const seed = await target.body();
-      for (const path of numberPaths(seed)) {
-        for (const value of [2 ** 31, Number.MAX_SAFE_INTEGER + 2, 1e308]) {
-          try {
-            await sendJson(method, target.url, target.as, withNumberAt(seed, path, value));
-          } catch (error) {
-            failures.push(`${path.join('.')} = ${value}: ${(error as Error).message.slice(0, 160)}`);
-            last = await dbFingerprint(t);
+  it(
+    'answers every number of every example body set to 2^31, 2^53 + 2 or 1e308 without a 5xx (ids and counts are 32-bit columns)',
+    async () => {
+      const failures: string[] = [];
+      for (const [route, target] of Object.entries(targets.bodies)) {
+        const method = route.split(' ')[0] as Method;
+        const seed = await target.body();
+        for (const path of numberPaths(seed)) {
+          for (const value of [2 ** 31, Number.MAX_SAFE_INTEGER + 2, 1e308]) {
+            try {
+              await sendJson(method, target.url, target.as, withNumberAt(seed, path, value));
+            } catch (error) {
+              failures.push(`${path.join('.')} = ${value}: ${(error as Error).message.slice(0, 160)}`);
+              last = await dbFingerprint(t);
+            }
           }
         }
       }
-    }
-    expect(failures).toEqual([]);
-  }, fuzzTimeout(400));
+      expect(failures).toEqual([]);
+    },
+    fuzzTimeout(400),
+  );
 
   describe.each(['GET /api/mounts', 'POST /api/mounts/import'])('query of %s', (route) => {
     const method = route.split(' ')[0] as Method;
 
-    it('answers hostile query strings without a 5xx, and a refused one changes nothing', async () => {
-      const target = targets.queries[route];
-      const names = Object.keys(target.query);
-      const entry = fc.oneof(
-        fc.tuple(fc.constantFrom(...names), hostileQueryValue),
-        fc.tuple(fc.constantFrom(...names).map((name) => `${name}[a]`), hostileQueryValue),
-        fc.tuple(hostileKey, hostileQueryValue),
-      );
-      const queries = fc.record({
-        keep: fc.subarray(names),
-        extra: fc.array(entry, { minLength: 1, maxLength: 4 }),
-      });
-      await fc.assert(
-        fc.asyncProperty(queries, async ({ keep, extra }) => {
-          const pairs = [...keep.map((name) => [name, target.query[name]] as const), ...extra];
-          const search = pairs.map(([name, value]) => `${encodeURIComponent(name)}=${encodeURIComponent(value)}`).join('&');
-          const url = `${target.url}?${search}`;
-          await check({ method, url, describe: 'no body' }, await request(method, url, target.as));
-        }),
-        fuzzParameters(2),
-      );
-    }, fuzzTimeout(FUZZ_RUNS * 6));
+    it(
+      'answers hostile query strings without a 5xx, and a refused one changes nothing',
+      async () => {
+        const target = targets.queries[route];
+        const names = Object.keys(target.query);
+        const entry = fc.oneof(
+          fc.tuple(fc.constantFrom(...names), hostileQueryValue),
+          fc.tuple(
+            fc.constantFrom(...names).map((name) => `${name}[a]`),
+            hostileQueryValue,
+          ),
+          fc.tuple(hostileKey, hostileQueryValue),
+        );
+        const queries = fc.record({
+          keep: fc.subarray(names),
+          extra: fc.array(entry, { minLength: 1, maxLength: 4 }),
+        });
+        await fc.assert(
+          fc.asyncProperty(queries, async ({ keep, extra }) => {
+            const pairs = [...keep.map((name) => [name, target.query[name]] as const), ...extra];
+            const search = pairs.map(([name, value]) => `${encodeURIComponent(name)}=${encodeURIComponent(value)}`).join('&');
+            const url = `${target.url}?${search}`;
+            await check({ method, url, describe: 'no body' }, await request(method, url, target.as));
+          }),
+          fuzzParameters(2),
+        );
+      },
+      fuzzTimeout(FUZZ_RUNS * 6),
+    );
 
     it('answers raw, undecodable and prototype-polluting query strings without a 5xx', async () => {
       const target = targets.queries[route];
@@ -225,18 +255,22 @@ describe('hostile JSON input (e2e)', () => {
     });
   });
 
-  it('answers hostile path parameters on every route without a 5xx, and a refused one changes nothing', async () => {
-    for (const rule of PARAM_ROUTES) {
-      const example = targets.bodies[key(rule.method, rule.path)];
-      const body = example ? await example.body() : undefined;
-      for (const id of HOSTILE_IDS) {
-        const url = rule.path.replace(/:\w+/g, id);
-        const call = request(rule.method, url, 'admin');
-        const response = await (body === undefined ? call : call.send(body as object));
-        await check({ method: rule.method, url, describe: body === undefined ? 'no body' : 'the example body' }, response);
+  it(
+    'answers hostile path parameters on every route without a 5xx, and a refused one changes nothing',
+    async () => {
+      for (const rule of PARAM_ROUTES) {
+        const example = targets.bodies[key(rule.method, rule.path)];
+        const body = example ? await example.body() : undefined;
+        for (const id of HOSTILE_IDS) {
+          const url = rule.path.replace(/:\w+/g, id);
+          const call = request(rule.method, url, 'admin');
+          const response = await (body === undefined ? call : call.send(body as object));
+          await check({ method: rule.method, url, describe: body === undefined ? 'no body' : 'the example body' }, response);
+        }
       }
-    }
-  }, fuzzTimeout(PARAM_ROUTES.length * HOSTILE_IDS.length));
+    },
+    fuzzTimeout(PARAM_ROUTES.length * HOSTILE_IDS.length),
+  );
 
   it('leaves Object.prototype untouched after all of the above', () => {
     const probe = {} as Record<string, unknown>;

@@ -11,8 +11,7 @@ const BOM_CSV = 'mount_point,supplier,part_number,quantity\r\nA1,Example Mounts 
 const OUTBOX_ROUTES = ['/api/outbox', '/api/outbox/1', '/api/outbox/1/attachments/0'];
 
 /** TCP servers and sockets the process holds (Node's own resource names). */
-const tcpHandles = () =>
-  process.getActiveResourcesInfo().filter((name) => name === 'TCPServerWrap' || name === 'TCPSocketWrap').length;
+const tcpHandles = () => process.getActiveResourcesInfo().filter((name) => name === 'TCPServerWrap' || name === 'TCPSocketWrap').length;
 
 describe('mail and the outbox (e2e)', () => {
   let t: TestApp;
@@ -76,9 +75,7 @@ describe('mail and the outbox (e2e)', () => {
     const notes = await download(1);
     expect(notes.headers['content-type']).toBe('text/plain; charset=utf-8');
     // RFC 6266 §4.3 / RFC 8187: an ASCII fallback plus the UTF-8 name.
-    expect(notes.headers['content-disposition']).toBe(
-      `attachment; filename="notes ?50.txt"; filename*=UTF-8''notes%20%C3%B850.txt`,
-    );
+    expect(notes.headers['content-disposition']).toBe(`attachment; filename="notes ?50.txt"; filename*=UTF-8''notes%20%C3%B850.txt`);
     expect((notes.body as Buffer).toString('utf8')).toBe('Ø 50 mm');
 
     // The catcher kept the SMTP envelope of that session and the Message-ID the sender reported.
@@ -96,9 +93,7 @@ describe('mail and the outbox (e2e)', () => {
       'MAIL FROM:<probe@example.test>',
       'RCPT TO:<someone@example.test>',
       'DATA',
-      ['From: Probe <probe@example.test>', 'To: someone@example.test', 'Subject: Hand-typed SMTP', '', 'Typed by hand.', '.'].join(
-        '\r\n',
-      ),
+      ['From: Probe <probe@example.test>', 'To: someone@example.test', 'Subject: Hand-typed SMTP', '', 'Typed by hand.', '.'].join('\r\n'),
       'QUIT',
     ]);
     expect(replies.map((reply) => reply.slice(0, 3))).toEqual(['220', '250', '250', '250', '354', '250', '221']);

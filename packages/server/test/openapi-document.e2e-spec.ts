@@ -40,7 +40,10 @@ describe('OpenAPI document (e2e)', () => {
     body?: object,
     status = method === 'post' ? 201 : 200,
   ): Promise<unknown> {
-    const request = t.http()[method](path).set({ Authorization: `Bearer ${tokens[who]}` });
+    const request = t
+      .http()
+      [method](path)
+      .set({ Authorization: `Bearer ${tokens[who]}` });
     const response = body ? await request.send(body) : await request;
     expect({ path, status: response.status }).toEqual({ path, status });
     expect(conformanceProblems(document, responseSchema(document, method, template, status), response.body)).toEqual([]);
@@ -116,18 +119,25 @@ describe('OpenAPI document (e2e)', () => {
     }
     const path = `/api/designs/${draft.id}/selection`;
     await expectConforming('engineer', 'post', '/api/designs/{id}/selection', path, { limit: 5 }, 200);
-    await expectConforming('engineer', 'post', '/api/selection', '/api/selection', {
-      limit: 5,
-      components: [{ name: 'Machine', massKg: 1000, cg: { x: 0, y: 0, z: 0.3 } }],
-      mountPoints: [
-        { label: 'A', x: 0.8, y: 0.45, z: 0 },
-        { label: 'B', x: 0.8, y: -0.45, z: 0 },
-        { label: 'C', x: -0.8, y: 0.45, z: 0 },
-        { label: 'D', x: -0.8, y: -0.45, z: 0 },
-      ],
-      disturbingFrequenciesHz: [24.67, 49.33],
-      criteria: { minIsolationPct: 90, minUtilization: 0.5, maxUtilization: 1, supplierIds: [catalog.supplier.id] },
-    }, 200);
+    await expectConforming(
+      'engineer',
+      'post',
+      '/api/selection',
+      '/api/selection',
+      {
+        limit: 5,
+        components: [{ name: 'Machine', massKg: 1000, cg: { x: 0, y: 0, z: 0.3 } }],
+        mountPoints: [
+          { label: 'A', x: 0.8, y: 0.45, z: 0 },
+          { label: 'B', x: 0.8, y: -0.45, z: 0 },
+          { label: 'C', x: -0.8, y: 0.45, z: 0 },
+          { label: 'D', x: -0.8, y: -0.45, z: 0 },
+        ],
+        disturbingFrequenciesHz: [24.67, 49.33],
+        criteria: { minIsolationPct: 90, minUtilization: 0.5, maxUtilization: 1, supplierIds: [catalog.supplier.id] },
+      },
+      200,
+    );
     await expectConforming('engineer', 'get', '/api/designs/{id}/history', `/api/designs/${released.id}/history`);
   });
 

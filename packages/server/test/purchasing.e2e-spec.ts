@@ -28,7 +28,10 @@ describe('purchasing: exports, requests for quotation, queue, report (e2e)', () 
 
   const download = (path: string, who: string) => t.http().get(path).set(as(who)).buffer(true).parse(binary);
   const loadDesign = (id: number) =>
-    t.app.get(DataSource).getRepository(Design).findOneOrFail({ where: { id }, relations: { project: true, author: true, checker: true } });
+    t.app
+      .get(DataSource)
+      .getRepository(Design)
+      .findOneOrFail({ where: { id }, relations: { project: true, author: true, checker: true } });
 
   beforeAll(async () => {
     t = await createTestApp();
@@ -53,13 +56,31 @@ describe('purchasing: exports, requests for quotation, queue, report (e2e)', () 
         `attachment; filename="${released.projectName.replace(/ /g, '-')}-${released.name.replace(/ /g, '-')}-rev1-bom.csv"`,
       );
       const rows = parse(response.body as Buffer) as string[][];
-      expect(rows[0]).toEqual(['supplier', 'part_number', 'quantity', 'mount_points', 'unit_price', 'extended_price', 'currency', 'lead_time_days']);
+      expect(rows[0]).toEqual([
+        'supplier',
+        'part_number',
+        'quantity',
+        'mount_points',
+        'unit_price',
+        'extended_price',
+        'currency',
+        'lead_time_days',
+      ]);
       const design = await loadDesign(released.id);
       const snapshotMount = design.snapshot!.mounts.find((m) => m.id === withEmail.mountId)!;
       expect(snapshotMount.unitPrice).toBe(42.5);
       const points = design.snapshot!.candidate.perPoint.filter((p) => p.mountId === withEmail.mountId);
       expect(rows.slice(1)).toEqual([
-        [withEmail.supplier.name, withEmail.partNumber, String(points.length), points.map((p) => p.label).join(' '), '42.5', String(42.5 * points.length), 'USD', '12'],
+        [
+          withEmail.supplier.name,
+          withEmail.partNumber,
+          String(points.length),
+          points.map((p) => p.label).join(' '),
+          '42.5',
+          String(42.5 * points.length),
+          'USD',
+          '12',
+        ],
       ]);
       expect(points.length).toBe(4); // one spring at each corner: 4 × 42.50 = 170.00
       expect(rows[1][5]).toBe('170');
@@ -114,7 +135,9 @@ describe('purchasing: exports, requests for quotation, queue, report (e2e)', () 
         quotedPrice: null,
         createdBy: { name: expect.any(String) },
       });
-      expect(response.body.history).toEqual([expect.objectContaining({ status: 'requested', note: 'Delivery to site by week 12, please.' })]);
+      expect(response.body.history).toEqual([
+        expect.objectContaining({ status: 'requested', note: 'Delivery to site by week 12, please.' }),
+      ]);
 
       const mail = t.app
         .get(MailCatcherService)
@@ -137,19 +160,35 @@ describe('purchasing: exports, requests for quotation, queue, report (e2e)', () 
     });
 
     it('refuses: a supplier without e-mail (422), a supplier not in the BOM (422), a draft (409), viewers and engineers (403)', async () => {
-      const missing = await t.http().post(`/api/designs/${noEmailDesign.id}/rfqs`).set(as('purchaser')).send({ supplierId: noEmail.supplier.id });
+      const missing = await t
+        .http()
+        .post(`/api/designs/${noEmailDesign.id}/rfqs`)
+        .set(as('purchaser'))
+        .send({ supplierId: noEmail.supplier.id });
       expect(missing.status).toBe(422);
       expect(missing.body.message).toBe(`Supplier ${noEmail.supplier.name} has no contact e-mail`);
-      const notInBom = await t.http().post(`/api/designs/${released.id}/rfqs`).set(as('purchaser')).send({ supplierId: noEmail.supplier.id });
+      const notInBom = await t
+        .http()
+        .post(`/api/designs/${released.id}/rfqs`)
+        .set(as('purchaser'))
+        .send({ supplierId: noEmail.supplier.id });
       expect(notInBom.status).toBe(422);
-      expect((await t.http().post(`/api/designs/${draft.id}/rfqs`).set(as('admin')).send({ supplierId: withEmail.supplier.id })).status).toBe(409);
+      expect(
+        (await t.http().post(`/api/designs/${draft.id}/rfqs`).set(as('admin')).send({ supplierId: withEmail.supplier.id })).status,
+      ).toBe(409);
       for (const who of ['viewer', 'engineer']) {
-        expect((await t.http().post(`/api/designs/${released.id}/rfqs`).set(as(who)).send({ supplierId: withEmail.supplier.id })).status).toBe(403);
+        expect(
+          (await t.http().post(`/api/designs/${released.id}/rfqs`).set(as(who)).send({ supplierId: withEmail.supplier.id })).status,
+        ).toBe(403);
       }
     });
 
     it('status moves forward only; a quote needs its price', async () => {
-      const created = await t.http().post(`/api/designs/${released.id}/rfqs`).set(as('purchaser')).send({ supplierId: withEmail.supplier.id });
+      const created = await t
+        .http()
+        .post(`/api/designs/${released.id}/rfqs`)
+        .set(as('purchaser'))
+        .send({ supplierId: withEmail.supplier.id });
       const id = created.body.id;
       const patch = (body: object) => t.http().patch(`/api/rfqs/${id}`).set(as('purchaser')).send(body);
       expect((await patch({ status: 'quoted' })).status).toBe(400);

@@ -62,7 +62,11 @@ describe('review workflow (e2e)', () => {
     expect(released.body.checker).toEqual({ id: ids.checker, name: expect.any(String) });
     expect(released.body.bom.length).toBe(1);
 
-    const put = await t.http().put(`/api/designs/${design.id}`).set(as('engineer')).send({ version: released.body.version, name: 'Changed' });
+    const put = await t
+      .http()
+      .put(`/api/designs/${design.id}`)
+      .set(as('engineer'))
+      .send({ version: released.body.version, name: 'Changed' });
     expect(put.status).toBe(409);
     expect(put.body.message).toBe('Released designs are frozen; start a new revision');
     const back = await transition(design.id, 'checker', { to: 'draft', comment: 'Reopen' });
@@ -145,12 +149,15 @@ describe('review workflow (e2e)', () => {
     expect(revision.body.bom).toEqual(rev1.bom);
 
     const revHistory = await history(revision.body.id);
-    expect(revHistory.body).toEqual([
-      expect.objectContaining({ from: null, to: 'draft', comment: 'Revision 2 started from revision 1' }),
-    ]);
+    expect(revHistory.body).toEqual([expect.objectContaining({ from: null, to: 'draft', comment: 'Revision 2 started from revision 1' })]);
 
     // rev 2 is editable, rev 1 is still released until rev 2 is
-    await t.http().put(`/api/designs/${revision.body.id}`).set(as('checker')).send({ version: revision.body.version, name: design.name }).expect(200);
+    await t
+      .http()
+      .put(`/api/designs/${revision.body.id}`)
+      .set(as('checker'))
+      .send({ version: revision.body.version, name: design.name })
+      .expect(200);
     expect((await get(design.id)).body.status).toBe('released');
     await releaseDesign(t, revision.body.id, tokens.checker, tokens.engineer);
     expect((await get(revision.body.id)).body.status).toBe('released');

@@ -31,7 +31,11 @@ function registeredApiRoutes(t: TestApp): string[] {
   return express.router.stack
     .flatMap((layer) => (layer.route ? [layer.route] : []))
     .filter((route) => route.path.startsWith('/api') && !NOT_IN_MATRIX(route.path))
-    .flatMap((route) => Object.keys(route.methods).filter((m) => m !== '_all').map((m) => key(m, route.path)));
+    .flatMap((route) =>
+      Object.keys(route.methods)
+        .filter((m) => m !== '_all')
+        .map((m) => key(m, route.path)),
+    );
 }
 
 describe('role × route matrix (e2e)', () => {

@@ -25,10 +25,21 @@ class LogCapture {
   readonly lines: string[] = [];
   private restore: Array<() => void> = [];
   private readonly record = (...parts: unknown[]) => {
-    this.lines.push(parts.map((part) => (part instanceof Error ? `${part.message}\n${part.stack}` : typeof part === 'string' ? part : JSON.stringify(part))).join(' '));
+    this.lines.push(
+      parts
+        .map((part) => (part instanceof Error ? `${part.message}\n${part.stack}` : typeof part === 'string' ? part : JSON.stringify(part)))
+        .join(' '),
+    );
   };
   /** The logger to give the app (`TestingModuleBuilder.setLogger`: the testing module installs its own otherwise). */
-  readonly logger: LoggerService = { log: this.record, error: this.record, warn: this.record, debug: this.record, verbose: this.record, fatal: this.record };
+  readonly logger: LoggerService = {
+    log: this.record,
+    error: this.record,
+    warn: this.record,
+    debug: this.record,
+    verbose: this.record,
+    fatal: this.record,
+  };
 
   start(): void {
     const record = this.record;
@@ -71,7 +82,12 @@ describe('security (e2e)', () => {
     it('are bcrypt hashes (cost 12) in the user table, and no column holds a password in clear', async () => {
       const admin = await t.loginAs('admin');
       const password = 'a very secret password 7';
-      await t.http().post('/api/users').set(bearer(admin)).send({ email: 'hash.check@example.test', name: 'Hal Hash', role: 'viewer', password }).expect(201);
+      await t
+        .http()
+        .post('/api/users')
+        .set(bearer(admin))
+        .send({ email: 'hash.check@example.test', name: 'Hal Hash', role: 'viewer', password })
+        .expect(201);
 
       const rows: Array<Record<string, unknown>> = await t.app.get(DataSource).query('SELECT * FROM "user"');
       expect(rows.length).toBeGreaterThanOrEqual(7);
@@ -83,9 +99,14 @@ describe('security (e2e)', () => {
         expect(everything).not.toContain(password);
       }
       // salted: two people with the same password get different hashes
-      await t.http().post('/api/users').set(bearer(admin)).send({ email: 'hash.twin@example.test', name: 'Tia Twin', role: 'viewer', password }).expect(201);
-      const twins: Array<{ passwordHash: string }> = await t
-        .app.get(DataSource)
+      await t
+        .http()
+        .post('/api/users')
+        .set(bearer(admin))
+        .send({ email: 'hash.twin@example.test', name: 'Tia Twin', role: 'viewer', password })
+        .expect(201);
+      const twins: Array<{ passwordHash: string }> = await t.app
+        .get(DataSource)
         .query('SELECT "passwordHash" FROM "user" WHERE "email" IN (\'hash.check@example.test\', \'hash.twin@example.test\')');
       expect(twins).toHaveLength(2);
       expect(twins[0].passwordHash).not.toBe(twins[1].passwordHash);
@@ -111,13 +132,20 @@ describe('security (e2e)', () => {
     it('refuses HS384 / HS512 tokens made with the right secret (only HS256 is accepted)', async () => {
       const { createHmac } = await import('node:crypto');
       const secret = t.app.get(AppConfig).jwtSecret;
-      for (const [alg, hash] of [['HS384', 'sha384'], ['HS512', 'sha512']] as const) {
+      for (const [alg, hash] of [
+        ['HS384', 'sha384'],
+        ['HS512', 'sha512'],
+      ] as const) {
         const unsigned = `${base64url({ alg, typ: 'JWT' })}.${base64url({ sub: viewerId, role: 'viewer', exp: nowSeconds() + 60 })}`;
         const token = `${unsigned}.${createHmac(hash, secret).update(unsigned).digest('base64url')}`;
         expect((await t.http().get('/api/auth/me').set(bearer(token))).status).toBe(401);
       }
       // control: the same claims as HS256 are accepted
-      await t.http().get('/api/auth/me').set(bearer(signHs256({ sub: viewerId, role: 'viewer', exp: nowSeconds() + 60 }, secret))).expect(200);
+      await t
+        .http()
+        .get('/api/auth/me')
+        .set(bearer(signHs256({ sub: viewerId, role: 'viewer', exp: nowSeconds() + 60 }, secret)))
+        .expect(200);
     });
 
     it('reads the token from the Authorization header only (not a query parameter, a cookie or another scheme)', async () => {
@@ -143,7 +171,10 @@ describe('security (e2e)', () => {
         await t.http().get('/api/users').set(bearer(viewer)), // 403
         await t.http().get('/api/nothing-here'), // 404
         await t.http().post('/api/auth/login').set('Content-Type', 'application/json').send('{"email":'), // 400
-        await t.http().post('/api/auth/login').send({ email: 'x@example.test', password: 'p'.repeat(2 * 1024 * 1024) }), // 413
+        await t
+          .http()
+          .post('/api/auth/login')
+          .send({ email: 'x@example.test', password: 'p'.repeat(2 * 1024 * 1024) }), // 413
       ];
       expect(answers.map((answer) => answer.status)).toEqual([200, 200, 401, 403, 404, 400, 413]);
       for (const answer of answers) {
@@ -200,7 +231,13 @@ describe('security (e2e)', () => {
       const project = `/api/projects/${draft.projectId}`;
       const design = `/api/designs/${draft.id}`;
 
-      type Step = [caller: string, method: 'get' | 'post' | 'put' | 'patch' | 'delete', url: string, body: object | undefined, status: number];
+      type Step = [
+        caller: string,
+        method: 'get' | 'post' | 'put' | 'patch' | 'delete',
+        url: string,
+        body: object | undefined,
+        status: number,
+      ];
       const steps: Step[] = [
         // reading
         ...['checker', 'third', 'viewer', 'purchaser'].map((caller): Step => [caller, 'get', project, undefined, 200]),
@@ -245,7 +282,8 @@ describe('security (e2e)', () => {
         if (body) call = call.send(body);
         const response = await call;
         const label = `${caller} ${method.toUpperCase()} ${url}${body ? ` ${JSON.stringify(body)}` : ''}`;
-        if (response.status !== status) mismatches.push(`${label} → ${response.status} (expected ${status}) ${response.text.slice(0, 200)}`);
+        if (response.status !== status)
+          mismatches.push(`${label} → ${response.status} (expected ${status}) ${response.text.slice(0, 200)}`);
         const changed = changedTables(before, await dbFingerprint(t));
         if ((response.status >= 400 || method === 'get' || url.endsWith('/selection')) && changed.length > 0) {
           mismatches.push(`${label} → ${response.status} changed ${changed.join(', ')}`);
@@ -257,7 +295,12 @@ describe('security (e2e)', () => {
       const variant = third.body.find((item: { name: string }) => item.name === 'Third engineer variant');
       const variantDesign = await t.http().get(`/api/designs/${variant.id}`).set(bearer(who.third)).expect(200);
       // …and the author of the project cannot edit the other engineer's draft in it
-      await t.http().put(`/api/designs/${variant.id}`).set(bearer(who.author)).send({ version: variantDesign.body.version, name: 'Mine now' }).expect(403);
+      await t
+        .http()
+        .put(`/api/designs/${variant.id}`)
+        .set(bearer(who.author))
+        .send({ version: variantDesign.body.version, name: 'Mine now' })
+        .expect(403);
       const purchaserList = await t.http().get(`${project}/designs`).set(bearer(who.purchaser)).expect(200);
       expect(purchaserList.body).toEqual([]);
     });
@@ -307,18 +350,36 @@ describe('security (e2e)', () => {
         // a password change and a new user
         const newPassword = 'brand new password 9';
         secrets.push(newPassword);
-        await app.http().post('/api/users').set(bearer(admin)).send({ email: 'log.check@example.test', name: 'Lou Log', role: 'viewer', password: newPassword }).expect(201);
+        await app
+          .http()
+          .post('/api/users')
+          .set(bearer(admin))
+          .send({ email: 'log.check@example.test', name: 'Lou Log', role: 'viewer', password: newPassword })
+          .expect(201);
 
         // bad tokens: forged, expired, garbage
         const forged = signHs256({ sub: 1, role: 'admin', exp: nowSeconds() + 60 }, 'another secret of at least 32 characters!');
-        const expired = signHs256({ sub: 1, role: 'admin', iat: nowSeconds() - 7200, exp: nowSeconds() - 60 }, app.app.get(AppConfig).jwtSecret);
+        const expired = signHs256(
+          { sub: 1, role: 'admin', iat: nowSeconds() - 7200, exp: nowSeconds() - 60 },
+          app.app.get(AppConfig).jwtSecret,
+        );
         secrets.push(forged, expired);
         for (const token of [forged, expired, `${admin}tampered`]) await app.http().get('/api/users').set(bearer(token)).expect(401);
 
         // an import, good and refused
         const csv = csvOf([mountRow({ supplier: 'Log Check Mounts' })]);
-        await app.http().post('/api/mounts/import').set(bearer(catalogManager)).attach('file', Buffer.from(csv), 'log-check.csv').expect(200);
-        await app.http().post('/api/mounts/import').set(bearer(catalogManager)).attach('file', Buffer.from('not,a\ncatalog'), 'bad.csv').expect(422);
+        await app
+          .http()
+          .post('/api/mounts/import')
+          .set(bearer(catalogManager))
+          .attach('file', Buffer.from(csv), 'log-check.csv')
+          .expect(200);
+        await app
+          .http()
+          .post('/api/mounts/import')
+          .set(bearer(catalogManager))
+          .attach('file', Buffer.from('not,a\ncatalog'), 'bad.csv')
+          .expect(422);
 
         // mail: review notices and a request for quotation, all refused by the mail server's login
         const catalog = await createRfqCatalog(app, catalogManager, 'quotes@log-check.invalid');

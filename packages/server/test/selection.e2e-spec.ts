@@ -61,8 +61,7 @@ describe('selection (e2e)', () => {
   let swayMount: CreatedMount;
   const series: CreatedMount[] = [];
 
-  const select = (body: object) =>
-    t.http().post('/api/selection').set('Authorization', `Bearer ${engineer}`).send(body);
+  const select = (body: object) => t.http().post('/api/selection').set('Authorization', `Bearer ${engineer}`).send(body);
 
   const request = (overrides: object = {}) => ({
     components: CENTRED_MACHINE,
@@ -227,7 +226,9 @@ describe('selection (e2e)', () => {
   it('reads only the mounts whose rated load suits at least one point (the SQL prefilter)', async () => {
     // equal loads of 2452 N at full utilisation with a 25 % margin need P_r ≥ 3065 N: only the 3400 N mount qualifies
     const response = await select(
-      request({ criteria: { minIsolationPct: 90, minUtilization: 0.5, maxUtilization: 1.0, weightMarginPct: 25, supplierIds: [springs.id] } }),
+      request({
+        criteria: { minIsolationPct: 90, minUtilization: 0.5, maxUtilization: 1.0, weightMarginPct: 25, supplierIds: [springs.id] },
+      }),
     );
     expect(response.body.considered).toBe(1);
     expect(response.body.candidates.map((c: Candidate) => c.mountId)).toEqual([offset.id]);
@@ -299,7 +300,8 @@ describe('selection (e2e)', () => {
     const as = { Authorization: `Bearer ${manager}` };
     const fresh = await createSupplier(t, manager, 'Selection Freshness Mounts');
     const part = await createMount(t, manager, fresh.id, { partNumber: 'FRESH-3000', verticalStiffnessNPerM: 1.0e5 });
-    const run = async () => (await select(request({ criteria: { ...request().criteria, supplierIds: [fresh.id] } })).expect(200)).body.candidates as Candidate[];
+    const run = async () =>
+      (await select(request({ criteria: { ...request().criteria, supplierIds: [fresh.id] } })).expect(200)).body.candidates as Candidate[];
     const fn = (k: number) => Math.sqrt((4 * k) / 1000) / TWO_PI; // n_d = 1, four mounts, 1000 kg [CF]
 
     expect(find(await run(), part.id).verticalNaturalFrequencyHz).toBeCloseTo(fn(1.0e5), 6);
@@ -329,7 +331,11 @@ describe('selection (e2e)', () => {
     ['a mass as text', { components: [{ name: 'M', massKg: '12', cg: { x: 0, y: 0, z: 0 } }] }, 'components.0.massKg'],
     ['a component without a CG', { components: [{ name: 'M', massKg: 5 }] }, 'components.0.cg'],
     ['no component', { components: [] }, 'components'],
-    ['10,000 components', { components: Array.from({ length: 10_000 }, () => ({ name: 'c', massKg: 1, cg: { x: 0, y: 0, z: 0 } })) }, 'components'],
+    [
+      '10,000 components',
+      { components: Array.from({ length: 10_000 }, () => ({ name: 'c', massKg: 1, cg: { x: 0, y: 0, z: 0 } })) },
+      'components',
+    ],
     ['2 mount points', { mountPoints: CORNERS.slice(0, 2) }, 'mountPoints'],
     ['65 mount points', { mountPoints: Array.from({ length: 65 }, (_, i) => ({ label: `P${i}`, x: i, y: i % 2, z: 0 })) }, 'mountPoints'],
     ['collinear mount points', { mountPoints: [0, 1, 2].map((i) => ({ label: `P${i}`, x: i, y: 0, z: 0 })) }, 'mountPoints'],
@@ -339,10 +345,18 @@ describe('selection (e2e)', () => {
     ['a negative frequency', { disturbingFrequenciesHz: [-24] }, 'disturbingFrequenciesHz'],
     ['no frequency', { disturbingFrequenciesHz: [] }, 'disturbingFrequenciesHz'],
     ['51 frequencies', { disturbingFrequenciesHz: Array.from({ length: 51 }, (_, i) => i + 1) }, 'disturbingFrequenciesHz'],
-    ['an inverted utilisation window', { criteria: { minIsolationPct: 90, minUtilization: 0.9, maxUtilization: 0.6 } }, 'criteria.maxUtilization'],
+    [
+      'an inverted utilisation window',
+      { criteria: { minIsolationPct: 90, minUtilization: 0.9, maxUtilization: 0.6 } },
+      'criteria.maxUtilization',
+    ],
     ['a window above 1.5', { criteria: { minIsolationPct: 90, minUtilization: 0.5, maxUtilization: 1.6 } }, 'criteria.maxUtilization'],
     ['100 % isolation', { criteria: { minIsolationPct: 100, minUtilization: 0.5, maxUtilization: 1 } }, 'criteria.minIsolationPct'],
-    ['an unknown mount type', { criteria: { minIsolationPct: 90, minUtilization: 0.5, maxUtilization: 1, mountTypes: ['pogo'] } }, 'criteria.mountTypes'],
+    [
+      'an unknown mount type',
+      { criteria: { minIsolationPct: 90, minUtilization: 0.5, maxUtilization: 1, mountTypes: ['pogo'] } },
+      'criteria.mountTypes',
+    ],
     ['a limit above 200', { limit: 201 }, 'limit'],
     ['an unknown field', { colour: 'red' }, 'colour'],
   ])('answers 400 naming the field for %s', async (_case, overrides, field) => {

@@ -57,8 +57,7 @@ describe('startup (e2e)', () => {
   });
 
   describe('outside demo mode', () => {
-    const production = (env: Record<string, string> = {}) =>
-      createTestApp({ dataDir, env: { TACET_DEMO: 'false', ...env } });
+    const production = (env: Record<string, string> = {}) => createTestApp({ dataDir, env: { TACET_DEMO: 'false', ...env } });
 
     it('refuses to boot without JWT_SECRET, saying why', async () => {
       await expect(production()).rejects.toThrow(/JWT_SECRET is required outside demo mode/);

@@ -35,7 +35,12 @@ describe('suppliers (e2e)', () => {
       .http()
       .post('/api/suppliers')
       .set(as(manager))
-      .send({ name: '  Fenwood   Example Mounts ', contactEmail: ' rfq@fenwood.example ', phone: '+44 20 7946 0000', notes: 'Ships from Leeds' })
+      .send({
+        name: '  Fenwood   Example Mounts ',
+        contactEmail: ' rfq@fenwood.example ',
+        phone: '+44 20 7946 0000',
+        notes: 'Ships from Leeds',
+      })
       .expect(201);
     expect(response.body).toMatchObject({
       name: 'Fenwood Example Mounts',

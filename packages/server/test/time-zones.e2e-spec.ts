@@ -53,7 +53,12 @@ describe('time zones (e2e)', () => {
     const catalog = await createRfqCatalog(t, tokens.catalog_manager, 'quotes@zones-test.invalid');
     const design = await createDesign(t, tokens.engineer, catalog);
     await releaseDesign(t, design.id, tokens.engineer, tokens.checker);
-    const rfq = await t.http().post(`/api/designs/${design.id}/rfqs`).set(as('purchaser')).send({ supplierId: catalog.supplier.id }).expect(201);
+    const rfq = await t
+      .http()
+      .post(`/api/designs/${design.id}/rfqs`)
+      .set(as('purchaser'))
+      .send({ supplierId: catalog.supplier.id })
+      .expect(201);
     const quotedAt = '2026-01-15T23:45:00.000Z'; // a different calendar day in Kolkata and in St. John's
     const quoted = await t
       .http()

@@ -27,9 +27,7 @@ describe('users (e2e)', () => {
     expect(emails).toEqual([...emails].sort());
     expect(emails).toEqual(expect.arrayContaining(['admin@tacet.test', 'viewer@tacet.test', 'checker@tacet.test']));
     for (const user of response.body) {
-      expect(Object.keys(user).sort()).toEqual(
-        ['active', 'createdAt', 'email', 'id', 'name', 'role', 'unitSystem', 'updatedAt'].sort(),
-      );
+      expect(Object.keys(user).sort()).toEqual(['active', 'createdAt', 'email', 'id', 'name', 'role', 'unitSystem', 'updatedAt'].sort());
     }
   });
 
@@ -54,7 +52,11 @@ describe('users (e2e)', () => {
   });
 
   it('refuses a duplicate email, whatever its case, with 409', async () => {
-    const response = await t.http().post('/api/users').set(auth()).send(newUser({ email: 'VIEWER@tacet.test' }));
+    const response = await t
+      .http()
+      .post('/api/users')
+      .set(auth())
+      .send(newUser({ email: 'VIEWER@tacet.test' }));
     expect(response.status).toBe(409);
     expect(response.body).toEqual({ statusCode: 409, message: 'A user with this email already exists' });
   });
@@ -85,7 +87,14 @@ describe('users (e2e)', () => {
       .set(auth())
       .send({ name: 'Renamed', role: 'viewer', unitSystem: 'US', active: false })
       .expect(200);
-    expect(response.body).toMatchObject({ id: created.id, email: created.email, name: 'Renamed', role: 'viewer', unitSystem: 'US', active: false });
+    expect(response.body).toMatchObject({
+      id: created.id,
+      email: created.email,
+      name: 'Renamed',
+      role: 'viewer',
+      unitSystem: 'US',
+      active: false,
+    });
 
     for (const body of [
       { email: 'new@example.test' },
@@ -118,7 +127,11 @@ describe('users (e2e)', () => {
   it('DELETE /api/users/:id deactivates: the user stays listed, cannot sign in, and the old token stops working', async () => {
     const created = (await t.http().post('/api/users').set(auth()).send(newUser()).expect(201)).body;
     const token = await t.login(created.email, 'a long password');
-    await t.http().get('/api/auth/me').set({ Authorization: `Bearer ${token}` }).expect(200);
+    await t
+      .http()
+      .get('/api/auth/me')
+      .set({ Authorization: `Bearer ${token}` })
+      .expect(200);
 
     const response = await t.http().delete(`/api/users/${created.id}`).set(auth()).expect(200);
     expect(response.body).toMatchObject({ id: created.id, active: false });
@@ -126,12 +139,19 @@ describe('users (e2e)', () => {
     const listed = (await t.http().get('/api/users').set(auth())).body.find((u: { id: number }) => u.id === created.id);
     expect(listed).toMatchObject({ active: false });
     await t.http().post('/api/auth/login').send({ email: created.email, password: 'a long password' }).expect(401);
-    const old = await t.http().get('/api/auth/me').set({ Authorization: `Bearer ${token}` });
+    const old = await t
+      .http()
+      .get('/api/auth/me')
+      .set({ Authorization: `Bearer ${token}` });
     expect(old.status).toBe(401);
 
     // Reactivation restores access.
     await t.http().patch(`/api/users/${created.id}`).set(auth()).send({ active: true }).expect(200);
-    await t.http().get('/api/auth/me').set({ Authorization: `Bearer ${token}` }).expect(200);
+    await t
+      .http()
+      .get('/api/auth/me')
+      .set({ Authorization: `Bearer ${token}` })
+      .expect(200);
   });
 
   it('answers 404 for an unknown id and 400 for a non-numeric one', async () => {
@@ -145,10 +165,25 @@ describe('users (e2e)', () => {
   });
 
   it('a role change takes effect on the next request with the same token', async () => {
-    const created = (await t.http().post('/api/users').set(auth()).send(newUser({ role: 'admin' })).expect(201)).body;
+    const created = (
+      await t
+        .http()
+        .post('/api/users')
+        .set(auth())
+        .send(newUser({ role: 'admin' }))
+        .expect(201)
+    ).body;
     const token = await t.login(created.email, 'a long password');
-    await t.http().get('/api/users').set({ Authorization: `Bearer ${token}` }).expect(200);
+    await t
+      .http()
+      .get('/api/users')
+      .set({ Authorization: `Bearer ${token}` })
+      .expect(200);
     await t.http().patch(`/api/users/${created.id}`).set(auth()).send({ role: 'viewer' }).expect(200);
-    await t.http().get('/api/users').set({ Authorization: `Bearer ${token}` }).expect(403);
+    await t
+      .http()
+      .get('/api/users')
+      .set({ Authorization: `Bearer ${token}` })
+      .expect(403);
   });
 });

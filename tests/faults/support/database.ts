@@ -47,8 +47,7 @@ export interface StoredDesign {
 export function storedDesign(dataDir: string, id: number): StoredDesign {
   return readDatabase(dataDir, (db) => {
     const row = db.prepare('SELECT version, name, input FROM design WHERE id = ?').get(id) as
-      | { version: number; name: string; input: string }
-      | undefined;
+      { version: number; name: string; input: string } | undefined;
     if (!row) throw new Error(`design ${id} is not in the database`);
     return { version: row.version, name: row.name, input: JSON.parse(row.input) };
   });

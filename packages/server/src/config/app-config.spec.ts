@@ -69,19 +69,13 @@ describe('loadConfig', () => {
   it('requires JWT_SECRET of at least 32 characters outside demo mode', () => {
     expect(problemsOf({})).toEqual([expect.stringContaining('JWT_SECRET is required outside demo mode')]);
     expect(problemsOf({ JWT_SECRET: 'short' })).toEqual(['JWT_SECRET must be at least 32 characters long']);
-    expect(problemsOf({ TACET_DEMO: 'true', JWT_SECRET: 'short' })).toEqual([
-      'JWT_SECRET must be at least 32 characters long',
-    ]);
+    expect(problemsOf({ TACET_DEMO: 'true', JWT_SECRET: 'short' })).toEqual(['JWT_SECRET must be at least 32 characters long']);
   });
 
   it('refuses the demo password and short passwords for the first admin outside demo mode', () => {
     const env = { JWT_SECRET: SECRET, TACET_ADMIN_EMAIL: 'admin@example.test' };
-    expect(problemsOf({ ...env, TACET_ADMIN_PASSWORD: 'tacet-demo' })).toEqual([
-      'TACET_ADMIN_PASSWORD must not be the demo password',
-    ]);
-    expect(problemsOf({ ...env, TACET_ADMIN_PASSWORD: 'short' })).toEqual([
-      'TACET_ADMIN_PASSWORD must be at least 10 characters long',
-    ]);
+    expect(problemsOf({ ...env, TACET_ADMIN_PASSWORD: 'tacet-demo' })).toEqual(['TACET_ADMIN_PASSWORD must not be the demo password']);
+    expect(problemsOf({ ...env, TACET_ADMIN_PASSWORD: 'short' })).toEqual(['TACET_ADMIN_PASSWORD must be at least 10 characters long']);
     expect(problemsOf({ JWT_SECRET: SECRET, TACET_ADMIN_PASSWORD: 'long enough!' })).toEqual([
       'TACET_ADMIN_EMAIL is required when TACET_ADMIN_PASSWORD is set',
     ]);
@@ -126,14 +120,10 @@ describe('loadConfig', () => {
   it('sends mail from MAIL_FROM (default "Tacet <no-reply@tacet.test>") and refuses a malformed sender', () => {
     const env = { JWT_SECRET: SECRET };
     expect(loadConfig(env, cwd).mailFrom).toBe('Tacet <no-reply@tacet.test>');
-    expect(loadConfig({ ...env, MAIL_FROM: 'Mounts desk <desk@example.test>' }, cwd).mailFrom).toBe(
-      'Mounts desk <desk@example.test>',
-    );
+    expect(loadConfig({ ...env, MAIL_FROM: 'Mounts desk <desk@example.test>' }, cwd).mailFrom).toBe('Mounts desk <desk@example.test>');
     expect(loadConfig({ ...env, MAIL_FROM: 'desk@example.test' }, cwd).mailFrom).toBe('desk@example.test');
     for (const bad of ['Tacet', 'Tacet <desk>', 'a@b.test\r\nBcc: c@d.test']) {
-      expect(problemsOf({ ...env, MAIL_FROM: bad })).toEqual([
-        'MAIL_FROM must be an address such as "Tacet <no-reply@example.com>"',
-      ]);
+      expect(problemsOf({ ...env, MAIL_FROM: bad })).toEqual(['MAIL_FROM must be an address such as "Tacet <no-reply@example.com>"']);
     }
   });
 

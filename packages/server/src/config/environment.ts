@@ -138,9 +138,7 @@ function messages(errors: ValidationError[]): string[] {
  * with defaults applied. Throws a ConfigError listing every problem.
  */
 export function validateEnvironment(raw: Record<string, string | undefined>): EnvironmentVariables {
-  const present = Object.fromEntries(
-    Object.entries(raw).filter(([, value]) => value !== undefined && value !== ''),
-  );
+  const present = Object.fromEntries(Object.entries(raw).filter(([, value]) => value !== undefined && value !== ''));
   const env = plainToInstance(EnvironmentVariables, present);
   const errors = validateSync(env, { stopAtFirstError: true });
   if (errors.length > 0) throw new ConfigError(messages(errors));

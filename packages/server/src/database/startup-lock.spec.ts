@@ -30,7 +30,9 @@ describe('withStartupLock', () => {
 
   it('releases the lock and the connection when the work fails', async () => {
     const { dataSource, log } = fakeDataSource('postgres');
-    await expect(withStartupLock(dataSource, async () => Promise.reject(new Error('migration failed')))).rejects.toThrow('migration failed');
+    await expect(withStartupLock(dataSource, async () => Promise.reject(new Error('migration failed')))).rejects.toThrow(
+      'migration failed',
+    );
     expect(log.slice(-2)).toEqual([`SELECT pg_advisory_unlock($1) ${STARTUP_LOCK_KEY}`, 'release']);
   });
 

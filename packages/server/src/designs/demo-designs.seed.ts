@@ -17,8 +17,7 @@ export const DEMO_PROJECT = {
   name: 'North Loop Chilled Water Plant',
   site: 'Harbour Street Energy Centre',
   client: 'Eastmarch Civic Utilities',
-  description:
-    'Invented demo project: end-suction chilled-water pumps on steel base frames, isolated from a plant-room slab.',
+  description: 'Invented demo project: end-suction chilled-water pumps on steel base frames, isolated from a plant-room slab.',
 } as const;
 
 const CORNERS = [

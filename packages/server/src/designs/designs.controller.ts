@@ -1,12 +1,5 @@
 import { Body, Controller, Get, HttpCode, Param, ParseIntPipe, Post, Put } from '@nestjs/common';
-import {
-  ApiBearerAuth,
-  ApiConflictResponse,
-  ApiCreatedResponse,
-  ApiForbiddenResponse,
-  ApiOkResponse,
-  ApiTags,
-} from '@nestjs/swagger';
+import { ApiBearerAuth, ApiConflictResponse, ApiCreatedResponse, ApiForbiddenResponse, ApiOkResponse, ApiTags } from '@nestjs/swagger';
 import { CurrentUser } from '../common/decorators/current-user.decorator.js';
 import { Roles } from '../common/decorators/roles.decorator.js';
 import { SelectionResponseDto } from '../selection/dto/selection-response.dto.js';
@@ -35,11 +28,7 @@ export class DesignsController {
   @Roles('engineer', 'admin')
   @ApiCreatedResponse({ type: DesignDto, description: 'Revision 1, draft, version 1' })
   @ApiConflictResponse({ description: 'Archived project, or the name is taken' })
-  create(
-    @CurrentUser() user: User,
-    @Param('id', ParseIntPipe) projectId: number,
-    @Body() dto: CreateDesignDto,
-  ): Promise<DesignDto> {
+  create(@CurrentUser() user: User, @Param('id', ParseIntPipe) projectId: number, @Body() dto: CreateDesignDto): Promise<DesignDto> {
     return this.designs.create(user, projectId, dto);
   }
 
@@ -54,11 +43,7 @@ export class DesignsController {
   @ApiOkResponse({ type: DesignDto, description: 'Saved; version + 1' })
   @ApiForbiddenResponse({ description: 'Only the author or an admin edits a draft' })
   @ApiConflictResponse({ description: 'Stale version, or the design is not a draft' })
-  update(
-    @CurrentUser() user: User,
-    @Param('id', ParseIntPipe) id: number,
-    @Body() dto: UpdateDesignDto,
-  ): Promise<DesignDto> {
+  update(@CurrentUser() user: User, @Param('id', ParseIntPipe) id: number, @Body() dto: UpdateDesignDto): Promise<DesignDto> {
     return this.designs.update(user, id, dto);
   }
 

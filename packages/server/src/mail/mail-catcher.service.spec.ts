@@ -26,9 +26,7 @@ describe('MailCatcherService', () => {
       'RCPT TO:<second@example.test>',
       'DATA',
       // No From/To headers: the store falls back to the envelope.
-      ['Subject: Raw dialogue', 'Content-Type: text/plain; charset=utf-8', '', 'Line one.', '..dot-stuffed line', '.'].join(
-        '\r\n',
-      ),
+      ['Subject: Raw dialogue', 'Content-Type: text/plain; charset=utf-8', '', 'Line one.', '..dot-stuffed line', '.'].join('\r\n'),
       'QUIT',
     ]);
     const codes = replies.map((reply) => reply.slice(0, 3));

@@ -22,9 +22,7 @@ export interface MailCatcherAddress {
 /** `Name <address>` (or the bare address) for each mailbox of an address header, groups flattened. */
 function addressText(value: AddressObject | AddressObject[] | undefined): string {
   if (!value) return '';
-  const mailboxes = (Array.isArray(value) ? value : [value])
-    .flatMap((header) => header.value)
-    .flatMap((entry) => entry.group ?? [entry]);
+  const mailboxes = (Array.isArray(value) ? value : [value]).flatMap((header) => header.value).flatMap((entry) => entry.group ?? [entry]);
   return mailboxes
     .filter((mailbox) => mailbox.address)
     .map((mailbox) => (mailbox.name ? `${mailbox.name} <${mailbox.address}>` : mailbox.address))

@@ -97,7 +97,7 @@ export class MailService implements OnModuleInit, OnModuleDestroy {
         attachments: mail.attachments?.map(({ filename, content, contentType }) => ({ filename, content, contentType })),
       })) as { messageId: string; rejected?: unknown[] };
       const rejected = (info.rejected ?? []).map((address) =>
-        typeof address === 'string' ? address : (address as { address?: string }).address ?? String(address),
+        typeof address === 'string' ? address : ((address as { address?: string }).address ?? String(address)),
       );
       if (rejected.length > 0) {
         throw new MailSendError(`the mail server refused ${rejected.join(', ')} (other recipients accepted it)`, {

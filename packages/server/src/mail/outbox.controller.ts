@@ -29,7 +29,10 @@ export class OutboxController {
 
   @Get(':id/attachments/:index')
   @ApiProduces('application/octet-stream')
-  @ApiOkResponse({ schema: { type: 'string', format: 'binary' }, description: 'The attachment (0-based index) with its own content type, as a download' })
+  @ApiOkResponse({
+    schema: { type: 'string', format: 'binary' },
+    description: 'The attachment (0-based index) with its own content type, as a download',
+  })
   @ApiNotFoundResponse({ description: `No such message or attachment, or: ${OUTBOX_UNAVAILABLE}` })
   attachment(
     @Param('id', ParseIntPipe) id: number,

@@ -46,11 +46,7 @@ export class ProjectsController {
   @Roles('engineer', 'admin')
   @ApiOkResponse({ type: ProjectDto })
   @ApiForbiddenResponse({ description: 'Only the owner or an admin changes a project' })
-  update(
-    @CurrentUser() user: User,
-    @Param('id', ParseIntPipe) id: number,
-    @Body() dto: UpdateProjectDto,
-  ): Promise<ProjectDto> {
+  update(@CurrentUser() user: User, @Param('id', ParseIntPipe) id: number, @Body() dto: UpdateProjectDto): Promise<ProjectDto> {
     return this.projects.update(user, id, dto);
   }
 

@@ -29,7 +29,10 @@ export class ProjectsService {
   /** Every project, open ones first, then by name. */
   async findAll(user: User): Promise<ProjectDto[]> {
     const projects = await this.projects.find({ relations: { owner: true }, order: { archived: 'ASC', name: 'ASC', id: 'ASC' } });
-    const counts = await this.designCounts(user, projects.map((p) => p.id));
+    const counts = await this.designCounts(
+      user,
+      projects.map((p) => p.id),
+    );
     return projects.map((project) => ProjectDto.from(project, counts.get(project.id) ?? 0));
   }
 

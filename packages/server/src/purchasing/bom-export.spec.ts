@@ -19,7 +19,15 @@ const line = (fields: Partial<BomLine>): BomLine => ({
 
 describe('BOM exports', () => {
   it('CSV: header, one row per line, numbers as written', () => {
-    const rows = parse(bomCsv([line({}), line({ partNumber: 'IS-200', quantity: 1, mountPoints: ['C'], unitPrice: null, extendedPrice: null, leadTimeDays: null })], false)) as string[][];
+    const rows = parse(
+      bomCsv(
+        [
+          line({}),
+          line({ partNumber: 'IS-200', quantity: 1, mountPoints: ['C'], unitPrice: null, extendedPrice: null, leadTimeDays: null }),
+        ],
+        false,
+      ),
+    ) as string[][];
     expect(rows[0]).toEqual([...BOM_CSV_COLUMNS]);
     expect(rows[1]).toEqual(['Invented Springs', 'IS-100', '2', 'A B', '10.25', '20.5', 'USD', '14']);
     expect(rows[2]).toEqual(['Invented Springs', 'IS-200', '1', 'C', '', '', 'USD', '']);
@@ -65,7 +73,17 @@ describe('BOM exports', () => {
     await workbook.xlsx.load(buffer as unknown as ArrayBuffer);
     const sheet = workbook.worksheets[0];
     expect(String(sheet.getCell('A1').value)).toBe('Plant — Skid — rev 2');
-    expect(sheet.getRow(2).values).toEqual([undefined, 'Supplier', 'Part number', 'Quantity (pcs)', 'Mount points', 'Unit price', 'Extended price', 'Currency', 'Lead time (days)']);
+    expect(sheet.getRow(2).values).toEqual([
+      undefined,
+      'Supplier',
+      'Part number',
+      'Quantity (pcs)',
+      'Mount points',
+      'Unit price',
+      'Extended price',
+      'Currency',
+      'Lead time (days)',
+    ]);
     expect(sheet.getCell('B3').value).toBe('IS-100');
     expect(sheet.getCell('F3').value).toBe(20.5);
     expect(sheet.getCell('A5').value).toBe('Total (USD)');

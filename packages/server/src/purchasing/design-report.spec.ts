@@ -32,14 +32,37 @@ describe('designReportPdf', () => {
 
   it('states the inputs and the frozen mount data, and draws the transmissibility chart', async () => {
     const mount = {
-      id: 7, supplier: { id: 1, name: 'Invented Springs' }, partNumber: 'IS-100', series: 'S', mountType: 'open_spring',
-      ratedLoadN: 3000, verticalStiffnessNPerM: 80000, horizontalStiffnessNPerM: null, dynamicStiffnessRatio: 1,
-      dampingModel: 'viscous', dampingRatio: 0.01, lossFactor: null, maxDeflectionMm: 50, tempMinC: -40, tempMaxC: 100,
-      heightMm: null, unitPrice: 40, currency: 'USD', leadTimeDays: 10, updatedAt: '2026-01-01',
+      id: 7,
+      supplier: { id: 1, name: 'Invented Springs' },
+      partNumber: 'IS-100',
+      series: 'S',
+      mountType: 'open_spring',
+      ratedLoadN: 3000,
+      verticalStiffnessNPerM: 80000,
+      horizontalStiffnessNPerM: null,
+      dynamicStiffnessRatio: 1,
+      dampingModel: 'viscous',
+      dampingRatio: 0.01,
+      lossFactor: null,
+      maxDeflectionMm: 50,
+      tempMinC: -40,
+      tempMaxC: 100,
+      heightMm: null,
+      unitPrice: 40,
+      currency: 'USD',
+      leadTimeDays: 10,
+      updatedAt: '2026-01-01',
     };
     const candidate = {
-      label: 'IS-100', supplier: mount.supplier, verticalNaturalFrequencyHz: 2.85, resonanceAmplification: 50, levelErrorMm: 1,
-      perPoint: [], isolation: [], modes: [], reasons: [],
+      label: 'IS-100',
+      supplier: mount.supplier,
+      verticalNaturalFrequencyHz: 2.85,
+      resonanceAmplification: 50,
+      levelErrorMm: 1,
+      perPoint: [],
+      isolation: [],
+      modes: [],
+      reasons: [],
     };
     const withSnapshot = {
       ...design('released'),
@@ -50,14 +73,27 @@ describe('designReportPdf', () => {
         criteria: { minIsolationPct: 90, minUtilization: 0.5, maxUtilization: 1 },
       },
       chosen: candidate,
-      snapshot: { takenAt: '2026-01-02T00:00:00Z', mounts: [mount], candidate, massProperties: { massKg: 100, cg: { x: 0, y: 0, z: 0.2 } } },
+      snapshot: {
+        takenAt: '2026-01-02T00:00:00Z',
+        mounts: [mount],
+        candidate,
+        massProperties: { massKg: 100, cg: { x: 0, y: 0, z: 0.2 } },
+      },
     } as unknown as Design;
     const pdf = await designReportPdf(withSnapshot, {
       disturbingFrequencies: [{ frequencyHz: 24.67, label: '1× shaft at 1480 rpm' }],
       releasedAt: new Date('2026-01-03'),
       compress: false,
     });
-    const wanted = ['Speed 1480 rpm', 'Vanes or blades: 6', 'Minimum isolation 90.0 %', 'x 0.500 m', 'IS-100', 'damping ratio 0.01', 'Transmissibility T (log)'];
+    const wanted = [
+      'Speed 1480 rpm',
+      'Vanes or blades: 6',
+      'Minimum isolation 90.0 %',
+      'x 0.500 m',
+      'IS-100',
+      'damping ratio 0.01',
+      'Transmissibility T (log)',
+    ];
     expect(wanted.filter((text) => !pdfHasText(pdf, text))).toEqual([]);
   }, 20000);
 });

@@ -98,7 +98,9 @@ export function designReportPdf(design: Design, options: ReportOptions): Promise
   const snapshot = design.snapshot;
   heading('Equipment');
   for (const component of design.input.components) {
-    body(`${component.name}: ${fmt(component.massKg, 1)} kg, centre of gravity (${fmt(component.cg.x, 3)}, ${fmt(component.cg.y, 3)}, ${fmt(component.cg.z, 3)}) m`);
+    body(
+      `${component.name}: ${fmt(component.massKg, 1)} kg, centre of gravity (${fmt(component.cg.x, 3)}, ${fmt(component.cg.y, 3)}, ${fmt(component.cg.z, 3)}) m`,
+    );
   }
   if (snapshot) {
     const { massKg, cg } = snapshot.massProperties;
@@ -113,7 +115,8 @@ export function designReportPdf(design: Design, options: ReportOptions): Promise
   const operating = design.input.operating;
   if (operating) {
     heading('Operating conditions');
-    if (operating.speedRangeRpm) body(`Speed range ${fmt(operating.speedRangeRpm.min, 0)}–${fmt(operating.speedRangeRpm.max, 0)} rpm (the lowest speed governs)`);
+    if (operating.speedRangeRpm)
+      body(`Speed range ${fmt(operating.speedRangeRpm.min, 0)}–${fmt(operating.speedRangeRpm.max, 0)} rpm (the lowest speed governs)`);
     else if (operating.speedRpm !== undefined) body(`Speed ${fmt(operating.speedRpm, 0)} rpm`);
     body(`Orders: ${(operating.orders ?? []).map((o) => `${o}×`).join(', ') || '—'}`);
     if (operating.vaneCount) body(`Vanes or blades: ${operating.vaneCount}`);
@@ -124,7 +127,9 @@ export function designReportPdf(design: Design, options: ReportOptions): Promise
   if (criteria) {
     heading('Criteria');
     body(`Minimum isolation ${fmt(criteria.minIsolationPct, 1)} % at every disturbing frequency`);
-    body(`Load utilisation between ${fmt(criteria.minUtilization * 100, 0)} % and ${fmt(criteria.maxUtilization * 100, 0)} % of the rated load`);
+    body(
+      `Load utilisation between ${fmt(criteria.minUtilization * 100, 0)} % and ${fmt(criteria.maxUtilization * 100, 0)} % of the rated load`,
+    );
     if (criteria.ambientTempC !== undefined) body(`Ambient temperature ${fmt(criteria.ambientTempC, 0)} °C`);
     if (criteria.mountTypes?.length) body(`Mount types: ${criteria.mountTypes.map((t) => t.replace(/_/g, ' ')).join(', ')}`);
   }
@@ -139,7 +144,9 @@ export function designReportPdf(design: Design, options: ReportOptions): Promise
   } else {
     body(`${candidate.label} (${candidate.supplier.name})`);
     body(`Vertical natural frequency (uncoupled bounce estimate): ${fmt(candidate.verticalNaturalFrequencyHz, 2)} Hz`);
-    body(`Transmissibility at resonance: ${fmt(candidate.resonanceAmplification, 1)}; level difference between points: ${fmt(candidate.levelErrorMm, 2)} mm`);
+    body(
+      `Transmissibility at resonance: ${fmt(candidate.resonanceAmplification, 1)}; level difference between points: ${fmt(candidate.levelErrorMm, 2)} mm`,
+    );
     heading('Mount points');
     for (const point of candidate.perPoint) {
       body(
@@ -148,11 +155,14 @@ export function designReportPdf(design: Design, options: ReportOptions): Promise
     }
     heading('Isolation at each disturbing frequency');
     for (const row of candidate.isolation) {
-      body(`${fmt(row.frequencyHz, 2)} Hz: transmissibility ${row.transmissibility.toFixed(4)}, isolation ${fmt(row.efficiencyPct, 1)} %, ${fmt(row.dB, 1)} dB`);
+      body(
+        `${fmt(row.frequencyHz, 2)} Hz: transmissibility ${row.transmissibility.toFixed(4)}, isolation ${fmt(row.efficiencyPct, 1)} %, ${fmt(row.dB, 1)} dB`,
+      );
     }
     if (candidate.modes?.length) {
       heading('Rigid-body modes');
-      for (const mode of candidate.modes) body(`${fmt(mode.frequencyHz, 2)} Hz — mostly ${mode.dominant}${mode.coupled ? ' (coupled)' : ''}`);
+      for (const mode of candidate.modes)
+        body(`${fmt(mode.frequencyHz, 2)} Hz — mostly ${mode.dominant}${mode.coupled ? ' (coupled)' : ''}`);
     }
     const mounts = snapshot?.mounts ?? [];
     if (mounts.length) {
@@ -180,11 +190,18 @@ export function designReportPdf(design: Design, options: ReportOptions): Promise
     );
   }
   for (const total of bomTotals(lines)) {
-    doc.font('heading').fontSize(10).text(`Total: ${total.quantity} mounts, ${total.amount.toFixed(2)} ${total.currency}${total.unpricedLines ? ` (${total.unpricedLines} line(s) without a price)` : ''}`);
+    doc
+      .font('heading')
+      .fontSize(10)
+      .text(
+        `Total: ${total.quantity} mounts, ${total.amount.toFixed(2)} ${total.currency}${total.unpricedLines ? ` (${total.unpricedLines} line(s) without a price)` : ''}`,
+      );
   }
   if (snapshot) {
     heading('Data basis');
-    body(`Mount data and every figure above were frozen on ${snapshot.takenAt.slice(0, 10)} when the mounts were chosen; later catalog changes do not alter them.`);
+    body(
+      `Mount data and every figure above were frozen on ${snapshot.takenAt.slice(0, 10)} when the mounts were chosen; later catalog changes do not alter them.`,
+    );
   }
   heading('Cautions');
   body(REPORT_CAUTION);
@@ -237,26 +254,52 @@ function transmissibilityChart(
 
   doc.save();
   const crossover = Math.SQRT2 * fnHz;
-  doc.rect(x(crossover), top, left + width - x(crossover), height).fillOpacity(0.12).fill('#2f7d6d');
+  doc
+    .rect(x(crossover), top, left + width - x(crossover), height)
+    .fillOpacity(0.12)
+    .fill('#2f7d6d');
   doc.fillOpacity(1);
   doc.lineWidth(0.5).strokeColor('#999999');
   for (let decade = -4; decade <= 2; decade++) {
-    doc.moveTo(left, y(10 ** decade)).lineTo(left + width, y(10 ** decade)).stroke();
-    doc.font('body').fontSize(7).fillColor('#555555').text(`1e${decade}`, left - 30, y(10 ** decade) - 4, { width: 26, align: 'right', lineBreak: false });
+    doc
+      .moveTo(left, y(10 ** decade))
+      .lineTo(left + width, y(10 ** decade))
+      .stroke();
+    doc
+      .font('body')
+      .fontSize(7)
+      .fillColor('#555555')
+      .text(`1e${decade}`, left - 30, y(10 ** decade) - 4, { width: 26, align: 'right', lineBreak: false });
   }
   for (let decade = Math.ceil(Math.log10(fMin)); 10 ** decade <= fMax; decade++) {
-    doc.moveTo(x(10 ** decade), top).lineTo(x(10 ** decade), top + height).stroke();
+    doc
+      .moveTo(x(10 ** decade), top)
+      .lineTo(x(10 ** decade), top + height)
+      .stroke();
     doc.text(`${10 ** decade} Hz`, x(10 ** decade) - 20, top + height + 3, { width: 40, align: 'center', lineBreak: false });
   }
   doc.rect(left, top, width, height).lineWidth(0.8).strokeColor('#333333').stroke();
   if (minIsolationPct !== undefined && minIsolationPct < 100) {
     const target = 1 - minIsolationPct / 100;
-    doc.moveTo(left, y(target)).lineTo(left + width, y(target)).dash(4, { space: 3 }).strokeColor('#a05a00').stroke().undash();
-    doc.fillColor('#a05a00').text(`target T ${target.toPrecision(2)}`, left + width - 80, y(target) - 10, { width: 78, align: 'right', lineBreak: false });
+    doc
+      .moveTo(left, y(target))
+      .lineTo(left + width, y(target))
+      .dash(4, { space: 3 })
+      .strokeColor('#a05a00')
+      .stroke()
+      .undash();
+    doc
+      .fillColor('#a05a00')
+      .text(`target T ${target.toPrecision(2)}`, left + width - 80, y(target) - 10, { width: 78, align: 'right', lineBreak: false });
   }
   doc.strokeColor('#c0392b').lineWidth(0.8);
   for (const f of frequencies) {
-    doc.moveTo(x(f.frequencyHz), top).lineTo(x(f.frequencyHz), top + height).dash(2, { space: 2 }).stroke().undash();
+    doc
+      .moveTo(x(f.frequencyHz), top)
+      .lineTo(x(f.frequencyHz), top + height)
+      .dash(2, { space: 2 })
+      .stroke()
+      .undash();
   }
   const grid = logSpace(fMin, fMax, 300);
   doc.lineWidth(1.4).strokeColor('#1d4f45');

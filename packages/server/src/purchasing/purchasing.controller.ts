@@ -1,12 +1,5 @@
 import { Controller, Get, Param, ParseIntPipe, StreamableFile } from '@nestjs/common';
-import {
-  ApiBearerAuth,
-  ApiConflictResponse,
-  ApiForbiddenResponse,
-  ApiOkResponse,
-  ApiProduces,
-  ApiTags,
-} from '@nestjs/swagger';
+import { ApiBearerAuth, ApiConflictResponse, ApiForbiddenResponse, ApiOkResponse, ApiProduces, ApiTags } from '@nestjs/swagger';
 import { CurrentUser } from '../common/decorators/current-user.decorator.js';
 import { Roles } from '../common/decorators/roles.decorator.js';
 import type { User } from '../users/user.entity.js';
@@ -33,7 +26,10 @@ export class PurchasingController {
   @Get('designs/:id/bom.csv')
   @Roles('purchaser', 'engineer', 'admin')
   @ApiProduces('text/csv')
-  @ApiOkResponse({ schema: { type: 'string', format: 'binary' }, description: 'supplier,part_number,quantity,mount_points,unit_price,extended_price,currency,lead_time_days' })
+  @ApiOkResponse({
+    schema: { type: 'string', format: 'binary' },
+    description: 'supplier,part_number,quantity,mount_points,unit_price,extended_price,currency,lead_time_days',
+  })
   @ApiConflictResponse({ description: 'Not released (only its author or an admin exports a draft, marked DRAFT)' })
   async bomCsv(@CurrentUser() user: User, @Param('id', ParseIntPipe) id: number): Promise<StreamableFile> {
     return download(await this.purchasing.bomCsv(user, id));
@@ -50,7 +46,10 @@ export class PurchasingController {
 
   @Get('designs/:id/report.pdf')
   @ApiProduces('application/pdf')
-  @ApiOkResponse({ schema: { type: 'string', format: 'binary' }, description: 'Calculation report; unreleased designs carry a DRAFT watermark' })
+  @ApiOkResponse({
+    schema: { type: 'string', format: 'binary' },
+    description: 'Calculation report; unreleased designs carry a DRAFT watermark',
+  })
   @ApiForbiddenResponse({ description: 'An unreleased design, asked for by a role other than engineer or admin' })
   async report(@CurrentUser() user: User, @Param('id', ParseIntPipe) id: number): Promise<StreamableFile> {
     return download(await this.purchasing.report(user, id));

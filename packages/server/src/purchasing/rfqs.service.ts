@@ -89,7 +89,10 @@ export class RfqsService {
     const rank = (status: RfqStatus) => (RFQ_PROGRESS as readonly RfqStatus[]).indexOf(status);
     if (rank(dto.status) <= rank(rfq.status)) throw new ConflictException(RFQ_MESSAGES.forwardOnly(rfq.status, dto.status));
     if (dto.status === 'quoted' && dto.quotedPrice === undefined) {
-      throw new BadRequestException({ message: 'Validation failed', errors: [{ field: 'quotedPrice', message: RFQ_MESSAGES.quotedPrice }] });
+      throw new BadRequestException({
+        message: 'Validation failed',
+        errors: [{ field: 'quotedPrice', message: RFQ_MESSAGES.quotedPrice }],
+      });
     }
     const changes: Partial<Rfq> = { status: dto.status };
     if (dto.quotedPrice !== undefined) changes.quotedPrice = dto.quotedPrice;
@@ -112,7 +115,14 @@ export class RfqsService {
    * E-mails the request (outside any transaction: network I/O) and records the outcome:
    * `requested` with the Message-ID, or `failed` with the mail server's reason.
    */
-  private async deliver(rfq: Rfq, design: Design, supplier: Supplier, user: User, message: string | null, note: string | null): Promise<void> {
+  private async deliver(
+    rfq: Rfq,
+    design: Design,
+    supplier: Supplier,
+    user: User,
+    message: string | null,
+    note: string | null,
+  ): Promise<void> {
     const heading = headingOf(design);
     const lines = supplierLines(design, supplier.id);
     const subject = `Request for quotation: ${design.name} rev ${design.revision} (${design.project.name})`;

@@ -11,9 +11,7 @@ export const REVIEW_MESSAGES = {
   notAllowed: (from: DesignStatus, to: DesignStatus) => `A design cannot go from ${from} to ${to}`,
 } as const;
 
-export type ReviewVerdict =
-  | { ok: true }
-  | { ok: false; kind: 'forbidden' | 'conflict' | 'bad-request'; message: string };
+export type ReviewVerdict = { ok: true } | { ok: false; kind: 'forbidden' | 'conflict' | 'bad-request'; message: string };
 
 interface TransitionCase {
   status: DesignStatus;

@@ -42,8 +42,7 @@ const clamp01 = (v: number): number => (v < 0 ? 0 : v > 1 ? 1 : v);
 /** Writes the weighted terms into `out` (reused by the caller) and returns their sum. */
 export function scoreCandidate(s: ScoreInputs, out?: ScoreTerms): number {
   const isolation = SCORE_WEIGHTS.isolation * clamp01(s.minIsolationDb / s.isolationDbTarget);
-  const utilization =
-    SCORE_WEIGHTS.utilization * (1 - Math.min(1, Math.abs(s.meanUtilization - PREFERRED_UTILIZATION) / UTILIZATION_SPAN));
+  const utilization = SCORE_WEIGHTS.utilization * (1 - Math.min(1, Math.abs(s.meanUtilization - PREFERRED_UTILIZATION) / UTILIZATION_SPAN));
   const level = SCORE_WEIGHTS.level * (s.meanDeflectionM > 0 ? 1 - Math.min(1, s.levelErrorM / s.meanDeflectionM) : 0);
   const price = SCORE_WEIGHTS.price * (s.price > 0 && s.minPrice > 0 ? clamp01(s.minPrice / s.price) : s.price === 0 ? 1 : 0);
   const leadTime =

@@ -188,12 +188,15 @@ export class SelectionCatalogReader {
 
   /** Rows (with their details) of one active mount or one series, without the load / type filters: a choice made outside the list. */
   rowsOf(choice: { mountId: number } | { supplierId: number; series: string }): Promise<CatalogTuple[]> {
-    return this.tuples((param) => {
-      const where = [`${column('active')} = ${param(true)}`, `"s"."active" = ${param(true)}`];
-      if ('mountId' in choice) where.push(`${column('id')} = ${param(choice.mountId)}`);
-      else where.push(`${column('supplierId')} = ${param(choice.supplierId)}`, `${column('series')} = ${param(choice.series)}`);
-      return where.join(' AND ');
-    }, [...DETAIL_COLUMNS]);
+    return this.tuples(
+      (param) => {
+        const where = [`${column('active')} = ${param(true)}`, `"s"."active" = ${param(true)}`];
+        if ('mountId' in choice) where.push(`${column('id')} = ${param(choice.mountId)}`);
+        else where.push(`${column('supplierId')} = ${param(choice.supplierId)}`, `${column('series')} = ${param(choice.series)}`);
+        return where.join(' AND ');
+      },
+      [...DETAIL_COLUMNS],
+    );
   }
 
   async supplierNames(ids: readonly number[]): Promise<Map<number, string>> {

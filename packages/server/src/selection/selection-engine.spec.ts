@@ -65,11 +65,21 @@ const noLoader: DetailsLoader = async () => new Map();
 
 /** An evaluation over rows as the reader delivers them (tuples, with the mount type). */
 const evaluate = (p: ReturnType<typeof problem>, rows: CatalogRow[], options?: { everySeries?: boolean }): SelectionEvaluation =>
-  new SelectionEvaluation(p, rows.map((r) => toCatalogTuple(r, true)), options);
+  new SelectionEvaluation(
+    p,
+    rows.map((r) => toCatalogTuple(r, true)),
+    options,
+  );
 
 describe('SelectionEvaluation', () => {
   it('ISOLATION_REFERENCE CV-12 [CF]: an elastomer with δ_st = 5 mm and n_d = 1.4 has fn = 8.340 Hz; T is hysteretic with η', () => {
-    const elastomer = row({ verticalStiffnessNPerM: W4 / 0.005, dynamicStiffnessRatio: 1.4, dampingRatio: null, lossFactor: 0.1, mountType: 'elastomer_mount' });
+    const elastomer = row({
+      verticalStiffnessNPerM: W4 / 0.005,
+      dynamicStiffnessRatio: 1.4,
+      dampingRatio: null,
+      lossFactor: 0.1,
+      mountType: 'elastomer_mount',
+    });
     const evaluation = evaluate(problem({ frequencies: [{ frequencyHz: 30 }] }), [elastomer]);
     const c = evaluation.describe(evaluation.findUniform(elastomer.id), names);
     expect(c.verticalNaturalFrequencyHz.toFixed(3)).toBe('8.340');
@@ -132,7 +142,14 @@ describe('SelectionEvaluation', () => {
 
   it('explains temperature, deflection, type and supplier failures in words', () => {
     const p = problem({
-      criteria: { minIsolationPct: 90, minUtilization: 0.5, maxUtilization: 1.0, ambientTempC: 90, mountTypes: ['housed_spring'], supplierIds: [2] },
+      criteria: {
+        minIsolationPct: 90,
+        minUtilization: 0.5,
+        maxUtilization: 1.0,
+        ambientTempC: 90,
+        mountTypes: ['housed_spring'],
+        supplierIds: [2],
+      },
     });
     const mount = row({ partNumber: 'HOT-1', tempMinC: -20, tempMaxC: 70, maxDeflectionMm: 20 });
     const evaluation = evaluate(p, [mount]);
@@ -171,7 +188,10 @@ describe('SelectionEvaluation with rows as the prefilter reads them (no details)
     const hot = row({ partNumber: 'HOT-2', tempMinC: -10, tempMaxC: 90, verticalStiffnessNPerM: 1.05e5 });
     const unused = row({ partNumber: 'FAR-3', ratedLoadN: 1000 });
     const byId = new Map<number, MountDetails>(
-      [cool, hot, unused].map((r) => [r.id, { partNumber: r.partNumber, mountType: r.mountType, horizontalStiffnessNPerM: null, tempMinC: r.tempMinC, tempMaxC: r.tempMaxC }]),
+      [cool, hot, unused].map((r) => [
+        r.id,
+        { partNumber: r.partNumber, mountType: r.mountType, horizontalStiffnessNPerM: null, tempMinC: r.tempMinC, tempMaxC: r.tempMaxC },
+      ]),
     );
     const asked: number[][] = [];
     const loader: DetailsLoader = async (ids) => {
@@ -179,7 +199,10 @@ describe('SelectionEvaluation with rows as the prefilter reads them (no details)
       return new Map(ids.map((id) => [id, byId.get(id)!]));
     };
     const p = problem({ criteria: { minIsolationPct: 90, minUtilization: 0.5, maxUtilization: 1.0, ambientTempC: 60 } });
-    const evaluation = new SelectionEvaluation(p, [cool, hot, unused].map((r) => toCatalogTuple(r)));
+    const evaluation = new SelectionEvaluation(
+      p,
+      [cool, hot, unused].map((r) => toCatalogTuple(r)),
+    );
     const ranked = (await evaluation.rank(1, loader)).map((c) => evaluation.describe(c, names));
     // COOL-1 scored best, but its range stops at 40 °C: it fails once its details are known
     expect(ranked.map((c) => [c.label, c.passes])).toEqual([
@@ -187,7 +210,9 @@ describe('SelectionEvaluation with rows as the prefilter reads them (no details)
       ['COOL-1', false],
     ]);
     expect(ranked[1].reasons).toEqual(['The ambient temperature 60 °C is outside the range of COOL-1 (-10 °C to 40 °C).']);
-    expect(ranked[0].notes).toContain('The catalog gives no horizontal stiffness: the rigid-body modes take it equal to the vertical stiffness.');
+    expect(ranked[0].notes).toContain(
+      'The catalog gives no horizontal stiffness: the rigid-body modes take it equal to the vertical stiffness.',
+    );
     expect(asked.flat()).not.toContain(unused.id);
   });
 });

@@ -61,7 +61,13 @@ export const CATALOG_COLUMNS = [
  * Fields read for a few mounts only; a tuple may carry them after CATALOG_COLUMNS (a choice
  * evaluated outside the prefilter does, so that its temperature and type are checked).
  */
-export const DETAIL_COLUMNS = ['partNumber', 'mountType', 'horizontalStiffnessNPerM', 'tempMinC', 'tempMaxC'] as const satisfies readonly (keyof CatalogRow)[];
+export const DETAIL_COLUMNS = [
+  'partNumber',
+  'mountType',
+  'horizontalStiffnessNPerM',
+  'tempMinC',
+  'tempMaxC',
+] as const satisfies readonly (keyof CatalogRow)[];
 
 /** The detail fields of one mount. */
 export type MountDetails = Pick<CatalogRow, (typeof DETAIL_COLUMNS)[number]>;
@@ -451,8 +457,6 @@ export class SelectionEvaluation {
     }
   }
 
-
-
   /** One row at every point: the equal-stiffness loads hold (identical mounts). */
   private evaluateUniform(): void {
     const { problem } = this;
@@ -680,9 +684,7 @@ export class SelectionEvaluation {
   }
 
   private loadOf(c: number, point: number): number {
-    return c < this.rowCount
-      ? this.problem.equalLoadsN[point]
-      : this.seriesLoad[(c - this.rowCount) * this.problem.pointCount + point];
+    return c < this.rowCount ? this.problem.equalLoadsN[point] : this.seriesLoad[(c - this.rowCount) * this.problem.pointCount + point];
   }
 
   /**
@@ -912,7 +914,9 @@ export class SelectionEvaluation {
       }
     }
     if (c >= this.rowCount && this.levelErrorM[c] > 0) {
-      notes.push(`Sizes picked per point for a level skid; the remaining level error of ${formatMm(this.levelErrorM[c] * 1000)} is trimmed with shims or levelling bolts.`);
+      notes.push(
+        `Sizes picked per point for a level skid; the remaining level error of ${formatMm(this.levelErrorM[c] * 1000)} is trimmed with shims or levelling bolts.`,
+      );
     }
     return notes;
   }

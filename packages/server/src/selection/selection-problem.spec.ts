@@ -62,12 +62,18 @@ describe('prepareProblem', () => {
     expect(bounds.maxRatedLoadN).toBeCloseTo(2717.3 / 0.5, 0);
   });
 
-  it('maps the calculation library\'s refusals to the API field names', () => {
+  it("maps the calculation library's refusals to the API field names", () => {
     const collinear = [0, 1, 2].map((i) => ({ label: `P${i}`, x: i, y: 0, z: 0 }));
     const error = (() => {
       try {
         withInputErrors(
-          () => prepareProblem({ components: [{ name: 'M', massKg: 1, cg: { x: 0, y: 0, z: 0 } }], mountPoints: collinear, frequencies: [{ frequencyHz: 10 }], criteria }),
+          () =>
+            prepareProblem({
+              components: [{ name: 'M', massKg: 1, cg: { x: 0, y: 0, z: 0 } }],
+              mountPoints: collinear,
+              frequencies: [{ frequencyHz: 10 }],
+              criteria,
+            }),
           'input',
         );
       } catch (e) {

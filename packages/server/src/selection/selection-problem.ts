@@ -179,8 +179,7 @@ export function prefilterBounds(problem: SelectionProblem): PrefilterBounds {
 export function designFrequencies(operating: OperatingConditions): LabelledFrequency[] {
   let list: LabelledFrequency[];
   try {
-    const hasSource =
-      operating.speedRpm !== undefined || operating.speedRangeRpm !== undefined || operating.lineFrequencyHz !== undefined;
+    const hasSource = operating.speedRpm !== undefined || operating.speedRangeRpm !== undefined || operating.lineFrequencyHz !== undefined;
     list = hasSource
       ? disturbingFrequencies({
           speedRpm: operating.speedRpm,
@@ -200,7 +199,11 @@ export function designFrequencies(operating: OperatingConditions): LabelledFrequ
   }
   for (const hz of operating.extraFrequenciesHz ?? []) list.push({ frequencyHz: hz, label: `extra ${formatHz(hz)}` });
   if (list.length === 0) {
-    throw new VibrationInputError('operating', 'gives no disturbing frequency: set a speed, a line frequency or extra frequencies', 'empty');
+    throw new VibrationInputError(
+      'operating',
+      'gives no disturbing frequency: set a speed, a line frequency or extra frequencies',
+      'empty',
+    );
   }
   if (list.length > SELECTION_LIMITS.frequencies) {
     throw new VibrationInputError('operating', `gives ${list.length} disturbing frequencies; at most ${SELECTION_LIMITS.frequencies}`);

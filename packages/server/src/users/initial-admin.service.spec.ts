@@ -8,8 +8,7 @@ import type { PasswordService } from './password.service.js';
 import type { User } from './user.entity.js';
 
 function setup(rows: User[], config: Partial<AppConfig>) {
-  const matches = (row: User, where: Partial<User>) =>
-    Object.entries(where).every(([key, value]) => row[key as keyof User] === value);
+  const matches = (row: User, where: Partial<User>) => Object.entries(where).every(([key, value]) => row[key as keyof User] === value);
   const repository = {
     existsBy: jest.fn(async (where: Partial<User>) => rows.some((row) => matches(row, where))),
     findOneBy: jest.fn(async (where: Partial<User>) => rows.find((row) => matches(row, where)) ?? null),

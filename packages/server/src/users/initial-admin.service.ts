@@ -34,9 +34,7 @@ export class InitialAdminService implements OnApplicationBootstrap {
     if (await this.users.existsBy({ role: 'admin', active: true })) return;
     const admin = this.config.initialAdmin;
     if (!admin) {
-      throw new ConfigError([
-        'No active admin exists: set TACET_ADMIN_EMAIL and TACET_ADMIN_PASSWORD to create the first admin',
-      ]);
+      throw new ConfigError(['No active admin exists: set TACET_ADMIN_EMAIL and TACET_ADMIN_PASSWORD to create the first admin']);
     }
     const email = normalizeEmail(admin.email);
     const passwordHash = await this.passwords.hash(admin.password);
@@ -46,9 +44,7 @@ export class InitialAdminService implements OnApplicationBootstrap {
       this.logger.warn(`No active admin existed: ${email} is now an active admin`);
       return;
     }
-    await this.users.save(
-      this.users.create({ email, name: 'Administrator', role: 'admin', unitSystem: 'SI', active: true, passwordHash }),
-    );
+    await this.users.save(this.users.create({ email, name: 'Administrator', role: 'admin', unitSystem: 'SI', active: true, passwordHash }));
     this.logger.log(`Created the first admin, ${email}`);
   }
 }

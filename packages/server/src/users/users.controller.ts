@@ -37,11 +37,7 @@ export class UsersController {
   @Patch(':id')
   @ApiOkResponse({ type: UserDto })
   @ApiConflictResponse({ description: 'An admin cannot deactivate themselves or drop their own admin role' })
-  async update(
-    @CurrentUser() actor: User,
-    @Param('id', ParseIntPipe) id: number,
-    @Body() dto: UpdateUserDto,
-  ): Promise<UserDto> {
+  async update(@CurrentUser() actor: User, @Param('id', ParseIntPipe) id: number, @Body() dto: UpdateUserDto): Promise<UserDto> {
     return UserDto.from(await this.users.update(actor, id, dto));
   }
 

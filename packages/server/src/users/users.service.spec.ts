@@ -11,8 +11,9 @@ import { UsersService } from './users.service.js';
 function fakeRepository(rows: User[] = []) {
   return {
     find: jest.fn(async () => [...rows]),
-    findOneBy: jest.fn(async (where: Partial<User>) =>
-      rows.find((row) => Object.entries(where).every(([key, value]) => row[key as keyof User] === value)) ?? null,
+    findOneBy: jest.fn(
+      async (where: Partial<User>) =>
+        rows.find((row) => Object.entries(where).every(([key, value]) => row[key as keyof User] === value)) ?? null,
     ),
     existsBy: jest.fn(async (where: Partial<User>) =>
       rows.some((row) => Object.entries(where).every(([key, value]) => row[key as keyof User] === value)),
@@ -27,11 +28,7 @@ const config = (demo: boolean) => new AppConfig({ demo } as AppConfig);
 
 function makeService(rows: User[] = [], demo = false) {
   const repository = fakeRepository(rows);
-  const service = new UsersService(
-    repository as unknown as Repository<User>,
-    fakePasswords() as unknown as PasswordService,
-    config(demo),
-  );
+  const service = new UsersService(repository as unknown as Repository<User>, fakePasswords() as unknown as PasswordService, config(demo));
   return { service, repository };
 }
 
@@ -70,9 +67,7 @@ describe('UsersService', () => {
     });
 
     it('refuses the demo password outside demo mode only', async () => {
-      await expect(makeService([]).service.create({ ...dto, password: 'tacet-demo' })).rejects.toBeInstanceOf(
-        BadRequestException,
-      );
+      await expect(makeService([]).service.create({ ...dto, password: 'tacet-demo' })).rejects.toBeInstanceOf(BadRequestException);
       await expect(makeService([], true).service.create({ ...dto, password: 'tacet-demo' })).resolves.toBeDefined();
     });
   });
@@ -123,9 +118,9 @@ describe('UsersService', () => {
     it('changes the password only with the right current password', async () => {
       const me = buildUser({ id: 3, passwordHash: 'hashed:old password 1' });
       const { service } = makeService([me]);
-      await expect(
-        service.changePassword(me, { currentPassword: 'wrong password', newPassword: 'new password 1' }),
-      ).rejects.toThrow(new BadRequestException('Current password is incorrect'));
+      await expect(service.changePassword(me, { currentPassword: 'wrong password', newPassword: 'new password 1' })).rejects.toThrow(
+        new BadRequestException('Current password is incorrect'),
+      );
       await service.changePassword(me, { currentPassword: 'old password 1', newPassword: 'new password 1' });
       expect(me.passwordHash).toBe('hashed:new password 1');
     });
@@ -133,9 +128,9 @@ describe('UsersService', () => {
     it('refuses the demo password as a new password outside demo mode', async () => {
       const me = buildUser({ id: 3, passwordHash: 'hashed:old password 1' });
       const { service } = makeService([me]);
-      await expect(
-        service.changePassword(me, { currentPassword: 'old password 1', newPassword: 'tacet-demo' }),
-      ).rejects.toBeInstanceOf(BadRequestException);
+      await expect(service.changePassword(me, { currentPassword: 'old password 1', newPassword: 'tacet-demo' })).rejects.toBeInstanceOf(
+        BadRequestException,
+      );
       expect(me.passwordHash).toBe('hashed:old password 1');
     });
   });

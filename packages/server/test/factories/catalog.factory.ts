@@ -7,9 +7,23 @@ export const example = (name: string): string => `${EXAMPLES_DIR}${name}`;
 
 /** The export's (and the demo file's) header: every SI column. */
 export const SI_HEADER = [
-  'supplier', 'part_number', 'series', 'mount_type', 'rated_load_n', 'vertical_stiffness_n_per_mm',
-  'horizontal_stiffness_n_per_mm', 'dynamic_stiffness_ratio', 'damping_ratio', 'loss_factor', 'max_deflection_mm',
-  'temp_min_c', 'temp_max_c', 'height_mm', 'unit_price', 'currency', 'lead_time_days',
+  'supplier',
+  'part_number',
+  'series',
+  'mount_type',
+  'rated_load_n',
+  'vertical_stiffness_n_per_mm',
+  'horizontal_stiffness_n_per_mm',
+  'dynamic_stiffness_ratio',
+  'damping_ratio',
+  'loss_factor',
+  'max_deflection_mm',
+  'temp_min_c',
+  'temp_max_c',
+  'height_mm',
+  'unit_price',
+  'currency',
+  'lead_time_days',
 ] as const;
 
 let counter = 0;

@@ -81,9 +81,20 @@ export async function createFuzzTargets(t: TestApp): Promise<FuzzTargets> {
   const rfq = await must('rfq', t.http().post(`/api/designs/${released.id}/rfqs`).set(auth).send({ supplierId }));
   const victim = await must(
     'user',
-    t.http().post('/api/users').set(auth).send({ email: 'fuzz-victim@example.test', name: 'Vic Victim', role: 'viewer', password: 'victim password 1' }),
+    t
+      .http()
+      .post('/api/users')
+      .set(auth)
+      .send({ email: 'fuzz-victim@example.test', name: 'Vic Victim', role: 'viewer', password: 'victim password 1' }),
   );
-  await must('own user', t.http().post('/api/users').set(auth).send({ ...OWN_USER, name: 'Fay Fuzz', role: 'engineer' }));
+  await must(
+    'own user',
+    t
+      .http()
+      .post('/api/users')
+      .set(auth)
+      .send({ ...OWN_USER, name: 'Fay Fuzz', role: 'engineer' }),
+  );
   const ownUser = await t.login(OWN_USER.email, OWN_USER.password);
 
   const currentVersion = async (id: number): Promise<number> => (await t.http().get(`/api/designs/${id}`).set(auth)).body.version ?? 1;
@@ -104,28 +115,69 @@ export async function createFuzzTargets(t: TestApp): Promise<FuzzTargets> {
       body: () => ({ email: 'fuzz-new@example.test', name: 'Nia New', role: 'viewer', password: 'new user password', unitSystem: 'SI' }),
       runsFactor: 0.5,
     },
-    'PATCH /api/users/:id': { url: `/api/users/${victim.id}`, as: 'admin', body: () => ({ name: 'Vic Victim', role: 'viewer', active: true, unitSystem: 'SI' }) },
+    'PATCH /api/users/:id': {
+      url: `/api/users/${victim.id}`,
+      as: 'admin',
+      body: () => ({ name: 'Vic Victim', role: 'viewer', active: true, unitSystem: 'SI' }),
+    },
     'POST /api/suppliers': {
       url: '/api/suppliers',
       as: 'admin',
-      body: () => ({ name: 'Fuzzwell Mounts', contactEmail: 'sales@fuzzwell.invalid', phone: '+1 555 0100', notes: 'Invented for the fuzz tests' }),
+      body: () => ({
+        name: 'Fuzzwell Mounts',
+        contactEmail: 'sales@fuzzwell.invalid',
+        phone: '+1 555 0100',
+        notes: 'Invented for the fuzz tests',
+      }),
     },
-    'PATCH /api/suppliers/:id': { url: `/api/suppliers/${supplierId}`, as: 'admin', body: () => ({ phone: '+1 555 0199', notes: 'Updated' }) },
-    'POST /api/mounts': { url: '/api/mounts', as: 'admin', body: () => mountBody(supplierId, { horizontalStiffnessNPerM: 50_000, unitPrice: 12.5, currency: 'EUR', leadTimeDays: 14 }) },
-    'PATCH /api/mounts/:id': { url: `/api/mounts/${catalog.mountId}`, as: 'admin', body: () => ({ ratedLoadN: 3000, series: 'F2', leadTimeDays: 12 }) },
+    'PATCH /api/suppliers/:id': {
+      url: `/api/suppliers/${supplierId}`,
+      as: 'admin',
+      body: () => ({ phone: '+1 555 0199', notes: 'Updated' }),
+    },
+    'POST /api/mounts': {
+      url: '/api/mounts',
+      as: 'admin',
+      body: () => mountBody(supplierId, { horizontalStiffnessNPerM: 50_000, unitPrice: 12.5, currency: 'EUR', leadTimeDays: 14 }),
+    },
+    'PATCH /api/mounts/:id': {
+      url: `/api/mounts/${catalog.mountId}`,
+      as: 'admin',
+      body: () => ({ ratedLoadN: 3000, series: 'F2', leadTimeDays: 12 }),
+    },
     'POST /api/mounts/import': { url: '/api/mounts/import?dryRun=true', as: 'admin', body: () => ({}) },
-    'POST /api/projects': { url: '/api/projects', as: 'admin', body: () => ({ name: 'Fuzz project', site: 'Plant 9', client: 'Nobody Ltd', description: 'Invented' }) },
-    'PATCH /api/projects/:id': { url: `/api/projects/${draft.projectId}`, as: 'admin', body: () => ({ name: draft.projectName, site: 'Plant 9', archived: false }) },
-    'POST /api/projects/:id/designs': { url: `/api/projects/${draft.projectId}/designs`, as: 'admin', body: () => ({ name: 'Fuzzed skid', input }) },
+    'POST /api/projects': {
+      url: '/api/projects',
+      as: 'admin',
+      body: () => ({ name: 'Fuzz project', site: 'Plant 9', client: 'Nobody Ltd', description: 'Invented' }),
+    },
+    'PATCH /api/projects/:id': {
+      url: `/api/projects/${draft.projectId}`,
+      as: 'admin',
+      body: () => ({ name: draft.projectName, site: 'Plant 9', archived: false }),
+    },
+    'POST /api/projects/:id/designs': {
+      url: `/api/projects/${draft.projectId}/designs`,
+      as: 'admin',
+      body: () => ({ name: 'Fuzzed skid', input }),
+    },
     'PUT /api/designs/:id': {
       url: `/api/designs/${draft.id}`,
       as: 'admin',
       body: async () => ({ version: await currentVersion(draft.id), name: draft.name, input, chosenMountId: catalog.mountId }),
     },
     'POST /api/designs/:id/selection': { url: `/api/designs/${draft.id}/selection`, as: 'admin', body: () => ({ limit: 5 }) },
-    'POST /api/designs/:id/transitions': { url: `/api/designs/${toSubmit.id}/transitions`, as: 'admin', body: () => ({ to: 'in_review', comment: 'Ready' }) },
+    'POST /api/designs/:id/transitions': {
+      url: `/api/designs/${toSubmit.id}/transitions`,
+      as: 'admin',
+      body: () => ({ to: 'in_review', comment: 'Ready' }),
+    },
     'POST /api/designs/:id/revisions': { url: `/api/designs/${released.id}/revisions`, as: 'admin', body: () => ({}) },
-    'POST /api/designs/:id/rfqs': { url: `/api/designs/${released.id}/rfqs`, as: 'admin', body: () => ({ supplierId, message: 'Please quote.' }) },
+    'POST /api/designs/:id/rfqs': {
+      url: `/api/designs/${released.id}/rfqs`,
+      as: 'admin',
+      body: () => ({ supplierId, message: 'Please quote.' }),
+    },
     'PATCH /api/rfqs/:id': {
       url: `/api/rfqs/${rfq.id}`,
       as: 'admin',

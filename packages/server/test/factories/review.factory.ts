@@ -14,7 +14,12 @@ export interface TestCatalog {
   unitPrice: number;
 }
 
-export async function createRfqCatalog(t: TestApp, catalogToken: string, contactEmail: string | null, unitPrice = 42.5): Promise<TestCatalog> {
+export async function createRfqCatalog(
+  t: TestApp,
+  catalogToken: string,
+  contactEmail: string | null,
+  unitPrice = 42.5,
+): Promise<TestCatalog> {
   const n = ++counter;
   const auth = { Authorization: `Bearer ${catalogToken}` };
   const supplier = await t
@@ -67,7 +72,11 @@ const CORNERS = [
 export async function createDesign(t: TestApp, authorToken: string, catalog: TestCatalog, choose = true): Promise<TestDesign> {
   const n = ++counter;
   const auth = { Authorization: `Bearer ${authorToken}` };
-  const project = await t.http().post('/api/projects').set(auth).send({ name: `Review project ${n}-${process.pid}` });
+  const project = await t
+    .http()
+    .post('/api/projects')
+    .set(auth)
+    .send({ name: `Review project ${n}-${process.pid}` });
   if (project.status !== 201) throw new Error(`project: ${project.status} ${project.text}`);
   const name = `Pump skid ${n}`;
   const design = await t
@@ -93,8 +102,16 @@ export async function createDesign(t: TestApp, authorToken: string, catalog: Tes
 
 /** Sends the design for check as its author and releases it as the checker. */
 export async function releaseDesign(t: TestApp, id: number, authorToken: string, checkerToken: string): Promise<void> {
-  const submit = await t.http().post(`/api/designs/${id}/transitions`).set({ Authorization: `Bearer ${authorToken}` }).send({ to: 'in_review' });
+  const submit = await t
+    .http()
+    .post(`/api/designs/${id}/transitions`)
+    .set({ Authorization: `Bearer ${authorToken}` })
+    .send({ to: 'in_review' });
   if (submit.status !== 200) throw new Error(`submit: ${submit.status} ${submit.text}`);
-  const release = await t.http().post(`/api/designs/${id}/transitions`).set({ Authorization: `Bearer ${checkerToken}` }).send({ to: 'released' });
+  const release = await t
+    .http()
+    .post(`/api/designs/${id}/transitions`)
+    .set({ Authorization: `Bearer ${checkerToken}` })
+    .send({ to: 'released' });
   if (release.status !== 200) throw new Error(`release: ${release.status} ${release.text}`);
 }

@@ -28,12 +28,7 @@ export async function createSupplier(t: TestApp, token: string, prefix = 'Select
 }
 
 /** A steel spring by default (ζ = 0.05, n_d = 1); every field can be overridden. */
-export async function createMount(
-  t: TestApp,
-  token: string,
-  supplierId: number,
-  fields: Record<string, unknown>,
-): Promise<CreatedMount> {
+export async function createMount(t: TestApp, token: string, supplierId: number, fields: Record<string, unknown>): Promise<CreatedMount> {
   const body = {
     supplierId,
     partNumber: `SEL-${++counter}`,

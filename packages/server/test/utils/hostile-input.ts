@@ -187,26 +187,33 @@ function containerAt(root: unknown, path: Path): Record<string | number, unknown
 
 type Change = (body: unknown) => unknown;
 
-const replaceAt = (path: Path, value: unknown): Change => (body) => {
-  if (path.length === 0) return value;
-  const parent = containerAt(body, path.slice(0, -1));
-  if (parent) Object.defineProperty(parent, path[path.length - 1], { value, enumerable: true, writable: true, configurable: true });
-  return body;
-};
+const replaceAt =
+  (path: Path, value: unknown): Change =>
+  (body) => {
+    if (path.length === 0) return value;
+    const parent = containerAt(body, path.slice(0, -1));
+    if (parent) Object.defineProperty(parent, path[path.length - 1], { value, enumerable: true, writable: true, configurable: true });
+    return body;
+  };
 
-const removeAt = (path: Path): Change => (body) => {
-  const parent = containerAt(body, path.slice(0, -1));
-  const key = path[path.length - 1];
-  if (Array.isArray(parent)) parent.splice(Number(key), 1);
-  else if (parent) delete parent[key];
-  return body;
-};
+const removeAt =
+  (path: Path): Change =>
+  (body) => {
+    const parent = containerAt(body, path.slice(0, -1));
+    const key = path[path.length - 1];
+    if (Array.isArray(parent)) parent.splice(Number(key), 1);
+    else if (parent) delete parent[key];
+    return body;
+  };
 
-const addAt = (path: Path, key: string, value: unknown): Change => (body) => {
-  const target = containerAt(body, path);
-  if (target && !Array.isArray(target)) Object.defineProperty(target, key, { value, enumerable: true, writable: true, configurable: true });
-  return body;
-};
+const addAt =
+  (path: Path, key: string, value: unknown): Change =>
+  (body) => {
+    const target = containerAt(body, path);
+    if (target && !Array.isArray(target))
+      Object.defineProperty(target, key, { value, enumerable: true, writable: true, configurable: true });
+    return body;
+  };
 
 /**
  * Mutations of a valid example body: one to three changes (a value replaced by a hostile one,
@@ -222,11 +229,18 @@ export function mutationsOf(seed: unknown): fc.Arbitrary<unknown> {
   if (inner.length > 0) changes.push(fc.constantFrom(...inner).map(removeAt));
   if (objects.length > 0) {
     changes.push(
-      fc.record({ path: fc.constantFrom(...objects), key: hostileKey, value: hostileValue }).map(({ path, key, value }) => addAt(path, key, value)),
+      fc
+        .record({ path: fc.constantFrom(...objects), key: hostileKey, value: hostileValue })
+        .map(({ path, key, value }) => addAt(path, key, value)),
     );
   }
   return fc.oneof(
-    { weight: 8, arbitrary: fc.array(fc.oneof(...changes), { minLength: 1, maxLength: 3 }).map((steps) => steps.reduce<unknown>((body, step) => step(body), copy(seed))) },
+    {
+      weight: 8,
+      arbitrary: fc
+        .array(fc.oneof(...changes), { minLength: 1, maxLength: 3 })
+        .map((steps) => steps.reduce<unknown>((body, step) => step(body), copy(seed))),
+    },
     { weight: 1, arbitrary: hostileValue },
   );
 }
@@ -258,25 +272,58 @@ export const RAW_BODIES: readonly RawBody[] = [
   { name: '10,000 nested arrays', contentType: 'application/json', body: deepArrays(10_000) },
   { name: '10,000 nested objects', contentType: 'application/json', body: `{"name":${deepObjects(10_000)}}` },
   { name: '300,000 nested arrays (just under 1 MB)', contentType: 'application/json', body: deepArrays(300_000) },
-  { name: '250,000 empty objects in one array', contentType: 'application/json', body: `{"items":[${Array(250_000).fill('{}').join(',')}]}` },
-  { name: 'an object with 60,000 keys', contentType: 'application/json', body: `{${Array.from({ length: 60_000 }, (_, i) => `"k${i}":1`).join(',')}}` },
+  {
+    name: '250,000 empty objects in one array',
+    contentType: 'application/json',
+    body: `{"items":[${Array(250_000).fill('{}').join(',')}]}`,
+  },
+  {
+    name: 'an object with 60,000 keys',
+    contentType: 'application/json',
+    body: `{${Array.from({ length: 60_000 }, (_, i) => `"k${i}":1`).join(',')}}`,
+  },
   { name: 'a __proto__ key', contentType: 'application/json', body: '{"__proto__": {"isAdmin": true, "role": "admin"}}' },
   { name: 'a constructor.prototype key', contentType: 'application/json', body: '{"constructor": {"prototype": {"isAdmin": true}}}' },
   { name: 'a lone surrogate', contentType: 'application/json', body: '{"name": "\\ud800"}' },
   { name: 'a byte-order mark before the JSON', contentType: 'application/json', body: '\ufeff{"name": 1}' },
-  { name: 'invalid UTF-8', contentType: 'application/json', body: Buffer.from([0x7b, 0x22, 0x6e, 0x22, 0x3a, 0x22, 0xff, 0xfe, 0xc3, 0x22, 0x7d]) },
+  {
+    name: 'invalid UTF-8',
+    contentType: 'application/json',
+    body: Buffer.from([0x7b, 0x22, 0x6e, 0x22, 0x3a, 0x22, 0xff, 0xfe, 0xc3, 0x22, 0x7d]),
+  },
   { name: 'a body over 1 MB', contentType: 'application/json', body: JSON.stringify({ name: 'x'.repeat(1024 * 1024 + 10) }) },
   { name: 'JSON sent as text/plain', contentType: 'text/plain', body: '{"name": 1}' },
   { name: 'no content type', body: Buffer.from('{"name": 1}') },
-  { name: 'a form with nested and __proto__ keys', contentType: 'application/x-www-form-urlencoded', body: 'name=1&__proto__[isAdmin]=1&a[b][c][d][e][f][g][h]=1' },
-  { name: 'a form with 5,000 fields', contentType: 'application/x-www-form-urlencoded', body: Array.from({ length: 5000 }, (_, i) => `f${i}=1`).join('&') },
-  { name: 'multipart', contentType: 'multipart/form-data; boundary=b', body: '--b\r\nContent-Disposition: form-data; name="name"\r\n\r\n1\r\n--b--\r\n' },
+  {
+    name: 'a form with nested and __proto__ keys',
+    contentType: 'application/x-www-form-urlencoded',
+    body: 'name=1&__proto__[isAdmin]=1&a[b][c][d][e][f][g][h]=1',
+  },
+  {
+    name: 'a form with 5,000 fields',
+    contentType: 'application/x-www-form-urlencoded',
+    body: Array.from({ length: 5000 }, (_, i) => `f${i}=1`).join('&'),
+  },
+  {
+    name: 'multipart',
+    contentType: 'multipart/form-data; boundary=b',
+    body: '--b\r\nContent-Disposition: form-data; name="name"\r\n\r\n1\r\n--b--\r\n',
+  },
   { name: 'broken multipart', contentType: 'multipart/form-data', body: 'no boundary here' },
-  { name: 'XML with an external entity', contentType: 'application/xml', body: '<?xml version="1.0"?><!DOCTYPE x [<!ENTITY e SYSTEM "file:///etc/passwd">]><x>&e;</x>' },
+  {
+    name: 'XML with an external entity',
+    contentType: 'application/xml',
+    body: '<?xml version="1.0"?><!DOCTYPE x [<!ENTITY e SYSTEM "file:///etc/passwd">]><x>&e;</x>',
+  },
   { name: 'JSON in UTF-16', contentType: 'application/json; charset=utf-16', body: Buffer.from('{"name": 1}', 'utf16le') },
   { name: 'an unknown charset', contentType: 'application/json; charset=ebcdic-x', body: '{}' },
   { name: 'gzip-encoded garbage', contentType: 'application/json', contentEncoding: 'gzip', body: 'not gzip at all' },
-  { name: 'a gzip bomb (20 kB inflating to 20 MB)', contentType: 'application/json', contentEncoding: 'gzip', body: gzipSync(Buffer.alloc(20_000_000, 0x20)) },
+  {
+    name: 'a gzip bomb (20 kB inflating to 20 MB)',
+    contentType: 'application/json',
+    contentEncoding: 'gzip',
+    body: gzipSync(Buffer.alloc(20_000_000, 0x20)),
+  },
   { name: 'an unknown content encoding', contentType: 'application/json', contentEncoding: 'x-unknown', body: '{}' },
 ];
 

@@ -103,7 +103,8 @@ export function weakSchemaProblems(document: OpenAPIObject): string[] {
   const problems: string[] = [];
   const visit = (schema: Schema | undefined, at: string, named = false): void => {
     if (!schema || schema.$ref) return;
-    if (schema.enum && schema.enum.length > 1 && !named) problems.push(`${at}: inline enum (${schema.enum.join(', ')}); give it an enumName`);
+    if (schema.enum && schema.enum.length > 1 && !named)
+      problems.push(`${at}: inline enum (${schema.enum.join(', ')}); give it an enumName`);
     if (schema.allOf ?? schema.oneOf ?? schema.anyOf) {
       [...(schema.allOf ?? []), ...(schema.oneOf ?? []), ...(schema.anyOf ?? [])].forEach((part, i) => visit(part, `${at}/${i}`));
       return;

@@ -13,7 +13,11 @@ export function pdfTexts(pdf: Buffer): string[] {
     for (const range of block[1].matchAll(/<([0-9a-f]+)>\s*<[0-9a-f]+>\s*\[([^\]]*)\]/gi)) {
       let code = parseInt(range[1], 16);
       for (const entry of range[2].matchAll(/<([0-9a-f ]*)>/gi)) {
-        const units = entry[1].trim().split(/\s+/).filter(Boolean).map((hex) => parseInt(hex, 16));
+        const units = entry[1]
+          .trim()
+          .split(/\s+/)
+          .filter(Boolean)
+          .map((hex) => parseInt(hex, 16));
         map.set(code++, String.fromCharCode(...units));
       }
     }

@@ -50,7 +50,15 @@ describe('mass properties of an assembly', () => {
     expect(j.xx).toBeCloseTo(2.4, 12);
     expect(j.yy).toBeCloseTo((120 * (3 * 0.04 + 0.81)) / 12, 12);
     const turned = massProperties([
-      { shape: 'cylinder', massKg: 120, cg: { x: 0, y: 0, z: 0 }, radius: 0.2, length: 0.9, axis: 'x', orientation: rotationAboutAxis('z', Math.PI / 2) },
+      {
+        shape: 'cylinder',
+        massKg: 120,
+        cg: { x: 0, y: 0, z: 0 },
+        radius: 0.2,
+        length: 0.9,
+        axis: 'x',
+        orientation: rotationAboutAxis('z', Math.PI / 2),
+      },
     ]);
     expect(turned.inertia.yy).toBeCloseTo(2.4, 10);
     expect(turned.inertia.xx).toBeCloseTo(j.yy, 10);
@@ -69,8 +77,8 @@ describe('mass properties of an assembly', () => {
     expect(() => massProperties([])).toThrow(VibrationInputError);
     expect(() => massProperties([{ massKg: 0, cg: { x: 0, y: 0, z: 0 } }])).toThrow(/components\[0\].massKg/);
     expect(() => massProperties([{ massKg: 1, cg: { x: Number.NaN, y: 0, z: 0 } }])).toThrow(/components\[0\].cg.x/);
-    expect(() =>
-      massProperties([{ shape: 'box', massKg: 1, cg: { x: 0, y: 0, z: 0 }, dimensions: { x: -1, y: 1, z: 1 } }]),
-    ).toThrow(/dimensions/);
+    expect(() => massProperties([{ shape: 'box', massKg: 1, cg: { x: 0, y: 0, z: 0 }, dimensions: { x: -1, y: 1, z: 1 } }])).toThrow(
+      /dimensions/,
+    );
   });
 });

@@ -23,7 +23,6 @@ export function requireNonNegative(field: string, value: number): number {
   return value;
 }
 
-
 export function requireNonEmpty(field: string, values: ArrayLike<unknown>): void {
   if (values == null || values.length === 0) throw new VibrationInputError(field, 'must not be empty', 'empty');
 }
@@ -41,5 +40,3 @@ export function requireSameLength(field: string, values: ArrayLike<unknown>, exp
 export function requireAllFinite(field: string, values: ArrayLike<number>): void {
   for (let i = 0; i < values.length; i++) requireFinite(`${field}[${i}]`, values[i]);
 }
-
-

@@ -1,16 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import * as math from 'mathjs';
-import {
-  complex,
-  complexAbs,
-  complexAdd,
-  complexArgDeg,
-  complexDiv,
-  complexInv,
-  complexMul,
-  complexScale,
-  complexSub,
-} from './complex.js';
+import { complex, complexAbs, complexAdd, complexArgDeg, complexDiv, complexInv, complexMul, complexScale, complexSub } from './complex.js';
 import { logSpace } from './frequency-grid.js';
 
 // Source: mathjs 15 complex arithmetic as an independent implementation.

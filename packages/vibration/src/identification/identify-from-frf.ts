@@ -195,7 +195,10 @@ export function identifyFromFrf(frf: MeasuredFrf, options: IdentificationOptions
   const mag = re.map((r, i) => Math.hypot(r, im[i]));
   const peak = findResonancePeak(f, mag);
   if (!peak) {
-    reasons.push({ code: 'peak-at-edge', message: 'The largest response is at the first or last line: the resonance is outside the measured band.' });
+    reasons.push({
+      code: 'peak-at-edge',
+      message: 'The largest response is at the first or last line: the resonance is outside the measured band.',
+    });
     return finish();
   }
   const level = peak.magnitude / Math.SQRT2;
@@ -214,7 +217,10 @@ export function identifyFromFrf(frf: MeasuredFrf, options: IdentificationOptions
     }
   }
   if (lower === undefined && upper === undefined) {
-    reasons.push({ code: 'no-clear-peak', message: 'The response never falls to the half-power level (−3 dB) on either side of its maximum.' });
+    reasons.push({
+      code: 'no-clear-peak',
+      message: 'The response never falls to the half-power level (−3 dB) on either side of its maximum.',
+    });
     return finish();
   }
   result.naturalFrequencyHz = peak.frequencyHz;
@@ -244,7 +250,10 @@ export function identifyFromFrf(frf: MeasuredFrf, options: IdentificationOptions
   });
   const low = f.map((fi, i) => ({ fi, k: kd[i] })).filter((p) => p.fi <= lowRatio * fn && p.k);
   if (low.length === 0) {
-    reasons.push({ code: 'no-low-frequency-lines', message: `No line at or below ${lowRatio} × fn: low-frequency stiffness not identified.` });
+    reasons.push({
+      code: 'no-low-frequency-lines',
+      message: `No line at or below ${lowRatio} × fn: low-frequency stiffness not identified.`,
+    });
   } else {
     result.lowFrequencyStiffnessNPerM = low.reduce((s, p) => s + (p.k as { re: number }).re, 0) / low.length;
   }

@@ -21,7 +21,7 @@ describe('selectSizesForLevellingInto', () => {
     const equal = new Float64Array(mountLoads({ points, stiffnessNPerM: 1, weightN: W, cg: CG }).loadsN);
     const ws = createLevellingWorkspace(layout);
     let seed = 7;
-    const rnd = () => ((seed = (seed * 16807) % 2147483647) / 2147483647);
+    const rnd = () => (seed = (seed * 16807) % 2147483647) / 2147483647;
     // 40 series of 1–6 sizes each, back to back in one pair of arrays (with a 2-entry gap in front)
     const rated: number[] = [0, 0];
     const k: number[] = [0, 0];
@@ -79,9 +79,9 @@ describe('selectSizesForLevellingInto', () => {
     expect(() => selectSizesForLevellingInto(layout, W, 0, 0, equal, one, one, 0, 0, 0.01, ws)).toThrow(/from/);
     expect(() => selectSizesForLevellingInto(layout, W, 0, 0, equal, one, one, 0, 2, 0.01, ws)).toThrow(/from/);
     expect(() => selectSizesForLevellingInto(layout, W, 0, 0, equal, one, one, 0, 1, 0, ws)).toThrow(/targetDeflectionM/);
-    expect(() =>
-      selectSizesForLevellingInto(layout, W, 0, 0, equal, one, new Float64Array([0]), 0, 1, 0.01, ws),
-    ).toThrow(/stiffnessNPerM\[0\]/);
+    expect(() => selectSizesForLevellingInto(layout, W, 0, 0, equal, one, new Float64Array([0]), 0, 1, 0.01, ws)).toThrow(
+      /stiffnessNPerM\[0\]/,
+    );
     const other = createLevellingWorkspace(prepareMountLayout(CORNERS.slice(0, 3)));
     expect(() => selectSizesForLevellingInto(layout, W, 0, 0, equal, one, one, 0, 1, 0.01, other)).toThrow(/workspace/);
   });

@@ -93,7 +93,14 @@ export function selectSizesForLevellingInto(
   if (equalStiffnessLoadsN.length < n) {
     throw new VibrationInputError('equalStiffnessLoadsN', `must hold ${n} values`, 'length-mismatch');
   }
-  if (!(from >= 0 && to > from && to <= ratedLoadN.length && to <= stiffnessNPerM.length && Number.isInteger(from) && Number.isInteger(to))) {
+  if (!(
+    from >= 0 &&
+    to > from &&
+    to <= ratedLoadN.length &&
+    to <= stiffnessNPerM.length &&
+    Number.isInteger(from) &&
+    Number.isInteger(to)
+  )) {
     throw new VibrationInputError('from', `sizes [${from}, ${to}) are not a non-empty range of the size arrays`, 'out-of-range');
   }
   if (!Number.isInteger(maxIterations) || maxIterations < 1) {

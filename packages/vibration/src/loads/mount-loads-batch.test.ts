@@ -19,9 +19,17 @@ describe('mountLoadsBatch', () => {
     const sum = new Float64Array(candidates);
     mountLoadsBatch(layout, 12000, 0.05, -0.02, k, out, sum);
     for (let c = 0; c < candidates; c++) {
-      const single = mountLoads({ points, stiffnessNPerM: Array.from(k.subarray(c * 5, c * 5 + 5)), weightN: 12000, cg: { x: 0.05, y: -0.02 } });
+      const single = mountLoads({
+        points,
+        stiffnessNPerM: Array.from(k.subarray(c * 5, c * 5 + 5)),
+        weightN: 12000,
+        cg: { x: 0.05, y: -0.02 },
+      });
       single.loadsN.forEach((f, i) => expect(out[c * 5 + i]).toBeCloseTo(f, 8));
-      expect(sum[c]).toBeCloseTo(k.subarray(c * 5, c * 5 + 5).reduce((a, b) => a + b), 6);
+      expect(sum[c]).toBeCloseTo(
+        k.subarray(c * 5, c * 5 + 5).reduce((a, b) => a + b),
+        6,
+      );
     }
   });
   it('rejects ragged stiffness arrays and non-positive stiffness', () => {

@@ -143,7 +143,11 @@ export function rigidBodyModes(input: RigidBodyModesInput): RigidBodyModesResult
   const M = new Matrix(Mrows);
   const chol = new CholeskyDecomposition(M);
   if (!chol.isPositiveDefinite()) {
-    throw new VibrationInputError('inertia', 'is not positive definite (check the moments and products of inertia)', 'not-positive-definite');
+    throw new VibrationInputError(
+      'inertia',
+      'is not positive definite (check the moments and products of inertia)',
+      'not-positive-definite',
+    );
   }
   const L = chol.lowerTriangularMatrix;
   const Linv = inverse(L);
@@ -166,7 +170,7 @@ export function rigidBodyModes(input: RigidBodyModesInput): RigidBodyModesResult
 
   // Split repeated eigenvalues along the coordinates: within a cluster, diagonalise
   // P = Ψcᵀ·diag(1..6)·Ψc so that each basis vector favours distinct coordinates.
-  for (let start = 0; start < 6; ) {
+  for (let start = 0; start < 6;) {
     let end = start + 1;
     while (end < 6 && Math.abs(lam[end] - lam[start]) <= ZERO_TOLERANCE * Math.max(scale, 1e-300)) end++;
     const size = end - start;

@@ -8,8 +8,7 @@ import { VibrationInputError } from '../errors/vibration-input-error.js';
  *   Elastomers behave much closer to this model.
  */
 export type Damping =
-  | { readonly model: 'viscous'; readonly dampingRatio: number }
-  | { readonly model: 'hysteretic'; readonly lossFactor: number };
+  { readonly model: 'viscous'; readonly dampingRatio: number } | { readonly model: 'hysteretic'; readonly lossFactor: number };
 
 /** No damping (viscous with ζ = 0). */
 export const UNDAMPED: Damping = Object.freeze({ model: 'viscous', dampingRatio: 0 });

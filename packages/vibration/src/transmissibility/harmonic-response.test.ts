@@ -33,8 +33,6 @@ describe('harmonic force response', () => {
   });
 
   it('rejects a negative force amplitude', () => {
-    expect(() => harmonicForceResponse({ massKg: 1, stiffnessNPerM: 1, forceAmplitudeN: -1, frequencyHz: 1 })).toThrow(
-      /forceAmplitudeN/,
-    );
+    expect(() => harmonicForceResponse({ massKg: 1, stiffnessNPerM: 1, forceAmplitudeN: -1, frequencyHz: 1 })).toThrow(/forceAmplitudeN/);
   });
 });

@@ -10,7 +10,7 @@ describe('transmissibilityBatch', () => {
     const d = new Float64Array(n);
     const h = new Uint8Array(n);
     for (let i = 0; i < n; i++) {
-      fn[i] = 2 + (i * 7) % 13;
+      fn[i] = 2 + ((i * 7) % 13);
       d[i] = ((i * 3) % 11) / 20;
       h[i] = i % 2;
     }
@@ -35,9 +35,9 @@ describe('transmissibilityBatch', () => {
     expect(() =>
       transmissibilityBatch(new Float64Array([5, 0]), new Float64Array(2), new Uint8Array(2), [10], new Float64Array(2)),
     ).toThrow(/fnHz\[1\]/);
-    expect(() =>
-      transmissibilityBatch(one, new Float64Array([Number.NaN]), new Uint8Array(1), [10], new Float64Array(1)),
-    ).toThrow(/damping\[0\]/);
+    expect(() => transmissibilityBatch(one, new Float64Array([Number.NaN]), new Uint8Array(1), [10], new Float64Array(1))).toThrow(
+      /damping\[0\]/,
+    );
     expect(() => transmissibilityBatch(one, one, new Uint8Array(1), [-1], new Float64Array(1))).toThrow(/freqsHz\[0\]/);
   });
 });

@@ -1,12 +1,4 @@
-import {
-  KG_PER_LB,
-  MM_PER_IN,
-  M_PER_IN,
-  N_PER_KGF,
-  N_PER_LBF,
-  N_PER_M_PER_LBF_PER_IN,
-  W_PER_HP,
-} from './constants.js';
+import { KG_PER_LB, MM_PER_IN, M_PER_IN, N_PER_KGF, N_PER_LBF, N_PER_M_PER_LBF_PER_IN, W_PER_HP } from './constants.js';
 
 /** kg → lb */
 export const kgToLb = (kg: number): number => kg / KG_PER_LB;

@@ -1,29 +1,10 @@
-import {
-  cToF,
-  fToC,
-  inToM,
-  kgToLb,
-  lbToKg,
-  lbfPerInToNPerM,
-  lbfToN,
-  mToIn,
-  nPerMToLbfPerIn,
-  nToLbf,
-} from './convert.js';
+import { cToF, fToC, inToM, kgToLb, lbToKg, lbfPerInToNPerM, lbfToN, mToIn, nPerMToLbfPerIn, nToLbf } from './convert.js';
 
 /** A user's unit preference: SI or US customary. */
 export type UnitSystem = 'SI' | 'US';
 
 /** Physical quantities Tacet displays. Values are always held in SI base units (kg, N, m, N/m, Hz, °C). */
-export type Quantity =
-  | 'mass'
-  | 'force'
-  | 'position'
-  | 'deflection'
-  | 'stiffness'
-  | 'frequency'
-  | 'speed'
-  | 'temperature';
+export type Quantity = 'mass' | 'force' | 'position' | 'deflection' | 'stiffness' | 'frequency' | 'speed' | 'temperature';
 
 interface DisplayUnit {
   /** Unit symbol shown to the user. */

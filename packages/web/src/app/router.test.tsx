@@ -48,7 +48,11 @@ describe('routing and guards', () => {
     renderApp({ signedInAs: 'catalog_manager', path: '/' });
     expect(await screen.findByRole('heading', { name: 'Welcome, Cato', level: 1 })).toBeInTheDocument();
     const areas = screen.getByRole('region', { name: 'Your areas' });
-    expect(within(areas).getAllByRole('heading', { level: 3 }).map((h) => h.textContent)).toEqual(['Catalog']);
+    expect(
+      within(areas)
+        .getAllByRole('heading', { level: 3 })
+        .map((h) => h.textContent),
+    ).toEqual(['Catalog']);
     expect(within(areas).getByText(/import the catalog from CSV/)).toBeInTheDocument();
     const cautions = screen.getByRole('region', { name: 'Cautions' });
     expect(cautions).toHaveTextContent('licensed engineer');

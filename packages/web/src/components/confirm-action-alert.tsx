@@ -17,7 +17,16 @@ export interface ConfirmActionAlertProps {
 }
 
 /** Asks before an action, runs it, closes on success and shows the server's reason on failure. */
-export function ConfirmActionAlert({ isOpen, icon, confirmButtonText, intent = 'danger', pending, onConfirm, onClose, children }: ConfirmActionAlertProps) {
+export function ConfirmActionAlert({
+  isOpen,
+  icon,
+  confirmButtonText,
+  intent = 'danger',
+  pending,
+  onConfirm,
+  onClose,
+  children,
+}: ConfirmActionAlertProps) {
   const [failure, setFailure] = useState<string | null>(null);
 
   const close = () => {

@@ -84,7 +84,10 @@ export function errorMessage(error: unknown): string {
     }
     if (body) {
       const messages = Array.isArray(body.message) ? body.message : [body.message];
-      const text = messages.filter((m) => typeof m === 'string' && m.trim()).map(sentence).join(' ');
+      const text = messages
+        .filter((m) => typeof m === 'string' && m.trim())
+        .map(sentence)
+        .join(' ');
       if (text) return text;
     }
     switch (status) {

@@ -1,14 +1,4 @@
-import {
-  AREAS,
-  areasFor,
-  canDesign,
-  canUseArea,
-  canWriteCatalog,
-  isRole,
-  ROLES,
-  type AreaKey,
-  type Role,
-} from './authorization';
+import { AREAS, areasFor, canDesign, canUseArea, canWriteCatalog, isRole, ROLES, type AreaKey, type Role } from './authorization';
 
 // The role → area table from the product's role list (PRODUCT.md "Who uses it") and the
 // navigation brief. Written out in full so a change to the table must change this test too.

@@ -62,9 +62,7 @@ async function readBlobError(error: unknown): Promise<never> {
  * axios error with its JSON body restored, ready for `errorMessage`.
  */
 export async function downloadFile(path: string, fallbackName: string): Promise<string> {
-  const response = await api
-    .get<Blob>(path, { responseType: 'blob', headers: { Accept: '*/*' } })
-    .catch(readBlobError);
+  const response = await api.get<Blob>(path, { responseType: 'blob', headers: { Accept: '*/*' } }).catch(readBlobError);
   const disposition = response.headers['content-disposition'] as string | undefined;
   const fileName = fileNameFromDisposition(disposition, fallbackName);
   const blob = response.data instanceof Blob ? response.data : new Blob([response.data as BlobPart]);

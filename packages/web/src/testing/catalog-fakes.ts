@@ -144,9 +144,7 @@ export function serveCatalog(fake: FakeApi, initial: { mounts?: Mount[]; supplie
 }
 
 /** An accepted row of an import preview as the server sends it (every field, null where empty). */
-export function makePreviewRow(
-  overrides: Partial<ImportPreviewRow> & Pick<ImportPreviewRow, 'row' | 'partNumber'>,
-): ImportPreviewRow {
+export function makePreviewRow(overrides: Partial<ImportPreviewRow> & Pick<ImportPreviewRow, 'row' | 'partNumber'>): ImportPreviewRow {
   return {
     action: 'create',
     supplierName: QUILLMERE.name,

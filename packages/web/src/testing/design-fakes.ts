@@ -1,14 +1,6 @@
 import { isolationDb, isolationEfficiencyPct, transmissibilityAt, viscousDamping } from '@tacet/vibration';
 
-import type {
-  Candidate,
-  Design,
-  DesignInput,
-  DesignListItem,
-  Project,
-  SelectionResult,
-  UpdateDesignInput,
-} from '@/types/design-api';
+import type { Candidate, Design, DesignInput, DesignListItem, Project, SelectionResult, UpdateDesignInput } from '@/types/design-api';
 
 import { TEST_USERS } from './factories';
 import type { FakeApi } from './fake-api';

@@ -81,9 +81,7 @@ export class FakeApi {
     for (const [key, value] of Object.entries(AxiosHeaders.from(config.headers).toJSON())) {
       if (typeof value === 'string') headers[key.toLowerCase()] = value;
     }
-    const query = Object.fromEntries(
-      new URL(api.getUri({ url: config.url, params: config.params }), 'http://fake.invalid').searchParams,
-    );
+    const query = Object.fromEntries(new URL(api.getUri({ url: config.url, params: config.params }), 'http://fake.invalid').searchParams);
     const request: FakeRequest = { method, path, params: {}, query, body: parseBody(config.data), headers };
     this.requests.push(request);
 

@@ -24,9 +24,7 @@ describe('RolesGuard', () => {
 
   it('lets a listed role through and refuses the others with 403', () => {
     expect(guard.canActivate(contextFor('restricted', 'catalog_manager'))).toBe(true);
-    expect(() => guard.canActivate(contextFor('restricted', 'viewer'))).toThrow(
-      new ForbiddenException('Your role does not allow this'),
-    );
+    expect(() => guard.canActivate(contextFor('restricted', 'viewer'))).toThrow(new ForbiddenException('Your role does not allow this'));
   });
 
   it('lets admin through everywhere', () => {

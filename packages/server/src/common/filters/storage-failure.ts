@@ -24,8 +24,7 @@ const ADVICE: Record<StorageFailureKind, { message: string; retryAfterSeconds: n
     retryAfterSeconds: 60,
   },
   full: {
-    message:
-      'The data store is full, so nothing was saved. Ask your administrator to free disk space on the server, then try again.',
+    message: 'The data store is full, so nothing was saved. Ask your administrator to free disk space on the server, then try again.',
     retryAfterSeconds: 60,
   },
   write_failed: {
@@ -96,15 +95,7 @@ function postgresKind(code: string): StorageFailureKind | null {
 }
 
 /** Node's errno names for a database server that cannot be reached. */
-const CONNECTION_ERRNOS = new Set([
-  'ECONNREFUSED',
-  'ECONNRESET',
-  'ETIMEDOUT',
-  'EHOSTUNREACH',
-  'ENETUNREACH',
-  'EAI_AGAIN',
-  'EPIPE',
-]);
+const CONNECTION_ERRNOS = new Set(['ECONNREFUSED', 'ECONNRESET', 'ETIMEDOUT', 'EHOSTUNREACH', 'ENETUNREACH', 'EAI_AGAIN', 'EPIPE']);
 
 /** Node's errno names for a file system that refuses a write (e.g. an upload to the temp folder). */
 const FILE_SYSTEM_ERRNOS: Record<string, StorageFailureKind> = {

@@ -51,7 +51,8 @@ export function bodyShapeProblem(body: unknown): FieldError | null {
       continue;
     }
     const keys = Object.keys(value);
-    if (keys.length > BODY_LIMITS.objectKeys) return { field, message: `${field} must have no more than ${BODY_LIMITS.objectKeys} properties` };
+    if (keys.length > BODY_LIMITS.objectKeys)
+      return { field, message: `${field} must have no more than ${BODY_LIMITS.objectKeys} properties` };
     for (const key of keys) {
       const keyPath = pathOf(path, key);
       if (FORBIDDEN_KEYS.has(key)) return { field: keyPath, message: `property ${key} should not exist` };

@@ -1,8 +1,7 @@
 import { IsNumber, registerDecorator, type ValidationArguments, type ValidationOptions } from 'class-validator';
 
 /** A JSON number that is finite (class-validator's IsNumber without NaN / Infinity). */
-export const IsFiniteNumber = (options?: ValidationOptions) =>
-  IsNumber({ allowNaN: false, allowInfinity: false }, options);
+export const IsFiniteNumber = (options?: ValidationOptions) => IsNumber({ allowNaN: false, allowInfinity: false }, options);
 
 /**
  * The value must be greater than (or, with `orEqual`, at least) another property of the same

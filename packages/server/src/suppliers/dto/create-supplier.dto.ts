@@ -12,11 +12,21 @@ import {
 } from './supplier-fields.js';
 
 export class CreateSupplierDto {
-  @ApiProperty({ example: 'Quillmere Isolation', maxLength: SUPPLIER_NAME_MAX_LENGTH, description: 'Unique regardless of case and spacing' })
+  @ApiProperty({
+    example: 'Quillmere Isolation',
+    maxLength: SUPPLIER_NAME_MAX_LENGTH,
+    description: 'Unique regardless of case and spacing',
+  })
   @SupplierName()
   name: string;
 
-  @ApiPropertyOptional({ type: String, nullable: true, example: 'quotes@quillmere.example', maxLength: CONTACT_EMAIL_MAX_LENGTH, description: 'Where requests for quotation go' })
+  @ApiPropertyOptional({
+    type: String,
+    nullable: true,
+    example: 'quotes@quillmere.example',
+    maxLength: CONTACT_EMAIL_MAX_LENGTH,
+    description: 'Where requests for quotation go',
+  })
   @IsOptional()
   @ContactEmail()
   contactEmail?: string | null;

@@ -4,5 +4,4 @@ import { Transform } from 'class-transformer';
 export const Trim = () => Transform(({ value }) => (typeof value === 'string' ? value.trim() : value));
 
 /** Trims and lower-cases an email address. */
-export const NormalizeEmail = () =>
-  Transform(({ value }) => (typeof value === 'string' ? value.trim().toLowerCase() : value));
+export const NormalizeEmail = () => Transform(({ value }) => (typeof value === 'string' ? value.trim().toLowerCase() : value));

@@ -1,10 +1,4 @@
-import {
-  logSpace,
-  requiredFrequencyRatio,
-  transmissibilityAt,
-  transmissibilityPeak,
-  type Damping,
-} from '@tacet/vibration';
+import { logSpace, requiredFrequencyRatio, transmissibilityAt, transmissibilityPeak, type Damping } from '@tacet/vibration';
 import { memo, useMemo } from 'react';
 import { VictoryArea, VictoryAxis, VictoryChart, VictoryLabel, VictoryLine } from 'victory';
 
@@ -159,13 +153,7 @@ export const TransmissibilityChart = memo(function TransmissibilityChart({
   const domain = useMemo(() => ({ x: [fMin, fMax] as [number, number], y: [tMin, tMax] as [number, number] }), [fMin, fMax, tMin, tMax]);
 
   return (
-    <VictoryChart
-      scale={{ x: 'log', y: 'log' }}
-      domain={domain}
-      width={width}
-      height={height}
-      padding={PADDING}
-    >
+    <VictoryChart scale={{ x: 'log', y: 'log' }} domain={domain} width={width} height={height} padding={PADDING}>
       {isolation ? <VictoryArea data={isolation} style={ISOLATION_STYLE} /> : null}
       {isolation ? (
         <VictoryLabel

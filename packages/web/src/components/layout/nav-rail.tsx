@@ -1,11 +1,4 @@
-import {
-  EnvelopeIcon,
-  FolderCloseIcon,
-  HomeIcon,
-  PeopleIcon,
-  ShoppingCartIcon,
-  ThListIcon,
-} from '@blueprintjs/icons';
+import { EnvelopeIcon, FolderCloseIcon, HomeIcon, PeopleIcon, ShoppingCartIcon, ThListIcon } from '@blueprintjs/icons';
 import type { ReactElement } from 'react';
 import { NavLink } from 'react-router-dom';
 

@@ -15,9 +15,7 @@ import type { RouteHandle } from '../../router';
 /** Renders the matched page, or the "no access" page when the role may not use its area. */
 function AreaOutlet({ role }: { role: Role }) {
   const matches = useMatches();
-  const area = [...matches].reverse().find((match) => (match.handle as RouteHandle | undefined)?.area)?.handle as
-    | RouteHandle
-    | undefined;
+  const area = [...matches].reverse().find((match) => (match.handle as RouteHandle | undefined)?.area)?.handle as RouteHandle | undefined;
   if (area?.area && !canUseArea(role, area.area)) return <Forbidden />;
   return <Outlet />;
 }

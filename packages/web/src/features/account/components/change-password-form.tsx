@@ -49,13 +49,7 @@ export function ChangePasswordForm() {
             autoComplete="new-password"
             helperText={`At least ${PASSWORD_MIN_LENGTH} characters.`}
           />
-          <TextField
-            name="confirmPassword"
-            id="confirm-password"
-            label="New password again"
-            type="password"
-            autoComplete="new-password"
-          />
+          <TextField name="confirmPassword" id="confirm-password" label="New password again" type="password" autoComplete="new-password" />
           <FormError message={failure} />
           {changed ? (
             <Callout intent="success" className="tc-form-success" role="status">

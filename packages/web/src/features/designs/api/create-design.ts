@@ -25,7 +25,6 @@ export function useCreateDesign() {
       // The project's design list and its design count both change.
       return queryClient.invalidateQueries({ queryKey: ['projects'] });
     },
-    onSettled: (_design, _error, variables) =>
-      queryClient.invalidateQueries({ queryKey: projectDesignsQueryKey(variables.projectId) }),
+    onSettled: (_design, _error, variables) => queryClient.invalidateQueries({ queryKey: projectDesignsQueryKey(variables.projectId) }),
   });
 }

@@ -40,7 +40,10 @@ function CheckboxList({
   const selected = name === 'criteria.mountTypes' ? values.criteria.mountTypes : values.criteria.supplierIds;
   const toggle = (value: string, on: boolean) => {
     const next = on ? [...selected, value] : selected.filter((v) => v !== value);
-    void setFieldValue(name, options.map((o) => o.value).filter((v) => next.includes(v)));
+    void setFieldValue(
+      name,
+      options.map((o) => o.value).filter((v) => next.includes(v)),
+    );
   };
   return (
     <fieldset className="tc-checkbox-list">
@@ -78,7 +81,10 @@ export function CriteriaPanel({ readOnly, suppliers }: CriteriaPanelProps) {
           readOnly={readOnly}
           helperText="At every disturbing frequency. 80–90 % suits machines on grade; 95 % and more over sensitive rooms (common practice)."
         />
-        <FormGroup label="Load utilisation window" helperText="Load on each mount divided by its rated load; 0.5 to 1.0 is common practice.">
+        <FormGroup
+          label="Load utilisation window"
+          helperText="Load on each mount divided by its rated load; 0.5 to 1.0 is common practice."
+        >
           <div className="tc-field-row">
             <QuantityField name="criteria.minUtilization" id="criteria-min-utilization" label="Lowest" readOnly={readOnly} />
             <QuantityField name="criteria.maxUtilization" id="criteria-max-utilization" label="Highest" readOnly={readOnly} />

@@ -8,7 +8,10 @@ import type { Design, DesignInput, UpdateDesignInput } from '@/types/design-api'
 
 const DESIGN_ID = 40;
 
-function openDesign(design: Design = makeDesign({ id: DESIGN_ID, name: 'CHW pump P-3 skid' }), signedInAs: RenderOptions['signedInAs'] = 'engineer') {
+function openDesign(
+  design: Design = makeDesign({ id: DESIGN_ID, name: 'CHW pump P-3 skid' }),
+  signedInAs: RenderOptions['signedInAs'] = 'engineer',
+) {
   const fake = installFakeApi();
   const server = serveDesign(fake, design);
   const rendered = renderApp({ signedInAs, path: `/designs/${design.id}` });
@@ -53,7 +56,11 @@ describe('Design page — input and live figures', () => {
     expect(values.reduce((a, b) => a + b, 0)).toBeCloseTo(9806.65, 6);
     // CV-15 rigid-frame loads, shown rounded: 2717.3 / 2553.8 / 2349.5 / 2186.1 N.
     expect(loads.map((el) => el.textContent)).toEqual(['2,717 N', '2,554 N', '2,350 N', '2,186 N']);
-    expect(within(plan).getAllByTestId('plan-point').map((p) => p.textContent?.charAt(0))).toEqual(['A', 'B', 'C', 'D']);
+    expect(
+      within(plan)
+        .getAllByTestId('plan-point')
+        .map((p) => p.textContent?.charAt(0)),
+    ).toEqual(['A', 'B', 'C', 'D']);
     expect(within(plan).getByTestId('plan-cg')).toBeInTheDocument();
     expect(screen.getByTestId('loads-total')).toHaveTextContent('Loads add up to 9,807 N; the weight is 9,807 N.');
     expect(screen.getByTestId('cg-height')).toHaveTextContent('0.378 m');
@@ -66,12 +73,7 @@ describe('Design page — input and live figures', () => {
 
     const table = screen.getByRole('table', { name: 'Disturbing frequencies' });
     const rows = within(table).getAllByRole('row').slice(1);
-    expect(rows.map((row) => within(row).getAllByRole('cell')[0]?.textContent)).toEqual([
-      '24.67 Hz',
-      '49.33 Hz',
-      '100.0 Hz',
-      '148.0 Hz',
-    ]);
+    expect(rows.map((row) => within(row).getAllByRole('cell')[0]?.textContent)).toEqual(['24.67 Hz', '49.33 Hz', '100.0 Hz', '148.0 Hz']);
     expect(rows[0]).toHaveTextContent('1× shaft at 1480 rpm');
     expect(rows[0]).toHaveTextContent('Governing');
     expect(rows[2]).toHaveTextContent('2× line (50 Hz supply)');
@@ -203,7 +205,11 @@ describe('Design page — saving', () => {
     const { user, fake, server } = openDesign();
     await waitForPage();
     // Someone else saves in the meantime.
-    server.design = { ...server.design, version: 4, input: { ...server.design.input, components: server.design.input.components.map((c, i) => (i === 0 ? { ...c, massKg: 320 } : c)) } };
+    server.design = {
+      ...server.design,
+      version: 4,
+      input: { ...server.design.input, components: server.design.input.components.map((c, i) => (i === 0 ? { ...c, massKg: 320 } : c)) },
+    };
 
     const mass = screen.getByLabelText('Mass of Motor');
     await user.clear(mass);

@@ -235,13 +235,7 @@ function DesignEditor(props: EditorProps) {
               : 'Someone else saved a newer version of this design since you opened it.'}{' '}
             Reloading shows their version{dirty ? ' and discards your unsaved edits' : ''}.
           </p>
-          <Button
-            icon={<RefreshIcon />}
-            intent="warning"
-            text="Reload"
-            loading={reloading}
-            onClick={() => void props.onReload(formik)}
-          />
+          <Button icon={<RefreshIcon />} intent="warning" text="Reload" loading={reloading} onClick={() => void props.onReload(formik)} />
         </Callout>
       ) : null}
       {failure ? (
@@ -342,9 +336,7 @@ export function DesignWorkspace({ design, onReload, renderSelection, initialTab 
     setChoosing(true);
     try {
       const chosen =
-        candidate.kind === 'series' && candidate.seriesId
-          ? { chosenSeriesId: candidate.seriesId }
-          : { chosenMountId: candidate.mountId };
+        candidate.kind === 'series' && candidate.seriesId ? { chosenSeriesId: candidate.seriesId } : { chosenMountId: candidate.mountId };
       const saved = await updateDesign.mutateAsync({ designId: base.id, version: base.version, ...chosen });
       setBase(saved);
       setConflict(false);

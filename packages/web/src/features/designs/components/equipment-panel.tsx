@@ -14,9 +14,8 @@ export function EquipmentPanel({ readOnly, figures }: { readOnly: boolean; figur
   return (
     <>
       <p className="tc-muted tc-intro">
-        Use operating masses — with liquid in the casing, insulation and any inertia base. Axes: x along the skid, y across
-        it, z up; positions from any origin you like, the same one as the mount points. A box size adds the part's own
-        inertia for the rocking modes.
+        Use operating masses — with liquid in the casing, insulation and any inertia base. Axes: x along the skid, y across it, z up;
+        positions from any origin you like, the same one as the mount points. A box size adds the part's own inertia for the rocking modes.
       </p>
       <EquipmentTable readOnly={readOnly} />
       <section className="tc-totals" aria-label="Equipment totals">

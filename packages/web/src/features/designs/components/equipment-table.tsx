@@ -102,7 +102,13 @@ export function EquipmentTable({ readOnly }: { readOnly: boolean }) {
           </div>
           <ListError name="components" />
           {readOnly ? null : (
-            <Button className="tc-add-row" icon={<PlusIcon />} variant="outlined" text="Add component" onClick={() => push(blankComponent())} />
+            <Button
+              className="tc-add-row"
+              icon={<PlusIcon />}
+              variant="outlined"
+              text="Add component"
+              onClick={() => push(blankComponent())}
+            />
           )}
         </>
       )}

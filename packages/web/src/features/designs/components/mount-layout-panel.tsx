@@ -23,8 +23,8 @@ export function MountLayoutPanel({ readOnly, figures }: { readOnly: boolean; fig
   return (
     <>
       <p className="tc-muted tc-intro">
-        Plan positions of the mounts and the height of each mount's elastic centre (usually mid-height of the resilient
-        part). Loads assume equal mounts under a rigid frame; the candidates' own loads come with the selection.
+        Plan positions of the mounts and the height of each mount's elastic centre (usually mid-height of the resilient part). Loads assume
+        equal mounts under a rigid frame; the candidates' own loads come with the selection.
       </p>
       <div className="tc-two-columns tc-two-columns--wide-left">
         <div>

@@ -76,8 +76,7 @@ export function OperatingPanel({ readOnly, figures }: { readOnly: boolean; figur
           <>
             <FrequencyList frequencies={figures.frequencies} />
             <p className="tc-muted tc-note">
-              The lowest frequency governs: mounts must isolate it, and every higher one, by the minimum asked for under
-              Requirements.
+              The lowest frequency governs: mounts must isolate it, and every higher one, by the minimum asked for under Requirements.
               {mode === 'range' ? ' With a speed range both ends of the range are checked.' : ''}
             </p>
           </>

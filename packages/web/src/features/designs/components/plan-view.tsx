@@ -50,8 +50,8 @@ export const PlanView = memo(function PlanView({ points, loadsN, cg, flagged, un
     const spanY = frame.maxY - frame.minY;
     const scale = Math.min((WIDTH - PAD.left - PAD.right) / spanX, (HEIGHT - PAD.top - PAD.bottom) / spanY);
     // Centre the drawing in the free area.
-    const offsetX = PAD.left + ((WIDTH - PAD.left - PAD.right) - spanX * scale) / 2;
-    const offsetY = PAD.top + ((HEIGHT - PAD.top - PAD.bottom) - spanY * scale) / 2;
+    const offsetX = PAD.left + (WIDTH - PAD.left - PAD.right - spanX * scale) / 2;
+    const offsetY = PAD.top + (HEIGHT - PAD.top - PAD.bottom - spanY * scale) / 2;
     const px = (x: number) => offsetX + (x - frame.minX) * scale;
     const py = (y: number) => offsetY + (frame.maxY - y) * scale;
     return { frame, scale, px, py };
@@ -68,13 +68,7 @@ export const PlanView = memo(function PlanView({ points, loadsN, cg, flagged, un
 
   return (
     <figure className="tc-drawing">
-      <svg
-        viewBox={`0 0 ${WIDTH} ${HEIGHT}`}
-        role="img"
-        aria-labelledby="tc-plan-title"
-        className="tc-drawing-svg"
-        data-testid="plan-view"
-      >
+      <svg viewBox={`0 0 ${WIDTH} ${HEIGHT}`} role="img" aria-labelledby="tc-plan-title" className="tc-drawing-svg" data-testid="plan-view">
         <title id="tc-plan-title">Plan of the mount points, seen from above</title>
         <defs>
           <marker id="tc-arrow" viewBox="0 0 10 10" refX="9" refY="5" markerWidth="7" markerHeight="7" orient="auto-start-reverse">
@@ -153,9 +147,7 @@ export const PlanView = memo(function PlanView({ points, loadsN, cg, flagged, un
           {units.format('position', frame.maxY - frame.minY)}
         </text>
       </svg>
-      <figcaption className="tc-visually-hidden">
-        Plan view to scale. Frame outline drawn around the mount points with a margin.
-      </figcaption>
+      <figcaption className="tc-visually-hidden">Plan view to scale. Frame outline drawn around the mount points with a margin.</figcaption>
     </figure>
   );
 });

@@ -35,7 +35,13 @@ describe('Project page', () => {
 
     const table = await screen.findByRole('table', { name: 'Designs' });
     const rows = within(table).getAllByRole('row').slice(1);
-    expect(rows.map((row) => within(row).getAllByRole('cell').map((c) => c.textContent))).toEqual([
+    expect(
+      rows.map((row) =>
+        within(row)
+          .getAllByRole('cell')
+          .map((c) => c.textContent),
+      ),
+    ).toEqual([
       ['CHW pump 1 skid', '2', 'Released', 'Erin Engineer', '8 Jan 2025'],
       ['CHW pump 2 skid', '1', 'Draft', 'Erin Engineer', '8 Jan 2025'],
     ]);

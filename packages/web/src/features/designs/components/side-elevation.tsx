@@ -48,8 +48,8 @@ export const SideElevation = memo(function SideElevation({ points, cg, component
     const spanX = frame.maxX - frame.minX;
     const spanZ = frame.maxZ - frame.minZ;
     const scale = Math.min((WIDTH - PAD.left - PAD.right) / spanX, (HEIGHT - PAD.top - PAD.bottom) / spanZ);
-    const offsetX = PAD.left + ((WIDTH - PAD.left - PAD.right) - spanX * scale) / 2;
-    const offsetY = PAD.top + ((HEIGHT - PAD.top - PAD.bottom) - spanZ * scale) / 2;
+    const offsetX = PAD.left + (WIDTH - PAD.left - PAD.right - spanX * scale) / 2;
+    const offsetY = PAD.top + (HEIGHT - PAD.top - PAD.bottom - spanZ * scale) / 2;
     const px = (x: number) => offsetX + (x - frame.minX) * scale;
     const py = (z: number) => offsetY + (frame.maxZ - z) * scale;
     return { plane, frame, px, py };
@@ -81,7 +81,11 @@ export const SideElevation = memo(function SideElevation({ points, cg, component
         </defs>
         <line x1={left} y1={groundY} x2={right} y2={groundY} className="tc-drawing-ground" />
         {points.map((p, index) => (
-          <path key={`${p.label}-${index}`} d={springPath(px(p.x), py(p.z) - MOUNT_HALF_HEIGHT, py(p.z) + MOUNT_HALF_HEIGHT)} className="tc-drawing-spring" />
+          <path
+            key={`${p.label}-${index}`}
+            d={springPath(px(p.x), py(p.z) - MOUNT_HALF_HEIGHT, py(p.z) + MOUNT_HALF_HEIGHT)}
+            className="tc-drawing-spring"
+          />
         ))}
         <line x1={left} y1={planeY} x2={right} y2={planeY} className="tc-drawing-plane" />
         <text x={right + 6} y={planeY + 4} className="tc-drawing-caption">

@@ -15,13 +15,7 @@ import { useEffect, useMemo, useRef } from 'react';
 import type { Units } from '@/lib/units';
 import type { DesignComponent, MountPoint, OperatingConditions } from '@/types/design-api';
 
-import {
-  parseComponents,
-  parseCriteria,
-  parseMountPoints,
-  parseOperating,
-  type DesignFormValues,
-} from '../schemas/design-form';
+import { parseComponents, parseCriteria, parseMountPoints, parseOperating, type DesignFormValues } from '../schemas/design-form';
 
 /** Any equal value gives the same loads: with equal mounts the loads do not depend on the stiffness. */
 const EQUAL_STIFFNESS_N_PER_M = 1e6;

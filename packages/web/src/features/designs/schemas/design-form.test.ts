@@ -3,15 +3,7 @@ import { lbToKg } from '@tacet/vibration';
 import { unitsFor } from '@/lib/units';
 import { demoInput } from '@/testing/design-fakes';
 
-import {
-  describeErrors,
-  designFormSchema,
-  numberText,
-  parseList,
-  toDesignInput,
-  toFormValues,
-  type DesignFormValues,
-} from './design-form';
+import { describeErrors, designFormSchema, numberText, parseList, toDesignInput, toFormValues, type DesignFormValues } from './design-form';
 
 const SI = unitsFor('SI');
 const US = unitsFor('US');
@@ -141,9 +133,6 @@ describe('design form validation', () => {
       { components: [undefined, { mass: 'The mass must be more than 0' }], mountPoints: 'Each mount point needs its own label' },
       values,
     );
-    expect(text).toEqual([
-      'Equipment, row 2 (Motor): The mass must be more than 0',
-      'Mount layout: Each mount point needs its own label',
-    ]);
+    expect(text).toEqual(['Equipment, row 2 (Motor): The mass must be more than 0', 'Mount layout: Each mount point needs its own label']);
   });
 });

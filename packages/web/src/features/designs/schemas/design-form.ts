@@ -301,25 +301,27 @@ function listOf(what: string, { positive = true, max }: { positive?: boolean; ma
     .test('count', `${what}: give at most ${max} values`, (text) => max === undefined || (parseList(text) ?? []).length <= max);
 }
 
-const componentSchema = yup.object({
-  name: yup
-    .string()
-    .trim()
-    .required('Name the component')
-    .max(DESIGN_LIMITS.componentNameLength, `Keep the name to ${DESIGN_LIMITS.componentNameLength} characters`),
-  mass: requiredNumber('the mass').positive('The mass must be more than 0'),
-  x: requiredNumber('x'),
-  y: requiredNumber('y'),
-  z: requiredNumber('z'),
-  lx: optionalNumber('Length').min(0, 'Dimensions cannot be negative'),
-  ly: optionalNumber('Width').min(0, 'Dimensions cannot be negative'),
-  lz: optionalNumber('Height').min(0, 'Dimensions cannot be negative'),
-}).test('box', 'Give all three box dimensions, or none', function (row) {
-  const given = [row.lx, row.ly, row.lz].filter((v) => v !== undefined).length;
-  if (given === 0 || given === 3) return true;
-  const missing = (['lx', 'ly', 'lz'] as const).find((key) => row[key] === undefined) ?? 'lx';
-  return this.createError({ path: `${this.path}.${missing}`, message: 'Give all three box dimensions, or none' });
-});
+const componentSchema = yup
+  .object({
+    name: yup
+      .string()
+      .trim()
+      .required('Name the component')
+      .max(DESIGN_LIMITS.componentNameLength, `Keep the name to ${DESIGN_LIMITS.componentNameLength} characters`),
+    mass: requiredNumber('the mass').positive('The mass must be more than 0'),
+    x: requiredNumber('x'),
+    y: requiredNumber('y'),
+    z: requiredNumber('z'),
+    lx: optionalNumber('Length').min(0, 'Dimensions cannot be negative'),
+    ly: optionalNumber('Width').min(0, 'Dimensions cannot be negative'),
+    lz: optionalNumber('Height').min(0, 'Dimensions cannot be negative'),
+  })
+  .test('box', 'Give all three box dimensions, or none', function (row) {
+    const given = [row.lx, row.ly, row.lz].filter((v) => v !== undefined).length;
+    if (given === 0 || given === 3) return true;
+    const missing = (['lx', 'ly', 'lz'] as const).find((key) => row[key] === undefined) ?? 'lx';
+    return this.createError({ path: `${this.path}.${missing}`, message: 'Give all three box dimensions, or none' });
+  });
 
 const mountPointSchema = yup.object({
   label: yup
@@ -332,44 +334,46 @@ const mountPointSchema = yup.object({
   z: requiredNumber('z'),
 });
 
-const operatingSchema = yup.object({
-  speedMode: yup.mixed<SpeedMode>().oneOf(['fixed', 'range']).required(),
-  speedRpm: optionalNumber('The speed').when('speedMode', {
-    is: 'fixed',
-    then: (s) => s.positive('The speed must be more than 0'),
-  }),
-  speedMinRpm: optionalNumber('The lowest speed').when('speedMode', {
-    is: 'range',
-    then: (s) => s.required('Enter the lowest speed').positive('The lowest speed must be more than 0'),
-  }),
-  speedMaxRpm: optionalNumber('The highest speed').when(['speedMode', 'speedMinRpm'], ([mode, min], s) =>
-    mode === 'range'
-      ? s
-          .required('Enter the highest speed')
-          .positive('The highest speed must be more than 0')
-          .min(typeof min === 'number' ? min : 0, 'The highest speed cannot be below the lowest')
-      : s,
-  ),
-  orders: listOf('Orders', { max: DESIGN_LIMITS.orders }).test(
-    'max-order',
-    `Orders above ${DESIGN_LIMITS.maxOrder} are not accepted`,
-    (text) => (parseList(text) ?? []).every((v) => v <= DESIGN_LIMITS.maxOrder),
-  ),
-  vaneCount: optionalNumber('The vane count')
-    .integer('The vane count is a whole number')
-    .min(1, 'The vane count must be at least 1')
-    .max(DESIGN_LIMITS.vaneCount, `At most ${DESIGN_LIMITS.vaneCount} vanes`),
-  lineFrequencyHz: optionalNumber('The line frequency').positive('The line frequency must be more than 0'),
-  extraFrequenciesHz: listOf('Further frequencies', { max: DESIGN_LIMITS.extraFrequencies }),
-}).test('source', 'Give a speed or a line frequency: there is nothing to isolate from otherwise', function (values) {
-  const hasSpeed = values.speedMode === 'range' ? true : values.speedRpm !== undefined;
-  const hasOther = values.lineFrequencyHz !== undefined || (parseList(values.extraFrequenciesHz) ?? []).length > 0;
-  if (hasSpeed || hasOther) return true;
-  return this.createError({
-    path: `${this.path}.speedRpm`,
-    message: 'Give a speed or a line frequency: there is nothing to isolate from otherwise',
+const operatingSchema = yup
+  .object({
+    speedMode: yup.mixed<SpeedMode>().oneOf(['fixed', 'range']).required(),
+    speedRpm: optionalNumber('The speed').when('speedMode', {
+      is: 'fixed',
+      then: (s) => s.positive('The speed must be more than 0'),
+    }),
+    speedMinRpm: optionalNumber('The lowest speed').when('speedMode', {
+      is: 'range',
+      then: (s) => s.required('Enter the lowest speed').positive('The lowest speed must be more than 0'),
+    }),
+    speedMaxRpm: optionalNumber('The highest speed').when(['speedMode', 'speedMinRpm'], ([mode, min], s) =>
+      mode === 'range'
+        ? s
+            .required('Enter the highest speed')
+            .positive('The highest speed must be more than 0')
+            .min(typeof min === 'number' ? min : 0, 'The highest speed cannot be below the lowest')
+        : s,
+    ),
+    orders: listOf('Orders', { max: DESIGN_LIMITS.orders }).test(
+      'max-order',
+      `Orders above ${DESIGN_LIMITS.maxOrder} are not accepted`,
+      (text) => (parseList(text) ?? []).every((v) => v <= DESIGN_LIMITS.maxOrder),
+    ),
+    vaneCount: optionalNumber('The vane count')
+      .integer('The vane count is a whole number')
+      .min(1, 'The vane count must be at least 1')
+      .max(DESIGN_LIMITS.vaneCount, `At most ${DESIGN_LIMITS.vaneCount} vanes`),
+    lineFrequencyHz: optionalNumber('The line frequency').positive('The line frequency must be more than 0'),
+    extraFrequenciesHz: listOf('Further frequencies', { max: DESIGN_LIMITS.extraFrequencies }),
+  })
+  .test('source', 'Give a speed or a line frequency: there is nothing to isolate from otherwise', function (values) {
+    const hasSpeed = values.speedMode === 'range' ? true : values.speedRpm !== undefined;
+    const hasOther = values.lineFrequencyHz !== undefined || (parseList(values.extraFrequenciesHz) ?? []).length > 0;
+    if (hasSpeed || hasOther) return true;
+    return this.createError({
+      path: `${this.path}.speedRpm`,
+      message: 'Give a speed or a line frequency: there is nothing to isolate from otherwise',
+    });
   });
-});
 
 const criteriaSchema = yup.object({
   minIsolationPct: requiredNumber('the minimum isolation')

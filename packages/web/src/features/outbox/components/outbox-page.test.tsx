@@ -78,7 +78,10 @@ describe('Outbox page', () => {
     const table = await findTable();
     const rows = within(table).getAllByRole('row').slice(1);
     expect(rows).toHaveLength(2);
-    const cells = (row: HTMLElement) => within(row).getAllByRole('cell').map((cell) => cell.textContent);
+    const cells = (row: HTMLElement) =>
+      within(row)
+        .getAllByRole('cell')
+        .map((cell) => cell.textContent);
     expect(cells(rows[0]!)).toEqual([
       expect.stringMatching(/4 Mar 2025/),
       'Quotes <quotes@supplier-one.example.test>',

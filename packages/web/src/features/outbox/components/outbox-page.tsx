@@ -84,8 +84,8 @@ function OutboxError({ error, onRetry }: { error: unknown; onRetry: () => void }
       <Callout intent="primary" title="There is no outbox on this server">
         <p>{errorMessage(error)}</p>
         <p>
-          Here Tacet hands its e-mail to the mail server its administrator configured (SMTP_URL), so sent messages
-          are in that server’s records, not in Tacet.
+          Here Tacet hands its e-mail to the mail server its administrator configured (SMTP_URL), so sent messages are in that server’s
+          records, not in Tacet.
         </p>
       </Callout>
     );

@@ -33,11 +33,7 @@ export function OutboxTable({ messages, selectedId, linkTo, onOpen }: OutboxTabl
         {messages.map((message) => {
           const selected = message.id === selectedId;
           return (
-            <tr
-              key={message.id}
-              className={selected ? 'is-selected' : undefined}
-              onClick={() => onOpen(message.id)}
-            >
+            <tr key={message.id} className={selected ? 'is-selected' : undefined} onClick={() => onOpen(message.id)}>
               <td>
                 <time dateTime={message.receivedAt}>{formatDateTime(message.receivedAt)}</time>
               </td>

@@ -50,16 +50,15 @@ describe('Projects page', () => {
     const table = await screen.findByRole('table', { name: 'Projects' });
     const rows = within(table).getAllByRole('row').slice(1);
     expect(rows).toHaveLength(2);
-    const cells = within(rows[0]!).getAllByRole('cell').map((cell) => cell.textContent);
+    const cells = within(rows[0]!)
+      .getAllByRole('cell')
+      .map((cell) => cell.textContent);
     expect(cells).toEqual(['Harbour Chiller Hall', 'Basement plant room', 'Harbour Estates', '2', 'Erin Engineer', '8 Jan 2025']);
-    expect(within(rows[1]!).getAllByRole('cell').map((cell) => cell.textContent)).toEqual([
-      'Ridge Road Boiler House',
-      '—',
-      '—',
-      '1',
-      'Chris Checker',
-      '3 Feb 2025',
-    ]);
+    expect(
+      within(rows[1]!)
+        .getAllByRole('cell')
+        .map((cell) => cell.textContent),
+    ).toEqual(['Ridge Road Boiler House', '—', '—', '1', 'Chris Checker', '3 Feb 2025']);
     expect(within(rows[0]!).getByRole('link', { name: 'Harbour Chiller Hall' })).toHaveAttribute('href', '/projects/1');
     expect(screen.getByText('2 projects, 3 designs')).toBeInTheDocument();
   });

@@ -35,9 +35,7 @@ export function ProjectsList() {
         title="Projects"
         description="Each project holds the designs for one site or job: the machines, their mounts, revisions and sign-off."
         actions={
-          mayCreate ? (
-            <Button intent="primary" icon={<PlusIcon />} text="New project" onClick={() => setCreating(true)} />
-          ) : undefined
+          mayCreate ? <Button intent="primary" icon={<PlusIcon />} text="New project" onClick={() => setCreating(true)} /> : undefined
         }
       />
       <div className="tc-panel">

@@ -43,7 +43,11 @@ describe('Design purchasing view', () => {
     await waitForView();
     const table = screen.getByRole('table', { name: 'Bill of materials' });
     const rows = within(table).getAllByRole('row');
-    const body = rows.slice(1, -1).map((row) => within(row).getAllByRole('cell').map((cell) => cell.textContent));
+    const body = rows.slice(1, -1).map((row) =>
+      within(row)
+        .getAllByRole('cell')
+        .map((cell) => cell.textContent),
+    );
     expect(body).toEqual([
       ['Quellbrook Mounts', 'QB-HS-300', '4', 'A, B, C, D', 'USD 92.00', 'USD 368.00', '21 days'],
       ['Stillmoor Isolation', 'SM-LV-300', '2', 'A, B', 'USD 70.00', 'USD 140.00', '35 days'],
@@ -60,7 +64,11 @@ describe('Design purchasing view', () => {
     const { user, fake } = openView();
     const saved = catchDownloads();
     fake
-      .on('get', '/designs/:id/bom.csv', { status: 200, data: new Blob(['supplier\n']), headers: { 'content-disposition': 'attachment; filename="p2-rev2-bom.csv"' } })
+      .on('get', '/designs/:id/bom.csv', {
+        status: 200,
+        data: new Blob(['supplier\n']),
+        headers: { 'content-disposition': 'attachment; filename="p2-rev2-bom.csv"' },
+      })
       .on('get', '/designs/:id/bom.xlsx', { status: 200, data: new Blob(['x']) })
       .on('get', '/designs/:id/report.pdf', { status: 200, data: new Blob(['%PDF']) });
     await waitForView();
@@ -87,9 +95,7 @@ describe('Design purchasing view', () => {
     });
     await waitForView();
     await user.click(screen.getByRole('button', { name: 'BOM (CSV)' }));
-    expect(await screen.findByRole('alert')).toHaveTextContent(
-      'BOM (CSV) could not be downloaded. Only released designs can be exported.',
-    );
+    expect(await screen.findByRole('alert')).toHaveTextContent('BOM (CSV) could not be downloaded. Only released designs can be exported.');
   });
 
   it('sends a request for quotation to one supplier with the message and lists it as requested', async () => {
@@ -148,7 +154,11 @@ describe('Design purchasing view', () => {
     await user.click(await screen.findByRole('button', { name: 'Record progress' }));
     const dialog = await screen.findByRole('dialog');
     const state = within(dialog).getByLabelText('New state');
-    expect(within(state).getAllByRole('option').map((option) => option.textContent)).toEqual(['Quoted', 'Ordered', 'Received']);
+    expect(
+      within(state)
+        .getAllByRole('option')
+        .map((option) => option.textContent),
+    ).toEqual(['Quoted', 'Ordered', 'Received']);
 
     await user.click(within(dialog).getByRole('button', { name: 'Record' }));
     expect(await within(dialog).findByText('A quote needs its price.')).toBeInTheDocument();
@@ -186,7 +196,9 @@ describe('Design purchasing view', () => {
     });
     openView(releasedDesign(), [rfq]);
     const history = await screen.findByRole('list', { name: 'History of request 43' });
-    const entries = within(history).getAllByRole('listitem').map((li) => li.textContent);
+    const entries = within(history)
+      .getAllByRole('listitem')
+      .map((li) => li.textContent);
     expect(entries).toHaveLength(3);
     expect(entries[1]).toContain('Quoted — Bea Buyer: By phone');
     expect(entries[2]).toContain('Ordered — Bea Buyer: PO 4471');

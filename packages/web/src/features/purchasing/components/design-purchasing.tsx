@@ -79,10 +79,14 @@ export function DesignPurchasing({ design }: { design: Design }) {
           <h2 className="tc-purchase-title">Bill of materials</h2>
           {readable ? <DesignDocuments designId={design.id} baseName={documentBaseName(design.name, design.revision)} /> : null}
         </div>
-        {design.bom.length === 0 ? <p className="tc-muted">No mounts chosen, so there is nothing to buy.</p> : <BomTable lines={design.bom} />}
+        {design.bom.length === 0 ? (
+          <p className="tc-muted">No mounts chosen, so there is nothing to buy.</p>
+        ) : (
+          <BomTable lines={design.bom} />
+        )}
         <p className="tc-muted tc-purchase-caution">
-          Prices and lead times are the catalog’s at release, not a quote. Restraints, snubbers and flexible connections
-          are not in this list; they follow local codes and the review of a licensed engineer.
+          Prices and lead times are the catalog’s at release, not a quote. Restraints, snubbers and flexible connections are not in this
+          list; they follow local codes and the review of a licensed engineer.
         </p>
       </div>
 

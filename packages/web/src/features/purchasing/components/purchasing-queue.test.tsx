@@ -27,7 +27,9 @@ describe('Purchasing queue', () => {
     const table = await screen.findByRole('table', { name: 'Released designs' });
     const rows = within(table).getAllByRole('row').slice(1);
     expect(rows).toHaveLength(2);
-    const cells = within(rows[0]!).getAllByRole('cell').map((cell) => cell.textContent);
+    const cells = within(rows[0]!)
+      .getAllByRole('cell')
+      .map((cell) => cell.textContent);
     expect(cells).toEqual([
       'North Loop Chilled Water Plant',
       'CHW pump P-2 skid',

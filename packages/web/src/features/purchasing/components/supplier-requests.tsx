@@ -41,13 +41,7 @@ function RfqItem({ rfq, currency }: { rfq: Rfq; currency: string }) {
         {rfq.quotedPrice !== null ? <span className="tc-rfq-quote">Quoted {formatPrice(rfq.quotedPrice, currency)}</span> : null}
         <span className="tc-rfq-buttons">
           {rfq.status === 'failed' ? (
-            <Button
-              size="small"
-              icon={<RefreshIcon />}
-              text="Send again"
-              loading={retry.isPending}
-              onClick={() => retry.mutate(rfq.id)}
-            />
+            <Button size="small" icon={<RefreshIcon />} text="Send again" loading={retry.isPending} onClick={() => retry.mutate(rfq.id)} />
           ) : null}
           {canRecord ? <Button size="small" icon={<EditIcon />} text="Record progress" onClick={() => setRecording(true)} /> : null}
         </span>
@@ -126,7 +120,14 @@ export function SupplierRequests({ designId, supplier, lineCount, currency, rfqs
               onChange={(event) => setMessage(event.target.value)}
             />
           </FormGroup>
-          <Button type="submit" intent="primary" icon={<EnvelopeIcon />} text="Send request for quotation" loading={send.isPending} disabled={tooLong} />
+          <Button
+            type="submit"
+            intent="primary"
+            icon={<EnvelopeIcon />}
+            text="Send request for quotation"
+            loading={send.isPending}
+            disabled={tooLong}
+          />
           {send.isError ? (
             <Callout intent="danger" role="alert" className="tc-note" title="Not sent">
               {errorMessage(send.error)}

@@ -26,7 +26,9 @@ export function ReviewHistory({ designId }: { designId: number }) {
           <span className="tc-review-when">{formatDateTime(entry.at)}</span>
           <span className="tc-review-who">{entry.user.name}</span>
           <span className="tc-review-move">
-            {entry.from ? `${REVIEW_STATE_LABELS[entry.from]} → ${REVIEW_STATE_LABELS[entry.to]}` : `New revision (${REVIEW_STATE_LABELS[entry.to]})`}
+            {entry.from
+              ? `${REVIEW_STATE_LABELS[entry.from]} → ${REVIEW_STATE_LABELS[entry.to]}`
+              : `New revision (${REVIEW_STATE_LABELS[entry.to]})`}
           </span>
           {entry.comment ? <q className="tc-review-comment">{entry.comment}</q> : null}
         </li>

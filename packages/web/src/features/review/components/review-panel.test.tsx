@@ -32,13 +32,11 @@ const HISTORY: DesignHistoryEntry[] = [
 function openDesign(overrides: Partial<Design>, signedInAs: RenderOptions['signedInAs'] = 'engineer') {
   const fake: FakeApi = installFakeApi();
   const server = serveDesign(fake, makeDesign({ id: DESIGN_ID, name: NAME, chosen: demoCandidates()[0]!, ...overrides }));
-  fake
-    .on('get', '/designs/:id/history', { status: 200, data: HISTORY })
-    .on('post', '/designs/:id/transitions', ({ body }) => {
-      const { to } = body as { to: Design['status'] };
-      server.design = { ...server.design, status: to, version: server.design.version + 1 };
-      return { status: 200, data: server.design };
-    });
+  fake.on('get', '/designs/:id/history', { status: 200, data: HISTORY }).on('post', '/designs/:id/transitions', ({ body }) => {
+    const { to } = body as { to: Design['status'] };
+    server.design = { ...server.design, status: to, version: server.design.version + 1 };
+    return { status: 200, data: server.design };
+  });
   const rendered = renderApp({ signedInAs, path: `/designs/${DESIGN_ID}` });
   return { ...rendered, fake, server };
 }

@@ -188,13 +188,12 @@ export function ReviewPanel({ design, onChanged, onRevisionCreated, unsavedEdits
         }}
       >
         <p>
-          Release revision {design.revision} of {design.name}? You are recorded as its checker, the revision is frozen
-          and purchasers can order from it.
+          Release revision {design.revision} of {design.name}? You are recorded as its checker, the revision is frozen and purchasers can
+          order from it.
         </p>
         <p className="tc-muted">
-          Tacet sizes mounts for a rigid machine on linear mounts over a rigid support. Seismic and wind restraint,
-          snubbers, flexible connections and the supporting structure follow local codes and need review by a
-          qualified, licensed engineer.
+          Tacet sizes mounts for a rigid machine on linear mounts over a rigid support. Seismic and wind restraint, snubbers, flexible
+          connections and the supporting structure follow local codes and need review by a qualified, licensed engineer.
         </p>
       </Alert>
     </section>

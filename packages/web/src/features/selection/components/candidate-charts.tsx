@@ -53,8 +53,8 @@ export function CandidateCharts({
           />
         </Suspense>
         <figcaption className="tc-muted tc-chart-caption">
-          Force reaching the floor per unit of force from the machine. Shaded: isolation (above √2 × fn). Dashed
-          lines: the disturbing frequencies{targetTransmissibility ? ' and the target' : ''}. {dampingNote}
+          Force reaching the floor per unit of force from the machine. Shaded: isolation (above √2 × fn). Dashed lines: the disturbing
+          frequencies{targetTransmissibility ? ' and the target' : ''}. {dampingNote}
         </figcaption>
       </figure>
       <figure className="tc-chart" data-testid="frf-chart" aria-label="Frequency response of the mounted machine">
@@ -69,8 +69,8 @@ export function CandidateCharts({
           />
         </Suspense>
         <figcaption className="tc-muted tc-chart-caption">
-          Vertical motion per unit force (receptance) with its phase, and the dynamic stiffness, of the whole machine on all
-          its mounts as one mass on one spring.
+          Vertical motion per unit force (receptance) with its phase, and the dynamic stiffness, of the whole machine on all its mounts as
+          one mass on one spring.
         </figcaption>
       </figure>
     </>

@@ -274,8 +274,8 @@ export function CandidateDetail({
             </tbody>
           </HTMLTable>
           <p className="tc-muted tc-note">
-            Six modes of the machine as a rigid body on the mounts. Coupled: no single motion carries 90 % of the mode's
-            kinetic energy. Keep every mode well below the governing frequency.
+            Six modes of the machine as a rigid body on the mounts. Coupled: no single motion carries 90 % of the mode's kinetic energy.
+            Keep every mode well below the governing frequency.
           </p>
         </>
       ) : null}

@@ -31,18 +31,7 @@ export interface RankedCandidate {
 }
 
 type ColumnKey =
-  | 'rank'
-  | 'label'
-  | 'supplier'
-  | 'kind'
-  | 'fn'
-  | 'isolation'
-  | 'utilization'
-  | 'level'
-  | 'price'
-  | 'leadTime'
-  | 'verdict'
-  | 'reason';
+  'rank' | 'label' | 'supplier' | 'kind' | 'fn' | 'isolation' | 'utilization' | 'level' | 'price' | 'leadTime' | 'verdict' | 'reason';
 
 interface ColumnSpec {
   key: ColumnKey;
@@ -81,7 +70,13 @@ const COLUMNS: readonly ColumnSpec[] = [
       />
     ),
   },
-  { key: 'supplier', name: 'Supplier', width: 140, value: (r) => r.candidate.supplier.name.toLowerCase(), render: (r) => r.candidate.supplier.name },
+  {
+    key: 'supplier',
+    name: 'Supplier',
+    width: 140,
+    value: (r) => r.candidate.supplier.name.toLowerCase(),
+    render: (r) => r.candidate.supplier.name,
+  },
   { key: 'kind', name: 'Kind', width: 112, value: (r) => r.candidate.kind, render: (r) => KIND_LABELS[r.candidate.kind] },
   {
     key: 'fn',
@@ -131,7 +126,13 @@ const COLUMNS: readonly ColumnSpec[] = [
     value: (r) => finiteOrNull(r.candidate.maxLeadTimeDays),
     render: (r) => formatDays(r.candidate.maxLeadTimeDays),
   },
-  { key: 'reason', name: 'First reason', width: 320, value: (r) => firstReason(r.candidate).toLowerCase(), render: (r) => firstReason(r.candidate) },
+  {
+    key: 'reason',
+    name: 'First reason',
+    width: 320,
+    value: (r) => firstReason(r.candidate).toLowerCase(),
+    render: (r) => firstReason(r.candidate),
+  },
 ];
 
 export const SORT_OPTIONS = COLUMNS.map((c) => ({ value: c.key, label: c.name }));

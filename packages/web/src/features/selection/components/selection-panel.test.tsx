@@ -8,7 +8,10 @@ import type { Design, UpdateDesignInput } from '@/types/design-api';
 const DESIGN_ID = 41;
 const NAME = 'CHW pump P-3 skid';
 
-function openSelection(design: Design = makeDesign({ id: DESIGN_ID, name: NAME }), signedInAs: 'engineer' | 'viewer' | 'admin' = 'engineer') {
+function openSelection(
+  design: Design = makeDesign({ id: DESIGN_ID, name: NAME }),
+  signedInAs: 'engineer' | 'viewer' | 'admin' = 'engineer',
+) {
   const fake = installFakeApi();
   const server = serveDesign(fake, design);
   const rendered = renderApp({ signedInAs, path: `/designs/${design.id}?tab=selection` });
@@ -199,9 +202,12 @@ describe('Mount selection', () => {
     expect(within(detail).queryByRole('button', { name: 'Choose this' })).not.toBeInTheDocument();
     expect(screen.queryByRole('button', { name: /Find mounts/ })).not.toBeInTheDocument();
     expect(screen.getByText('Running a selection is for engineers and administrators.')).toBeInTheDocument();
-    await waitFor(() => expect(within(detail).getByTestId('transmissibility-chart').querySelector('.VictoryContainer svg')).not.toBeNull(), {
-      timeout: 10_000,
-    });
+    await waitFor(
+      () => expect(within(detail).getByTestId('transmissibility-chart').querySelector('.VictoryContainer svg')).not.toBeNull(),
+      {
+        timeout: 10_000,
+      },
+    );
   });
 
   it('updates the chosen candidate’s natural frequency live when the mass changes', async () => {

@@ -145,14 +145,13 @@ export const SelectionPanel = memo(function SelectionPanel({
                 {run.result.candidates.length} candidates, {passing} passing
               </strong>{' '}
               <span className="tc-muted">
-                from {run.result.considered.toLocaleString('en-US')} catalog mounts considered in{' '}
-                {Math.round(run.result.elapsedMs)} ms.
+                from {run.result.considered.toLocaleString('en-US')} catalog mounts considered in {Math.round(run.result.elapsedMs)} ms.
               </span>
             </>
           ) : canRun ? (
             <span className="tc-muted">
-              Ranks the catalog against the saved input and requirements: passing candidates first, then the ones that fail
-              with their reasons.
+              Ranks the catalog against the saved input and requirements: passing candidates first, then the ones that fail with their
+              reasons.
             </span>
           ) : (
             <span className="tc-muted">Running a selection is for engineers and administrators.</span>

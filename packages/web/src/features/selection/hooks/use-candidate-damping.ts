@@ -41,10 +41,7 @@ function sameDamping(a: Damping | undefined, b: Damping | undefined): boolean {
  * carries none). Unknown (catalog unreachable) → undamped.
  */
 export function useCandidateDamping(candidate: Candidate | null): CandidateDampingState {
-  const mountIds = useMemo(
-    () => (candidate ? [...new Set(candidate.perPoint.map((p) => p.mountId))] : []),
-    [candidate],
-  );
+  const mountIds = useMemo(() => (candidate ? [...new Set(candidate.perPoint.map((p) => p.mountId))] : []), [candidate]);
   const mounts = useMounts(mountIds, mountIds.length > 0);
   const loaded = mounts.map((m) => m.data);
   const loading = mounts.some((m) => m.isPending);

@@ -111,7 +111,14 @@ export function SupplierFormDialog({ isOpen, supplier, onClose }: SupplierFormDi
           <Form noValidate aria-label={title}>
             <DialogBody>
               <TextField name="name" id="supplier-name" label="Name" autoComplete="off" autoFocus />
-              <TextField name="contactEmail" id="supplier-email" label="Contact email" type="email" autoComplete="off" helperText="Requests for quotation go here" />
+              <TextField
+                name="contactEmail"
+                id="supplier-email"
+                label="Contact email"
+                type="email"
+                autoComplete="off"
+                helperText="Requests for quotation go here"
+              />
               <TextField name="phone" id="supplier-phone" label="Phone" autoComplete="off" />
               <NotesField />
               {supplier ? <ActiveField /> : null}

@@ -46,13 +46,11 @@ describe('Suppliers page', () => {
       'Quillmere Isolation',
       'Tamberlin Elastics',
     ]);
-    expect(within(rows[1]!).getAllByRole('cell').map((cell) => cell.textContent)).toEqual([
-      'Quillmere Isolation',
-      'orders@quillmere.test',
-      '+1 555 0100',
-      '180',
-      'Active',
-    ]);
+    expect(
+      within(rows[1]!)
+        .getAllByRole('cell')
+        .map((cell) => cell.textContent),
+    ).toEqual(['Quillmere Isolation', 'orders@quillmere.test', '+1 555 0100', '180', 'Active']);
     expect(rows[0]).toHaveTextContent('Inactive');
     expect(screen.getByText('3 suppliers, 2 active')).toBeInTheDocument();
   });

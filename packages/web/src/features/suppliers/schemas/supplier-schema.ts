@@ -26,9 +26,7 @@ export const supplierSchema = yup.object({
     .trim()
     .matches(PHONE_PATTERN, { message: 'Use digits, spaces and + ( ) - . only', excludeEmptyString: true })
     .max(SUPPLIER_LIMITS.phoneMaxLength, `Keep the number to ${SUPPLIER_LIMITS.phoneMaxLength} characters or fewer`),
-  notes: yup
-    .string()
-    .max(SUPPLIER_LIMITS.notesMaxLength, `Keep the notes to ${SUPPLIER_LIMITS.notesMaxLength} characters or fewer`),
+  notes: yup.string().max(SUPPLIER_LIMITS.notesMaxLength, `Keep the notes to ${SUPPLIER_LIMITS.notesMaxLength} characters or fewer`),
   active: yup.boolean().required(),
 });
 

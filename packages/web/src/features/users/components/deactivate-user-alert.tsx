@@ -29,8 +29,8 @@ export function DeactivateUserAlert({ user, onClose }: DeactivateUserAlertProps)
             <strong>Deactivate {user.name}?</strong>
           </p>
           <p>
-            {user.email} will no longer be able to sign in. Their projects, designs and history stay as they are, and
-            an administrator can make the account active again.
+            {user.email} will no longer be able to sign in. Their projects, designs and history stay as they are, and an administrator can
+            make the account active again.
           </p>
         </>
       ) : null}

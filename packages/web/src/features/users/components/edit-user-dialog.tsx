@@ -96,10 +96,7 @@ export function EditUserDialog({ user, isSelf, onClose }: EditUserDialogProps) {
                   helperText={isSelf ? 'You cannot change your own role.' : undefined}
                 />
                 <SelectField name="unitSystem" id="edit-user-units" label="Units" options={UNIT_OPTIONS} />
-                <ActiveSwitch
-                  disabled={isSelf}
-                  helperText={isSelf ? 'You cannot deactivate your own account.' : undefined}
-                />
+                <ActiveSwitch disabled={isSelf} helperText={isSelf ? 'You cannot deactivate your own account.' : undefined} />
                 <FormError message={failure} />
               </DialogBody>
               <DialogFooter

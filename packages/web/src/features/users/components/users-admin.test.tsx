@@ -36,11 +36,7 @@ function serveUsers(initial: UserRecord[]): { fake: FakeApi; users: UserRecord[]
   return { fake, users };
 }
 
-const PEOPLE = () => [
-  userRecordFor('admin'),
-  userRecordFor('engineer'),
-  userRecordFor('purchaser', { active: false }),
-];
+const PEOPLE = () => [userRecordFor('admin'), userRecordFor('engineer'), userRecordFor('purchaser', { active: false })];
 
 async function openPeople() {
   const table = await screen.findByRole('table', { name: 'People' });

@@ -46,12 +46,7 @@ export function UsersAdmin() {
         {users.data ? (
           <>
             <p className="tc-muted tc-table-summary">{summary(users.data)}</p>
-            <UsersTable
-              users={users.data}
-              currentUserId={currentUser.id}
-              onEdit={setEditing}
-              onDeactivate={setDeactivating}
-            />
+            <UsersTable users={users.data} currentUserId={currentUser.id} onEdit={setEditing} onDeactivate={setDeactivating} />
           </>
         ) : null}
       </div>

@@ -51,13 +51,7 @@ export function UsersTable({ users, currentUserId, onEdit, onDeactivate }: Users
                 )}
               </td>
               <td className="tc-table-actions">
-                <Button
-                  variant="minimal"
-                  icon={<EditIcon />}
-                  aria-label={`Edit ${user.name}`}
-                  title="Edit"
-                  onClick={() => onEdit(user)}
-                />
+                <Button variant="minimal" icon={<EditIcon />} aria-label={`Edit ${user.name}`} title="Edit" onClick={() => onEdit(user)} />
                 {user.active && !isSelf ? (
                   <Button
                     variant="minimal"
