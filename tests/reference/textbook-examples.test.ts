@@ -2,7 +2,8 @@
  * Worked textbook examples. The statements and answers are recalled FROM MEMORY (example numbers
  * are not given where unsure, as they differ between printings); each one was chosen because its
  * answer can be re-derived from the closed forms, which was done here by hand before writing the
- * expected values. No disagreement with ISOLATION_REFERENCE was found in these examples.
+ * expected values. None of them disagrees with the engineering notes (docs/engineering/sdof.md,
+ * docs/engineering/transmissibility.md).
  */
 import { describe, expect, it } from 'vitest';
 import {

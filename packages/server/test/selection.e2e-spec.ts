@@ -4,13 +4,15 @@ import { createTestApp, type TestApp } from './utils/create-test-app.js';
 
 /**
  * POST /api/selection against hand-computed cases. Expected values come from closed forms
- * (ISOLATION_REFERENCE §3, §4, §6 [CF]; textbook results, e.g. Rao, Mechanical Vibrations)
- * computed here independently, and from the reference's check values CV-14/15/20.
+ * (docs/engineering/transmissibility.md §2, docs/engineering/static-deflection.md §2,
+ * docs/engineering/mount-loads.md §2 [CF]; textbook results, e.g. Rao, Mechanical Vibrations)
+ * computed here independently, and from the check values docs/engineering/check-values.md
+ * CV-14, CV-15, CV-20. The checks and the score: docs/engineering/selection.md.
  */
 const G = 9.80665;
 const TWO_PI = 2 * Math.PI;
 
-/** Viscous transmissibility √(1 + (2ζr)²)/√((1 − r²)² + (2ζr)²) — ISOLATION_REFERENCE §3 [CF]. */
+/** Viscous transmissibility √(1 + (2ζr)²)/√((1 − r²)² + (2ζr)²) — docs/engineering/transmissibility.md §2 [CF]. */
 const viscousT = (r: number, zeta: number) => Math.sqrt(1 + (2 * zeta * r) ** 2) / Math.sqrt((1 - r * r) ** 2 + (2 * zeta * r) ** 2);
 
 const CORNERS = [
@@ -20,7 +22,7 @@ const CORNERS = [
   { label: 'D', x: -0.8, y: -0.45, z: 0 },
 ];
 
-/** ISOLATION_REFERENCE CV-14: pump, motor and base frame as point masses. */
+/** docs/engineering/check-values.md CV-14: pump, motor and base frame as point masses. */
 const CV14_SKID = [
   { name: 'Pump', massKg: 300, cg: { x: 0.65, y: 0.05, z: 0.5 } },
   { name: 'Motor', massKg: 450, cg: { x: -0.3, y: 0, z: 0.45 } },

@@ -27,7 +27,7 @@ const CORNERS = [
   { label: 'D', x: -0.8, y: -0.45, z: 0 },
 ];
 
-/** Pump 300 kg, motor 450 kg, base frame 250 kg: the skid of ISOLATION_REFERENCE CV-14. */
+/** Pump 300 kg, motor 450 kg, base frame 250 kg: the skid of docs/engineering/check-values.md CV-14. */
 export const DEMO_P2_INPUT: DesignInput = {
   components: [
     { name: 'End-suction pump', massKg: 300, cg: { x: 0.65, y: 0.05, z: 0.5 } },

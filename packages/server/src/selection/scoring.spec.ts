@@ -13,7 +13,7 @@ const ideal: ScoreInputs = {
   minLeadTimeDays: 10,
 };
 
-describe('scoreCandidate (ISOLATION_REFERENCE §10 step 5)', () => {
+describe('scoreCandidate (docs/engineering/selection.md §11)', () => {
   it('has weights that add up to 1, so a candidate best on every term scores 1', () => {
     expect(Object.values(SCORE_WEIGHTS).reduce((a, b) => a + b, 0)).toBeCloseTo(1, 15);
     expect(scoreCandidate(ideal)).toBeCloseTo(1, 15);

@@ -1,8 +1,8 @@
 import type { ScoreTerms } from './selection.types.js';
 
 /**
- * Ranking score of a candidate (ISOLATION_REFERENCE §10 step 5; the weights are the
- * reference's suggestion, with no outside source):
+ * Ranking score of a candidate (docs/engineering/selection.md §11; the weights are our own
+ * choice, with no published source):
  *
  *   S = 0.40·min(1, I_dB,min / I_dB,target)          isolation at the worst disturbing frequency
  *     + 0.20·(1 − min(1, |ū − 0.8| / 0.3))            mean load utilisation near 0.8

@@ -9,7 +9,11 @@ import {
 } from './selection-engine.js';
 import { prepareProblem, type SelectionInput } from './selection-problem.js';
 
-/** Engine tests over invented rows (no database). Closed forms: ISOLATION_REFERENCE §3–4 [CF]. */
+/**
+ * Engine tests over invented rows (no database). Closed forms: docs/engineering/transmissibility.md
+ * §2–§4 and docs/engineering/static-deflection.md §1–§4 [CF]; the checks: docs/engineering/selection.md
+ * §5–§11; check values (CV ids): docs/engineering/check-values.md.
+ */
 const CORNERS = [
   { label: 'A', x: 0.8, y: 0.45, z: 0 },
   { label: 'B', x: 0.8, y: -0.45, z: 0 },
@@ -72,7 +76,7 @@ const evaluate = (p: ReturnType<typeof problem>, rows: CatalogRow[], options?: {
   );
 
 describe('SelectionEvaluation', () => {
-  it('ISOLATION_REFERENCE CV-12 [CF]: an elastomer with δ_st = 5 mm and n_d = 1.4 has fn = 8.340 Hz; T is hysteretic with η', () => {
+  it('CV-12 [CF]: an elastomer with δ_st = 5 mm and n_d = 1.4 has fn = 8.340 Hz; T is hysteretic with η', () => {
     const elastomer = row({
       verticalStiffnessNPerM: W4 / 0.005,
       dynamicStiffnessRatio: 1.4,

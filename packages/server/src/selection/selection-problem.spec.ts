@@ -10,8 +10,10 @@ const CORNERS = [
 ];
 const criteria = { minIsolationPct: 90, minUtilization: 0.5, maxUtilization: 1.0 };
 
+// Model: docs/engineering/selection.md §1–§4 and docs/engineering/forcing.md §1–§4;
+// check values: docs/engineering/check-values.md.
 describe('designFrequencies', () => {
-  it('ISOLATION_REFERENCE CV-13 [CF]: 1480 rpm, 6 vanes, 50 Hz → 24.67, 49.33, 100, 148 Hz, lowest first, labelled', () => {
+  it('CV-13 [CF]: 1480 rpm, 6 vanes, 50 Hz → 24.67, 49.33, 100, 148 Hz, lowest first, labelled', () => {
     const list = designFrequencies({ speedRpm: 1480, orders: [1, 2], vaneCount: 6, lineFrequencyHz: 50 });
     expect(list.map((f) => f.frequencyHz.toFixed(2))).toEqual(['24.67', '49.33', '100.00', '148.00']);
     expect(list.map((f) => f.label)).toEqual([

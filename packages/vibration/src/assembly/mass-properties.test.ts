@@ -10,8 +10,9 @@ const CV14: AssemblyComponent[] = [
   { name: 'frame', massKg: 250, cg: { x: 0, y: 0, z: 0.1 } },
 ];
 
+// Model: docs/engineering/mass-properties.md §2–§4; check values: docs/engineering/check-values.md.
 describe('mass properties of an assembly', () => {
-  it('ISOLATION_REFERENCE CV-14 [CF]: pump + motor + frame as point masses', () => {
+  it('CV-14 [CF]: pump + motor + frame as point masses', () => {
     const p = massProperties(CV14);
     expect(p.massKg).toBe(1000);
     expectRounded(p.weightN, '9806.65');
@@ -26,7 +27,7 @@ describe('mass properties of an assembly', () => {
     expectRounded(p.inertia.yz, '-1.8375');
   });
 
-  it('ISOLATION_REFERENCE §7 [CF]: uniform box 1000 kg, 2.0 × 1.0 × 0.8 m → 136.67, 386.67, 416.67 kg·m²', () => {
+  it('CV-31 [CF]: uniform box 1000 kg, 2.0 × 1.0 × 0.8 m → 136.67, 386.67, 416.67 kg·m²', () => {
     const p = massProperties([{ shape: 'box', massKg: 1000, cg: { x: 0, y: 0, z: 0 }, dimensions: { x: 2, y: 1, z: 0.8 } }]);
     expectRounded(p.inertia.xx, '136.67');
     expectRounded(p.inertia.yy, '386.67');

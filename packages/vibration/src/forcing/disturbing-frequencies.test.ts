@@ -3,8 +3,9 @@ import { VibrationInputError } from '../errors/vibration-input-error.js';
 import { expectRounded } from '../testing/expect-rounded.js';
 import { disturbingFrequencies, governingFrequency } from './disturbing-frequencies.js';
 
+// Model: docs/engineering/forcing.md §1–§4; check values: docs/engineering/check-values.md.
 describe('disturbing frequencies', () => {
-  it('ISOLATION_REFERENCE CV-13 [CF]: 1480 rpm, 6 vanes, 50 Hz → 24.67, 49.33, 100, 148.0 Hz', () => {
+  it('CV-13 [CF]: 1480 rpm, 6 vanes, 50 Hz → 24.67, 49.33, 100, 148.0 Hz', () => {
     const list = disturbingFrequencies({ speedRpm: 1480, vaneCount: 6, lineFrequencyHz: 50 });
     expect(list.map((f) => f.label)).toEqual([
       '1× shaft at 1480 rpm',

@@ -8,8 +8,9 @@ import { type FrfKind, decibels, sdofFrf, sdofFrfAt } from './sdof-frf.js';
 
 const CV02 = { massKg: 500, stiffnessNPerM: 2.0e6, damping: viscousDamping(dampingRatioFromCoefficient(2000, 2.0e6, 500)) };
 
+// Model: docs/engineering/frf.md §1–§4; check values: docs/engineering/check-values.md.
 describe('SDOF frequency response functions', () => {
-  it('ISOLATION_REFERENCE CV-03 [CF]: system of CV-02 at 10 Hz', () => {
+  it('CV-03 [CF]: system of CV-02 at 10 Hz', () => {
     const kd = sdofFrfAt(CV02, 'dynamicStiffness', 10);
     expectRounded(kd.re, '2.608e4');
     expectRounded(kd.im, '1.257e5');
@@ -26,7 +27,7 @@ describe('SDOF frequency response functions', () => {
     expectRounded(complexAbs(sdofFrfAt(CV02, 'apparentMass', 10)), '32.51');
   });
 
-  it('ISOLATION_REFERENCE CV-04 [CF]: 1 Hz → |α| = 5.050e-7, φ = −0.364°; 100 Hz → |M_app| = 494.9 kg, φ_α = −179.6°', () => {
+  it('CV-04 [CF]: 1 Hz → |α| = 5.050e-7, φ = −0.364°; 100 Hz → |M_app| = 494.9 kg, φ_α = −179.6°', () => {
     const lo = sdofFrfAt(CV02, 'receptance', 1);
     expectRounded(complexAbs(lo), '5.050e-7');
     expectRounded(complexArgDeg(lo), '-0.364');

@@ -2,8 +2,9 @@ import { describe, expect, it } from 'vitest';
 import { expectRounded } from '../testing/expect-rounded.js';
 import { fitDynamicStiffness } from './dynamic-stiffness-fit.js';
 
+// Model: docs/engineering/identification.md §5; check values: docs/engineering/check-values.md.
 describe('least-squares fit of the dynamic stiffness', () => {
-  it('ISOLATION_REFERENCE CV-23 [CF]: two samples (2 Hz, 20 Hz) → m = 500.0 kg, k = 2.000e6 N/m, c = 2000 N·s/m', () => {
+  it('CV-23 [CF]: two samples (2 Hz, 20 Hz) → m = 500.0 kg, k = 2.000e6 N/m, c = 2000 N·s/m', () => {
     const fit = fitDynamicStiffness([2, 20], [1.921043e6, -5.895684e6], [2.5133e4, 2.51327e5]);
     expectRounded(fit.massKg, '500.0');
     expectRounded(fit.stiffnessNPerM, '2.000e6');

@@ -8,8 +8,9 @@ import { findResonancePeak, identifyFromFrf } from './identify-from-frf.js';
 
 const CV02 = { massKg: 500, stiffnessNPerM: 2.0e6, damping: viscousDamping(dampingRatioFromCoefficient(2000, 2.0e6, 500)) };
 
+// Model: docs/engineering/identification.md §1–§6; check values: docs/engineering/check-values.md.
 describe('identification from a measured FRF', () => {
-  it('ISOLATION_REFERENCE CV-22 [CF]: receptance of CV-02 at 0.01 Hz lines → f_p = 10.056, f₁ = 9.732, f₂ = 10.369, ζ = 0.03169', () => {
+  it('CV-22 [CF]: receptance of CV-02 at 0.01 Hz lines → f_p = 10.056, f₁ = 9.732, f₂ = 10.369, ζ = 0.03169', () => {
     const curve = sdofFrf(CV02, 'receptance', linSpace(0.5, 20, 1951));
     const id = identifyFromFrf({ frequencyHz: curve.frequencyHz, kind: 'receptance', re: curve.re, im: curve.im });
     expect(id.quality).toBe('good');

@@ -14,6 +14,7 @@ const CORNERS = [
   { x: -0.8, y: -0.45 },
 ];
 
+// Model: docs/engineering/mount-loads.md §9; check values: docs/engineering/check-values.md.
 describe('selectSizesForLevellingInto', () => {
   it('gives exactly what selectSizesForLevelling gives, for many invented series in one shared buffer', () => {
     const points = [...CORNERS, { x: 0, y: 0.45 }, { x: 0.1, y: -0.45 }];
@@ -57,7 +58,7 @@ describe('selectSizesForLevellingInto', () => {
     }
   });
 
-  it('ISOLATION_REFERENCE CV-17 [CF]: sizes with k = F_i/δ₀ for the CV-15 loads level the frame at δ₀ = 10 mm', () => {
+  it('CV-17 [CF]: sizes with k = F_i/δ₀ for the CV-15 loads level the frame at δ₀ = 10 mm', () => {
     const layout = prepareMountLayout(CORNERS);
     const equal = new Float64Array(mountLoads({ points: CORNERS, stiffnessNPerM: 2e5, weightN: W, cg: CG }).loadsN);
     // CV-17: k_req = 2.717 / 2.554 / 2.350 / 2.186 ×10⁵ N/m (exact values F_i/δ₀)

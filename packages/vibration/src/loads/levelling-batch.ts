@@ -48,7 +48,7 @@ export function createLevellingWorkspace(layout: MountLayout): LevellingWorkspac
 
 /**
  * Zero-allocation form of `selectSizesForLevelling` for ranking many series (the selection hot
- * path); same procedure (reference §6, [DES]) and same result: starting from the
+ * path); same procedure (docs/engineering/mount-loads.md §9, [DES]) and same result: starting from the
  * equal-stiffness loads, pick at each point the size whose deflection F_i/k is closest to δ₀,
  * preferring sizes not overloaded (F_i ≤ P_r); re-solve the rigid-frame loads with the chosen
  * stiffnesses; repeat until the choice stops changing or `maxIterations` rounds are done.

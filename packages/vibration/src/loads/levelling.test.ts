@@ -13,8 +13,9 @@ const CORNERS = [
   { x: -0.8, y: -0.45 },
 ];
 
+// Model: docs/engineering/mount-loads.md §8–§9; check values: docs/engineering/check-values.md.
 describe('levelling', () => {
-  it('ISOLATION_REFERENCE CV-17 [CF]: δ₀ = 10 mm on the CV-15 loads → k_req = 2.717/2.554/2.350/2.186e5; re-solve gives 10.00 mm, β = 0', () => {
+  it('CV-17 [CF]: δ₀ = 10 mm on the CV-15 loads → k_req = 2.717/2.554/2.350/2.186e5; re-solve gives 10.00 mm, β = 0', () => {
     const loads = mountLoads({ points: CORNERS, stiffnessNPerM: 2e5, weightN: W, cg: CG }).loadsN;
     const kReq = levellingStiffness(loads, 0.01);
     ['2.717', '2.554', '2.350', '2.186'].forEach((q, i) => expectRounded(kReq[i] / 1e5, q));

@@ -87,7 +87,7 @@ function pickSize(load: number, sizes: readonly SeriesSize[], target: number): n
 }
 
 /**
- * Levelling by size choice (reference §6, procedure [DES]): (1) loads with equal stiffness;
+ * Levelling by size choice (docs/engineering/mount-loads.md §9, procedure [DES]): (1) loads with equal stiffness;
  * (2) at each point pick the size of the series whose deflection F_i/k is closest to δ₀,
  * preferring sizes not overloaded (F_i ≤ P_r); (3) re-solve the rigid-frame loads with the
  * chosen stiffnesses; repeat until the choice stops changing. Reports the remaining level

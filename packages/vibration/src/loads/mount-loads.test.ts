@@ -14,8 +14,9 @@ const CORNERS = [
   { x: -0.8, y: -0.45 },
 ];
 
+// Model: docs/engineering/mount-loads.md §2–§7; check values: docs/engineering/check-values.md.
 describe('loads on mounts under a rigid frame', () => {
-  it('ISOLATION_REFERENCE CV-15 [CF]: 4 equal mounts k = 2e5, a = 0.8, b = 0.45 — and not the lever-rule product', () => {
+  it('CV-15 [CF]: 4 equal mounts k = 2e5, a = 0.8, b = 0.45 — and not the lever-rule product', () => {
     const r = mountLoads({ points: CORNERS, stiffnessNPerM: 2e5, weightN: W, cg: CG });
     ['2717.3', '2553.8', '2349.5', '2186.1'].forEach((q, i) => expectRounded(r.loadsN[i], q));
     ['13.59', '12.77', '11.75', '10.93'].forEach((q, i) => expectRounded(r.deflectionsM[i] * 1000, q));
@@ -35,7 +36,7 @@ describe('loads on mounts under a rigid frame', () => {
     expect(closed.noLiftOff).toBe(true);
   });
 
-  it('ISOLATION_REFERENCE CV-16 [CF]: k = (3.0, 2.5, 2.5, 2.0)e5 → w = 9.898 mm, β = (−3.179e-4, −1.473e-3)', () => {
+  it('CV-16 [CF]: k = (3.0, 2.5, 2.5, 2.0)e5 → w = 9.898 mm, β = (−3.179e-4, −1.473e-3)', () => {
     const r = mountLoads({ points: CORNERS, stiffnessNPerM: [3e5, 2.5e5, 2.5e5, 2e5], weightN: W, cg: CG });
     expectRounded(r.deflectionAtOriginM * 1000, '9.898');
     expectRounded(r.tiltX, '-3.179e-4');
@@ -48,7 +49,7 @@ describe('loads on mounts under a rigid frame', () => {
     expectRounded(my, '0.0150');
   });
 
-  it('ISOLATION_REFERENCE CV-18 [CF]: 6 equal mounts, and 3 mounts (loads independent of k)', () => {
+  it('CV-18 [CF]: 6 equal mounts, and 3 mounts (loads independent of k)', () => {
     const six = [0.8, 0, -0.8].flatMap((x) => [
       { x, y: 0.45 },
       { x, y: -0.45 },

@@ -179,7 +179,7 @@ function stiffnessArray(stiffness: number | readonly number[], n: number): Float
 /**
  * Vertical loads on N ≥ 3 mounts under a rigid frame. The deflection is a plane
  * δ_i = w + β_x·x_i + β_y·y_i, F_i = k_i·δ_i, with ΣF = W and the moments of W about x and y
- * balanced (the 3×3 system of the reference, §6). With 3 mounts the loads follow from statics
+ * balanced (the 3×3 system of docs/engineering/mount-loads.md §2). With 3 mounts the loads follow from statics
  * alone; with more they depend on the stiffnesses. Use static stiffness here.
  *
  * Loads are the linear solution: a negative load means the point would lift and is reported

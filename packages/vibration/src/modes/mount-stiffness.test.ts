@@ -4,8 +4,9 @@ import { expectRounded } from '../testing/expect-rounded.js';
 import { degToRad } from '../units/convert.js';
 import { mountStiffnessMatrix } from './mount-stiffness.js';
 
+// Model: docs/engineering/rigid-body-modes.md §3; check values: docs/engineering/check-values.md.
 describe('mount stiffness in body axes', () => {
-  it('ISOLATION_REFERENCE CV-19 [CF]: local (1, 2, 3)e5 N/m turned by R_z(45°) → k_xx = k_yy = 1.5e5, k_xy = −5.0e4, k_zz = 3.0e5', () => {
+  it('CV-19 [CF]: local (1, 2, 3)e5 N/m turned by R_z(45°) → k_xx = k_yy = 1.5e5, k_xy = −5.0e4, k_zz = 3.0e5', () => {
     const k = mountStiffnessMatrix({ x: 1e5, y: 2e5, z: 3e5 }, rotationAboutAxis('z', degToRad(45)));
     expectRounded(k[0][0], '1.5e5');
     expectRounded(k[1][1], '1.5e5');

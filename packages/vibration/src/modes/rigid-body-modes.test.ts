@@ -4,14 +4,15 @@ import { VibrationInputError } from '../errors/vibration-input-error.js';
 import { expectRounded } from '../testing/expect-rounded.js';
 import { type ResilientMount, rigidBodyModes, rigidBodyStiffnessMatrix } from './rigid-body-modes.js';
 
-// ISOLATION_REFERENCE §7 worked example: uniform box 1000 kg, 2.0 × 1.0 × 0.8 m, four mounts at (±0.9, ±0.4, z)
+// Model: docs/engineering/rigid-body-modes.md §4–§8; check values: docs/engineering/check-values.md.
+// docs/engineering/rigid-body-modes.md §8 worked example: uniform box 1000 kg, 2.0 × 1.0 × 0.8 m, four mounts at (±0.9, ±0.4, z)
 const BOX = { massKg: 1000, inertia: boxInertia(1000, { x: 2, y: 1, z: 0.8 }) };
 function corners(z: number, kh = 1e5, kv = 2.5e5): ResilientMount[] {
   return [0.9, -0.9].flatMap((x) => [0.4, -0.4].map((y) => ({ position: { x, y, z }, stiffness: { x: kh, y: kh, z: kv } })));
 }
 
 describe('six-degree-of-freedom rigid-body modes', () => {
-  it('ISOLATION_REFERENCE CV-20 [CF]: decoupled (h = 0) → 3.183, 3.183, 4.857, 5.033, 5.446, 7.284 Hz, each pure', () => {
+  it('CV-20 [CF]: decoupled (h = 0) → 3.183, 3.183, 4.857, 5.033, 5.446, 7.284 Hz, each pure', () => {
     const r = rigidBodyModes({ ...BOX, mounts: corners(0) });
     const K = r.stiffnessMatrix;
     [4e5, 4e5, 1e6, 1.6e5, 8.1e5, 3.88e5].forEach((v, i) => expect(K[i][i]).toBeCloseTo(v, 6));
@@ -25,7 +26,7 @@ describe('six-degree-of-freedom rigid-body modes', () => {
     expect(r.hasMechanism).toBe(false);
   });
 
-  it('ISOLATION_REFERENCE CV-21 [CF]: mounts at z = −0.4 m → sway/roll 2.585, 6.706 Hz; surge/pitch 3.041, 7.625 Hz', () => {
+  it('CV-21 [CF]: mounts at z = −0.4 m → sway/roll 2.585, 6.706 Hz; surge/pitch 3.041, 7.625 Hz', () => {
     const r = rigidBodyModes({ ...BOX, mounts: corners(-0.4) });
     expect(r.stiffnessMatrix[1][3]).toBeCloseTo(1.6e5, 6);
     expect(r.stiffnessMatrix[0][4]).toBeCloseTo(-1.6e5, 6);

@@ -2,8 +2,9 @@ import { describe, expect, it } from 'vitest';
 import { expectRounded } from '../testing/expect-rounded.js';
 import { rockingStabilityCheck } from './rocking-stability.js';
 
+// Model: docs/engineering/rigid-body-modes.md §9; check values: docs/engineering/check-values.md.
 describe('rocking stability with a high CG', () => {
-  it('ISOLATION_REFERENCE CV-28 [CF, approximate]: h = 0.4 m, δ = 9.807 mm → h·δ = 3.923e-3 m² < b² = 0.16 → stable', () => {
+  it('CV-28 [CF, approximate]: h = 0.4 m, δ = 9.807 mm → h·δ = 3.923e-3 m² < b² = 0.16 → stable', () => {
     const r = rockingStabilityCheck({ cgHeightM: 0.4, staticDeflectionM: 9806.65 / 1.0e6, halfSpacingX: 0.9, halfSpacingY: 0.4 });
     expectRounded(r.heightTimesDeflection, '3.923e-3');
     expect(r.stable).toBe(true);

@@ -18,8 +18,9 @@ import {
   viscousDamping,
 } from './damping.js';
 
+// Model: docs/engineering/sdof.md §3–§6; check values: docs/engineering/check-values.md.
 describe('damping', () => {
-  it('ISOLATION_REFERENCE CV-02 [CF]: c = 2000 N·s/m on CV-01 → cc = 6.325e4, ζ = 0.03162, Q = 15.81', () => {
+  it('CV-02 [CF]: c = 2000 N·s/m on CV-01 → cc = 6.325e4, ζ = 0.03162, Q = 15.81', () => {
     expectRounded(criticalDamping(2.0e6, 500), '6.325e4');
     const zeta = dampingRatioFromCoefficient(2000, 2.0e6, 500);
     expectRounded(zeta, '0.03162');

@@ -9,14 +9,15 @@ import {
 } from './natural-frequency.js';
 import { dampingRatioFromCoefficient } from './damping.js';
 
+// Model: docs/engineering/sdof.md §2–§3; check values: docs/engineering/check-values.md.
 describe('natural frequency', () => {
-  it('ISOLATION_REFERENCE CV-01 [CF]: m = 500 kg, k = 2.0e6 N/m → ωn = 63.25 rad/s, fn = 10.07 Hz', () => {
+  it('CV-01 [CF]: m = 500 kg, k = 2.0e6 N/m → ωn = 63.25 rad/s, fn = 10.07 Hz', () => {
     expectRounded(angularNaturalFrequency(2.0e6, 500), '63.25');
     expectRounded(naturalFrequencyHz(2.0e6, 500), '10.07');
     expectRounded(naturalFrequencyHz(2.0e6, 500), '10.066');
   });
 
-  it('ISOLATION_REFERENCE CV-02 [CF]: damped natural frequency ωd = 63.21 rad/s, fd = 10.06 Hz', () => {
+  it('CV-02 [CF]: damped natural frequency ωd = 63.21 rad/s, fd = 10.06 Hz', () => {
     const zeta = dampingRatioFromCoefficient(2000, 2.0e6, 500);
     const fd = dampedNaturalFrequencyHz(naturalFrequencyHz(2.0e6, 500), zeta);
     expectRounded(fd, '10.06');

@@ -11,8 +11,9 @@ import {
 } from './static-deflection.js';
 import { naturalFrequencyHz } from './natural-frequency.js';
 
+// Model: docs/engineering/static-deflection.md §1–§5; check values: docs/engineering/check-values.md.
 describe('static deflection ↔ natural frequency', () => {
-  it('ISOLATION_REFERENCE CV-11 [CF]: δ = 25 mm → 3.152 Hz; 1 in → 3.127 Hz = 187.6 cpm; 2 in → 2.211 Hz; fn = 5 Hz → 9.936 mm', () => {
+  it('CV-11 [CF]: δ = 25 mm → 3.152 Hz; 1 in → 3.127 Hz = 187.6 cpm; 2 in → 2.211 Hz; fn = 5 Hz → 9.936 mm', () => {
     expectRounded(naturalFrequencyFromStaticDeflection(0.025), '3.152');
     expectRounded(naturalFrequencyFromStaticDeflection(M_PER_IN), '3.127');
     expectRounded(hzToCpm(naturalFrequencyFromStaticDeflection(M_PER_IN)), '187.6');
@@ -20,7 +21,7 @@ describe('static deflection ↔ natural frequency', () => {
     expectRounded(staticDeflectionForNaturalFrequency(5) * 1000, '9.936');
   });
 
-  it('ISOLATION_REFERENCE CV-12 [CF; n_d illustrative]: δ_st = 5 mm, n_d = 1.4 → 7.048 Hz static, 8.340 Hz dynamic', () => {
+  it('CV-12 [CF; n_d illustrative]: δ_st = 5 mm, n_d = 1.4 → 7.048 Hz static, 8.340 Hz dynamic', () => {
     expectRounded(naturalFrequencyFromStaticDeflection(0.005), '7.048');
     expectRounded(naturalFrequencyFromStaticDeflection(0.005, 1.4), '8.340');
     expect(staticDeflectionForNaturalFrequency(naturalFrequencyFromStaticDeflection(0.005, 1.4), 1.4)).toBeCloseTo(0.005, 14);

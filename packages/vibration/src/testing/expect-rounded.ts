@@ -1,6 +1,6 @@
 /**
  * Test helper (excluded from the build): asserts that `actual` rounds to a value quoted in
- * ISOLATION_REFERENCE or a textbook, to the precision the quote carries. `'7.792e-6'` accepts
+ * docs/engineering/check-values.md or a textbook, to the precision the quote carries. `'7.792e-6'` accepts
  * |actual − 7.792e-6| ≤ 0.5e-9 (half a unit in the last quoted digit), plus `slackUnits` extra
  * units of the last digit where the source rounded its intermediate values.
  */

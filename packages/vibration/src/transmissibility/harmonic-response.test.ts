@@ -5,8 +5,9 @@ import { naturalFrequencyFromStaticDeflection } from '../sdof/static-deflection.
 import { expectRounded } from '../testing/expect-rounded.js';
 import { harmonicForceResponse } from './harmonic-response.js';
 
+// Model: docs/engineering/transmissibility.md §10; check values: docs/engineering/check-values.md.
 describe('harmonic force response', () => {
-  it('ISOLATION_REFERENCE CV-25 [CF]: F0 = 500 N at 1480 rpm, fn = 3.152 Hz → X = 21.16 µm (1000 kg), 7.054 µm (3000 kg), F_T = 8.301 N', () => {
+  it('CV-25 [CF]: F0 = 500 N at 1480 rpm, fn = 3.152 Hz → X = 21.16 µm (1000 kg), 7.054 µm (3000 kg), F_T = 8.301 N', () => {
     const fn = naturalFrequencyFromStaticDeflection(0.025);
     for (const [m, x] of [
       [1000, '21.16'],

@@ -10,6 +10,7 @@ import {
 } from './isolation.js';
 import { transmissibilityUndamped } from './transmissibility.js';
 
+// Model: docs/engineering/transmissibility.md §8–§9; check values: docs/engineering/check-values.md.
 describe('isolation figures', () => {
   it('E = (1 − T)·100 % and I = −20·log10 T; amplification gives negative figures', () => {
     expect(isolationEfficiencyPct(0.125)).toBeCloseTo(87.5, 12);
@@ -19,7 +20,7 @@ describe('isolation figures', () => {
     expect(transmissibilityFromEfficiency(90)).toBeCloseTo(0.1, 14);
   });
 
-  it('ISOLATION_REFERENCE §5 [CF]: undamped r for E = 80/90/95/98 % → 2.449, 3.317, 4.583, 7.141', () => {
+  it('CV-30 [CF]: undamped r for E = 80/90/95/98 % → 2.449, 3.317, 4.583, 7.141', () => {
     expectRounded(requiredFrequencyRatio(80), '2.449');
     expectRounded(requiredFrequencyRatio(90), '3.317');
     expectRounded(requiredFrequencyRatio(95), '4.583');

@@ -5,14 +5,15 @@ import { expectRounded } from '../testing/expect-rounded.js';
 import { resonanceTransmissibility, transmissibilityPeak, viscousTransmissibilityPeak } from './resonance.js';
 import { transmissibilityViscous } from './transmissibility.js';
 
+// Model: docs/engineering/transmissibility.md §6; check values: docs/engineering/check-values.md.
 describe('resonance amplification', () => {
-  it('ISOLATION_REFERENCE CV-10 [CF]: T(r=1) = 10.05 for ζ = 0.05 and for η = 0.1; ζ = 0.2 → 2.693', () => {
+  it('CV-10 [CF]: T(r=1) = 10.05 for ζ = 0.05 and for η = 0.1; ζ = 0.2 → 2.693', () => {
     expectRounded(resonanceTransmissibility(viscousDamping(0.05)), '10.05');
     expectRounded(resonanceTransmissibility(hystereticDamping(0.1)), '10.05');
     expectRounded(resonanceTransmissibility(viscousDamping(0.2)), '2.693');
   });
 
-  it('ISOLATION_REFERENCE CV-10 [CF]: viscous peak ζ = 0.05 → r_p = 0.9975, T_max = 10.06; ζ = 0.2 → 0.9647, 2.734', () => {
+  it('CV-10 [CF]: viscous peak ζ = 0.05 → r_p = 0.9975, T_max = 10.06; ζ = 0.2 → 0.9647, 2.734', () => {
     const a = viscousTransmissibilityPeak(0.05);
     expectRounded(a.frequencyRatio, '0.9975');
     expectRounded(a.transmissibility, '10.06');

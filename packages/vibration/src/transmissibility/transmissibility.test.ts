@@ -14,15 +14,16 @@ import {
   transmissibilityViscous,
 } from './transmissibility.js';
 
+// Model: docs/engineering/transmissibility.md §1–§7, §10; check values: docs/engineering/check-values.md.
 describe('transmissibility', () => {
-  it('ISOLATION_REFERENCE CV-05 [CF]: r = 3, ζ = 0.05 → T = 0.1304, E = 86.96 %, 17.69 dB', () => {
+  it('CV-05 [CF]: r = 3, ζ = 0.05 → T = 0.1304, E = 86.96 %, 17.69 dB', () => {
     const t = transmissibility(3, viscousDamping(0.05));
     expectRounded(t, '0.1304');
     expectRounded(isolationEfficiencyPct(t), '86.96');
     expectRounded(isolationDb(t), '17.69');
   });
 
-  it('ISOLATION_REFERENCE CV-06 [CF]: undamped r = 3 → 0.1250, 87.50 %, 18.06 dB; r = 2.5, 4, 5', () => {
+  it('CV-06 [CF]: undamped r = 3 → 0.1250, 87.50 %, 18.06 dB; r = 2.5, 4, 5', () => {
     const t = transmissibility(3);
     expectRounded(t, '0.1250');
     expectRounded(isolationEfficiencyPct(t), '87.50');
@@ -33,7 +34,7 @@ describe('transmissibility', () => {
     expect(transmissibility(3, UNDAMPED)).toBe(t);
   });
 
-  it('ISOLATION_REFERENCE CV-07 [CF]: viscous damping penalty', () => {
+  it('CV-07 [CF]: viscous damping penalty', () => {
     expectRounded(transmissibilityViscous(3, 0.2), '0.1931');
     expectRounded(transmissibilityViscous(3, 0.5), '0.3701');
     expectRounded(transmissibilityViscous(10, 0), '0.01010');
@@ -41,7 +42,7 @@ describe('transmissibility', () => {
     expectRounded(isolationDb(transmissibilityViscous(3, 0.2)), '14.28');
   });
 
-  it('ISOLATION_REFERENCE CV-08 [CF]: hysteretic r = 3, η = 0.1 → 0.1256 (18.02 dB); η = 0.4 → 0.1345; r = 10, η = 0.4 → 0.01088', () => {
+  it('CV-08 [CF]: hysteretic r = 3, η = 0.1 → 0.1256 (18.02 dB); η = 0.4 → 0.1345; r = 10, η = 0.4 → 0.01088', () => {
     const t = transmissibility(3, hystereticDamping(0.1));
     expectRounded(t, '0.1256');
     expectRounded(isolationDb(t), '18.02');
@@ -50,13 +51,13 @@ describe('transmissibility', () => {
     expectRounded(transmissibilityHysteretic(10, 0.4), '0.01088');
   });
 
-  it('ISOLATION_REFERENCE CV-09 [CF]: T = 1 at r = √2 for ζ = 0.05, 0.2 and η = 0.4', () => {
+  it('CV-09 [CF]: T = 1 at r = √2 for ζ = 0.05, 0.2 and η = 0.4', () => {
     for (const d of [viscousDamping(0.05), viscousDamping(0.2), hystereticDamping(0.4), UNDAMPED]) {
       expect(transmissibility(Math.SQRT2, d)).toBeCloseTo(1, 12);
     }
   });
 
-  it('ISOLATION_REFERENCE CV-12 [CF; n_d illustrative]: ignoring n_d = 1.4 turns r = 3 into 2.535, T = 0.1842', () => {
+  it('CV-12 [CF; n_d illustrative]: ignoring n_d = 1.4 turns r = 3 into 2.535, T = 0.1842', () => {
     const fnStatic = naturalFrequencyFromStaticDeflection(0.005);
     const fnDynamic = naturalFrequencyFromStaticDeflection(0.005, 1.4);
     const r = frequencyRatio(3 * fnStatic, fnDynamic);
@@ -64,7 +65,7 @@ describe('transmissibility', () => {
     expectRounded(transmissibility(r), '0.1842');
   });
 
-  it('ISOLATION_REFERENCE CV-13 [CF]: 1480 rpm on springs δ = 25 mm → r = 7.825, T = 0.01660 (98.34 %, 35.60 dB); ζ = 0.05 → 0.02108', () => {
+  it('CV-13 [CF]: 1480 rpm on springs δ = 25 mm → r = 7.825, T = 0.01660 (98.34 %, 35.60 dB); ζ = 0.05 → 0.02108', () => {
     const fn = naturalFrequencyFromStaticDeflection(0.025);
     const r = frequencyRatio(1480 / 60, fn);
     expectRounded(r, '7.825');

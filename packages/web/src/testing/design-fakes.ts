@@ -11,7 +11,7 @@ import type { FakeApi } from './fake-api';
  */
 
 /**
- * The pump skid of check value CV-14 (ISOLATION_REFERENCE.md §11): pump 300 kg, motor 450 kg,
+ * The pump skid of check value docs/engineering/check-values.md CV-14: pump 300 kg, motor 450 kg,
  * frame 250 kg → 1000 kg, CG (0.0600, 0.0150, 0.3775) m; four mounts at (±0.8, ±0.45, 0) as in
  * CV-15; a 1480 rpm pump with 6 vanes on a 50 Hz supply as in CV-13.
  */

@@ -36,7 +36,7 @@ describe('Design page — input and live figures', () => {
     expect(within(equipment).getByLabelText('CG x of Pump')).toHaveValue('0.65');
     expect(within(equipment).getByLabelText('Box size along x of Frame')).toHaveValue('2');
 
-    // CV-14 (ISOLATION_REFERENCE.md §11): m = 1000 kg, CG (0.0600, 0.0150, 0.3775) m.
+    // docs/engineering/check-values.md CV-14: m = 1000 kg, CG (0.0600, 0.0150, 0.3775) m.
     expect(screen.getByTestId('total-mass')).toHaveTextContent('1,000 kg');
     expect(screen.getByTestId('total-cg')).toHaveTextContent('0.0600 m, 0.0150 m, 0.3775 m');
     expect(screen.getByTestId('equipment-cg')).toHaveTextContent('x 0.0600 m, y 0.0150 m, z 0.3775 m');

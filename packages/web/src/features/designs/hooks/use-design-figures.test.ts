@@ -7,7 +7,7 @@ import { computeDesignFigures, shareUnchanged } from './use-design-figures';
 const SI = unitsFor('SI');
 
 describe('live design figures', () => {
-  it('gives the mass and CG of CV-14 (ISOLATION_REFERENCE.md §11)', () => {
+  it('gives the mass and CG of CV-14 (docs/engineering/check-values.md CV-14)', () => {
     const figures = computeDesignFigures(toFormValues(demoInput(), SI), SI);
     expect(figures.mass!.massKg).toBeCloseTo(1000, 9);
     expect(figures.mass!.cg.x).toBeCloseTo(0.06, 9);

@@ -64,7 +64,7 @@ describe('Mount selection', () => {
       'Quellbrook Mounts',
       'One part',
       '3.15 Hz',
-      // CV-13 with ζ = 0.05: T = 0.02108 at 24.67 Hz → 97.9 % (ISOLATION_REFERENCE.md §11).
+      // CV-13 with ζ = 0.05: T = 0.02108 at 24.67 Hz → 97.9 % (docs/engineering/check-values.md CV-13).
       '97.9 %',
       '0.68–0.85',
       '2.66 mm',
