@@ -86,6 +86,8 @@ const suites = [
     'format',
     () => (run('npx', ['prettier', '--check', '.', '--log-level', 'warn']) === 0 ? { passed: 1, failed: 0 } : { passed: 0, failed: 1 }),
   ],
+  // ESLint (eslint.config.js): any error or warning fails it.
+  ['lint', () => (run('npm', ['run', 'lint', '--silent']) === 0 ? { passed: 1, failed: 0 } : { passed: 0, failed: 1 })],
   // The web's generated API types match the server's OpenAPI document (tools/api-types).
   [
     'api-types',

@@ -8,7 +8,7 @@ import fc from 'fast-check';
 import * as math from 'mathjs';
 import { EigenvalueDecomposition, Matrix, inverse } from 'ml-matrix';
 import { describe, expect, it } from 'vitest';
-import { type ResilientMount, boxInertia, massProperties, rigidBodyModes, rotationAboutAxis } from './vibration.js';
+import { type ResilientMount, massProperties, rigidBodyModes, rotationAboutAxis } from './vibration.js';
 
 const layoutArb = fc.record({
   massKg: fc.double({ min: 50, max: 5000, noNaN: true }),

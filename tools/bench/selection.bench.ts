@@ -43,7 +43,6 @@ const ROWS = arg('rows', 100_000);
 const REQUESTS = arg('requests', 200);
 const WARMUP = 20;
 const LIMIT = 20;
-const G = 9.80665;
 const FREQUENCIES = [1480 / 60, 2 * (1480 / 60), 100];
 
 // ---- scenarios (invented machines; per-point loads ~2–3 kN) ---------------------------------

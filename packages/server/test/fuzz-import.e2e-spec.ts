@@ -248,6 +248,7 @@ const modeArb = fc.constantFrom<Mode>('refuse', 'skip', 'skip', 'skip', 'dry-run
 /** A text cell as stored: trimmed, the export's `'` guard before a formula character removed. */
 const storedText = (cell: string): string => cell.trim().replace(/^'(?=[=+\-@\t\r])/, '');
 const supplierKey = (name: string): string => name.normalize('NFC').trim().replace(/\s+/g, ' ').toLowerCase();
+// eslint-disable-next-line no-control-regex -- the pattern is there to find control characters
 const CONTROL = /[\u0000-\u0008\u000A-\u001F\u007F]/;
 /** What a spreadsheet runs as a formula when a cell starts with it (OWASP "CSV injection"). */
 const FORMULA_START = /^[=+\-@\t\r]/;

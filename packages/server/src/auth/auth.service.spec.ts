@@ -2,7 +2,6 @@ import { jest } from '@jest/globals';
 import { UnauthorizedException } from '@nestjs/common';
 import { JwtService } from '@nestjs/jwt';
 import { buildUser, fakePasswords } from '../../test/factories/user.factory.js';
-import type { User } from '../users/user.entity.js';
 import type { PasswordService } from '../users/password.service.js';
 import type { UsersService } from '../users/users.service.js';
 import { AuthService, LOGIN_FAILED } from './auth.service.js';

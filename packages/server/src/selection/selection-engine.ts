@@ -634,7 +634,7 @@ export class SelectionEvaluation {
   async rank(limit: number, loadDetails: DetailsLoader): Promise<number[]> {
     const C = this.rowCount + this.groupCount;
     let capacity = Math.max(1, MODE_CHECK_GROWTH * limit);
-    let passing: number[] = [];
+    let passing: number[];
     for (;;) {
       const best = new BestCandidates(capacity, this.better);
       let passingTotal = 0;

@@ -23,7 +23,7 @@ export function pdfTexts(pdf: Buffer): string[] {
     }
     cmaps.push(map);
   }
-  const runs = [...raw.matchAll(/\[([^\]\[]*)\]\s*TJ/g)].map((match) =>
+  const runs = [...raw.matchAll(/\[([^\][]*)\]\s*TJ/g)].map((match) =>
     [...match[1].matchAll(/<([0-9a-f]*)>/gi)].map((hex) => hex[1]).join(''),
   );
   return cmaps.map((map) =>

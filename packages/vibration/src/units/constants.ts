@@ -18,6 +18,6 @@ export const N_PER_KGF = STANDARD_GRAVITY;
 /** 1 lbf/in in N/m (= N_PER_LBF / M_PER_IN ≈ 175.1268). */
 export const N_PER_M_PER_LBF_PER_IN = N_PER_LBF / M_PER_IN;
 /** 1 mechanical horsepower (550 ft·lbf/s) in W — NIST SP 811 table value 7.456999 E+02. */
-export const W_PER_HP = 745.69987158227022;
+export const W_PER_HP = 745.6998715822702;
 /** Millimetres per inch — exact (NIST SP 811). */
 export const MM_PER_IN = 25.4;

@@ -59,6 +59,7 @@ const LessThan = (bound: number, options?: ValidationOptions) =>
 const trim = () => Transform(({ value }) => (typeof value === 'string' ? value.trim() : value));
 
 /** One line of text: no control characters. */
+// eslint-disable-next-line no-control-regex -- the pattern is there to refuse control characters
 const singleLine = () => Matches(/^[^\u0000-\u0008\u000A-\u001F\u007F]*$/, { message: '$property must be one line of text' });
 
 interface FieldSpec {

@@ -6,6 +6,7 @@ import type { CellProblem, HeaderMap } from './header-mapper.js';
 const NUMBER_PATTERN = /^[+-]?(?:\d+(?:\.\d*)?|\.\d+)(?:[eE][+-]?\d+)?$/;
 
 /** C0 control characters other than tab, and DEL: not part of one line of text. */
+// eslint-disable-next-line no-control-regex -- the pattern is there to find control characters
 const CONTROL_CHARACTERS = /[\u0000-\u0008\u000A-\u001F\u007F]/;
 
 /** A leading `'` that guards one of these (see the export) is removed on import. */

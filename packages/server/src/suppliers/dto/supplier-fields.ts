@@ -18,6 +18,7 @@ export const SupplierName = () =>
     IsString(),
     IsNotEmpty(),
     MaxLength(SUPPLIER_NAME_MAX_LENGTH),
+    // eslint-disable-next-line no-control-regex -- the pattern is there to refuse control characters
     Matches(/^[^\u0000-\u001F\u007F]*$/, { message: 'name must be one line of text' }),
   );
 

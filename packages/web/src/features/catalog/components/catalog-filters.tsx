@@ -1,6 +1,6 @@
 import { FormGroup, HTMLSelect, InputGroup } from '@blueprintjs/core';
 import { SearchIcon } from '@blueprintjs/icons';
-import { useEffect, useRef, useState } from 'react';
+import { useEffect, useEffectEvent, useRef, useState } from 'react';
 
 import { useUnits } from '@/lib/units';
 
@@ -60,28 +60,35 @@ export function CatalogFilters({ query, suppliers, onChange }: CatalogFiltersPro
     }
   }, [query.q]);
 
+  // What the boxes show of a query changed elsewhere is read in the units of the moment.
+  const showLoads = useEffectEvent((minLoadN: number | null, maxLoadN: number | null) => {
+    setMinText(shown(minLoadN));
+    setMaxText(shown(maxLoadN));
+  });
   useEffect(() => {
     const [min, max] = sentLoads.current;
     if (!sameLoad(query.minLoadN, min) || !sameLoad(query.maxLoadN, max)) {
       sentLoads.current = [query.minLoadN, query.maxLoadN];
-      setMinText(shown(query.minLoadN));
-      setMaxText(shown(query.maxLoadN));
+      showLoads(query.minLoadN, query.maxLoadN);
     }
-    // `shown` follows the units, which do not change while the page is open.
   }, [query.minLoadN, query.maxLoadN]);
 
-  // Typing asks the server once it pauses; only the typed text decides when.
-  useEffect(() => {
-    const q = debouncedText.trim();
+  // Typing asks the server once it pauses; only the typed text decides when (the query and the
+  // callback are read as they are at that moment).
+  const sendText = useEffectEvent((typed: string) => {
+    const q = typed.trim();
     if (q !== query.q.trim()) {
       sentText.current = q;
       onChange({ q });
     }
+  });
+  useEffect(() => {
+    sendText(debouncedText);
   }, [debouncedText]);
 
-  useEffect(() => {
-    const min = parseLoad(debouncedMin);
-    const max = parseLoad(debouncedMax);
+  const sendLoads = useEffectEvent((minTyped: string, maxTyped: string) => {
+    const min = parseLoad(minTyped);
+    const max = parseLoad(maxTyped);
     if (min === undefined || max === undefined) return;
     const minLoadN = min === null ? null : units.toSi('force', min);
     const maxLoadN = max === null ? null : units.toSi('force', max);
@@ -89,6 +96,9 @@ export function CatalogFilters({ query, suppliers, onChange }: CatalogFiltersPro
       sentLoads.current = [minLoadN, maxLoadN];
       onChange({ minLoadN, maxLoadN });
     }
+  });
+  useEffect(() => {
+    sendLoads(debouncedMin, debouncedMax);
   }, [debouncedMin, debouncedMax]);
 
   const minInvalid = parseLoad(minText) === undefined;

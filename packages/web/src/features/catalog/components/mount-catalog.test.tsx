@@ -251,16 +251,15 @@ describe('Catalog page', () => {
       return { status: 201, data: created };
     });
     const { user, router } = renderApp({ signedInAs: 'catalog_manager', path: '/catalog' });
+    await user.click(await screen.findByRole('button', { name: 'Add mount' }));
+    const dialog = await screen.findByRole('dialog', { name: 'Add a mount' });
     // One input event per box (a paste) keeps this long form quick to fill.
-    let dialog: HTMLElement;
     const fill = async (label: string, text: string) => {
       const box = within(dialog).getByLabelText(label);
       await user.clear(box);
       await user.click(box);
       await user.paste(text);
     };
-    await user.click(await screen.findByRole('button', { name: 'Add mount' }));
-    dialog = await screen.findByRole('dialog', { name: 'Add a mount' });
     // Inactive suppliers are not offered for new mounts.
     expect(within(dialog).queryByRole('option', { name: 'Oswin Springworks' })).not.toBeInTheDocument();
     await user.selectOptions(within(dialog).getByLabelText('Supplier'), 'Tamberlin Elastics');

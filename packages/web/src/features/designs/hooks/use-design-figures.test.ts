@@ -1,8 +1,10 @@
+import { renderHook } from '@testing-library/react';
+
 import { unitsFor } from '@/lib/units';
 import { demoInput } from '@/testing/design-fakes';
 
 import { toFormValues } from '../schemas/design-form';
-import { computeDesignFigures, shareUnchanged } from './use-design-figures';
+import { computeDesignFigures, shareUnchanged, useDesignFigures } from './use-design-figures';
 
 const SI = unitsFor('SI');
 
@@ -74,5 +76,22 @@ describe('sharing unchanged parts', () => {
     const third = shareUnchanged(first, computeDesignFigures(heavier, SI));
     expect(third.mass).not.toBe(first.mass);
     expect(third.frequencies).toBe(first.frequencies);
+  });
+
+  it('does so from one render of the hook to the next, and keeps the figures while the input is the same', () => {
+    const values = toFormValues(demoInput(), SI);
+    const { result, rerender } = renderHook(({ input }) => useDesignFigures(input, SI), { initialProps: { input: values } });
+    const first = result.current;
+    rerender({ input: values });
+    expect(result.current).toBe(first);
+
+    const renamed = structuredClone(values);
+    renamed.components[0]!.name = 'Pump P-3';
+    rerender({ input: renamed });
+    expect(result.current).not.toBe(first);
+    expect(result.current.components![0]!.name).toBe('Pump P-3');
+    expect(result.current.mass).toBe(first.mass);
+    expect(result.current.frequencies).toBe(first.frequencies);
+    expect(result.current.loads).toBe(first.loads);
   });
 });

@@ -10,7 +10,7 @@ import {
   type MassProperties,
   type MountLoadsResult,
 } from '@tacet/vibration';
-import { useEffect, useMemo, useRef } from 'react';
+import { useState } from 'react';
 
 import type { Units } from '@/lib/units';
 import type { DesignComponent, MountPoint, OperatingConditions } from '@/types/design-api';
@@ -208,12 +208,15 @@ export function shareUnchanged(previous: DesignFigures | null, next: DesignFigur
   return shared;
 }
 
-/** The live figures, recomputed only when the form values or units change. */
+/**
+ * The live figures, recomputed only when the form values or units change. The figures of the
+ * previous values are kept in state (React's "storing information from previous renders") so
+ * that unchanged parts keep their identity.
+ */
 export function useDesignFigures(values: DesignFormValues, units: Units): DesignFigures {
-  const previous = useRef<DesignFigures | null>(null);
-  const figures = useMemo(() => shareUnchanged(previous.current, computeDesignFigures(values, units)), [values, units]);
-  useEffect(() => {
-    previous.current = figures;
-  }, [figures]);
-  return figures;
+  const [last, setLast] = useState(() => ({ values, units, figures: computeDesignFigures(values, units) }));
+  if (last.values === values && last.units === units) return last.figures;
+  const next = { values, units, figures: shareUnchanged(last.figures, computeDesignFigures(values, units)) };
+  setLast(next);
+  return next.figures;
 }

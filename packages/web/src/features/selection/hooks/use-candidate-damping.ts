@@ -55,6 +55,6 @@ export function useCandidateDamping(candidate: Candidate | null): CandidateDampi
     if (!first) return { damping: undefined, source: 'unknown', varies: false, description: null };
     const varies = dampings.some((d) => !sameDamping(d, first));
     return { damping: first, source: 'catalog', varies, description: describeDamping(first) };
-    // `key` stands for the loaded rows (a new array every render).
+    // eslint-disable-next-line react-hooks/exhaustive-deps -- `key` stands for `loaded`, a new array every render
   }, [candidate, loading, key]);
 }
