@@ -863,9 +863,9 @@ export interface components {
       name: string;
       revision: number;
       status: components["schemas"]["DesignStatus"];
+      author: components["schemas"]["UserRefDto"];
       /** Format: date-time */
       updatedAt: string;
-      author: components["schemas"]["UserRefDto"];
     };
     /** @enum {string} */
     DesignStatus: "draft" | "in_review" | "released" | "superseded";
@@ -1349,9 +1349,10 @@ export interface components {
     /** @enum {string} */
     UnitSystem: "SI" | "US";
     UpdateDesignDto: {
+      /** @example CHW pump P-2 skid */
+      name?: string;
       /** @example 3 */
       version: number;
-      name?: string;
       input?: components["schemas"]["DesignInputDto"];
       /** @description a uniform candidate (one part number at every point) */
       chosenMountId?: number | null;
@@ -1450,10 +1451,12 @@ export interface components {
       active?: boolean;
     };
     UpdateProfileDto: {
+      /** @example New Person */
       name?: string;
       unitSystem?: components["schemas"]["UnitSystem"];
     };
     UpdateProjectDto: {
+      /** @example North Loop Chilled Water Plant */
       name?: string;
       site?: string | null;
       client?: string | null;
@@ -1472,14 +1475,24 @@ export interface components {
       note?: string;
     };
     UpdateSupplierDto: {
+      /**
+       * @description Unique regardless of case and spacing
+       * @example Quillmere Isolation
+       */
       name?: string;
+      /**
+       * @description Where requests for quotation go
+       * @example quotes@quillmere.example
+       */
       contactEmail?: string | null;
+      /** @example +1 555 0101 */
       phone?: string | null;
       notes?: string | null;
       /** @description false retires the supplier: its mounts leave searches and the export */
       active?: boolean;
     };
     UpdateUserDto: {
+      /** @example New Person */
       name?: string;
       role?: components["schemas"]["Role"];
       active?: boolean;

@@ -3,54 +3,54 @@ import { MountField } from './mount-fields.js';
 
 /** A new mount. Give exactly one of dampingRatio (viscous) and lossFactor (hysteretic). */
 export class CreateMountDto {
-  @MountField('supplierId', 'create')
+  @MountField('supplierId')
   supplierId: number;
 
-  @MountField('partNumber', 'create')
+  @MountField('partNumber')
   partNumber: string;
 
-  @MountField('series', 'create')
+  @MountField('series')
   series?: string | null;
 
-  @MountField('mountType', 'create')
+  @MountField('mountType')
   mountType: MountType;
 
-  @MountField('ratedLoadN', 'create')
+  @MountField('ratedLoadN')
   ratedLoadN: number;
 
-  @MountField('verticalStiffnessNPerM', 'create')
+  @MountField('verticalStiffnessNPerM')
   verticalStiffnessNPerM: number;
 
-  @MountField('horizontalStiffnessNPerM', 'create')
+  @MountField('horizontalStiffnessNPerM')
   horizontalStiffnessNPerM?: number | null;
 
-  @MountField('dynamicStiffnessRatio', 'create')
+  @MountField('dynamicStiffnessRatio')
   dynamicStiffnessRatio?: number;
 
-  @MountField('dampingRatio', 'create')
+  @MountField('dampingRatio')
   dampingRatio?: number | null;
 
-  @MountField('lossFactor', 'create')
+  @MountField('lossFactor')
   lossFactor?: number | null;
 
-  @MountField('maxDeflectionMm', 'create')
+  @MountField('maxDeflectionMm')
   maxDeflectionMm?: number | null;
 
-  @MountField('tempMinC', 'create')
+  @MountField('tempMinC')
   tempMinC?: number | null;
 
-  @MountField('tempMaxC', 'create')
+  @MountField('tempMaxC')
   tempMaxC?: number | null;
 
-  @MountField('heightMm', 'create')
+  @MountField('heightMm')
   heightMm?: number | null;
 
-  @MountField('unitPrice', 'create')
+  @MountField('unitPrice')
   unitPrice?: number | null;
 
-  @MountField('currency', 'create')
+  @MountField('currency')
   currency?: string;
 
-  @MountField('leadTimeDays', 'create')
+  @MountField('leadTimeDays')
   leadTimeDays?: number | null;
 }

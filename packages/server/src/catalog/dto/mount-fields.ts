@@ -14,16 +14,16 @@ import {
   MaxLength,
   Min,
   ValidateBy,
-  ValidateIf,
   type ValidationOptions,
 } from 'class-validator';
 import { IsId } from '../../common/decorators/is-id.decorator.js';
+import { PresentOptional } from '../../common/decorators/present-optional.decorator.js';
 import { CURRENCY_PATTERN, MOUNT_LIMITS, MOUNT_TYPES } from '../mount-rules.js';
 
 /**
  * The validation and documentation of every writable mount field, in one place. The create
- * DTO requires the required fields; the update DTO makes every field optional, lets the
- * nullable ones be cleared with `null`, and refuses `null` for the others.
+ * DTO requires the required fields; the update DTO (`PartialType` of it) makes every field
+ * optional, lets the nullable ones be cleared with `null`, and refuses `null` for the others.
  */
 
 const finite = () => IsNumber({ allowNaN: false, allowInfinity: false });
@@ -84,7 +84,12 @@ export const MOUNT_FIELDS = {
     nullable: false,
   },
   partNumber: {
-    api: { type: String, description: "The supplier's part number (unique per supplier)", example: 'QM-S1-02400', maxLength: MOUNT_LIMITS.partNumberMaxLength },
+    api: {
+      type: String,
+      description: "The supplier's part number (unique per supplier)",
+      example: 'QM-S1-02400',
+      maxLength: MOUNT_LIMITS.partNumberMaxLength,
+    },
     rules: () => [trim(), IsString(), IsNotEmpty(), MaxLength(MOUNT_LIMITS.partNumberMaxLength), singleLine()],
     required: true,
     nullable: false,
@@ -129,20 +134,37 @@ export const MOUNT_FIELDS = {
     nullable: true,
   },
   lossFactor: {
-    api: { type: Number, description: 'Loss factor η, 0 < η ≤ 2 (give this or dampingRatio)', example: 0.15, maximum: MOUNT_LIMITS.lossFactor.max },
+    api: {
+      type: Number,
+      description: 'Loss factor η, 0 < η ≤ 2 (give this or dampingRatio)',
+      example: 0.15,
+      maximum: MOUNT_LIMITS.lossFactor.max,
+    },
     rules: () => [finite(), GreaterThan(MOUNT_LIMITS.lossFactor.min), Max(MOUNT_LIMITS.lossFactor.max)],
     required: false,
     nullable: true,
   },
   maxDeflectionMm: { ...positive('Maximum static deflection (travel), mm', 49.7), required: false, nullable: true },
   tempMinC: {
-    api: { type: Number, description: 'Lowest operating temperature, °C', example: -40, minimum: MOUNT_LIMITS.temperatureC.min, maximum: MOUNT_LIMITS.temperatureC.max },
+    api: {
+      type: Number,
+      description: 'Lowest operating temperature, °C',
+      example: -40,
+      minimum: MOUNT_LIMITS.temperatureC.min,
+      maximum: MOUNT_LIMITS.temperatureC.max,
+    },
     rules: () => [finite(), Min(MOUNT_LIMITS.temperatureC.min), Max(MOUNT_LIMITS.temperatureC.max)],
     required: false,
     nullable: true,
   },
   tempMaxC: {
-    api: { type: Number, description: 'Highest operating temperature, °C', example: 120, minimum: MOUNT_LIMITS.temperatureC.min, maximum: MOUNT_LIMITS.temperatureC.max },
+    api: {
+      type: Number,
+      description: 'Highest operating temperature, °C',
+      example: 120,
+      minimum: MOUNT_LIMITS.temperatureC.min,
+      maximum: MOUNT_LIMITS.temperatureC.max,
+    },
     rules: () => [finite(), Min(MOUNT_LIMITS.temperatureC.min), Max(MOUNT_LIMITS.temperatureC.max)],
     required: false,
     nullable: true,
@@ -155,7 +177,13 @@ export const MOUNT_FIELDS = {
     nullable: true,
   },
   currency: {
-    api: { type: String, description: 'Three-letter ISO 4217 code (default USD)', example: 'USD', pattern: '^[A-Z]{3}$', default: MOUNT_LIMITS.defaultCurrency },
+    api: {
+      type: String,
+      description: 'Three-letter ISO 4217 code (default USD)',
+      example: 'USD',
+      pattern: '^[A-Z]{3}$',
+      default: MOUNT_LIMITS.defaultCurrency,
+    },
     rules: () => [
       Transform(({ value }) => (typeof value === 'string' ? value.trim().toUpperCase() : value)),
       IsString(),
@@ -165,7 +193,13 @@ export const MOUNT_FIELDS = {
     nullable: false,
   },
   leadTimeDays: {
-    api: { type: Number, description: 'Lead time in whole days', example: 21, minimum: MOUNT_LIMITS.leadTimeDays.min, maximum: MOUNT_LIMITS.leadTimeDays.max },
+    api: {
+      type: Number,
+      description: 'Lead time in whole days',
+      example: 21,
+      minimum: MOUNT_LIMITS.leadTimeDays.min,
+      maximum: MOUNT_LIMITS.leadTimeDays.max,
+    },
     rules: () => [IsInt(), Min(MOUNT_LIMITS.leadTimeDays.min), Max(MOUNT_LIMITS.leadTimeDays.max)],
     required: false,
     nullable: true,
@@ -180,17 +214,17 @@ export const MOUNT_FIELDS = {
 
 export type MountFieldName = keyof typeof MOUNT_FIELDS;
 
-/** Validation only when the property was sent (null is then refused by the rules). */
-const IfSent = (): PropertyDecorator => (target, key) =>
-  ValidateIf((object: Record<string | symbol, unknown>) => object[key] !== undefined)(target, key as string);
-
-/** The decorators of a mount field in a create (`'create'`) or a partial update (`'update'`) body. */
-export function MountField(name: MountFieldName, mode: 'create' | 'update'): PropertyDecorator {
+/**
+ * The decorators of a mount field in a new mount: required fields required, the others optional
+ * (nullable ones may be `null`, the rest are validated whenever sent). The update DTO derives
+ * from the create DTO (`PartialType`).
+ */
+export function MountField(name: MountFieldName): PropertyDecorator {
   const spec: FieldSpec = MOUNT_FIELDS[name];
   const rules = spec.rules();
-  if (mode === 'create' && spec.required) return applyDecorators(ApiProperty(spec.api), ...rules);
+  if (spec.required) return applyDecorators(ApiProperty(spec.api), ...rules);
   if (spec.nullable) {
     return applyDecorators(ApiPropertyOptional({ ...spec.api, nullable: true } as ApiPropertyOptions), IsOptional(), ...rules);
   }
-  return applyDecorators(ApiPropertyOptional(spec.api), IfSent(), ...rules);
+  return applyDecorators(ApiPropertyOptional(spec.api), PresentOptional(), ...rules);
 }

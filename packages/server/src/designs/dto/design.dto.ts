@@ -1,4 +1,4 @@
-import { ApiProperty } from '@nestjs/swagger';
+import { ApiProperty, PickType } from '@nestjs/swagger';
 import { UserRefDto } from '../../projects/dto/project.dto.js';
 import { DesignInputDto } from '../../selection/dto/design-input.dto.js';
 import { CandidateDto, SupplierRefDto } from '../../selection/dto/selection-response.dto.js';
@@ -6,26 +6,6 @@ import type { DesignInput } from '../../selection/dto/design-input.dto.js';
 import type { BomLine, Candidate, LabelledFrequency } from '../../selection/selection.types.js';
 import { DESIGN_STATUSES, type DesignStatus } from '../design-status.js';
 import type { Design } from '../design.entity.js';
-
-export class DesignListItemDto {
-  @ApiProperty() id: number;
-  @ApiProperty() name: string;
-  @ApiProperty() revision: number;
-  @ApiProperty({ enum: DESIGN_STATUSES, enumName: 'DesignStatus' }) status: DesignStatus;
-  @ApiProperty({ type: String, format: 'date-time' }) updatedAt: string;
-  @ApiProperty({ type: UserRefDto }) author: UserRefDto;
-
-  static from(design: Design): DesignListItemDto {
-    return Object.assign(new DesignListItemDto(), {
-      id: design.id,
-      name: design.name,
-      revision: design.revision,
-      status: design.status,
-      updatedAt: design.updatedAt.toISOString(),
-      author: { id: design.author.id, name: design.author.name },
-    });
-  }
-}
 
 export class LabelledFrequencyDto {
   @ApiProperty() frequencyHz: number;
@@ -79,6 +59,20 @@ export class DesignDto {
       checker: design.checker ? { id: design.checker.id, name: design.checker.name } : null,
       createdAt: design.createdAt.toISOString(),
       updatedAt: design.updatedAt.toISOString(),
+    });
+  }
+}
+
+/** A design in a project's list: the summary fields of the full design. */
+export class DesignListItemDto extends PickType(DesignDto, ['id', 'name', 'revision', 'status', 'updatedAt', 'author'] as const) {
+  static from(design: Design): DesignListItemDto {
+    return Object.assign(new DesignListItemDto(), {
+      id: design.id,
+      name: design.name,
+      revision: design.revision,
+      status: design.status,
+      updatedAt: design.updatedAt.toISOString(),
+      author: { id: design.author.id, name: design.author.name },
     });
   }
 }

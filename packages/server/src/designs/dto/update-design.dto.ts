@@ -1,29 +1,22 @@
-import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
+import { ApiProperty, ApiPropertyOptional, PartialType, PickType } from '@nestjs/swagger';
 import { Type } from 'class-transformer';
-import { IsInt, IsNotEmpty, IsOptional, IsString, MaxLength, Min, ValidateNested } from 'class-validator';
+import { IsInt, IsOptional, IsString, MaxLength, Min, ValidateNested } from 'class-validator';
 import { IsId } from '../../common/decorators/is-id.decorator.js';
 import { DesignInputDto } from '../../selection/dto/design-input.dto.js';
 import { NotTogetherWith } from '../../selection/dto/validators.js';
-import { Trim } from '../../users/dto/dto-transforms.js';
+import { CreateDesignDto } from './create-design.dto.js';
 
 /**
  * A change to a draft. `version` is the one the client read; a stale one gets 409. Choosing a
  * candidate (`chosenMountId` or `chosenSeriesId`; `null` clears the choice) re-runs the
- * selection for it on the server. A new `input` without a choice clears the old choice.
+ * selection for it on the server. A new `input` without a choice clears the old choice. The name
+ * is a new design's, optional (`input` is written out: omitted here means unchanged, not a template).
  */
-export class UpdateDesignDto {
+export class UpdateDesignDto extends PartialType(PickType(CreateDesignDto, ['name'] as const)) {
   @ApiProperty({ example: 3 })
   @IsInt()
   @Min(1)
   version: number;
-
-  @ApiPropertyOptional({ maxLength: 200 })
-  @IsOptional()
-  @Trim()
-  @IsString()
-  @IsNotEmpty()
-  @MaxLength(200)
-  name?: string;
 
   @ApiPropertyOptional({ type: DesignInputDto })
   @IsOptional()

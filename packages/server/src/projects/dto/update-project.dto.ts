@@ -1,38 +1,14 @@
-import { ApiPropertyOptional } from '@nestjs/swagger';
-import { IsBoolean, IsNotEmpty, IsOptional, IsString, MaxLength } from 'class-validator';
+import { ApiPropertyOptional, PartialType } from '@nestjs/swagger';
+import { IsBoolean } from 'class-validator';
 import { PresentOptional } from '../../common/decorators/present-optional.decorator.js';
-import { Trim } from '../../users/dto/dto-transforms.js';
+import { CreateProjectDto } from './create-project.dto.js';
 
-/** A partial change; `null` clears site, client or description (name and archived cannot be cleared). */
-export class UpdateProjectDto {
-  @ApiPropertyOptional({ maxLength: 200 })
-  @PresentOptional()
-  @Trim()
-  @IsString()
-  @IsNotEmpty()
-  @MaxLength(200)
-  name?: string;
-
-  @ApiPropertyOptional({ type: String, nullable: true, maxLength: 200 })
-  @IsOptional()
-  @Trim()
-  @IsString()
-  @MaxLength(200)
-  site?: string | null;
-
-  @ApiPropertyOptional({ type: String, nullable: true, maxLength: 200 })
-  @IsOptional()
-  @Trim()
-  @IsString()
-  @MaxLength(200)
-  client?: string | null;
-
-  @ApiPropertyOptional({ type: String, nullable: true, maxLength: 4000 })
-  @IsOptional()
-  @IsString()
-  @MaxLength(4000)
-  description?: string | null;
-
+/**
+ * A partial change: every field of a new project, optional; `null` clears site, client or
+ * description (their own `@IsOptional()`), and is refused for name and archived
+ * (`skipNullProperties: false` makes the others optional only when absent).
+ */
+export class UpdateProjectDto extends PartialType(CreateProjectDto, { skipNullProperties: false }) {
   @ApiPropertyOptional()
   @PresentOptional()
   @IsBoolean()

@@ -1,40 +1,15 @@
-import { ApiPropertyOptional } from '@nestjs/swagger';
-import { IsBoolean, IsOptional, ValidateIf } from 'class-validator';
-import {
-  CONTACT_EMAIL_MAX_LENGTH,
-  ContactEmail,
-  NOTES_MAX_LENGTH,
-  Notes,
-  PHONE_MAX_LENGTH,
-  Phone,
-  SUPPLIER_NAME_MAX_LENGTH,
-  SupplierName,
-} from './supplier-fields.js';
+import { ApiPropertyOptional, PartialType } from '@nestjs/swagger';
+import { IsBoolean } from 'class-validator';
+import { PresentOptional } from '../../common/decorators/present-optional.decorator.js';
+import { CreateSupplierDto } from './create-supplier.dto.js';
 
-/** A partial change; `null` (or an empty string) clears contactEmail, phone and notes. */
-export class UpdateSupplierDto {
-  @ApiPropertyOptional({ maxLength: SUPPLIER_NAME_MAX_LENGTH })
-  @ValidateIf((dto: UpdateSupplierDto) => dto.name !== undefined)
-  @SupplierName()
-  name?: string;
-
-  @ApiPropertyOptional({ type: String, nullable: true, maxLength: CONTACT_EMAIL_MAX_LENGTH })
-  @IsOptional()
-  @ContactEmail()
-  contactEmail?: string | null;
-
-  @ApiPropertyOptional({ type: String, nullable: true, maxLength: PHONE_MAX_LENGTH })
-  @IsOptional()
-  @Phone()
-  phone?: string | null;
-
-  @ApiPropertyOptional({ type: String, nullable: true, maxLength: NOTES_MAX_LENGTH })
-  @IsOptional()
-  @Notes()
-  notes?: string | null;
-
+/**
+ * A partial change: every field of a new supplier, optional; `null` (or an empty string) clears
+ * contactEmail, phone and notes, and is refused for name and active (`skipNullProperties: false`).
+ */
+export class UpdateSupplierDto extends PartialType(CreateSupplierDto, { skipNullProperties: false }) {
   @ApiPropertyOptional({ description: 'false retires the supplier: its mounts leave searches and the export' })
-  @ValidateIf((dto: UpdateSupplierDto) => dto.active !== undefined)
+  @PresentOptional()
   @IsBoolean()
   active?: boolean;
 }

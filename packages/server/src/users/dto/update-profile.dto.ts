@@ -1,22 +1,5 @@
-import { ApiPropertyOptional } from '@nestjs/swagger';
-import type { UnitSystem } from '@tacet/vibration';
-import { IsIn, IsNotEmpty, IsString, MaxLength } from 'class-validator';
-import { PresentOptional } from '../../common/decorators/present-optional.decorator.js';
-import { UNIT_SYSTEMS } from '../user.entity.js';
-import { Trim } from './dto-transforms.js';
+import { PickType } from '@nestjs/swagger';
+import { UpdateUserDto } from './update-user.dto.js';
 
-/** What every user may change on their own account. */
-export class UpdateProfileDto {
-  @ApiPropertyOptional({ maxLength: 200 })
-  @PresentOptional()
-  @Trim()
-  @IsString()
-  @IsNotEmpty()
-  @MaxLength(200)
-  name?: string;
-
-  @ApiPropertyOptional({ enum: UNIT_SYSTEMS, enumName: 'UnitSystem' })
-  @PresentOptional()
-  @IsIn(UNIT_SYSTEMS)
-  unitSystem?: UnitSystem;
-}
+/** What every user may change on their own account: the part of an admin's change that is theirs. */
+export class UpdateProfileDto extends PickType(UpdateUserDto, ['name', 'unitSystem'] as const) {}

@@ -1,26 +1,16 @@
-import { ApiPropertyOptional } from '@nestjs/swagger';
+import { ApiPropertyOptional, PartialType, PickType } from '@nestjs/swagger';
 import type { UnitSystem } from '@tacet/vibration';
-import { IsBoolean, IsIn, IsNotEmpty, IsString, MaxLength } from 'class-validator';
+import { IsBoolean, IsIn } from 'class-validator';
 import { PresentOptional } from '../../common/decorators/present-optional.decorator.js';
-import { ROLES, type Role } from '../../common/roles.js';
 import { UNIT_SYSTEMS } from '../user.entity.js';
-import { Trim } from './dto-transforms.js';
+import { CreateUserDto } from './create-user.dto.js';
 
-/** What an admin may change on a user (email is fixed; DELETE deactivates). */
-export class UpdateUserDto {
-  @ApiPropertyOptional({ maxLength: 200 })
-  @PresentOptional()
-  @Trim()
-  @IsString()
-  @IsNotEmpty()
-  @MaxLength(200)
-  name?: string;
-
-  @ApiPropertyOptional({ enum: ROLES, enumName: 'Role' })
-  @PresentOptional()
-  @IsIn(ROLES)
-  role?: Role;
-
+/**
+ * What an admin may change on a user (email is fixed; DELETE deactivates): name and role as on
+ * a new user, optional, `null` refused (`skipNullProperties: false`). The unit system is its
+ * own field: on a new user it is optional with a default, here `null` is refused.
+ */
+export class UpdateUserDto extends PartialType(PickType(CreateUserDto, ['name', 'role'] as const), { skipNullProperties: false }) {
   @ApiPropertyOptional()
   @PresentOptional()
   @IsBoolean()
