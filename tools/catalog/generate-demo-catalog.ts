@@ -32,14 +32,7 @@ export const DEMO_SUPPLIERS: DemoSupplier[] = [
   { name: 'Brightholm Mounting', code: 'BH', email: 'desk@brightholm.example', phone: '+1 555 0105' },
 ];
 
-type MountType =
-  | 'elastomer_pad'
-  | 'elastomer_mount'
-  | 'open_spring'
-  | 'housed_spring'
-  | 'restrained_spring'
-  | 'air_spring'
-  | 'wire_rope';
+type MountType = 'elastomer_pad' | 'elastomer_mount' | 'open_spring' | 'housed_spring' | 'restrained_spring' | 'air_spring' | 'wire_rope';
 
 interface TypeProfile {
   type: MountType;
@@ -59,13 +52,118 @@ interface TypeProfile {
 }
 
 const PROFILES: TypeProfile[] = [
-  { type: 'elastomer_pad', code: 'P', loadRangeN: [100, 20000], deflectionMm: [1, 5], damping: { kind: 'loss', range: [0.12, 0.25] }, dynamicRatio: [1.4, 2.0], horizontalRatio: [0.3, 0.6], travelFactor: 1.6, tempC: [-30, 80], heightMm: [10, 30], pricePerKn: [0.8, 2.0], basePrice: 4, leadDays: [3, 10], seriesPerSupplier: 1 },
-  { type: 'elastomer_mount', code: 'E', loadRangeN: [200, 15000], deflectionMm: [3, 10], damping: { kind: 'loss', range: [0.1, 0.22] }, dynamicRatio: [1.2, 1.6], horizontalRatio: [0.5, 1.0], travelFactor: 1.5, tempC: [-30, 70], heightMm: [30, 90], pricePerKn: [2.5, 6], basePrice: 12, leadDays: [5, 20], seriesPerSupplier: 2 },
-  { type: 'open_spring', code: 'S', loadRangeN: [500, 50000], deflectionMm: [25, 50], damping: { kind: 'ratio', range: [0.005, 0.01] }, dynamicRatio: [1.0, 1.0], horizontalRatio: [0.8, 1.2], travelFactor: 1.5, tempC: [-40, 120], heightMm: [90, 220], pricePerKn: [3, 7], basePrice: 35, leadDays: [10, 30], seriesPerSupplier: 2 },
-  { type: 'housed_spring', code: 'H', loadRangeN: [500, 40000], deflectionMm: [25, 50], damping: { kind: 'ratio', range: [0.02, 0.05] }, dynamicRatio: [1.0, 1.0], horizontalRatio: [0.7, 1.0], travelFactor: 1.5, tempC: [-40, 100], heightMm: [110, 250], pricePerKn: [4, 9], basePrice: 55, leadDays: [14, 35], seriesPerSupplier: 1 },
-  { type: 'restrained_spring', code: 'R', loadRangeN: [1000, 50000], deflectionMm: [25, 75], damping: { kind: 'ratio', range: [0.01, 0.03] }, dynamicRatio: [1.0, 1.0], horizontalRatio: [0.8, 1.2], travelFactor: 1.5, tempC: [-40, 100], heightMm: [150, 320], pricePerKn: [6, 12], basePrice: 90, leadDays: [20, 45], seriesPerSupplier: 1 },
-  { type: 'air_spring', code: 'A', loadRangeN: [2000, 50000], deflectionMm: [40, 100], damping: { kind: 'ratio', range: [0.02, 0.05] }, dynamicRatio: [1.1, 1.3], horizontalRatio: [0.3, 0.5], travelFactor: 1.3, tempC: [-20, 70], heightMm: [120, 260], pricePerKn: [10, 20], basePrice: 180, leadDays: [25, 60], seriesPerSupplier: 0 },
-  { type: 'wire_rope', code: 'W', loadRangeN: [100, 10000], deflectionMm: [5, 20], damping: { kind: 'loss', range: [0.15, 0.3] }, dynamicRatio: [1.0, 1.2], horizontalRatio: [0.6, 1.2], travelFactor: 2.0, tempC: [-60, 200], heightMm: [40, 160], pricePerKn: [8, 16], basePrice: 25, leadDays: [15, 40], seriesPerSupplier: 0 },
+  {
+    type: 'elastomer_pad',
+    code: 'P',
+    loadRangeN: [100, 20000],
+    deflectionMm: [1, 5],
+    damping: { kind: 'loss', range: [0.12, 0.25] },
+    dynamicRatio: [1.4, 2.0],
+    horizontalRatio: [0.3, 0.6],
+    travelFactor: 1.6,
+    tempC: [-30, 80],
+    heightMm: [10, 30],
+    pricePerKn: [0.8, 2.0],
+    basePrice: 4,
+    leadDays: [3, 10],
+    seriesPerSupplier: 1,
+  },
+  {
+    type: 'elastomer_mount',
+    code: 'E',
+    loadRangeN: [200, 15000],
+    deflectionMm: [3, 10],
+    damping: { kind: 'loss', range: [0.1, 0.22] },
+    dynamicRatio: [1.2, 1.6],
+    horizontalRatio: [0.5, 1.0],
+    travelFactor: 1.5,
+    tempC: [-30, 70],
+    heightMm: [30, 90],
+    pricePerKn: [2.5, 6],
+    basePrice: 12,
+    leadDays: [5, 20],
+    seriesPerSupplier: 2,
+  },
+  {
+    type: 'open_spring',
+    code: 'S',
+    loadRangeN: [500, 50000],
+    deflectionMm: [25, 50],
+    damping: { kind: 'ratio', range: [0.005, 0.01] },
+    dynamicRatio: [1.0, 1.0],
+    horizontalRatio: [0.8, 1.2],
+    travelFactor: 1.5,
+    tempC: [-40, 120],
+    heightMm: [90, 220],
+    pricePerKn: [3, 7],
+    basePrice: 35,
+    leadDays: [10, 30],
+    seriesPerSupplier: 2,
+  },
+  {
+    type: 'housed_spring',
+    code: 'H',
+    loadRangeN: [500, 40000],
+    deflectionMm: [25, 50],
+    damping: { kind: 'ratio', range: [0.02, 0.05] },
+    dynamicRatio: [1.0, 1.0],
+    horizontalRatio: [0.7, 1.0],
+    travelFactor: 1.5,
+    tempC: [-40, 100],
+    heightMm: [110, 250],
+    pricePerKn: [4, 9],
+    basePrice: 55,
+    leadDays: [14, 35],
+    seriesPerSupplier: 1,
+  },
+  {
+    type: 'restrained_spring',
+    code: 'R',
+    loadRangeN: [1000, 50000],
+    deflectionMm: [25, 75],
+    damping: { kind: 'ratio', range: [0.01, 0.03] },
+    dynamicRatio: [1.0, 1.0],
+    horizontalRatio: [0.8, 1.2],
+    travelFactor: 1.5,
+    tempC: [-40, 100],
+    heightMm: [150, 320],
+    pricePerKn: [6, 12],
+    basePrice: 90,
+    leadDays: [20, 45],
+    seriesPerSupplier: 1,
+  },
+  {
+    type: 'air_spring',
+    code: 'A',
+    loadRangeN: [2000, 50000],
+    deflectionMm: [40, 100],
+    damping: { kind: 'ratio', range: [0.02, 0.05] },
+    dynamicRatio: [1.1, 1.3],
+    horizontalRatio: [0.3, 0.5],
+    travelFactor: 1.3,
+    tempC: [-20, 70],
+    heightMm: [120, 260],
+    pricePerKn: [10, 20],
+    basePrice: 180,
+    leadDays: [25, 60],
+    seriesPerSupplier: 0,
+  },
+  {
+    type: 'wire_rope',
+    code: 'W',
+    loadRangeN: [100, 10000],
+    deflectionMm: [5, 20],
+    damping: { kind: 'loss', range: [0.15, 0.3] },
+    dynamicRatio: [1.0, 1.2],
+    horizontalRatio: [0.6, 1.2],
+    travelFactor: 2.0,
+    tempC: [-60, 200],
+    heightMm: [40, 160],
+    pricePerKn: [8, 16],
+    basePrice: 25,
+    leadDays: [15, 40],
+    seriesPerSupplier: 0,
+  },
 ];
 
 /** Mulberry32: a small, well-known seeded PRNG, so the demo file is the same on every machine. */
@@ -81,9 +179,23 @@ function prng(seed: number): () => number {
 }
 
 const HEADER = [
-  'supplier', 'part_number', 'series', 'mount_type', 'rated_load_n', 'vertical_stiffness_n_per_mm',
-  'horizontal_stiffness_n_per_mm', 'dynamic_stiffness_ratio', 'damping_ratio', 'loss_factor',
-  'max_deflection_mm', 'temp_min_c', 'temp_max_c', 'height_mm', 'unit_price', 'currency', 'lead_time_days',
+  'supplier',
+  'part_number',
+  'series',
+  'mount_type',
+  'rated_load_n',
+  'vertical_stiffness_n_per_mm',
+  'horizontal_stiffness_n_per_mm',
+  'dynamic_stiffness_ratio',
+  'damping_ratio',
+  'loss_factor',
+  'max_deflection_mm',
+  'temp_min_c',
+  'temp_max_c',
+  'height_mm',
+  'unit_price',
+  'currency',
+  'lead_time_days',
 ];
 
 const round = (v: number, digits: number): number => Number(v.toFixed(digits));

@@ -13,8 +13,7 @@ const PAGE_ROWS = 1000;
 /** The cell of one field of a mount, as the import format writes it (SI variant). */
 function cellsOf(mount: Mount): string[] {
   return COLUMNS.map((column) => {
-    const value =
-      column.field === 'supplierName' ? mount.supplier.name : mount[column.field as Exclude<MountField, 'supplierName'>];
+    const value = column.field === 'supplierName' ? mount.supplier.name : mount[column.field as Exclude<MountField, 'supplierName'>];
     if (value === null || value === undefined) return '';
     if (column.rule.kind === 'text') return guardFormula(String(value));
     if (column.rule.kind !== 'number') return String(value);

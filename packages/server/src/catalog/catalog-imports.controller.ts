@@ -32,13 +32,7 @@ import { CatalogImportsService, type UploadedCsv } from './catalog-imports.servi
 import { CatalogImportDto } from './dto/catalog-import.dto.js';
 import { ImportQueryDto } from './dto/import-query.dto.js';
 import { ImportRejectedDto, ImportResultDto } from './dto/import-result.dto.js';
-import {
-  CatalogImportExceptionFilter,
-  DeleteUploadInterceptor,
-  MAX_UPLOAD_MB,
-  UPLOAD_FIELD,
-  UPLOAD_OPTIONS,
-} from './import/upload.js';
+import { CatalogImportExceptionFilter, DeleteUploadInterceptor, MAX_UPLOAD_MB, UPLOAD_FIELD, UPLOAD_OPTIONS } from './import/upload.js';
 
 /** Catalog CSV import and its history. Registered before MountsController (static paths before `:id`). */
 @ApiTags('catalog')
@@ -63,8 +57,7 @@ export class CatalogImportsController {
   @ApiOkResponse({ type: ImportResultDto, description: 'Imported (or, with dryRun, previewed)' })
   @ApiUnprocessableEntityResponse({
     type: ImportRejectedDto,
-    description:
-      'Nothing written: invalid rows without onInvalid=skip (also for a dry run), or a file that is not a catalog CSV',
+    description: 'Nothing written: invalid rows without onInvalid=skip (also for a dry run), or a file that is not a catalog CSV',
   })
   @ApiPayloadTooLargeResponse({ description: `The file is larger than ${MAX_UPLOAD_MB} MB` })
   @ApiBadRequestResponse({ description: 'No file, or bad query parameters' })
@@ -84,7 +77,10 @@ export class CatalogImportsController {
 
   @Get('imports/:id/errors.csv')
   @ApiProduces('text/csv')
-  @ApiOkResponse({ schema: { type: 'string', format: 'binary' }, description: 'The rejected rows: row, column, message, then the original fields' })
+  @ApiOkResponse({
+    schema: { type: 'string', format: 'binary' },
+    description: 'The rejected rows: row, column, message, then the original fields',
+  })
   @ApiNotFoundResponse({ description: 'No such import, or it has no error report' })
   async errorReport(@Param('id', ParseIntPipe) id: number): Promise<StreamableFile> {
     const { fileName, csv } = await this.imports.errorReport(id);

@@ -18,14 +18,7 @@ import { MountsService } from './mounts.service.js';
   imports: [TypeOrmModule.forFeature([Mount, CatalogImport, User]), SuppliersModule, CatalogRevisionModule],
   // CatalogImportsController first: its static paths (/mounts/imports) must precede /mounts/:id.
   controllers: [CatalogImportsController, MountsController],
-  providers: [
-    MountsService,
-    CatalogExportService,
-    CatalogImportsService,
-    CatalogImportService,
-    MountBatchWriter,
-    DemoCatalogSeed,
-  ],
+  providers: [MountsService, CatalogExportService, CatalogImportsService, CatalogImportService, MountBatchWriter, DemoCatalogSeed],
   exports: [MountsService, CatalogImportService],
 })
 export class CatalogModule {}

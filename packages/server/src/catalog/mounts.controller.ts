@@ -37,7 +37,10 @@ export class MountsController {
 
   @Get('export.csv')
   @ApiProduces('text/csv')
-  @ApiOkResponse({ schema: { type: 'string', format: 'binary' }, description: 'The active catalog in the import format (catalog/FORMAT.md), SI columns' })
+  @ApiOkResponse({
+    schema: { type: 'string', format: 'binary' },
+    description: 'The active catalog in the import format (catalog/FORMAT.md), SI columns',
+  })
   export(): StreamableFile {
     return new StreamableFile(this.exporter.stream(), {
       type: 'text/csv; charset=utf-8',

@@ -33,8 +33,7 @@ const CROSS_FIELD_MESSAGES: Record<CrossFieldRule, string> = {
 /** `%`, `_` and `\` match themselves in LIKE … ESCAPE '\'. */
 const escapeLike = (text: string): string => text.replace(/[\\%_]/g, (c) => `\\${c}`);
 
-const duplicatePart = (partNumber: string) =>
-  new ConflictException(`This supplier already has a mount with part number ${partNumber}`);
+const duplicatePart = (partNumber: string) => new ConflictException(`This supplier already has a mount with part number ${partNumber}`);
 
 const validationFailed = (errors: FieldError[]) => new BadRequestException({ message: 'Validation failed', errors });
 

@@ -33,7 +33,10 @@ const SORT_PATTERN = new RegExp(`^${SORT_KEY}(?:,${SORT_KEY}){0,3}$`);
 const toList = ({ value }: { value: unknown }): unknown => {
   const items = Array.isArray(value) ? value : [value];
   if (!items.every((item) => typeof item === 'string')) return value;
-  return (items as string[]).flatMap((item) => item.split(',')).map((item) => item.trim()).filter(Boolean);
+  return (items as string[])
+    .flatMap((item) => item.split(','))
+    .map((item) => item.trim())
+    .filter(Boolean);
 };
 
 /** A query-string number; an empty value counts as absent, a non-number stays to be refused. */

@@ -74,8 +74,18 @@ const single = (name: string): ColumnVariant[] => [stored(name)];
 const positive: CellRule = { kind: 'number', min: 0, minExclusive: true };
 
 export const COLUMNS: readonly ColumnSpec[] = [
-  { field: 'supplierName', rule: { kind: 'text', maxLength: MOUNT_LIMITS.supplierNameMaxLength }, variants: single('supplier'), required: true },
-  { field: 'partNumber', rule: { kind: 'text', maxLength: MOUNT_LIMITS.partNumberMaxLength }, variants: single('part_number'), required: true },
+  {
+    field: 'supplierName',
+    rule: { kind: 'text', maxLength: MOUNT_LIMITS.supplierNameMaxLength },
+    variants: single('supplier'),
+    required: true,
+  },
+  {
+    field: 'partNumber',
+    rule: { kind: 'text', maxLength: MOUNT_LIMITS.partNumberMaxLength },
+    variants: single('part_number'),
+    required: true,
+  },
   { field: 'series', rule: { kind: 'text', maxLength: MOUNT_LIMITS.seriesMaxLength }, variants: single('series'), required: false },
   { field: 'mountType', rule: { kind: 'mountType' }, variants: single('mount_type'), required: true },
   {
@@ -87,19 +97,13 @@ export const COLUMNS: readonly ColumnSpec[] = [
   {
     field: 'verticalStiffnessNPerM',
     rule: positive,
-    variants: [
-      decimal('vertical_stiffness_n_per_mm', 3),
-      customary('vertical_stiffness_lbf_per_in', lbfPerInToNPerM, nPerMToLbfPerIn),
-    ],
+    variants: [decimal('vertical_stiffness_n_per_mm', 3), customary('vertical_stiffness_lbf_per_in', lbfPerInToNPerM, nPerMToLbfPerIn)],
     required: true,
   },
   {
     field: 'horizontalStiffnessNPerM',
     rule: positive,
-    variants: [
-      decimal('horizontal_stiffness_n_per_mm', 3),
-      customary('horizontal_stiffness_lbf_per_in', lbfPerInToNPerM, nPerMToLbfPerIn),
-    ],
+    variants: [decimal('horizontal_stiffness_n_per_mm', 3), customary('horizontal_stiffness_lbf_per_in', lbfPerInToNPerM, nPerMToLbfPerIn)],
     required: false,
   },
   {

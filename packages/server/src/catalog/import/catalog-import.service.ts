@@ -160,9 +160,7 @@ class ImportPass {
       }
       if (isEmptyRow(record.fields)) continue;
       if (!this.header) {
-        throw new CatalogFileError('Row 1 must be the header', [
-          { row: 1, column: '', message: 'row 1 must be the header; it is empty' },
-        ]);
+        throw new CatalogFileError('Row 1 must be the header', [{ row: 1, column: '', message: 'row 1 must be the header; it is empty' }]);
       }
       dataRows++;
       await this.handle(record.row, record.fields, this.header);

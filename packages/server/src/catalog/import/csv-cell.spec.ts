@@ -3,7 +3,7 @@ import { guardCell, guardFormula } from './csv-cell.js';
 import { ErrorReport } from './error-report.js';
 
 describe('guardFormula and guardCell (OWASP CSV injection: prefix a quote)', () => {
-  it.each(['=cmd|\' /C calc\'!A0', '+SUM(A1:A2)', '-2+3', '@SUM(1)', '\tx', '\rx'])('guards %j', (text) => {
+  it.each(["=cmd|' /C calc'!A0", '+SUM(A1:A2)', '-2+3', '@SUM(1)', '\tx', '\rx'])('guards %j', (text) => {
     expect(guardFormula(text)).toBe(`'${text}`);
   });
 
@@ -22,10 +22,14 @@ describe('guardFormula and guardCell (OWASP CSV injection: prefix a quote)', () 
 describe('ErrorReport', () => {
   it('writes one line per rejected row: row, columns, messages, then the original fields, guarded', () => {
     const report = new ErrorReport(['supplier', 'rated_load_n']);
-    report.add(4, ['=evil()', '-3'], [
-      { column: 'rated_load_n', message: 'must be a positive number (got "-3")' },
-      { column: 'supplier', message: 'is longer than 120 characters' },
-    ]);
+    report.add(
+      4,
+      ['=evil()', '-3'],
+      [
+        { column: 'rated_load_n', message: 'must be a positive number (got "-3")' },
+        { column: 'supplier', message: 'is longer than 120 characters' },
+      ],
+    );
     report.add(9, ['Short row'], [{ column: '', message: 'the row has 1 fields; the header has 2' }]);
     expect(parse(report.toString())).toEqual([
       ['row', 'column', 'message', 'supplier', 'rated_load_n'],

@@ -62,9 +62,7 @@ export function* readCsvRecords(path: string): Generator<CsvRecord> {
     for (const fields of pending.splice(0)) yield { row: ++row, fields };
     if (error) {
       const message = error instanceof CsvError ? describeCsvError(error) : 'the row is not valid CSV';
-      throw new CatalogFileError(`The file is not valid CSV (row ${row + 1}: ${message})`, [
-        { row: row + 1, column: '', message },
-      ]);
+      throw new CatalogFileError(`The file is not valid CSV (row ${row + 1}: ${message})`, [{ row: row + 1, column: '', message }]);
     }
   }
 

@@ -5,7 +5,14 @@ const REQUIRED_SI = ['supplier', 'part_number', 'mount_type', 'rated_load_n', 'v
 
 describe('mapHeader', () => {
   it('maps names case-insensitively, in any order, with surrounding spaces', () => {
-    const { header, problems } = mapHeader([' Part_Number', 'SUPPLIER', 'damping_ratio', 'Rated_Load_LBF', 'mount_type', 'vertical_stiffness_n_per_mm ']);
+    const { header, problems } = mapHeader([
+      ' Part_Number',
+      'SUPPLIER',
+      'damping_ratio',
+      'Rated_Load_LBF',
+      'mount_type',
+      'vertical_stiffness_n_per_mm ',
+    ]);
     expect(problems).toEqual([]);
     expect(header?.columns.map((c) => c?.variant.name)).toEqual([
       'part_number',
@@ -65,7 +72,10 @@ describe('mapHeader', () => {
   it('refuses a header with far too many columns in one problem', () => {
     const { problems } = mapHeader(Array.from({ length: 10_000 }, (_, i) => `c${i}`));
     expect(problems).toEqual([
-      { column: '', message: `the header has 10000 columns; a catalog file has at most ${MAX_HEADER_COLUMNS} (see the format description)` },
+      {
+        column: '',
+        message: `the header has 10000 columns; a catalog file has at most ${MAX_HEADER_COLUMNS} (see the format description)`,
+      },
     ]);
   });
 

@@ -47,8 +47,12 @@ describe('MountBatchWriter', () => {
     await new MountBatchWriter().upsert(manager, rows);
     expect(calls).toHaveLength(1);
     const { sql, parameters } = calls[0];
-    expect(sql).toMatch(/^INSERT INTO "mount" \("supplierId", "partNumber", "series", .*"active"\) VALUES \(\$1, \$2, .*\$18\), \(\$19, .*\$36\) /);
-    expect(sql).toMatch(/ON CONFLICT \("supplierId", "partNumber"\) DO UPDATE SET "series" = excluded."series", .*"active" = excluded."active", "updatedAt" = now\(\)$/);
+    expect(sql).toMatch(
+      /^INSERT INTO "mount" \("supplierId", "partNumber", "series", .*"active"\) VALUES \(\$1, \$2, .*\$18\), \(\$19, .*\$36\) /,
+    );
+    expect(sql).toMatch(
+      /ON CONFLICT \("supplierId", "partNumber"\) DO UPDATE SET "series" = excluded."series", .*"active" = excluded."active", "updatedAt" = now\(\)$/,
+    );
     expect(sql).not.toMatch(/"supplierId" = excluded|"partNumber" = excluded/);
     expect(parameters).toHaveLength(36);
     expect(parameters.slice(0, 4)).toEqual([3, 'WX-1', null, 'open_spring']);
@@ -65,7 +69,7 @@ describe('MountBatchWriter', () => {
     expect(calls[0].sql).toMatch(/"updatedAt" = datetime\('now'\)$/);
   });
 
-  it('on an open SQLite connection, inserts then updates in place inside the caller\'s transaction (and restores a retired part)', async () => {
+  it("on an open SQLite connection, inserts then updates in place inside the caller's transaction (and restores a retired part)", async () => {
     const dataSource = new DataSource({ ...databaseOptions({ dataDir: '.' }), database: ':memory:' } as never);
     await dataSource.initialize(); // migrations
     try {
@@ -84,8 +88,12 @@ describe('MountBatchWriter', () => {
           throw new Error('crash');
         }),
       ).rejects.toThrow('crash');
-      await dataSource.transaction((manager) => writer.upsert(manager, [{ supplierId: 1, values: { ...batch[1].values, ratedLoadN: 1500 } }]));
-      const rows = await dataSource.query(`SELECT "partNumber", "ratedLoadN", "lossFactor", "dampingRatio", "active" FROM "mount" ORDER BY "id"`);
+      await dataSource.transaction((manager) =>
+        writer.upsert(manager, [{ supplierId: 1, values: { ...batch[1].values, ratedLoadN: 1500 } }]),
+      );
+      const rows = await dataSource.query(
+        `SELECT "partNumber", "ratedLoadN", "lossFactor", "dampingRatio", "active" FROM "mount" ORDER BY "id"`,
+      );
       expect(rows).toEqual([
         { partNumber: 'WX-1', ratedLoadN: 1200, lossFactor: null, dampingRatio: 0.01, active: 1 },
         { partNumber: 'WX-2', ratedLoadN: 1500, lossFactor: 0.2, dampingRatio: null, active: 1 },

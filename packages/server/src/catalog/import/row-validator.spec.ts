@@ -2,9 +2,23 @@ import { mapHeader, type HeaderMap } from './header-mapper.js';
 import { isEmptyRow, rowKeyParts, validateRow } from './row-validator.js';
 
 const SI_HEADER = [
-  'supplier', 'part_number', 'series', 'mount_type', 'rated_load_n', 'vertical_stiffness_n_per_mm',
-  'horizontal_stiffness_n_per_mm', 'dynamic_stiffness_ratio', 'damping_ratio', 'loss_factor', 'max_deflection_mm',
-  'temp_min_c', 'temp_max_c', 'height_mm', 'unit_price', 'currency', 'lead_time_days',
+  'supplier',
+  'part_number',
+  'series',
+  'mount_type',
+  'rated_load_n',
+  'vertical_stiffness_n_per_mm',
+  'horizontal_stiffness_n_per_mm',
+  'dynamic_stiffness_ratio',
+  'damping_ratio',
+  'loss_factor',
+  'max_deflection_mm',
+  'temp_min_c',
+  'temp_max_c',
+  'height_mm',
+  'unit_price',
+  'currency',
+  'lead_time_days',
 ];
 
 function headerOf(names: string[]): HeaderMap {
@@ -69,8 +83,14 @@ describe('validateRow', () => {
 
   it('converts US customary columns exactly (NIST SP 811: 1 lbf = 4.4482216152605 N, 1 in = 0.0254 m)', () => {
     const us = headerOf([
-      'supplier', 'part_number', 'mount_type', 'rated_load_lbf', 'vertical_stiffness_lbf_per_in',
-      'horizontal_stiffness_lbf_per_in', 'loss_factor', 'max_deflection_in',
+      'supplier',
+      'part_number',
+      'mount_type',
+      'rated_load_lbf',
+      'vertical_stiffness_lbf_per_in',
+      'horizontal_stiffness_lbf_per_in',
+      'loss_factor',
+      'max_deflection_in',
     ]);
     const { values, problems } = validateRow(['S', 'P', 'wire_rope', '1', '1', '2', '0.2', '1'], us);
     expect(problems).toEqual([]);
@@ -95,7 +115,10 @@ describe('validateRow', () => {
   });
 
   it('trims cells, reads the mount type and currency in any case, accepts exponents', () => {
-    const { values } = validateRow(row({ supplier: '  Wrenfield Example Mounts ', mount_type: ' Open_Spring', currency: 'eur', rated_load_n: '1.2e3' }), si);
+    const { values } = validateRow(
+      row({ supplier: '  Wrenfield Example Mounts ', mount_type: ' Open_Spring', currency: 'eur', rated_load_n: '1.2e3' }),
+      si,
+    );
     expect(values).toMatchObject({ supplierName: 'Wrenfield Example Mounts', mountType: 'open_spring', currency: 'EUR', ratedLoadN: 1200 });
   });
 
@@ -103,7 +126,11 @@ describe('validateRow', () => {
     ['a missing required text', { supplier: '' }, [{ column: 'supplier', message: 'is required' }]],
     ['a missing required number', { rated_load_n: ' ' }, [{ column: 'rated_load_n', message: 'is required' }]],
     ['a negative load', { rated_load_n: '-3' }, [{ column: 'rated_load_n', message: 'must be a positive number (got "-3")' }]],
-    ['a zero stiffness', { vertical_stiffness_n_per_mm: '0' }, [{ column: 'vertical_stiffness_n_per_mm', message: 'must be a positive number (got "0")' }]],
+    [
+      'a zero stiffness',
+      { vertical_stiffness_n_per_mm: '0' },
+      [{ column: 'vertical_stiffness_n_per_mm', message: 'must be a positive number (got "0")' }],
+    ],
     ['text for a number', { height_mm: 'tall' }, [{ column: 'height_mm', message: 'must be a plain number (got "tall")' }]],
     [
       'a decimal comma',
@@ -112,20 +139,52 @@ describe('validateRow', () => {
     ],
     ['infinity', { rated_load_n: 'Infinity' }, [{ column: 'rated_load_n', message: 'must be a plain number (got "Infinity")' }]],
     ['an overflowing number', { rated_load_n: '1e999' }, [{ column: 'rated_load_n', message: 'is too large (got "1e999")' }]],
-    ['a damping ratio of 1', { damping_ratio: '1' }, [{ column: 'damping_ratio', message: 'must be a number greater than 0 and less than 1 (got "1")' }]],
+    [
+      'a damping ratio of 1',
+      { damping_ratio: '1' },
+      [{ column: 'damping_ratio', message: 'must be a number greater than 0 and less than 1 (got "1")' }],
+    ],
     [
       'a loss factor above 2',
       { damping_ratio: '', loss_factor: '2.5' },
       [{ column: 'loss_factor', message: 'must be a number greater than 0 and at most 2 (got "2.5")' }],
     ],
-    ['a dynamic ratio below 1', { dynamic_stiffness_ratio: '0.9' }, [{ column: 'dynamic_stiffness_ratio', message: 'must be a number from 1 to 5 (got "0.9")' }]],
-    ['a dynamic ratio above 5', { dynamic_stiffness_ratio: '5.01' }, [{ column: 'dynamic_stiffness_ratio', message: 'must be a number from 1 to 5 (got "5.01")' }]],
-    ['a temperature below −80 °C', { temp_min_c: '-81' }, [{ column: 'temp_min_c', message: 'must be a number from -80 to 250 (got "-81")' }]],
-    ['min not below max temperature', { temp_min_c: '120', temp_max_c: '120' }, [{ column: 'temp_min_c', message: 'must be below temp_max_c' }]],
-    ['a fractional lead time', { lead_time_days: '3.5' }, [{ column: 'lead_time_days', message: 'must be a whole number from 0 to 730 (got "3.5")' }]],
-    ['a lead time over two years', { lead_time_days: '731' }, [{ column: 'lead_time_days', message: 'must be a whole number from 0 to 730 (got "731")' }]],
+    [
+      'a dynamic ratio below 1',
+      { dynamic_stiffness_ratio: '0.9' },
+      [{ column: 'dynamic_stiffness_ratio', message: 'must be a number from 1 to 5 (got "0.9")' }],
+    ],
+    [
+      'a dynamic ratio above 5',
+      { dynamic_stiffness_ratio: '5.01' },
+      [{ column: 'dynamic_stiffness_ratio', message: 'must be a number from 1 to 5 (got "5.01")' }],
+    ],
+    [
+      'a temperature below −80 °C',
+      { temp_min_c: '-81' },
+      [{ column: 'temp_min_c', message: 'must be a number from -80 to 250 (got "-81")' }],
+    ],
+    [
+      'min not below max temperature',
+      { temp_min_c: '120', temp_max_c: '120' },
+      [{ column: 'temp_min_c', message: 'must be below temp_max_c' }],
+    ],
+    [
+      'a fractional lead time',
+      { lead_time_days: '3.5' },
+      [{ column: 'lead_time_days', message: 'must be a whole number from 0 to 730 (got "3.5")' }],
+    ],
+    [
+      'a lead time over two years',
+      { lead_time_days: '731' },
+      [{ column: 'lead_time_days', message: 'must be a whole number from 0 to 730 (got "731")' }],
+    ],
     ['a negative price', { unit_price: '-1' }, [{ column: 'unit_price', message: 'must be zero or a positive number (got "-1")' }]],
-    ['a bad currency', { currency: 'US$' }, [{ column: 'currency', message: 'must be a three-letter currency code such as USD (got "US$")' }]],
+    [
+      'a bad currency',
+      { currency: 'US$' },
+      [{ column: 'currency', message: 'must be a three-letter currency code such as USD (got "US$")' }],
+    ],
     [
       'an unknown mount type',
       { mount_type: 'spring' },
@@ -141,7 +200,11 @@ describe('validateRow', () => {
     ['both damping figures', { loss_factor: '0.1' }, [{ column: 'loss_factor', message: 'give damping_ratio or loss_factor, not both' }]],
     ['an over-long part number', { part_number: 'P'.repeat(81) }, [{ column: 'part_number', message: 'is longer than 80 characters' }]],
     ['an over-long supplier', { supplier: 'S'.repeat(121) }, [{ column: 'supplier', message: 'is longer than 120 characters' }]],
-    ['a line break in a text', { series: 'S1\nS2' }, [{ column: 'series', message: 'must be one line of text without control characters' }]],
+    [
+      'a line break in a text',
+      { series: 'S1\nS2' },
+      [{ column: 'series', message: 'must be one line of text without control characters' }],
+    ],
   ])('reports %s', (_case, overrides, expected) => {
     expect(problemsOf(row(overrides))).toEqual(expected);
   });
@@ -173,13 +236,18 @@ describe('validateRow', () => {
   it('refuses a value under a column without a name', () => {
     const header = headerOf([...SI_HEADER, '']);
     expect(problemsOf([...row(), ''], header)).toEqual([]);
-    expect(problemsOf([...row(), 'stray'], header)).toEqual([{ column: 'column 18', message: 'has a value but the header gives this column no name' }]);
+    expect(problemsOf([...row(), 'stray'], header)).toEqual([
+      { column: 'column 18', message: 'has a value but the header gives this column no name' },
+    ]);
   });
 });
 
 describe('rowKeyParts and isEmptyRow', () => {
   it('gives the supplier and part number of a row, even an invalid one', () => {
-    expect(rowKeyParts(row({ rated_load_n: 'x', part_number: ' P-1 ' }), si)).toEqual({ supplierName: 'Wrenfield Example Mounts', partNumber: 'P-1' });
+    expect(rowKeyParts(row({ rated_load_n: 'x', part_number: ' P-1 ' }), si)).toEqual({
+      supplierName: 'Wrenfield Example Mounts',
+      partNumber: 'P-1',
+    });
     expect(rowKeyParts(row({ supplier: '' }), si)).toBeNull();
   });
 

@@ -38,8 +38,7 @@ export interface CatalogFiltersProps {
 export function CatalogFilters({ query, suppliers, onChange }: CatalogFiltersProps) {
   const units = useUnits();
   const loadUnit = units.label('force');
-  const shown = (loadN: number | null) =>
-    loadN === null ? '' : String(Number(units.toDisplay('force', loadN).toPrecision(6)));
+  const shown = (loadN: number | null) => (loadN === null ? '' : String(Number(units.toDisplay('force', loadN).toPrecision(6))));
 
   const [text, setText] = useState(query.q);
   const [minText, setMinText] = useState(() => shown(query.minLoadN));

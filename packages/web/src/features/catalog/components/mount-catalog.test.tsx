@@ -331,7 +331,11 @@ describe('Catalog page', () => {
     serveCatalog(installFakeApi(), { mounts: [] });
     renderApp({ signedInAs: 'catalog_manager', path: '/catalog' });
     const sections = await screen.findByRole('navigation', { name: 'Catalog sections' });
-    expect(within(sections).getAllByRole('link').map((link) => link.textContent)).toEqual(['Mounts', 'Import', 'Suppliers']);
+    expect(
+      within(sections)
+        .getAllByRole('link')
+        .map((link) => link.textContent),
+    ).toEqual(['Mounts', 'Import', 'Suppliers']);
     expect(await screen.findByText('No mounts match')).toBeInTheDocument();
   });
 

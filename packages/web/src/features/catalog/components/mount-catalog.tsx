@@ -80,9 +80,7 @@ export function MountCatalog({ suppliers, canWrite }: MountCatalogProps) {
         actions={
           <>
             <ExportCatalogButton />
-            {canWrite ? (
-              <Button intent="primary" icon={<PlusIcon />} text="Add mount" onClick={() => setCreating(true)} />
-            ) : null}
+            {canWrite ? <Button intent="primary" icon={<PlusIcon />} text="Add mount" onClick={() => setCreating(true)} /> : null}
           </>
         }
       />
@@ -121,7 +119,8 @@ export function MountCatalog({ suppliers, canWrite }: MountCatalogProps) {
         ) : null}
         {mounts.data && total > 0 && query.page > pages ? (
           <Callout intent="primary" className="tc-catalog-past-end">
-            There are only {formatNumber(pages, 0)} pages. <Button variant="minimal" text="Go to the last page" onClick={() => change({ page: pages })} />
+            There are only {formatNumber(pages, 0)} pages.{' '}
+            <Button variant="minimal" text="Go to the last page" onClick={() => change({ page: pages })} />
           </Callout>
         ) : null}
         {!mounts.isError && (!mounts.data || total > 0) ? (
@@ -153,7 +152,12 @@ export function MountCatalog({ suppliers, canWrite }: MountCatalogProps) {
       />
       {canWrite ? (
         <>
-          <MountFormDialog isOpen={creating} suppliers={suppliers} onClose={() => setCreating(false)} onSaved={(mount) => select(mount.id)} />
+          <MountFormDialog
+            isOpen={creating}
+            suppliers={suppliers}
+            onClose={() => setCreating(false)}
+            onSaved={(mount) => select(mount.id)}
+          />
           <MountFormDialog isOpen={editing !== null} mount={editing} suppliers={suppliers} onClose={() => setEditing(null)} />
           <RetireMountAlert mount={retiring} onClose={() => setRetiring(null)} />
         </>

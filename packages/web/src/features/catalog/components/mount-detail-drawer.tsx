@@ -77,8 +77,8 @@ function MountDetails({ mount }: { mount: Mount }) {
           <Fact label="Natural frequency" value={displayQuantity(units, 'frequency', naturalFrequencyHz)} />
         </dl>
         <p className="tc-muted tc-mount-note">
-          Computed from the catalog values: static deflection is the rated load divided by the vertical stiffness; the
-          vertical natural frequency follows from that deflection and the dynamic stiffness ratio.
+          Computed from the catalog values: static deflection is the rated load divided by the vertical stiffness; the vertical natural
+          frequency follows from that deflection and the dynamic stiffness ratio.
         </p>
       </section>
       <section className="tc-mount-section" aria-labelledby="mount-ratings-title">
@@ -93,11 +93,7 @@ function MountDetails({ mount }: { mount: Mount }) {
           <Fact
             label="Damping"
             value={dampingText(mount)}
-            note={
-              damping?.model === 'hysteretic'
-                ? `about ζ ${formatNumber(damping.equivalentDampingRatio)} at resonance`
-                : undefined
-            }
+            note={damping?.model === 'hysteretic' ? `about ζ ${formatNumber(damping.equivalentDampingRatio)} at resonance` : undefined}
           />
           <Fact label="Maximum deflection" value={displayQuantity(units, 'deflection', maxDeflectionM)} />
           <Fact label="Free height" value={displayQuantity(units, 'deflection', mmToM(mount.heightMm))} />

@@ -139,12 +139,7 @@ export function MountFormDialog({ isOpen, mount, suppliers, onClose, onSaved }: 
 
   return (
     <Dialog title={title} isOpen={isOpen} onClose={close} className="tc-dialog tc-mount-dialog">
-      <Formik<MountFormValues>
-        initialValues={initialValues}
-        validationSchema={schema}
-        onSubmit={submit}
-        enableReinitialize
-      >
+      <Formik<MountFormValues> initialValues={initialValues} validationSchema={schema} onSubmit={submit} enableReinitialize>
         {({ isSubmitting }) => (
           <Form noValidate aria-label={title}>
             <DialogBody>

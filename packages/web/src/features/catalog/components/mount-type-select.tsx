@@ -4,8 +4,7 @@ import { MultiSelect, type ItemPredicate, type ItemRenderer } from '@blueprintjs
 import { MOUNT_TYPES, type MountType } from '../types';
 import { MOUNT_TYPE_LABELS } from '../utils/mount-labels';
 
-const filterType: ItemPredicate<MountType> = (query, type) =>
-  MOUNT_TYPE_LABELS[type].toLowerCase().includes(query.trim().toLowerCase());
+const filterType: ItemPredicate<MountType> = (query, type) => MOUNT_TYPE_LABELS[type].toLowerCase().includes(query.trim().toLowerCase());
 
 export interface MountTypeSelectProps {
   id: string;
@@ -16,7 +15,9 @@ export interface MountTypeSelectProps {
 /** Pick any number of mount types; none picked means every type. */
 export function MountTypeSelect({ id, value, onChange }: MountTypeSelectProps) {
   const toggle = (type: MountType) => {
-    onChange(value.includes(type) ? value.filter((item) => item !== type) : MOUNT_TYPES.filter((item) => item === type || value.includes(item)));
+    onChange(
+      value.includes(type) ? value.filter((item) => item !== type) : MOUNT_TYPES.filter((item) => item === type || value.includes(item)),
+    );
   };
 
   const renderType: ItemRenderer<MountType> = (type, { handleClick, handleFocus, modifiers }) => {

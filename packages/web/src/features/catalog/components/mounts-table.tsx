@@ -17,15 +17,7 @@ import { useMemo, type ReactElement } from 'react';
 import { useUnits, type Units } from '@/lib/units';
 
 import type { Mount, MountSort, MountSortField } from '../types';
-import {
-  dampingText,
-  displayNumber,
-  leadTimeText,
-  mmToM,
-  priceText,
-  ratedFigures,
-  temperatureRangeText,
-} from '../utils/mount-display';
+import { dampingText, displayNumber, leadTimeText, mmToM, priceText, ratedFigures, temperatureRangeText } from '../utils/mount-display';
 import { mountTypeLabel } from '../utils/mount-labels';
 
 interface CatalogColumn {
@@ -246,7 +238,13 @@ export function MountsTable({ mounts, offset, loading, sort, onSort, openId, onO
         }}
       >
         {CATALOG_COLUMNS.map((column) => (
-          <Column key={column.id} id={column.id} name={column.name(units)} columnHeaderCellRenderer={renderHeader(column)} cellRenderer={renderCell(column)} />
+          <Column
+            key={column.id}
+            id={column.id}
+            name={column.name(units)}
+            columnHeaderCellRenderer={renderHeader(column)}
+            cellRenderer={renderCell(column)}
+          />
         ))}
       </Table>
     </div>

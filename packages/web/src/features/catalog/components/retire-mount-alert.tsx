@@ -30,10 +30,7 @@ export function RetireMountAlert({ mount, onClose }: RetireMountAlertProps) {
               Retire {mount.partNumber} of {mount.supplier.name}?
             </strong>
           </p>
-          <p>
-            Selections will no longer offer it. Designs that already chose it keep their figures, and you can restore it
-            at any time.
-          </p>
+          <p>Selections will no longer offer it. Designs that already chose it keep their figures, and you can restore it at any time.</p>
         </>
       ) : null}
     </ConfirmActionAlert>

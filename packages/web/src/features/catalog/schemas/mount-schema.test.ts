@@ -15,7 +15,9 @@ const VALID: MountFormValues = {
 
 /** Formik hands yup the values with empty boxes as undefined; this does the same. */
 function problems(values: Partial<MountFormValues>, system: 'SI' | 'US' = 'SI'): Record<string, string> {
-  const prepared = Object.fromEntries(Object.entries({ ...VALID, ...values }).map(([key, value]) => [key, value === '' ? undefined : value]));
+  const prepared = Object.fromEntries(
+    Object.entries({ ...VALID, ...values }).map(([key, value]) => [key, value === '' ? undefined : value]),
+  );
   try {
     mountFormSchema(unitsFor(system)).validateSync(prepared, { abortEarly: false });
     return {};

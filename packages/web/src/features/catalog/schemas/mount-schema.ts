@@ -74,7 +74,10 @@ export function mountFormSchema(units: Units) {
       .string()
       .trim()
       .max(MOUNT_FORM_LIMITS.seriesMaxLength, `Keep it to ${MOUNT_FORM_LIMITS.seriesMaxLength} characters or fewer`),
-    mountType: yup.mixed<MountType | ''>().oneOf([...MOUNT_TYPES], 'Choose a mount type').required('Choose a mount type'),
+    mountType: yup
+      .mixed<MountType | ''>()
+      .oneOf([...MOUNT_TYPES], 'Choose a mount type')
+      .required('Choose a mount type'),
     ratedLoad: positive('Enter the rated load'),
     verticalStiffness: positive('Enter the vertical stiffness'),
     horizontalStiffness: positive(),

@@ -1,8 +1,4 @@
-import {
-  dampingRatioFromLossFactor,
-  naturalFrequencyFromStaticDeflection,
-  staticDeflection,
-} from '@tacet/vibration';
+import { dampingRatioFromLossFactor, naturalFrequencyFromStaticDeflection, staticDeflection } from '@tacet/vibration';
 
 import type { DampingModel, Mount } from '../types';
 
@@ -33,10 +29,7 @@ export function ratedDeflection(mount: MountStiffness): number {
  */
 export function naturalFrequencyAtLoad(mount: MountStiffness, loadN: number): number {
   return orNaN(() =>
-    naturalFrequencyFromStaticDeflection(
-      staticDeflection(loadN, mount.verticalStiffnessNPerM),
-      mount.dynamicStiffnessRatio || 1,
-    ),
+    naturalFrequencyFromStaticDeflection(staticDeflection(loadN, mount.verticalStiffnessNPerM), mount.dynamicStiffnessRatio || 1),
   );
 }
 

@@ -11,7 +11,12 @@ const US = unitsFor('US');
 describe('mount form values', () => {
   it('shows a mount in the user’s units', () => {
     const mount = makeMount({ ratedLoadN: 2400, verticalStiffnessNPerM: 72_500, maxDeflectionMm: 50.8, tempMinC: -40, tempMaxC: 100 });
-    expect(mountToFormValues(mount, SI)).toMatchObject({ ratedLoad: '2400', verticalStiffness: '72.5', maxDeflection: '50.8', tempMin: '-40' });
+    expect(mountToFormValues(mount, SI)).toMatchObject({
+      ratedLoad: '2400',
+      verticalStiffness: '72.5',
+      maxDeflection: '50.8',
+      tempMin: '-40',
+    });
     // 50.8 mm = 2 in; −40 °C = −40 °F; 100 °C = 212 °F (definitions of the inch and the Fahrenheit scale).
     expect(mountToFormValues(mount, US)).toMatchObject({ maxDeflection: '2', tempMin: '-40', tempMax: '212' });
   });

@@ -20,12 +20,30 @@ function csvFile(name = 'spring-range.csv'): File {
 
 const PROBLEMS = [
   { row: 4, column: 'rated_load_n', message: 'must be a positive number' },
-  { row: 5, column: 'mount_type', message: 'must be one of elastomer_pad, elastomer_mount, open_spring, housed_spring, restrained_spring, air_spring, wire_rope' },
+  {
+    row: 5,
+    column: 'mount_type',
+    message: 'must be one of elastomer_pad, elastomer_mount, open_spring, housed_spring, restrained_spring, air_spring, wire_rope',
+  },
 ];
 
 const PREVIEW = [
-  makePreviewRow({ row: 2, supplierName: 'Quillmere Isolation', partNumber: 'QM-S9-01000', ratedLoadN: 1000, verticalStiffnessNPerM: 40_000, action: 'create' }),
-  makePreviewRow({ row: 3, supplierName: 'Quillmere Isolation', partNumber: 'QM-S9-02000', ratedLoadN: 2000, verticalStiffnessNPerM: 80_000, action: 'update' }),
+  makePreviewRow({
+    row: 2,
+    supplierName: 'Quillmere Isolation',
+    partNumber: 'QM-S9-01000',
+    ratedLoadN: 1000,
+    verticalStiffnessNPerM: 40_000,
+    action: 'create',
+  }),
+  makePreviewRow({
+    row: 3,
+    supplierName: 'Quillmere Isolation',
+    partNumber: 'QM-S9-02000',
+    ratedLoadN: 2000,
+    verticalStiffnessNPerM: 80_000,
+    action: 'update',
+  }),
 ];
 
 const CHECKED = makeImportResult({ accepted: 2, rejected: 2, created: 1, updated: 1, errors: PROBLEMS, preview: PREVIEW });
@@ -38,7 +56,9 @@ function serveImport(fake: FakeApi = installFakeApi()) {
     .on('post', '/mounts/import', ({ query }) => {
       if (query.dryRun === 'true') return { status: 200, data: CHECKED };
       if (query.onInvalid === 'skip') {
-        history.unshift(makeImportRecord({ id: 7, mode: 'skip_invalid', accepted: 2, rejected: 2, created: 1, updated: 1, hasErrorReport: true }));
+        history.unshift(
+          makeImportRecord({ id: 7, mode: 'skip_invalid', accepted: 2, rejected: 2, created: 1, updated: 1, hasErrorReport: true }),
+        );
         return { status: 200, data: { ...CHECKED, importId: 7 } };
       }
       return { status: 422, data: { statusCode: 422, message: 'The file has invalid rows; nothing was imported', ...CHECKED } };
@@ -84,11 +104,11 @@ describe('Catalog import page', () => {
     const problems = await screen.findByRole('table', { name: 'Problems in the file' });
     const rows = within(problems).getAllByRole('row').slice(1);
     expect(rows).toHaveLength(2);
-    expect(within(rows[0]!).getAllByRole('cell').map((cell) => cell.textContent)).toEqual([
-      '4',
-      'rated_load_n',
-      'must be a positive number',
-    ]);
+    expect(
+      within(rows[0]!)
+        .getAllByRole('cell')
+        .map((cell) => cell.textContent),
+    ).toEqual(['4', 'rated_load_n', 'must be a positive number']);
     expect(rows[1]).toHaveTextContent('mount_type');
 
     const request = importCalls(fake)[0]!;
@@ -157,12 +177,10 @@ describe('Catalog import page', () => {
   it('imports a clean file all at once', async () => {
     const fake = installFakeApi();
     const clean = makeImportResult({ accepted: 2, created: 2, preview: PREVIEW.map((row) => ({ ...row, action: 'create' as const })) });
-    fake
-      .on('get', '/mounts/imports', { status: 200, data: [] })
-      .on('post', '/mounts/import', ({ query }) => ({
-        status: 200,
-        data: query.dryRun === 'true' ? clean : { ...clean, importId: 9 },
-      }));
+    fake.on('get', '/mounts/imports', { status: 200, data: [] }).on('post', '/mounts/import', ({ query }) => ({
+      status: 200,
+      data: query.dryRun === 'true' ? clean : { ...clean, importId: 9 },
+    }));
     const { user } = renderApp({ signedInAs: 'catalog_manager', path: '/catalog/import' });
     await chooseAndCheck(user);
 
@@ -248,16 +266,11 @@ describe('Catalog import page', () => {
     const { user } = renderApp({ signedInAs: 'admin', path: '/catalog/import' });
     const history = await screen.findByRole('table', { name: 'Earlier imports' });
     const row = within(history).getAllByRole('row')[1]!;
-    expect(within(row).getAllByRole('cell').map((cell) => cell.textContent)).toEqual([
-      '10 Mar 2025, 14:30',
-      'Cato Catalog',
-      'older.csv',
-      'Valid rows only',
-      '10',
-      '2',
-      '4',
-      'Download',
-    ]);
+    expect(
+      within(row)
+        .getAllByRole('cell')
+        .map((cell) => cell.textContent),
+    ).toEqual(['10 Mar 2025, 14:30', 'Cato Catalog', 'older.csv', 'Valid rows only', '10', '2', '4', 'Download']);
     await user.click(within(row).getByRole('button', { name: 'Download the error report of older.csv' }));
     await waitFor(() => expect(downloads).toEqual(['tacet-import-3-errors.csv']));
     expect(fake.calls('get', '/mounts/imports/:id/errors.csv')[0]?.path).toBe('/mounts/imports/3/errors.csv');

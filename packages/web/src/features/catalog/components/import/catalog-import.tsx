@@ -141,10 +141,9 @@ export function CatalogImport({ onImported }: CatalogImportProps) {
           1. Choose and check a file
         </h2>
         <p className="tc-muted tc-import-lead">
-          One mount per row, with a header row. Required columns: <code>supplier</code>, <code>part_number</code>,{' '}
-          <code>mount_type</code>, <code>rated_load_n</code> or <code>rated_load_lbf</code>,{' '}
-          <code>vertical_stiffness_n_per_mm</code> or <code>vertical_stiffness_lbf_per_in</code>, and{' '}
-          <code>damping_ratio</code> or <code>loss_factor</code>. Checking writes nothing.
+          One mount per row, with a header row. Required columns: <code>supplier</code>, <code>part_number</code>, <code>mount_type</code>,{' '}
+          <code>rated_load_n</code> or <code>rated_load_lbf</code>, <code>vertical_stiffness_n_per_mm</code> or{' '}
+          <code>vertical_stiffness_lbf_per_in</code>, and <code>damping_ratio</code> or <code>loss_factor</code>. Checking writes nothing.
         </p>
         <div className="tc-import-choose">
           <FormGroup label="Catalog file (CSV, up to 20 MB)" labelFor="import-file" className="tc-import-file-group">
@@ -247,9 +246,9 @@ export function CatalogImport({ onImported }: CatalogImportProps) {
               </div>
               {hasProblems ? (
                 <p className="tc-muted tc-import-why" id="import-all-why">
-                  “Import all” is off because {rows(result.rejected)} {result.rejected === 1 ? 'has' : 'have'} problems:
-                  by default an import is all or nothing, so a file with any invalid row writes nothing. Fix the file
-                  and check it again, or import the valid rows only and download the rest as an error report.
+                  “Import all” is off because {rows(result.rejected)} {result.rejected === 1 ? 'has' : 'have'} problems: by default an
+                  import is all or nothing, so a file with any invalid row writes nothing. Fix the file and check it again, or import the
+                  valid rows only and download the rest as an error report.
                 </p>
               ) : (
                 <p className="tc-muted tc-import-why">
@@ -273,7 +272,9 @@ export function CatalogImport({ onImported }: CatalogImportProps) {
           <Callout intent={done.result.rejected > 0 ? 'warning' : 'success'} role="status" className="tc-import-callout">
             <p>
               {mounts(done.result.created)} added and {mounts(done.result.updated)} updated.
-              {done.result.rejected > 0 ? ` ${rows(done.result.rejected)} with problems ${done.result.rejected === 1 ? 'was' : 'were'} skipped.` : ''}
+              {done.result.rejected > 0
+                ? ` ${rows(done.result.rejected)} with problems ${done.result.rejected === 1 ? 'was' : 'were'} skipped.`
+                : ''}
             </p>
             {done.result.rejected > 0 && done.result.importId !== null ? (
               <Button
@@ -313,8 +314,8 @@ export function CatalogImport({ onImported }: CatalogImportProps) {
               </strong>
             </p>
             <p>
-              The {rows(result.rejected)} with problems will not be imported. You can download them with their problems
-              as an error report, fix them and import that file again.
+              The {rows(result.rejected)} with problems will not be imported. You can download them with their problems as an error report,
+              fix them and import that file again.
             </p>
           </>
         ) : null}

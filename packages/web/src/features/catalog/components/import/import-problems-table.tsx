@@ -39,8 +39,8 @@ export function ImportProblemsTable({ problems, truncated }: ImportProblemsTable
       </div>
       {truncated ? (
         <p className="tc-muted tc-import-note">
-          Only the first {formatNumber(problems.length, 0)} problems are listed here; there are more problems in the error
-          report. Import the valid rows only to get the report with every rejected row.
+          Only the first {formatNumber(problems.length, 0)} problems are listed here; there are more problems in the error report. Import
+          the valid rows only to get the report with every rejected row.
         </p>
       ) : null}
     </>
