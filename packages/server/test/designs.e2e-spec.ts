@@ -202,6 +202,15 @@ describe('projects and designs (e2e)', () => {
       expect(now.body).toMatchObject({ name: 'Renamed once', version: 2 });
     });
 
+    it('refuses null for a design name (400, nothing changed)', async () => {
+      const design = await newDesign((await newProject()).id);
+      const before = await get(design.id);
+      const response = await put(design.id, { version: design.version, name: null });
+      expect(response.status).toBe(400);
+      expect(response.body.errors[0].field).toBe('name');
+      expect((await get(design.id)).body).toEqual(before.body);
+    });
+
     it('of 10 concurrent PUTs with the same version exactly one wins; the others get 409', async () => {
       const design = await newDesign((await newProject()).id);
       // One process on SQLite would run the requests one after another; hold every read of the

@@ -10,9 +10,10 @@ import { CreateDesignDto } from './create-design.dto.js';
  * A change to a draft. `version` is the one the client read; a stale one gets 409. Choosing a
  * candidate (`chosenMountId` or `chosenSeriesId`; `null` clears the choice) re-runs the
  * selection for it on the server. A new `input` without a choice clears the old choice. The name
- * is a new design's, optional (`input` is written out: omitted here means unchanged, not a template).
+ * is a new design's, optional, `null` refused (`skipNullProperties: false`); `input` is written
+ * out: omitted here means unchanged, not a template.
  */
-export class UpdateDesignDto extends PartialType(PickType(CreateDesignDto, ['name'] as const)) {
+export class UpdateDesignDto extends PartialType(PickType(CreateDesignDto, ['name'] as const), { skipNullProperties: false }) {
   @ApiProperty({ example: 3 })
   @IsInt()
   @Min(1)
