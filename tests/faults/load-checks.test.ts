@@ -1,8 +1,6 @@
 // The arithmetic and the invariants of the load test (tools/load), checked without a server.
 import { describe, expect, it } from 'vitest';
-// @ts-expect-error plain JavaScript module without types
 import { checkOwnDesigns, checkSharedDesign } from '../../tools/load/invariants.mjs';
-// @ts-expect-error plain JavaScript module without types
 import { Recorder, percentile } from '../../tools/load/stats.mjs';
 
 describe('percentile (nearest rank)', () => {

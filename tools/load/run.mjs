@@ -1,6 +1,6 @@
 #!/usr/bin/env node
 // `npm run test:load`: a load test of the built server on loopback. It starts the server in
-// demo mode on a free port with a throw-away data folder, runs virtual engineers for a while
+// demo mode on a free port with a throw-away data folder (tools/harness), runs virtual engineers for a while
 // (sign-in, catalog search, selection, design saves with version checks, and rounds in which
 // all of them save one shared design at once), prints requests/s and latency percentiles per
 // kind of request, then checks against the database that every acknowledged save is stored.
@@ -8,21 +8,16 @@
 //
 //   node tools/load/run.mjs [--duration 60] [--clients 50] [--race-every 5] [--sign-in-every 3] [--think 0]
 //   (or TACET_LOAD_DURATION / TACET_LOAD_CLIENTS). Needs `npm run build` first.
-import { spawn } from 'node:child_process';
-import { existsSync, mkdtempSync, rmSync } from 'node:fs';
-import { createServer } from 'node:net';
-import { cpus, loadavg, tmpdir } from 'node:os';
+import { cpus, loadavg } from 'node:os';
 import { join } from 'node:path';
 import { performance } from 'node:perf_hooks';
-import { fileURLToPath } from 'node:url';
 import Database from 'better-sqlite3';
+import { DEMO_PASSWORD, tagOfInput, taggedInput } from '../harness/fixtures.mjs';
+import { cleanUp, startServer, tempFolder } from '../harness/server.mjs';
 import { createHttpClient } from './http-client.mjs';
 import { checkOwnDesigns, checkSharedDesign } from './invariants.mjs';
-import { DEMO_PASSWORD, ENGINEER, RaceRounds, SignInSchedule, runVirtualClient, tagOfInput, taggedInput } from './scenario.mjs';
+import { ENGINEER, RaceRounds, SignInSchedule, runVirtualClient } from './scenario.mjs';
 import { Recorder, formatSummary } from './stats.mjs';
-
-const ROOT = fileURLToPath(new URL('../..', import.meta.url));
-const SERVER_MAIN = join(ROOT, 'packages/server/dist/main.js');
 
 function options(argv, env) {
   const value = (name, envName, fallback) => {
@@ -39,64 +34,6 @@ function options(argv, env) {
     signInEveryS: value('sign-in-every', 'TACET_LOAD_SIGN_IN_EVERY', 3),
     thinkMs: value('think', 'TACET_LOAD_THINK_MS', 0),
   };
-}
-
-function freePort() {
-  return new Promise((resolve, reject) => {
-    const server = createServer();
-    server.once('error', reject);
-    server.listen(0, '127.0.0.1', () => {
-      const { port } = server.address();
-      server.close(() => resolve(port));
-    });
-  });
-}
-
-async function startServer(dataDir, loginLimit) {
-  if (!existsSync(SERVER_MAIN)) throw new Error('Build the app first: npm run build');
-  const port = await freePort();
-  const child = spawn(process.execPath, [SERVER_MAIN], {
-    cwd: ROOT,
-    env: {
-      ...process.env,
-      NODE_ENV: 'production',
-      TACET_DEMO: 'true',
-      TACET_DATA_DIR: dataDir,
-      PORT: String(port),
-      TACET_LOGIN_LIMIT_PER_MINUTE: String(loginLimit),
-      TACET_WEB_DIST: join(dataDir, 'no-web-client'),
-    },
-    stdio: ['ignore', 'pipe', 'pipe'],
-  });
-  let log = '';
-  const keep = (chunk) => (log = (log + chunk).slice(-100_000));
-  child.stdout.on('data', keep);
-  child.stderr.on('data', keep);
-  const exited = new Promise((resolve) => child.once('exit', (code, signal) => resolve({ code, signal })));
-  const baseURL = `http://127.0.0.1:${port}`;
-  const stop = async () => {
-    if (child.exitCode === null && child.signalCode === null) child.kill('SIGTERM');
-    const timer = setTimeout(() => child.kill('SIGKILL'), 20_000);
-    const exit = await exited;
-    clearTimeout(timer);
-    return exit;
-  };
-  process.once('exit', () => child.kill('SIGKILL'));
-  const deadline = Date.now() + 120_000;
-  for (;;) {
-    if (child.exitCode !== null) throw new Error(`The server exited while starting:\n${log.slice(-4000)}`);
-    try {
-      if ((await fetch(`${baseURL}/api/health`)).ok) break;
-    } catch {
-      // not up yet
-    }
-    if (Date.now() > deadline) {
-      await stop();
-      throw new Error(`The server did not start within 120 s:\n${log.slice(-4000)}`);
-    }
-    await new Promise((resolve) => setTimeout(resolve, 200));
-  }
-  return { baseURL, pid: child.pid, stop, log: () => log };
 }
 
 /** The project, one design per client and the shared design, made before the clock starts. */
@@ -156,11 +93,12 @@ async function main() {
       `a sign-in every ${opts.signInEveryS} s (limit ${loginLimit}/min), think time ${opts.thinkMs} ms; ` +
       `${cpus().length} CPUs, load average ${loadavg()[0].toFixed(2)}`,
   );
-  const dataDir = mkdtempSync(join(tmpdir(), 'tacet-load-'));
+  // Our own data folder: the database is read after the server has stopped.
+  const dataDir = tempFolder('tacet-load-');
   let server;
   let http;
   try {
-    server = await startServer(dataDir, loginLimit);
+    server = await startServer({ dataDir, env: { TACET_LOGIN_LIMIT_PER_MINUTE: String(loginLimit) } });
     http = createHttpClient(server.baseURL, { maxSockets: opts.clients + 5 });
     const setup = await setUp(http, opts.clients);
 
@@ -233,7 +171,7 @@ async function main() {
       if (process.exitCode) console.error(server.log().slice(-4000));
       await server.stop();
     }
-    rmSync(dataDir, { recursive: true, force: true });
+    await cleanUp();
   }
 }
 

@@ -2,28 +2,11 @@
 // runs selections and saves a design of their own with its version; from time to time all of
 // them save one shared design at the same moment.
 import { performance } from 'node:perf_hooks';
+import { DEMO_ACCOUNTS, DEMO_PASSWORD, tagOfInput, taggedInput } from '../harness/fixtures.mjs';
 
-export const DEMO_PASSWORD = 'tacet-demo';
-export const ENGINEER = 'engineer@tacet.test';
+export const ENGINEER = DEMO_ACCOUNTS.engineer;
 
 const MOUNT_TYPES = ['elastomer_pad', 'elastomer_mount', 'open_spring', 'housed_spring', 'restrained_spring'];
-
-/** A valid design input whose first mass carries `tag` (500 + tag kg), so a stored row tells which save wrote it. */
-export function taggedInput(tag) {
-  return {
-    components: [{ name: 'Machine', massKg: 500 + tag, cg: { x: 0, y: 0, z: 0.4 } }],
-    mountPoints: [
-      { label: 'A', x: 0.8, y: 0.45, z: 0 },
-      { label: 'B', x: 0.8, y: -0.45, z: 0 },
-      { label: 'C', x: -0.8, y: 0.45, z: 0 },
-      { label: 'D', x: -0.8, y: -0.45, z: 0 },
-    ],
-    operating: { speedRpm: 1480, orders: [1, 2], lineFrequencyHz: 50 },
-    criteria: { minIsolationPct: 90, minUtilization: 0.5, maxUtilization: 1.0 },
-  };
-}
-
-export const tagOfInput = (input) => input.components[0].massKg - 500;
 
 const pick = (list) => list[Math.floor(Math.random() * list.length)];
 const sleep = (ms) => new Promise((resolve) => setTimeout(resolve, ms));
