@@ -2,7 +2,7 @@
 import { describe, expect, it } from 'vitest';
 import { checkOwnDesigns, checkSharedDesign } from '../../tools/load/invariants.mjs';
 import { rampStart } from '../../tools/load/scenario.mjs';
-import { judgeLatency, Recorder, percentile, TARGETS } from '../../tools/load/stats.mjs';
+import { judgeLatency, Recorder, percentile, slowestKind, TARGETS } from '../../tools/load/stats.mjs';
 
 describe('percentile (nearest rank)', () => {
   // Worked examples of the nearest-rank method in the Wikipedia article "Percentile" (from memory).
@@ -60,6 +60,14 @@ describe('load-test ramp and targets', () => {
     const row = { kind: 'all', count: 1, perSecond: 1, p50: 1, p95: 1, statuses: {} };
     expect(judgeLatency({ ...row, p99: 299.9, max: 999.9 }).map((t) => t.met)).toEqual([true, true]);
     expect(judgeLatency({ ...row, p99: 300, max: 1000 }).map((t) => t.met)).toEqual([false, false]);
+  });
+
+  it('names the kind that holds the maximum and the largest maximum of the others', () => {
+    const recorder = new Recorder();
+    recorder.record('sign-in', 1400, 200);
+    recorder.record('save', 300, 200);
+    recorder.record('search', 500, 200);
+    expect(slowestKind(recorder.summary(1))).toEqual({ kind: 'sign-in', max: 1400, othersMax: 500 });
   });
 });
 

@@ -118,6 +118,16 @@ export function judgeLatency(overall) {
 }
 
 /**
+ * Which kind of request holds the maximum, and the largest maximum of the other kinds (ms), so
+ * a report can say what one slow kind (e.g. the deliberately slow sign-in) does to the total.
+ * @param {SummaryRow[]} rows per kind, 'all' ignored
+ */
+export function slowestKind(rows) {
+  const kinds = rows.filter((r) => r.kind !== 'all' && Number.isFinite(r.max)).sort((a, b) => b.max - a.max);
+  return { kind: kinds[0]?.kind, max: kinds[0]?.max ?? NaN, othersMax: kinds[1]?.max ?? NaN };
+}
+
+/**
  * The summary as a fixed-width table.
  * @param {SummaryRow[]} rows
  */
