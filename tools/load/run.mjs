@@ -10,7 +10,8 @@
 // target is reported, not failed (timings on a shared machine vary).
 //
 //   node tools/load/run.mjs [--duration 60] [--clients 50] [--ramp S] [--race-every 5] [--sign-in-every 3] [--think 0]
-//   (or TACET_LOAD_DURATION / TACET_LOAD_CLIENTS / TACET_LOAD_RAMP). Needs `npm run build` first.
+//   (or TACET_LOAD_DURATION / TACET_LOAD_CLIENTS / TACET_LOAD_RAMP; TACET_LOAD_SERVER_NODE_ARGS for the
+//   server's node, e.g. '--cpu-prof --cpu-prof-dir=/tmp/prof'). Needs `npm run build` first.
 //
 // Why a ramp: Node (libuv ≥ 1.45, Node 20) accepts one new connection per turn of its event loop.
 // A saturated server's turn is long (it serves every open connection that has a request ready),
@@ -24,7 +25,7 @@ import { join } from 'node:path';
 import { performance } from 'node:perf_hooks';
 import Database from 'better-sqlite3';
 import { DEMO_PASSWORD, tagOfInput, taggedInput } from '../harness/fixtures.mjs';
-import { cleanUp, startServer, tempFolder } from '../harness/server.mjs';
+import { cleanUp, nodeArgsFrom, startServer, tempFolder } from '../harness/server.mjs';
 import { createHttpClient } from './http-client.mjs';
 import { checkOwnDesigns, checkSharedDesign } from './invariants.mjs';
 import { ENGINEER, RaceRounds, SignInSchedule, rampStart, runVirtualClient } from './scenario.mjs';
@@ -123,7 +124,12 @@ async function main() {
   let server;
   let http;
   try {
-    server = await startServer({ dataDir, env: { TACET_LOGIN_LIMIT_PER_MINUTE: String(loginLimit) } });
+    server = await startServer({
+      dataDir,
+      env: { TACET_LOGIN_LIMIT_PER_MINUTE: String(loginLimit) },
+      // e.g. TACET_LOAD_SERVER_NODE_ARGS='--cpu-prof --cpu-prof-dir=/tmp/prof' to profile the server under load
+      nodeArgs: nodeArgsFrom(process.env.TACET_LOAD_SERVER_NODE_ARGS),
+    });
     http = createHttpClient(server.baseURL, { maxSockets: opts.clients + 5 });
     const setup = await setUp(http, opts.clients);
 
