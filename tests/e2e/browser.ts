@@ -3,11 +3,12 @@ import { join } from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { chromium, type Browser, type Page } from 'playwright-core';
 import { inject } from 'vitest';
+import { DEMO_PASSWORD } from '../../tools/harness/fixtures.mjs';
+
+export { DEMO_PASSWORD };
 
 /** Screenshots land here (ignored by git); look at them after a run. */
 export const SCREENSHOT_DIR = fileURLToPath(new URL('../../test-results/e2e/', import.meta.url));
-
-export const DEMO_PASSWORD = 'tacet-demo';
 
 export function baseURL(): string {
   return inject('baseURL');

@@ -1,7 +1,7 @@
 import { spawnSync } from 'node:child_process';
 import { existsSync } from 'node:fs';
 import type { TestProject } from 'vitest/node';
-import { startServer } from './server-process';
+import { startServer } from '../../tools/harness/server.mjs';
 
 const CHROMIUM = process.env.TACET_CHROMIUM ?? '/usr/bin/chromium';
 
@@ -26,7 +26,9 @@ function ensureChromium(): void {
 /** One shared demo server for all browser tests. */
 export default async function setup(project: TestProject): Promise<() => Promise<void>> {
   ensureChromium();
-  const server = await startServer();
+  const server = await startServer({ web: true, label: 'e2e' });
   project.provide('baseURL', server.baseURL);
-  return server.stop;
+  return async () => {
+    await server.stop();
+  };
 }

@@ -1,10 +1,13 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { startServer, type RunningServer } from './server-process';
+import { startServer as startBuiltServer, type TacetServer } from '../../tools/harness/server.mjs';
+
+/** A server of its own (the shared one allows many sign-ins), web client included. */
+const startServer = (env: Record<string, string>) => startBuiltServer({ web: true, label: 'e2e', env });
 
 // The login throttle runs only in the real server (jest loads a stub of @nestjs/throttler,
 // see packages/server/test/stubs), so it is checked here over HTTP.
 describe('login rate limit (real server)', () => {
-  let server: RunningServer;
+  let server: TacetServer;
   beforeAll(async () => {
     server = await startServer({ TACET_LOGIN_LIMIT_PER_MINUTE: '5' });
   });
@@ -22,7 +25,7 @@ describe('login rate limit (real server)', () => {
       });
       statuses.push(res.status);
       if (res.status === 429) {
-        const body = await res.json();
+        const body = (await res.json()) as { statusCode: number; message: unknown };
         expect(body.statusCode).toBe(429);
         expect(typeof body.message).toBe('string');
       }
@@ -44,7 +47,7 @@ describe('login rate limit (real server)', () => {
     expect(await page.text()).toContain('<div id="root"');
     const api = await fetch(`${server.baseURL}/api/no-such-route`);
     expect(api.status).toBe(404);
-    expect((await api.json()).statusCode).toBe(404);
+    expect(((await api.json()) as { statusCode: number }).statusCode).toBe(404);
   });
 });
 
@@ -52,13 +55,13 @@ describe('login rate limit (real server)', () => {
 // limit counts per client address from X-Forwarded-For; without it the header is ignored, so a
 // client cannot dodge the limit by inventing addresses.
 describe('login rate limit behind a load balancer (real server)', () => {
-  const attempt = (server: RunningServer, forwardedFor: string) =>
+  const attempt = (server: TacetServer, forwardedFor: string) =>
     fetch(`${server.baseURL}/api/auth/login`, {
       method: 'POST',
       headers: { 'content-type': 'application/json', 'x-forwarded-for': forwardedFor },
       body: JSON.stringify({ email: 'engineer@tacet.test', password: 'wrong-password' }),
     }).then((res) => res.status);
-  const servers: RunningServer[] = [];
+  const servers: TacetServer[] = [];
   afterAll(async () => {
     for (const server of servers) await server.stop();
   });

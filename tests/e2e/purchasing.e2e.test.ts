@@ -1,6 +1,7 @@
 import type { Browser, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { baseURL, DEMO_PASSWORD, launch, newPage, outsideRequests, screenshot, signIn } from './browser';
+import { signIn as signInThroughApi } from '../../tools/harness/fixtures.mjs';
+import { baseURL, launch, newPage, outsideRequests, screenshot, signIn } from './browser';
 
 // The demo data (PRODUCT.md "Demo"): project "North Loop Chilled Water Plant" with a draft
 // "CHW pump P-3 skid" by engineer@tacet.test, mounts already chosen. The other browser tests
@@ -12,10 +13,10 @@ const DEMO_DRAFT = 'CHW pump P-3 skid';
 /** Shares no words with the demo designs' names, so their links stay unique on the project page. */
 const DRAFT = `Purchasing walk-through ${Date.now().toString(36)}`;
 
-async function apiCall<T>(token: string | null, method: string, path: string, body?: unknown): Promise<T> {
+async function apiCall<T>(token: string, method: string, path: string, body?: unknown): Promise<T> {
   const response = await fetch(new URL(`/api${path}`, baseURL()), {
     method,
-    headers: { 'content-type': 'application/json', ...(token ? { authorization: `Bearer ${token}` } : {}) },
+    headers: { 'content-type': 'application/json', authorization: `Bearer ${token}` },
     body: body === undefined ? undefined : JSON.stringify(body),
   });
   const text = await response.text();
@@ -32,10 +33,7 @@ interface Candidate {
 
 /** A copy of the demo draft P-3 under its own name, with the best passing candidate chosen. */
 async function createDraftCopy(): Promise<void> {
-  const { accessToken: token } = await apiCall<{ accessToken: string }>(null, 'POST', '/auth/login', {
-    email: 'engineer@tacet.test',
-    password: DEMO_PASSWORD,
-  });
+  const token = await signInThroughApi(baseURL(), 'engineer@tacet.test');
   const projects = await apiCall<{ id: number; name: string }[]>(token, 'GET', '/projects');
   const project = projects.find((candidate) => candidate.name === PROJECT)!;
   const designs = await apiCall<{ id: number; name: string }[]>(token, 'GET', `/projects/${project.id}/designs`);

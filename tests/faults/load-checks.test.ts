@@ -1,9 +1,8 @@
 // The arithmetic and the invariants of the load test (tools/load), checked without a server.
 import { describe, expect, it } from 'vitest';
-// @ts-expect-error plain JavaScript module without types
 import { checkOwnDesigns, checkSharedDesign } from '../../tools/load/invariants.mjs';
-// @ts-expect-error plain JavaScript module without types
-import { Recorder, percentile } from '../../tools/load/stats.mjs';
+import { rampStart } from '../../tools/load/scenario.mjs';
+import { judgeLatency, Recorder, percentile, slowestKind, TARGETS } from '../../tools/load/stats.mjs';
 
 describe('percentile (nearest rank)', () => {
   // Worked examples of the nearest-rank method in the Wikipedia article "Percentile" (from memory).
@@ -33,6 +32,42 @@ describe('Recorder', () => {
     expect(rows[0]).toMatchObject({ count: 2, perSecond: 1, p50: 10, max: 30, statuses: { 200: 1, 409: 1 } });
     expect(rows[1]).toMatchObject({ count: 2, p50: 20, max: 20 }); // a transport error is counted, not timed
     expect(rows[2]).toMatchObject({ count: 4, perSecond: 2, max: 30, statuses: { 200: 2, 409: 1, 'transport error': 1 } });
+  });
+
+  it('summarises the part of the run after the ramp on its own', () => {
+    const recorder = new Recorder();
+    recorder.record('search', 3000, 200, { at: 100, newConnection: true }); // sent during the ramp
+    recorder.record('search', 40, 200, { at: 900 });
+    recorder.record('save', 60, 200, { at: 1000, newConnection: true });
+    recorder.record('save', 20, 200, { at: 1500 });
+    const whole = recorder.summary(2);
+    const after = recorder.summary(1, { from: 1000 });
+    expect(whole[whole.length - 1]).toMatchObject({ count: 4, max: 3000 });
+    expect(after.map((r) => r.kind)).toEqual(['save', 'all']);
+    expect(after[1]).toMatchObject({ count: 2, perSecond: 2, p50: 20, max: 60 });
+    expect(recorder.newConnections()).toMatchObject({ count: 2, max: 3000, lastAt: 1000 });
+  });
+});
+
+describe('load-test ramp and targets', () => {
+  it('starts the clients evenly over the ramp, the last before its end', () => {
+    expect([0, 1, 2, 3, 49].map((i) => rampStart(i, 50, 5000))).toEqual([0, 100, 200, 300, 4900]);
+    expect(rampStart(0, 1, 0)).toBe(0);
+  });
+
+  it('judges p99 under 300 ms and the maximum under 1 s, both strictly', () => {
+    expect(TARGETS).toEqual({ clients: 50, p99Ms: 300, maxMs: 1000 });
+    const row = { kind: 'all', count: 1, perSecond: 1, p50: 1, p95: 1, statuses: {} };
+    expect(judgeLatency({ ...row, p99: 299.9, max: 999.9 }).map((t) => t.met)).toEqual([true, true]);
+    expect(judgeLatency({ ...row, p99: 300, max: 1000 }).map((t) => t.met)).toEqual([false, false]);
+  });
+
+  it('names the kind that holds the maximum and the largest maximum of the others', () => {
+    const recorder = new Recorder();
+    recorder.record('sign-in', 1400, 200);
+    recorder.record('save', 300, 200);
+    recorder.record('search', 500, 200);
+    expect(slowestKind(recorder.summary(1))).toEqual({ kind: 'sign-in', max: 1400, othersMax: 500 });
   });
 });
 

@@ -21,7 +21,7 @@ import Database from 'better-sqlite3';
 import { parse } from 'csv-parse';
 import { writeDemoCatalog } from '../catalog/generate-demo-catalog.js';
 import { reportFigure } from './bench-result.js';
-import { memoryOf, mib, ms, startServer, uploadCatalog } from './catalog-bench-support.js';
+import { memoryOf, mib, ms, startServer, uploadCatalog } from './server-bench-support.js';
 
 const ROWS = 100_000;
 const TARGET_MS = 5000;

@@ -18,8 +18,9 @@ import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import Database from 'better-sqlite3';
 import { writeDemoCatalog } from '../catalog/generate-demo-catalog.js';
+import { signIn } from '../harness/fixtures.mjs';
 import { reportFigure } from './bench-result.js';
-import { ms, percentile, startServer, uploadCatalog } from './catalog-bench-support.js';
+import { ms, percentile, startServer, uploadCatalog } from './server-bench-support.js';
 
 const ROWS = 100_000;
 const WARMUP = 20;
@@ -100,7 +101,7 @@ async function main(): Promise<void> {
   try {
     const csvPath = join(work, 'catalog-100k.csv');
     await writeDemoCatalog(csvPath, 7, ROWS);
-    const importer = await startServerToken(server.url);
+    const importer = await signIn(server.url, 'catalog@tacet.test'); // the import needs that role
     const imported = await uploadCatalog({ ...server, token: importer }, csvPath);
     if (imported.status !== 200) throw new Error(`import failed: ${imported.status}`);
 
@@ -169,16 +170,6 @@ function serverTiming(response: Response): number {
   const match = /app;dur=([\d.]+)/.exec(response.headers.get('server-timing') ?? '');
   if (!match) throw new Error('no Server-Timing header: build the server first (npm run build)');
   return Number(match[1]);
-}
-
-/** A catalog manager's token on the same server (the import needs that role). */
-async function startServerToken(url: string): Promise<string> {
-  const response = await fetch(`${url}/api/auth/login`, {
-    method: 'POST',
-    headers: { 'Content-Type': 'application/json' },
-    body: JSON.stringify({ email: 'catalog@tacet.test', password: 'tacet-demo' }),
-  });
-  return ((await response.json()) as { accessToken: string }).accessToken;
 }
 
 await main();

@@ -11,7 +11,7 @@
 import { createRequire } from 'node:module';
 import PDFDocument from 'pdfkit';
 import { reportFigure } from './bench-result.js';
-import { median, ms, percentile, startServer } from './catalog-bench-support.js';
+import { median, ms, percentile, startServer } from './server-bench-support.js';
 
 const arg = (name: string, fallback: number): number => {
   const i = process.argv.indexOf(`--${name}`);

@@ -13,12 +13,9 @@
  * points and 3 disturbing frequencies, one request at a time. The server and the temp folder are
  * removed at the end.
  */
-import { spawn, type ChildProcess } from 'node:child_process';
-import { existsSync, mkdtempSync, readFileSync, rmSync, statSync } from 'node:fs';
-import { createServer } from 'node:net';
+import { mkdtempSync, readFileSync, rmSync, statSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
-import { fileURLToPath } from 'node:url';
 import Database from 'better-sqlite3';
 import {
   createLevellingWorkspace,
@@ -31,10 +28,11 @@ import {
   type AssemblyComponent,
 } from '../../packages/vibration/src/index.js';
 import { writeDemoCatalog } from '../catalog/generate-demo-catalog.js';
+import { signIn } from '../harness/fixtures.mjs';
+import type { TacetServer } from '../harness/server.mjs';
 import { reportFigure } from './bench-result.js';
+import { percentile, startBenchServer } from './server-bench-support.js';
 
-const ROOT = fileURLToPath(new URL('../..', import.meta.url));
-const SERVER = join(ROOT, 'packages/server/dist/main.js');
 const arg = (name: string, fallback: number): number => {
   const i = process.argv.indexOf(`--${name}`);
   return i > 0 ? Number(process.argv[i + 1]) : fallback;
@@ -84,45 +82,7 @@ const SCENARIOS: Scenario[] = [
 const CRITERIA = { minIsolationPct: 90, minUtilization: 0.5, maxUtilization: 1.0 };
 
 // ---- helpers ----------------------------------------------------------------------------------
-const percentile = (values: number[], p: number): number => {
-  const s = [...values].sort((a, b) => a - b);
-  return s[Math.min(s.length - 1, Math.ceil((p / 100) * s.length) - 1)];
-};
 const fmt = (ms: number) => ms.toFixed(1).padStart(7);
-
-async function freePort(): Promise<number> {
-  return new Promise((resolve, reject) => {
-    const server = createServer();
-    server.once('error', reject);
-    server.listen(0, '127.0.0.1', () => {
-      const { port } = server.address() as { port: number };
-      server.close(() => resolve(port));
-    });
-  });
-}
-
-async function waitForHealth(base: string, child: ChildProcess): Promise<void> {
-  for (let i = 0; i < 600; i++) {
-    if (child.exitCode !== null) throw new Error(`server exited with ${child.exitCode}`);
-    try {
-      if ((await fetch(`${base}/api/health`)).ok) return;
-    } catch {
-      // not listening yet
-    }
-    await new Promise((r) => setTimeout(r, 100));
-  }
-  throw new Error('server did not start');
-}
-
-async function login(base: string, email: string): Promise<string> {
-  const response = await fetch(`${base}/api/auth/login`, {
-    method: 'POST',
-    headers: { 'content-type': 'application/json' },
-    body: JSON.stringify({ email, password: 'tacet-demo' }),
-  });
-  if (!response.ok) throw new Error(`login ${email}: ${response.status}`);
-  return ((await response.json()) as { accessToken: string }).accessToken;
-}
 
 // ---- the bare baseline: prepared statement + the same math inline --------------------------
 /** The columns the server reads, in its order (CATALOG_COLUMNS of the selection engine). */
@@ -299,12 +259,8 @@ function statement(db: Database.Database): Database.Statement {
 
 // ---- run --------------------------------------------------------------------------------------
 async function main(): Promise<void> {
-  if (!existsSync(SERVER)) {
-    console.error(`No built server at ${SERVER}: run  npm run build -w @tacet/vibration && npm run build -w @tacet/server`);
-    process.exit(1);
-  }
   const dir = mkdtempSync(join(tmpdir(), 'tacet-selection-bench-'));
-  let child: ChildProcess | undefined;
+  let app: TacetServer | undefined;
   try {
     const csv = join(dir, 'bench-mounts.csv');
     const t0 = performance.now();
@@ -313,23 +269,11 @@ async function main(): Promise<void> {
       `catalog: ${written} invented mounts (${(statSync(csv).size / 1e6).toFixed(1)} MB) in ${((performance.now() - t0) / 1000).toFixed(1)} s`,
     );
 
-    const port = await freePort();
-    const base = `http://127.0.0.1:${port}`;
-    // e.g. TACET_BENCH_SERVER_NODE_ARGS='--cpu-prof --cpu-prof-dir=/tmp/prof' to profile the server
-    const nodeArgs = (process.env.TACET_BENCH_SERVER_NODE_ARGS ?? '').split(' ').filter(Boolean);
-    child = spawn(process.execPath, [...nodeArgs, SERVER], {
-      env: {
-        ...process.env,
-        PORT: String(port),
-        TACET_DEMO: 'true',
-        TACET_DATA_DIR: join(dir, 'data'),
-        TACET_WEB_DIST: join(dir, 'no-web'),
-      },
-      stdio: ['ignore', 'ignore', 'inherit'],
-    });
-    await waitForHealth(base, child);
+    // The data folder inside ours, so --keep keeps the database too.
+    app = await startBenchServer({ dataDir: join(dir, 'data') });
+    const base = app.baseURL;
 
-    const manager = await login(base, 'catalog@tacet.test');
+    const manager = await signIn(base, 'catalog@tacet.test');
     const form = new FormData();
     form.append('file', new Blob([readFileSync(csv)], { type: 'text/csv' }), 'bench-mounts.csv');
     const t1 = performance.now();
@@ -344,7 +288,7 @@ async function main(): Promise<void> {
       `import: ${importBody.accepted} accepted, ${importBody.rejected} rejected, ${importBody.created} created in ${((performance.now() - t1) / 1000).toFixed(1)} s`,
     );
 
-    const engineer = await login(base, 'engineer@tacet.test');
+    const engineer = await signIn(base, 'engineer@tacet.test');
     const bodies = SCENARIOS.map((s) =>
       JSON.stringify({
         components: s.components,
@@ -416,10 +360,7 @@ async function main(): Promise<void> {
         (sink === -1 ? '' : ''),
     );
   } finally {
-    if (child && child.exitCode === null) {
-      child.kill('SIGTERM');
-      await new Promise((r) => child!.once('exit', r));
-    }
+    await app?.stop();
     if (!process.argv.includes('--keep')) rmSync(dir, { recursive: true, force: true });
     else console.log(`kept ${dir}`);
   }

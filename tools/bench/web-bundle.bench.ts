@@ -9,7 +9,7 @@
  *   npx tsx tools/bench/web-bundle.bench.ts
  */
 import { chromium, type Page } from 'playwright-core';
-import { startServer } from '../../tests/e2e/server-process.js';
+import { startServer } from '../harness/server.mjs';
 import { reportFigure } from './bench-result.js';
 
 const TARGET_KB = 350;
@@ -27,7 +27,7 @@ async function scripts(page: Page): Promise<{ count: number; encoded: number; de
   });
 }
 
-const server = await startServer();
+const server = await startServer({ web: true, label: 'bench' });
 const browser = await chromium.launch({
   executablePath: process.env.TACET_CHROMIUM ?? '/usr/bin/chromium',
   headless: true,

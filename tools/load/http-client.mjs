@@ -1,3 +1,4 @@
+// @ts-check
 // A small JSON client over node:http with keep-alive connections (no package needed), timing
 // each request from sending to the last byte of the answer.
 import http from 'node:http';
@@ -15,10 +16,12 @@ export function createHttpClient(baseURL, { maxSockets }) {
    * @param {string} method
    * @param {string} path
    * @param {{ token?: string, body?: unknown, timeoutMs?: number }} [options]
-   * @returns {Promise<{ status: number, body: any, ms: number }>} rejects on a transport error
+   * @returns {Promise<{ status: number, body: any, ms: number, at: number, newConnection: boolean }>} rejects on a
+   *   transport error; `at`: when it was sent (performance.now() ms); `newConnection`: it opened a connection
    */
   function request(method, path, { token, body, timeoutMs = 60_000 } = {}) {
     const payload = body === undefined ? undefined : Buffer.from(JSON.stringify(body));
+    /** @type {Record<string, string>} */
     const headers = { accept: 'application/json' };
     if (token) headers.authorization = `Bearer ${token}`;
     if (payload) {
@@ -28,6 +31,7 @@ export function createHttpClient(baseURL, { maxSockets }) {
     return new Promise((resolve, reject) => {
       const started = performance.now();
       const req = http.request({ host: hostname, port, method, path, headers, agent, timeout: timeoutMs }, (res) => {
+        /** @type {Buffer[]} */
         const chunks = [];
         res.on('data', (chunk) => chunks.push(chunk));
         res.on('error', reject);
@@ -42,7 +46,7 @@ export function createHttpClient(baseURL, { maxSockets }) {
               // keep the text
             }
           }
-          resolve({ status: res.statusCode ?? 0, body: parsed, ms });
+          resolve({ status: res.statusCode ?? 0, body: parsed, ms, at: started, newConnection: !req.reusedSocket });
         });
       });
       req.on('timeout', () => req.destroy(new Error(`no answer within ${timeoutMs} ms`)));

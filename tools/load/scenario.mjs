@@ -2,28 +2,20 @@
 // runs selections and saves a design of their own with its version; from time to time all of
 // them save one shared design at the same moment.
 import { performance } from 'node:perf_hooks';
+import { DEMO_ACCOUNTS, DEMO_PASSWORD, tagOfInput, taggedInput } from '../harness/fixtures.mjs';
 
-export const DEMO_PASSWORD = 'tacet-demo';
-export const ENGINEER = 'engineer@tacet.test';
+export const ENGINEER = DEMO_ACCOUNTS.engineer;
 
 const MOUNT_TYPES = ['elastomer_pad', 'elastomer_mount', 'open_spring', 'housed_spring', 'restrained_spring'];
 
-/** A valid design input whose first mass carries `tag` (500 + tag kg), so a stored row tells which save wrote it. */
-export function taggedInput(tag) {
-  return {
-    components: [{ name: 'Machine', massKg: 500 + tag, cg: { x: 0, y: 0, z: 0.4 } }],
-    mountPoints: [
-      { label: 'A', x: 0.8, y: 0.45, z: 0 },
-      { label: 'B', x: 0.8, y: -0.45, z: 0 },
-      { label: 'C', x: -0.8, y: 0.45, z: 0 },
-      { label: 'D', x: -0.8, y: -0.45, z: 0 },
-    ],
-    operating: { speedRpm: 1480, orders: [1, 2], lineFrequencyHz: 50 },
-    criteria: { minIsolationPct: 90, minUtilization: 0.5, maxUtilization: 1.0 },
-  };
-}
-
-export const tagOfInput = (input) => input.components[0].massKg - 500;
+/**
+ * When client `index` (0 … clients − 1) starts, in ms after the first: evenly over the ramp,
+ * the first at 0 and the last one step before its end.
+ * @param {number} index
+ * @param {number} clients
+ * @param {number} rampMs
+ */
+export const rampStart = (index, clients, rampMs) => (index * rampMs) / clients;
 
 const pick = (list) => list[Math.floor(Math.random() * list.length)];
 const sleep = (ms) => new Promise((resolve) => setTimeout(resolve, ms));
@@ -40,19 +32,24 @@ export class RaceRounds {
     this.maxWaitMs = maxWaitMs;
     this.round = 0;
     this.barriers = new Map();
-    this.timer = null;
+    this.delay = undefined;
+    this.timer = undefined;
   }
 
-  start() {
-    this.timer = setInterval(() => {
-      this.round++;
-      let release;
-      const released = new Promise((resolve) => (release = resolve));
-      this.barriers.set(this.round, { arrived: 0, release, released });
-    }, this.everyMs);
+  /** Announces a round every `everyMs`, the first `afterMs + everyMs` from now (after the ramp). */
+  start(afterMs = 0) {
+    this.delay = setTimeout(() => {
+      this.timer = setInterval(() => {
+        this.round++;
+        let release;
+        const released = new Promise((resolve) => (release = resolve));
+        this.barriers.set(this.round, { arrived: 0, release, released });
+      }, this.everyMs);
+    }, afterMs);
   }
 
   stop() {
+    clearTimeout(this.delay);
     clearInterval(this.timer);
     for (const barrier of this.barriers.values()) barrier.release();
   }
@@ -88,24 +85,31 @@ export class SignInSchedule {
 }
 
 /**
- * Runs one virtual client until `ctx.deadline` (performance.now() ms).
+ * Runs one virtual client from `startAt` until `ctx.deadline` (performance.now() ms).
  * ctx: { http, recorder, problem(kind, message), deadline, token, signIns, thinkMs, races, supplierIds,
- *        sharedDesignId, sharedAttempts[], nextTag() }
+ *        sharedDesignId, sharedAttempts[], nextTag(), answered() — called once, when the first answer arrives }
  * own: { client, designId, acknowledged: { version, name, tag } } — updated in place.
  */
-export async function runVirtualClient(ctx, own) {
+export async function runVirtualClient(ctx, own, startAt = 0) {
+  let answered = false;
   const call = async (kind, method, path, { token, body, expect }) => {
+    const sent = performance.now();
     try {
       const reply = await ctx.http.request(method, path, { token, body });
-      ctx.recorder.record(kind, reply.ms, reply.status);
+      ctx.recorder.record(kind, reply.ms, reply.status, reply);
       if (!expect.includes(reply.status)) {
         ctx.problem(kind, `${method} ${path} answered ${reply.status}: ${JSON.stringify(reply.body).slice(0, 300)}`);
       }
       return reply;
     } catch (error) {
-      ctx.recorder.record(kind, null, 'transport error');
+      ctx.recorder.record(kind, null, 'transport error', { at: sent });
       ctx.problem(kind, `${method} ${path}: ${error instanceof Error ? error.message : String(error)}`);
       return null;
+    } finally {
+      if (!answered) {
+        answered = true;
+        ctx.answered();
+      }
     }
   };
 
@@ -122,6 +126,9 @@ export async function runVirtualClient(ctx, own) {
   // in again when the sign-in schedule hands it a turn.
   let token = ctx.token;
   let joined = 0;
+  // The ramp: each client starts at its own moment, so connections open one after another as
+  // people arrive, not all in the same instant (see tools/load/run.mjs).
+  await sleep(startAt - performance.now());
 
   while (performance.now() < ctx.deadline) {
     if (ctx.signIns.take()) {

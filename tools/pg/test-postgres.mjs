@@ -7,8 +7,8 @@
 // `runuser -u postgres --`.
 import { spawnSync } from 'node:child_process';
 import { chownSync, existsSync, mkdirSync, readdirSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
-import { createServer } from 'node:net';
 import { join } from 'node:path';
+import { freePort } from '../harness/server.mjs';
 
 /** Thrown when no PostgreSQL server binaries are installed. */
 export class PostgresNotInstalledError extends Error {
@@ -58,19 +58,6 @@ function pgRun(bin, program, args, cwd) {
     throw new Error(`${program} ${args.join(' ')} failed (exit ${r.status}):\n${r.stdout ?? ''}${r.stderr ?? ''}`);
   }
   return r.stdout;
-}
-
-/** A TCP port on 127.0.0.1 that was free a moment ago. */
-function freePort() {
-  return new Promise((resolve, reject) => {
-    const server = createServer();
-    server.unref();
-    server.on('error', reject);
-    server.listen(0, '127.0.0.1', () => {
-      const { port } = server.address();
-      server.close(() => resolve(port));
-    });
-  });
 }
 
 /** The admin URL of the cluster (superuser `postgres`, database `postgres`, no password). */

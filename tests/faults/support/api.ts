@@ -1,7 +1,8 @@
 import { openAsBlob } from 'node:fs';
 import { basename } from 'node:path';
+import { signIn } from '../../../tools/harness/fixtures.mjs';
 
-export const DEMO_PASSWORD = 'tacet-demo';
+export { tagOfInput, taggedInput } from '../../../tools/harness/fixtures.mjs';
 
 export interface Reply<T = unknown> {
   status: number;
@@ -22,14 +23,7 @@ export class Api {
   ) {}
 
   static async signIn(baseURL: string, email: string): Promise<Api> {
-    const res = await fetch(`${baseURL}/api/auth/login`, {
-      method: 'POST',
-      headers: { 'content-type': 'application/json' },
-      body: JSON.stringify({ email, password: DEMO_PASSWORD }),
-    });
-    if (res.status !== 200) throw new Error(`sign-in as ${email} answered ${res.status}: ${await res.text()}`);
-    const { accessToken } = (await res.json()) as { accessToken: string };
-    return new Api(baseURL, accessToken);
+    return new Api(baseURL, await signIn(baseURL, email));
   }
 
   /** The same account against another server (the token stays valid: the secret is in the data folder). */
@@ -80,24 +74,4 @@ export class Api {
     const text = await res.text();
     return { status: res.status, headers: res.headers, body: text ? JSON.parse(text) : null, text };
   }
-}
-
-/** A small, valid design input whose first mass carries `tag`, so a stored design tells which save it came from. */
-export function taggedInput(tag: number): Record<string, unknown> {
-  return {
-    components: [{ name: 'Machine', massKg: 500 + tag, cg: { x: 0, y: 0, z: 0.4 } }],
-    mountPoints: [
-      { label: 'A', x: 0.8, y: 0.45, z: 0 },
-      { label: 'B', x: 0.8, y: -0.45, z: 0 },
-      { label: 'C', x: -0.8, y: 0.45, z: 0 },
-      { label: 'D', x: -0.8, y: -0.45, z: 0 },
-    ],
-    operating: { speedRpm: 1480, orders: [1, 2], lineFrequencyHz: 50 },
-    criteria: { minIsolationPct: 90, minUtilization: 0.5, maxUtilization: 1.0 },
-  };
-}
-
-/** The tag of a design input made by `taggedInput`. */
-export function tagOfInput(input: { components: Array<{ massKg: number }> }): number {
-  return input.components[0].massKg - 500;
 }
