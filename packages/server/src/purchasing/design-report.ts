@@ -248,7 +248,7 @@ function asBuiltSection(
     body(
       `Natural frequency ${fmt(o.identified.naturalFrequencyHz, 3)} Hz measured against ${fmt(o.predicted.naturalFrequencyHz, 3)} Hz predicted ` +
         `(${o.predicted.mode} mode${o.predicted.source === 'bounce estimate' ? ', uncoupled estimate' : ''}): ${sign}${fmt(o.deviationPct, 1)} % ` +
-        `(tolerance ${fmt(v.tolerancePct, 0)} %) — ${VERDICT_WORDS[o.verdict]}.`,
+        `(tolerance ±${fmt(v.tolerancePct, 0)} %) — ${VERDICT_WORDS[o.verdict]}.`,
     );
     body(
       `Damping ratio ${o.identified.dampingRatio === null ? 'not identified' : o.identified.dampingRatio.toFixed(3)}; ` +

@@ -12,7 +12,7 @@ export interface ImpactRecord {
   accelerationMS2: ArrayLike<number>;
 }
 
-/** Options of {@link impactFrf}; the defaults are those of docs/engineering/tap-test.md §3. */
+/** Options of {@link impactFrf}; the defaults are those of docs/engineering/tap-test.md §2–§3. */
 export interface ImpactFrfOptions {
   /** Force that starts a hit, as a fraction of the largest force in the record (default 0.1). */
   triggerLevel?: number;
