@@ -38,7 +38,7 @@ function measured(zeta: number, kind: 'receptance' | 'mobility' | 'accelerance',
 }
 
 describe('tap-test identification from synthetic FRFs of a known one-mass system (sdofFrf, closed form)', () => {
-  it('ζ_hp closed form: the half-power method reads ζ a little high (ISOLATION_REFERENCE-style check of the bias)', () => {
+  it('ζ_hp closed form: the half-power method reads ζ a little high (docs/engineering/tap-test.md §5)', () => {
     expect(halfPowerBias(0.05) / 0.05 - 1).toBeCloseTo(0.005, 3);
     expect(halfPowerBias(0.1) / 0.1 - 1).toBeCloseTo(0.021, 3);
   });
