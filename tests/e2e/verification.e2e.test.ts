@@ -45,7 +45,9 @@ describe('as-built verification (Measured tab)', () => {
     await upload.getByRole('button', { name: 'Upload and compare' }).click();
 
     await page.getByText('Browser test: the demo record again').waitFor();
-    await expect.poll(() => page.getByRole('table', { name: 'Measurements' }).locator('tbody tr').count(), { timeout: 15_000 }).toBe(before + 1);
+    await expect
+      .poll(() => page.getByRole('table', { name: 'Measurements' }).locator('tbody tr').count(), { timeout: 15_000 })
+      .toBe(before + 1);
     const result = page.getByTestId('verification-result');
     expect((await result.getByTestId('verification-verdict').textContent())?.trim()).toBe('Agrees with the design');
     const deviation = (await result.getByTestId('frequency-deviation').textContent()) ?? '';

@@ -4,7 +4,15 @@ import type { Response } from 'supertest';
 import { createDesign, createRfqCatalog, releaseDesign } from './factories/review.factory.js';
 import { createTestApp, type TestApp } from './utils/create-test-app.js';
 import { changedTables, dbFingerprint, type DbFingerprint } from './utils/db-fingerprint.js';
-import { EDGE_NUMBERS, FORMULA_PAYLOADS, NUMERIC_TEXT, UNICODE_SAMPLES, fuzzParameters, fuzzTimeout, FUZZ_RUNS } from './utils/hostile-input.js';
+import {
+  EDGE_NUMBERS,
+  FORMULA_PAYLOADS,
+  NUMERIC_TEXT,
+  UNICODE_SAMPLES,
+  fuzzParameters,
+  fuzzTimeout,
+  FUZZ_RUNS,
+} from './utils/hostile-input.js';
 
 /**
  * Hostile files and fields against the tap-test upload (POST /api/designs/:id/verifications):
@@ -27,7 +35,9 @@ function cleanRows(header: string[]): string[][] {
   const c = sdofFrf({ massKg: 1000, stiffnessNPerM: 4.2e5, damping: viscousDamping(0.05) }, 'receptance', f);
   return Array.from(f, (fi, i) => {
     if (header[0] === 'time_s') return [String(i / 64), String(i === 3 ? 500 : 0), String(Math.sin(i))];
-    return header[1] === 'real' ? [String(fi), String(c.re[i]), String(c.im[i])] : [String(fi), String(c.magnitude[i]), String(c.phaseDeg[i])];
+    return header[1] === 'real'
+      ? [String(fi), String(c.re[i]), String(c.im[i])]
+      : [String(fi), String(c.magnitude[i]), String(c.phaseDeg[i])];
   });
 }
 
@@ -40,7 +50,8 @@ const hostileCell: fc.Arbitrary<string> = fc.oneof(
   fc.string({ maxLength: 12 }),
 );
 
-const fieldValue = (valid: string[]) => fc.oneof({ weight: 4, arbitrary: fc.constantFrom(...valid) }, { weight: 1, arbitrary: hostileCell });
+const fieldValue = (valid: string[]) =>
+  fc.oneof({ weight: 4, arbitrary: fc.constantFrom(...valid) }, { weight: 1, arbitrary: hostileCell });
 
 /** `arbitrary` about once in `every` runs, null otherwise. */
 const sometimes = <T>(arbitrary: fc.Arbitrary<T>, every: number): fc.Arbitrary<T | null> =>
@@ -98,7 +109,8 @@ describe('hostile tap-test uploads (e2e)', () => {
   }, 120_000);
   afterAll(() => t?.close());
 
-  const count = async () => (await t.http().get(`/api/designs/${designId}/verifications`).set('Authorization', `Bearer ${token}`)).body.length as number;
+  const count = async () =>
+    (await t.http().get(`/api/designs/${designId}/verifications`).set('Authorization', `Bearer ${token}`)).body.length as number;
 
   /** The invariants of every answer (see the file comment). */
   const check = async (response: Response, what: string, before: number): Promise<void> => {
@@ -107,10 +119,14 @@ describe('hostile tap-test uploads (e2e)', () => {
     const now = await dbFingerprint(t);
     if (response.status >= 400) {
       const body = response.body as { statusCode?: unknown; message?: unknown; errors?: unknown };
-      if (body.statusCode !== response.status || typeof body.message !== 'string') throw new Error(`4xx without the JSON error shape: ${detail}`);
+      if (body.statusCode !== response.status || typeof body.message !== 'string')
+        throw new Error(`4xx without the JSON error shape: ${detail}`);
       if (response.status === 422) {
         const errors = body.errors as Array<Record<string, unknown>>;
-        if (!Array.isArray(errors) || errors.some((e) => typeof e.row !== 'number' || typeof e.column !== 'string' || typeof e.message !== 'string')) {
+        if (
+          !Array.isArray(errors) ||
+          errors.some((e) => typeof e.row !== 'number' || typeof e.column !== 'string' || typeof e.message !== 'string')
+        ) {
           throw new Error(`422 without (row, column, message) problems: ${detail}`);
         }
       }
@@ -136,7 +152,11 @@ describe('hostile tap-test uploads (e2e)', () => {
       await fc.assert(
         fc.asyncProperty(fc.uint8Array({ maxLength: 3000 }), fc.constantFrom('frf', 'impact'), async (bytes, kind) => {
           const before = await count();
-          await check(await send(Buffer.from(bytes), { kind, quantity: kind === 'frf' ? 'receptance' : null }), `${bytes.length} random bytes`, before);
+          await check(
+            await send(Buffer.from(bytes), { kind, quantity: kind === 'frf' ? 'receptance' : null }),
+            `${bytes.length} random bytes`,
+            before,
+          );
         }),
         fuzzParameters(),
       );

@@ -20,10 +20,17 @@ const MASS = 1000;
 const PREDICTED_HZ = Math.sqrt(4e5 / MASS) / (2 * Math.PI);
 
 /** An FRF file of a one-mass system (sdofFrf, closed form) with natural frequency `fnHz`. */
-function frfCsv(fnHz: number, options: { form?: 'complex' | 'polar'; kind?: 'receptance' | 'mobility' | 'accelerance'; zeta?: number } = {}): string {
+function frfCsv(
+  fnHz: number,
+  options: { form?: 'complex' | 'polar'; kind?: 'receptance' | 'mobility' | 'accelerance'; zeta?: number } = {},
+): string {
   const kind = options.kind ?? 'receptance';
   const f = linSpace(0.2, 20, 991);
-  const c = sdofFrf({ massKg: MASS, stiffnessNPerM: MASS * (2 * Math.PI * fnHz) ** 2, damping: viscousDamping(options.zeta ?? 0.04) }, kind, f);
+  const c = sdofFrf(
+    { massKg: MASS, stiffnessNPerM: MASS * (2 * Math.PI * fnHz) ** 2, damping: viscousDamping(options.zeta ?? 0.04) },
+    kind,
+    f,
+  );
   const polar = options.form === 'polar';
   const lines = [polar ? 'frequency_hz,magnitude,phase_deg' : 'frequency_hz,real,imag'];
   for (let i = 0; i < f.length; i++) {
@@ -97,7 +104,11 @@ describe('as-built verification (e2e)', () => {
 
   it('an engineer uploads a receptance FRF 5 % above the prediction: 201 with the contract fields; every role reads it', async () => {
     const fn = PREDICTED_HZ * 1.05;
-    const response = await upload(released.id, 'engineer', frfCsv(fn), { kind: 'frf', quantity: 'receptance', note: 'Hammer at the CG, vertical' }).expect(201);
+    const response = await upload(released.id, 'engineer', frfCsv(fn), {
+      kind: 'frf',
+      quantity: 'receptance',
+      note: 'Hammer at the CG, vertical',
+    }).expect(201);
     const v = response.body;
     expect(v).toMatchObject({
       id: expect.any(Number),
@@ -132,7 +143,10 @@ describe('as-built verification (e2e)', () => {
     expect(stiff.body.notes.join(' ')).toMatch(/short-circuit.*rigid pipe.*snubber/);
     const loose = await upload(released.id, 'engineer', csv, { kind: 'frf', quantity: 'accelerance', tolerancePct: '25' }).expect(201);
     expect(loose.body.verdict).toBe('agrees');
-    const soft = await upload(released.id, 'engineer', frfCsv(PREDICTED_HZ * 0.8, { kind: 'mobility' }), { kind: 'frf', quantity: 'mobility' }).expect(201);
+    const soft = await upload(released.id, 'engineer', frfCsv(PREDICTED_HZ * 0.8, { kind: 'mobility' }), {
+      kind: 'frf',
+      quantity: 'mobility',
+    }).expect(201);
     expect(soft.body.verdict).toBe('softer');
     expect(soft.body.notes.join(' ')).toMatch(/flexible support.*heavier machine/);
   });
@@ -234,11 +248,23 @@ describe('as-built verification (e2e)', () => {
       expect(tooBig.body.message).toMatch(/larger than 10 MB/);
       const excel = await upload(released.id, 'engineer', frfCsv(3), { kind: 'frf', quantity: 'receptance' }, 'tap.xlsx').expect(422);
       expect(excel.body.message).toMatch(/must be a CSV file/);
-      const none = await t.http().post(`/api/designs/${released.id}/verifications`).set(auth('engineer')).field('kind', 'frf').field('quantity', 'mobility').expect(400);
+      const none = await t
+        .http()
+        .post(`/api/designs/${released.id}/verifications`)
+        .set(auth('engineer'))
+        .field('kind', 'frf')
+        .field('quantity', 'mobility')
+        .expect(400);
       expect(none.body.message).toMatch(/multipart field "file"/);
       const noQuantity = await upload(released.id, 'engineer', frfCsv(3), { kind: 'frf' }).expect(400);
-      expect(noQuantity.body.errors).toEqual([{ field: 'quantity', message: expect.stringMatching(/accelerance, mobility or receptance/) }]);
-      const tolerance = await upload(released.id, 'engineer', frfCsv(3), { kind: 'frf', quantity: 'receptance', tolerancePct: 'ten' }).expect(400);
+      expect(noQuantity.body.errors).toEqual([
+        { field: 'quantity', message: expect.stringMatching(/accelerance, mobility or receptance/) },
+      ]);
+      const tolerance = await upload(released.id, 'engineer', frfCsv(3), {
+        kind: 'frf',
+        quantity: 'receptance',
+        tolerancePct: 'ten',
+      }).expect(400);
       expect(tolerance.body.errors[0].field).toBe('tolerancePct');
       await upload(released.id, 'engineer', frfCsv(3), { kind: 'frf', quantity: 'receptance', tolerancePct: '90' }).expect(400);
       await upload(released.id, 'engineer', frfCsv(3), { kind: 'modal', quantity: 'receptance' }).expect(400);

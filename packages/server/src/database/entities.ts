@@ -11,4 +11,16 @@ import { User } from '../users/user.entity.js';
 import { Verification } from '../verifications/verification.entity.js';
 
 /** Every entity. A feature's entity is imported and appended here (and in its module's forFeature). */
-export const ENTITIES = [User, Supplier, Mount, CatalogImport, Project, Design, DesignTransition, Rfq, RfqEvent, CatalogRevision, Verification];
+export const ENTITIES = [
+  User,
+  Supplier,
+  Mount,
+  CatalogImport,
+  Project,
+  Design,
+  DesignTransition,
+  Rfq,
+  RfqEvent,
+  CatalogRevision,
+  Verification,
+];

@@ -238,7 +238,9 @@ function asBuiltSection(
   for (const v of verifications.slice(0, REPORT_VERIFICATIONS)) {
     const o = v.outcome;
     const sign = o.deviationPct >= 0 ? '+' : '';
-    const processing = o.processing ? `, ${o.processing.hitsAveraged} of ${o.processing.hitsFound} hits averaged` : `, ${o.measured.quantity}`;
+    const processing = o.processing
+      ? `, ${o.processing.hitsAveraged} of ${o.processing.hitsFound} hits averaged`
+      : `, ${o.measured.quantity}`;
     doc.moveDown(0.4);
     doc
       .font('heading')

@@ -224,9 +224,13 @@ export function analyseTapTest({ data, quantity, prediction, tolerancePct }: Ana
   const comparison = verificationVerdict(fn, mode.frequencyHz, tolerancePct);
   const notes = verdictNotes(comparison.verdict, mode.mode, tolerancePct);
   if (prediction.source === 'bounce estimate') {
-    notes.push('The design predicts only the uncoupled bounce (vertical) estimate: compare a vertical measurement near the centre of gravity.');
+    notes.push(
+      'The design predicts only the uncoupled bounce (vertical) estimate: compare a vertical measurement near the centre of gravity.',
+    );
   } else if (mode.mode !== 'bounce') {
-    notes.push(`The nearest predicted mode is ${mode.mode}${mode.coupled ? ' (coupled)' : ''}: check that the hit and the accelerometer were in that direction.`);
+    notes.push(
+      `The nearest predicted mode is ${mode.mode}${mode.coupled ? ' (coupled)' : ''}: check that the hit and the accelerometer were in that direction.`,
+    );
   }
   if (id.dampingRatio !== undefined && prediction.damping) {
     const predictedZeta = prediction.damping.model === 'viscous' ? prediction.damping.value : prediction.damping.value / 2;

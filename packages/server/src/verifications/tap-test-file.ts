@@ -181,7 +181,8 @@ function headerProblems(names: string[], kind: VerificationKind, add: (p: RowPro
       add({
         row: 1,
         column,
-        message: complex || polar ? 'missing column' : `missing column: give ${listOf(FRF_COLUMNS.complex)} or ${listOf(FRF_COLUMNS.polar)}`,
+        message:
+          complex || polar ? 'missing column' : `missing column: give ${listOf(FRF_COLUMNS.complex)} or ${listOf(FRF_COLUMNS.polar)}`,
       });
     }
   }
@@ -237,7 +238,11 @@ function impactData(rows: number[][], add: (p: RowProblem) => void, lastRow: num
     }
   }
   if (uneven > 10) {
-    add({ row: 0, column: 'time_s', message: `${uneven} samples in all are off the constant-rate grid (rows up to ${lastRow}); resample the record at a constant rate` });
+    add({
+      row: 0,
+      column: 'time_s',
+      message: `${uneven} samples in all are off the constant-rate grid (rows up to ${lastRow}); resample the record at a constant rate`,
+    });
   }
   return {
     kind: 'impact',

@@ -1,10 +1,4 @@
-import {
-  Catch,
-  HttpStatus,
-  PayloadTooLargeException,
-  type ArgumentsHost,
-  type ExceptionFilter,
-} from '@nestjs/common';
+import { Catch, HttpStatus, PayloadTooLargeException, type ArgumentsHost, type ExceptionFilter } from '@nestjs/common';
 import type { Response } from 'express';
 import { UPLOAD_OPTIONS } from '../catalog/import/upload.js';
 

@@ -47,7 +47,8 @@ export class VerificationsController {
         [TAP_TEST_UPLOAD_FIELD]: {
           type: 'string',
           format: 'binary',
-          description: 'CSV: frequency_hz,real,imag or frequency_hz,magnitude,phase_deg (kind=frf); time_s,force_n,acceleration_m_s2 (kind=impact)',
+          description:
+            'CSV: frequency_hz,real,imag or frequency_hz,magnitude,phase_deg (kind=frf); time_s,force_n,acceleration_m_s2 (kind=impact)',
         },
         kind: { type: 'string', enum: [...VERIFICATION_KINDS] },
         quantity: { type: 'string', enum: [...FRF_QUANTITIES], description: 'Required for kind=frf (SI units)' },
@@ -57,7 +58,10 @@ export class VerificationsController {
     },
   })
   @ApiCreatedResponse({ type: VerificationDto, description: 'Analysed and recorded' })
-  @ApiUnprocessableEntityResponse({ type: TapTestRejectedDto, description: 'Nothing stored: the file has problems, or no resonance can be identified' })
+  @ApiUnprocessableEntityResponse({
+    type: TapTestRejectedDto,
+    description: 'Nothing stored: the file has problems, or no resonance can be identified',
+  })
   @ApiConflictResponse({ description: 'The design is not released or superseded' })
   @ApiPayloadTooLargeResponse({ description: `The file is larger than ${MAX_TAP_TEST_MB} MB` })
   @ApiBadRequestResponse({ description: 'No file, or bad fields' })

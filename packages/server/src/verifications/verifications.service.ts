@@ -72,10 +72,16 @@ export class VerificationsService {
       });
     }
     if (dto.kind === 'frf' && !dto.quantity) {
-      throw new BadRequestException({ message: 'Validation failed', errors: [{ field: 'quantity', message: VERIFICATION_MESSAGES.quantityNeeded }] });
+      throw new BadRequestException({
+        message: 'Validation failed',
+        errors: [{ field: 'quantity', message: VERIFICATION_MESSAGES.quantityNeeded }],
+      });
     }
     if (dto.kind === 'impact' && dto.quantity && dto.quantity !== 'accelerance') {
-      throw new BadRequestException({ message: 'Validation failed', errors: [{ field: 'quantity', message: VERIFICATION_MESSAGES.quantityForImpact }] });
+      throw new BadRequestException({
+        message: 'Validation failed',
+        errors: [{ field: 'quantity', message: VERIFICATION_MESSAGES.quantityForImpact }],
+      });
     }
     const saved = await this.record(design, user, file.path, {
       kind: dto.kind,

@@ -34,7 +34,13 @@ function measured(zeta: number, kind: 'receptance' | 'mobility' | 'accelerance',
     const b = noise * normal();
     [re[i], im[i]] = [re[i] * a - im[i] * b, re[i] * b + im[i] * a];
   }
-  return { frequencyHz: Array.from(f), re, im, magnitude: re.map((r, i) => Math.hypot(r, im[i])), phaseDeg: re.map((r, i) => (Math.atan2(im[i], r) * 180) / Math.PI) };
+  return {
+    frequencyHz: Array.from(f),
+    re,
+    im,
+    magnitude: re.map((r, i) => Math.hypot(r, im[i])),
+    phaseDeg: re.map((r, i) => (Math.atan2(im[i], r) * 180) / Math.PI),
+  };
 }
 
 describe('tap-test identification from synthetic FRFs of a known one-mass system (sdofFrf, closed form)', () => {
@@ -89,7 +95,10 @@ describe('tap-test identification from synthetic FRFs of a known one-mass system
 
   it('a window correction as large as the damping leaves ζ unidentified and says why; no peak → poor, no figures', () => {
     const data = measured(0.02, 'accelerance', 0, 1);
-    const id = identifyTapTest({ kind: 'accelerance', frequencyHz: data.frequencyHz, re: data.re, im: data.im }, { exponentialTimeConstantS: 0.5 });
+    const id = identifyTapTest(
+      { kind: 'accelerance', frequencyHz: data.frequencyHz, re: data.re, im: data.im },
+      { exponentialTimeConstantS: 0.5 },
+    );
     expect(id.dampingRatio).toBeUndefined();
     expect(id.naturalFrequencyHz).toBe(id.peakFrequencyHz);
     expect(id.warnings.map((w) => w.code)).toEqual(['window-correction-too-large']);

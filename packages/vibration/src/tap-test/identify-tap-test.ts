@@ -158,7 +158,8 @@ export function identifyTapTest(frf: MeasuredFrf, options: TapTestIdentification
     const lower = result.halfPowerHz?.lower ?? fp;
     const upper = result.halfPowerHz?.upper ?? fp;
     let inBand = keep.filter((i) => frf.frequencyHz[i] >= lower && frf.frequencyHz[i] <= upper);
-    if (inBand.length === 0) inBand = [...keep].sort((a, b) => Math.abs(frf.frequencyHz[a] - fp) - Math.abs(frf.frequencyHz[b] - fp)).slice(0, 1);
+    if (inBand.length === 0)
+      inBand = [...keep].sort((a, b) => Math.abs(frf.frequencyHz[a] - fp) - Math.abs(frf.frequencyHz[b] - fp)).slice(0, 1);
     const mean = inBand.reduce((sum, i) => sum + options.coherence![i], 0) / inBand.length;
     result.meanCoherence = mean;
     if (mean < MIN_COHERENCE) {

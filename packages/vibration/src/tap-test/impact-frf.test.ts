@@ -27,7 +27,10 @@ function worstError(frf: ImpactFrf, zeta: number, sigma = 0): number {
   frf.frequencyHz.forEach((f, i) => {
     if (f < FN / 2 || f > 2 * FN) return;
     const h = trueAccelerance(zeta, f, sigma);
-    worst = Math.max(worst, (abs(subtract(complex(frf.re[i], frf.im[i]), h) as MathComplex) as unknown as number) / (abs(h) as unknown as number));
+    worst = Math.max(
+      worst,
+      (abs(subtract(complex(frf.re[i], frf.im[i]), h) as MathComplex) as unknown as number) / (abs(h) as unknown as number),
+    );
   });
   return worst;
 }
@@ -69,7 +72,12 @@ describe('H1 from a raw impact record (synthetic, simulated with RK4 from a know
       const frf = impactFrf(record(zeta, zeta < 0.05 ? { durationS: 5 * 40 } : {}));
       const id = identifyTapTest(
         { kind: 'accelerance', frequencyHz: frf.frequencyHz, re: frf.re, im: frf.im },
-        { massKg: M, exponentialTimeConstantS: frf.exponentialTimeConstantS, recordDurationS: frf.blockDurationS, coherence: frf.coherence },
+        {
+          massKg: M,
+          exponentialTimeConstantS: frf.exponentialTimeConstantS,
+          recordDurationS: frf.blockDurationS,
+          coherence: frf.coherence,
+        },
       );
       expect(id.naturalFrequencyHz! / FN - 1, `ζ = ${zeta}`).toBeLessThan(0.01);
       expect(Math.abs(id.naturalFrequencyHz! / FN - 1)).toBeLessThan(0.01);

@@ -14,7 +14,11 @@ describe('comparing a measured natural frequency with the prediction', () => {
   });
 
   it('verdict at the default ±10 %: agrees inside, stiffer above, softer below; stiffness deviation (f_m/f_p)² − 1 at the same mass', () => {
-    expect(verificationVerdict(5.2, 5)).toEqual({ deviationPct: expect.closeTo(4, 12), stiffnessDeviationPct: expect.closeTo(8.16, 12), verdict: 'agrees' });
+    expect(verificationVerdict(5.2, 5)).toEqual({
+      deviationPct: expect.closeTo(4, 12),
+      stiffnessDeviationPct: expect.closeTo(8.16, 12),
+      verdict: 'agrees',
+    });
     expect(verificationVerdict(5.5, 5).verdict).toBe('agrees'); // exactly +10 % still agrees
     expect(verificationVerdict(5.51, 5).verdict).toBe('stiffer');
     expect(verificationVerdict(4.49, 5).verdict).toBe('softer');

@@ -26,13 +26,19 @@ export class CreateVerificationDto {
   @ApiPropertyOptional({
     enum: FRF_QUANTITIES,
     enumName: 'FrfQuantity',
-    description: 'What an FRF file holds (SI): accelerance m/s²/N, mobility m/s/N, receptance m/N. Required for kind=frf; a raw record gives accelerance',
+    description:
+      'What an FRF file holds (SI): accelerance m/s²/N, mobility m/s/N, receptance m/N. Required for kind=frf; a raw record gives accelerance',
   })
   @IsOptional()
   @IsIn(FRF_QUANTITIES, { message: 'quantity must be accelerance, mobility or receptance' })
   quantity?: FrfQuantity;
 
-  @ApiPropertyOptional({ description: 'Accepted deviation of the natural frequency, % (default 10)', minimum: 1, maximum: 50, default: DEFAULT_TOLERANCE_PCT })
+  @ApiPropertyOptional({
+    description: 'Accepted deviation of the natural frequency, % (default 10)',
+    minimum: 1,
+    maximum: 50,
+    default: DEFAULT_TOLERANCE_PCT,
+  })
   @IsOptional()
   @Transform(toNumber)
   @IsNumber({ allowNaN: false, allowInfinity: false }, { message: 'tolerancePct must be a number of per cent' })
@@ -67,7 +73,11 @@ export class HalfPowerBandDto {
 
 export class IdentifiedFiguresDto {
   @ApiProperty({ description: 'Undamped natural frequency fn = f_p/√(1 − 2ζ²), Hz' }) naturalFrequencyHz: number;
-  @ApiProperty({ type: Number, nullable: true, description: 'ζ after the exponential-window correction; null when it could not be identified' })
+  @ApiProperty({
+    type: Number,
+    nullable: true,
+    description: 'ζ after the exponential-window correction; null when it could not be identified',
+  })
   dampingRatio: number | null;
   @ApiProperty({ description: 'k = m·(2π·fn)² with the design mass, N/m (an apparent stiffness)' }) stiffnessNPerM: number;
   @ApiProperty({ description: 'Receptance peak, Hz' }) peakFrequencyHz: number;
@@ -89,10 +99,12 @@ export class PredictedFiguresDto {
   @ApiProperty({ description: 'The design mode nearest the measured one, Hz' }) naturalFrequencyHz: number;
   @ApiProperty({ example: 'bounce', description: 'The mode: its dominant motion (surge, sway, bounce, roll, pitch, yaw)' }) mode: string;
   @ApiProperty() coupled: boolean;
-  @ApiProperty({ enum: ['rigid-body modes', 'bounce estimate'], enumName: 'PredictionSource' }) source: 'rigid-body modes' | 'bounce estimate';
+  @ApiProperty({ enum: ['rigid-body modes', 'bounce estimate'], enumName: 'PredictionSource' }) source:
+    'rigid-body modes' | 'bounce estimate';
   @ApiProperty({ description: 'Design mass, kg' }) massKg: number;
   @ApiProperty({ description: 'm·(2π·f)² for the predicted mode, N/m' }) stiffnessNPerM: number;
-  @ApiProperty({ type: PredictedDampingDto, nullable: true, description: 'The chosen mounts’ catalog damping' }) damping: PredictedDampingDto | null;
+  @ApiProperty({ type: PredictedDampingDto, nullable: true, description: 'The chosen mounts’ catalog damping' })
+  damping: PredictedDampingDto | null;
 }
 
 export class FrequencyBandDto {

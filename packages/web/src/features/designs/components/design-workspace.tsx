@@ -146,8 +146,21 @@ interface EditorProps {
 }
 
 function DesignEditor(props: EditorProps) {
-  const { base, newer, readOnlyText, canRun, tab, onTab, conflict, failure, reloading, choosing, renderSelection, renderReview, renderMeasured } =
-    props;
+  const {
+    base,
+    newer,
+    readOnlyText,
+    canRun,
+    tab,
+    onTab,
+    conflict,
+    failure,
+    reloading,
+    choosing,
+    renderSelection,
+    renderReview,
+    renderMeasured,
+  } = props;
   const readOnly = readOnlyText !== null;
   const formik = useFormikContext<DesignFormValues>();
   const { values, errors, dirty, submitCount, resetForm, isSubmitting } = formik;
@@ -279,7 +292,9 @@ function DesignEditor(props: EditorProps) {
           panel={<CriteriaPanel readOnly={readOnly} suppliers={supplierList} />}
         />
         <Tab id="selection" title={<TabTitle text="Mount selection" problems={false} />} panel={<>{renderSelection(context)}</>} />
-        {renderMeasured ? <Tab id="measured" title={<TabTitle text="Measured" problems={false} />} panel={<>{renderMeasured()}</>} /> : null}
+        {renderMeasured ? (
+          <Tab id="measured" title={<TabTitle text="Measured" problems={false} />} panel={<>{renderMeasured()}</>} />
+        ) : null}
       </Tabs>
       {readOnly ? null : <UnsavedChangesGuard dirty={dirty} />}
     </Form>

@@ -18,8 +18,7 @@ export interface UploadVerificationInput {
 
 /** What the server answered: the recorded measurement, or a refused file with its problems (422, nothing stored). */
 export type UploadOutcome =
-  | { status: 201; verification: Verification }
-  | { status: 422; message: string; problems: TapTestProblem[]; fileName: string };
+  { status: 201; verification: Verification } | { status: 422; message: string; problems: TapTestProblem[]; fileName: string };
 
 const UPLOAD_TIMEOUT_MS = 2 * 60_000;
 

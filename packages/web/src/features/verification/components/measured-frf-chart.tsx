@@ -61,7 +61,8 @@ export const MeasuredFrfChart = memo(function MeasuredFrfChart(props: MeasuredFr
   const units = useUnits();
   // length per force converts as the inverse of stiffness (N/mm ↔ mm/N, lbf/in ↔ in/lbf)
   const [force, length] = units.label('stiffness').split('/');
-  const unit = quantity === 'receptance' ? `${length}/${force}` : quantity === 'mobility' ? `(${length}/s)/${force}` : `(${length}/s²)/${force}`;
+  const unit =
+    quantity === 'receptance' ? `${length}/${force}` : quantity === 'mobility' ? `(${length}/s)/${force}` : `(${length}/s²)/${force}`;
   const toDisplay = useMemo(() => (value: number) => 1 / units.toDisplay('stiffness', 1 / value), [units]);
 
   const [fMin, fMax] = useMemo(() => {
@@ -131,7 +132,13 @@ export const MeasuredFrfChart = memo(function MeasuredFrfChart(props: MeasuredFr
 
   return (
     <div className="tc-frf-panels">
-      <VictoryChart scale={{ x: 'log', y: 'log' }} domain={{ x: [fMin, fMax], y: data.range }} width={width} height={HEIGHT} padding={PADDING}>
+      <VictoryChart
+        scale={{ x: 'log', y: 'log' }}
+        domain={{ x: [fMin, fMax], y: data.range }}
+        width={width}
+        height={HEIGHT}
+        padding={PADDING}
+      >
         {xAxis()}
         <VictoryAxis
           dependentAxis

@@ -99,7 +99,10 @@ describe('Measured tab', () => {
     });
     await user.selectOptions(within(form).getByLabelText('The file holds'), 'frf');
     await user.selectOptions(within(form).getByLabelText('Quantity (SI)'), 'receptance');
-    await user.upload(within(form).getByLabelText('Measurement file'), new File(['frequency_hz,real,imag\n'], 'frf.csv', { type: 'text/csv' }));
+    await user.upload(
+      within(form).getByLabelText('Measurement file'),
+      new File(['frequency_hz,real,imag\n'], 'frf.csv', { type: 'text/csv' }),
+    );
     await user.click(within(form).getByRole('button', { name: 'Upload and compare' }));
     const problems = await within(form).findByRole('table', { name: 'Problems in the file' });
     expect(problems).toHaveTextContent('frequency_hz');

@@ -41,7 +41,11 @@ function VerificationResult({ verification: v }: { verification: Verification })
       ? hystereticDamping(v.predicted.damping.value)
       : viscousDamping(v.predicted.damping.value)
     : undefined;
-  const predictedZeta = v.predicted.damping ? (v.predicted.damping.model === 'viscous' ? v.predicted.damping.value : v.predicted.damping.value / 2) : null;
+  const predictedZeta = v.predicted.damping
+    ? v.predicted.damping.model === 'viscous'
+      ? v.predicted.damping.value
+      : v.predicted.damping.value / 2
+    : null;
   const modeText = `${v.predicted.mode} mode${v.predicted.coupled ? ' (coupled)' : ''}${v.predicted.source === 'bounce estimate' ? ', uncoupled estimate' : ''}`;
   return (
     <section className="tc-verification" aria-label="Measured against predicted" data-testid="verification-result">
@@ -145,7 +149,15 @@ function VerificationResult({ verification: v }: { verification: Verification })
   );
 }
 
-function MeasurementHistory({ items, selectedId, onSelect }: { items: Verification[]; selectedId: number; onSelect: (id: number) => void }) {
+function MeasurementHistory({
+  items,
+  selectedId,
+  onSelect,
+}: {
+  items: Verification[];
+  selectedId: number;
+  onSelect: (id: number) => void;
+}) {
   return (
     <HTMLTable compact striped interactive className="tc-verification-history" aria-label="Measurements">
       <thead>
@@ -168,12 +180,19 @@ function MeasurementHistory({ items, selectedId, onSelect }: { items: Verificati
               {v.fileName} <span className="tc-muted">({KIND_LABELS[v.kind]})</span>
             </td>
             <td>
-              {formatNumber(v.identified.naturalFrequencyHz, 3)} Hz <span className="tc-muted">vs {formatNumber(v.predicted.naturalFrequencyHz, 3)}</span>
+              {formatNumber(v.identified.naturalFrequencyHz, 3)} Hz{' '}
+              <span className="tc-muted">vs {formatNumber(v.predicted.naturalFrequencyHz, 3)}</span>
             </td>
             <td>{signed(v.deviationPct)}</td>
             <td>{VERDICT_LABELS[v.verdict]}</td>
             <td>
-              <Button small variant="minimal" text={v.id === selectedId ? 'Shown' : 'Show'} disabled={v.id === selectedId} onClick={() => onSelect(v.id)} />
+              <Button
+                small
+                variant="minimal"
+                text={v.id === selectedId ? 'Shown' : 'Show'}
+                disabled={v.id === selectedId}
+                onClick={() => onSelect(v.id)}
+              />
             </td>
           </tr>
         ))}

@@ -47,7 +47,14 @@ export function TapTestUploadForm({ designId, onRecorded }: TapTestUploadFormPro
     setFailure(null);
     setOutcome(null);
     try {
-      const result = await upload.mutateAsync({ designId, file, kind, quantity: kind === 'frf' ? quantity : undefined, tolerancePct: tolerance, note });
+      const result = await upload.mutateAsync({
+        designId,
+        file,
+        kind,
+        quantity: kind === 'frf' ? quantity : undefined,
+        tolerancePct: tolerance,
+        note,
+      });
       setOutcome(result);
       if (result.status === 201) {
         setFile(null);
@@ -89,7 +96,12 @@ export function TapTestUploadForm({ designId, onRecorded }: TapTestUploadFormPro
         </FormGroup>
         {kind === 'frf' ? (
           <FormGroup label="Quantity (SI)" labelFor="tap-test-quantity">
-            <HTMLSelect id="tap-test-quantity" fill value={quantity} onChange={(event) => setQuantity(event.currentTarget.value as FrfQuantity)}>
+            <HTMLSelect
+              id="tap-test-quantity"
+              fill
+              value={quantity}
+              onChange={(event) => setQuantity(event.currentTarget.value as FrfQuantity)}
+            >
               {QUANTITY_OPTIONS.map((option) => (
                 <option key={option.value} value={option.value}>
                   {option.label}
