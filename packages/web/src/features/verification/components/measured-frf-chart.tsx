@@ -39,10 +39,7 @@ const LAST_PADDING = { ...PADDING, bottom: 52 };
 const PHASE_TICKS = [-180, -90, 0, 90, 180];
 const MEASURED_STYLE = { data: { fill: CHART_COLORS.marker, opacity: 0.85 } } as const;
 const PREDICTED_STYLE = { data: { stroke: CHART_COLORS.curve, strokeWidth: 2, strokeDasharray: '7,4' } } as const;
-const MEASURED_FN_STYLE = {
-  data: { stroke: CHART_COLORS.marker, strokeWidth: 1, strokeDasharray: '2,3' },
-  labels: { fontFamily: "'Noto Sans', system-ui, sans-serif", fontSize: 10.5, fill: CHART_COLORS.marker },
-} as const;
+const MEASURED_FN_STYLE = { data: { stroke: CHART_COLORS.marker, strokeWidth: 1, strokeDasharray: '2,3' } } as const;
 
 const QUANTITY_WORDS: Record<FrfQuantity, string> = { accelerance: 'accelerance', mobility: 'mobility', receptance: 'receptance' };
 
@@ -98,8 +95,10 @@ export const MeasuredFrfChart = memo(function MeasuredFrfChart(props: MeasuredFr
   }, [frequencyHz, magnitude, phaseDeg, fMin, fMax, massKg, stiffnessNPerM, damping, quantity, toDisplay]);
 
   const xTicks = useMemo(() => oneTwoFive(fMin, fMax), [fMin, fMax]);
+  // offsetY keeps the frequency axis at the bottom of the phase panel, whose range crosses zero
   const xAxis = (label?: string) => (
     <VictoryAxis
+      offsetY={label ? LAST_PADDING.bottom : PADDING.bottom}
       label={label}
       tickValues={xTicks}
       tickFormat={label ? formatTick : () => ''}
@@ -107,7 +106,7 @@ export const MeasuredFrfChart = memo(function MeasuredFrfChart(props: MeasuredFr
       axisLabelComponent={<VictoryLabel dy={4} />}
     />
   );
-  const frequencyLines = (low: number, high: number, labels: boolean) => [
+  const frequencyLines = (low: number, high: number) => [
     <VictoryLine
       key="predicted"
       data={[
@@ -115,8 +114,6 @@ export const MeasuredFrfChart = memo(function MeasuredFrfChart(props: MeasuredFr
         { x: predictedHz, y: high },
       ]}
       style={NATURAL_FREQUENCY_STYLE}
-      labels={labels ? ['', 'predicted'] : undefined}
-      labelComponent={<VictoryLabel dy={-4} textAnchor="end" dx={-3} />}
     />,
     <VictoryLine
       key="measured"
@@ -125,8 +122,6 @@ export const MeasuredFrfChart = memo(function MeasuredFrfChart(props: MeasuredFr
         { x: measuredHz, y: high },
       ]}
       style={MEASURED_FN_STYLE}
-      labels={labels ? ['', 'measured'] : undefined}
-      labelComponent={<VictoryLabel dy={-4} textAnchor="start" dx={3} />}
     />,
   ];
 
@@ -147,7 +142,7 @@ export const MeasuredFrfChart = memo(function MeasuredFrfChart(props: MeasuredFr
           tickFormat={formatTick}
           style={Y_AXIS_STYLE}
         />
-        {frequencyLines(data.range[0], data.range[1], true)}
+        {frequencyLines(data.range[0], data.range[1])}
         <VictoryLine data={data.predictedMagnitude} style={PREDICTED_STYLE} />
         <VictoryScatter data={data.measuredMagnitude} size={1.8} style={MEASURED_STYLE} />
       </VictoryChart>
@@ -160,7 +155,7 @@ export const MeasuredFrfChart = memo(function MeasuredFrfChart(props: MeasuredFr
       >
         {xAxis('Frequency (Hz)')}
         <VictoryAxis dependentAxis label="phase (°)" tickValues={PHASE_TICKS} style={Y_AXIS_STYLE} />
-        {frequencyLines(-180, 180, false)}
+        {frequencyLines(-180, 180)}
         <VictoryLine data={data.predictedPhase} style={PREDICTED_STYLE} />
         <VictoryScatter data={data.measuredPhase} size={1.8} style={MEASURED_STYLE} />
       </VictoryChart>
