@@ -14,6 +14,7 @@ import { ProjectsModule } from './projects/projects.module.js';
 import { SelectionModule } from './selection/selection.module.js';
 import { SuppliersModule } from './suppliers/suppliers.module.js';
 import { UsersModule } from './users/users.module.js';
+import { VerificationsModule } from './verifications/verifications.module.js';
 import { webClientModules } from './web-client.js';
 
 /** The whole application for one resolved configuration (see `loadConfig`). */
@@ -35,6 +36,7 @@ export class AppModule {
         SelectionModule,
         DesignsModule,
         ReviewModule,
+        VerificationsModule,
         PurchasingModule,
         DemoModule,
         ...webClientModules(config.webDist),

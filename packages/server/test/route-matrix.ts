@@ -98,6 +98,10 @@ export const ROUTE_MATRIX: readonly RouteRule[] = [
   { method: 'PATCH', path: '/api/rfqs/:id', access: ['purchaser', 'admin'], body: { status: 'quoted', quotedPrice: 1 } },
   { method: 'POST', path: '/api/rfqs/:id/retry', access: ['purchaser', 'admin'] },
 
+  // as-built verification (tap tests of released and superseded designs; reading follows the design's visibility)
+  { method: 'GET', path: '/api/designs/:id/verifications', access: 'signed-in' },
+  { method: 'POST', path: '/api/designs/:id/verifications', access: ['engineer', 'admin'], body: { kind: 'frf', quantity: 'receptance' } },
+
   // selection (stateless)
   { method: 'POST', path: '/api/selection', access: ['engineer', 'admin'] },
 ];

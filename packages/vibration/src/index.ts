@@ -17,3 +17,4 @@ export * from './assembly/index.js';
 export * from './loads/index.js';
 export * from './modes/index.js';
 export * from './identification/index.js';
+export * from './tap-test/index.js';

@@ -8,6 +8,19 @@ import { DesignTransition } from '../review/design-transition.entity.js';
 import { Project } from '../projects/project.entity.js';
 import { Supplier } from '../suppliers/supplier.entity.js';
 import { User } from '../users/user.entity.js';
+import { Verification } from '../verifications/verification.entity.js';
 
 /** Every entity. A feature's entity is imported and appended here (and in its module's forFeature). */
-export const ENTITIES = [User, Supplier, Mount, CatalogImport, Project, Design, DesignTransition, Rfq, RfqEvent, CatalogRevision];
+export const ENTITIES = [
+  User,
+  Supplier,
+  Mount,
+  CatalogImport,
+  Project,
+  Design,
+  DesignTransition,
+  Rfq,
+  RfqEvent,
+  CatalogRevision,
+  Verification,
+];

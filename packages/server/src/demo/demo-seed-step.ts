@@ -25,4 +25,5 @@ export const DEMO_SEED_ORDER = {
   suppliers: 200,
   catalog: 300,
   projects: 400,
+  verifications: 500,
 } as const;

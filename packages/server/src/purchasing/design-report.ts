@@ -3,6 +3,7 @@ import { hystereticDamping, logSpace, transmissibility, viscousDamping, type Dam
 import PDFDocument from 'pdfkit';
 import type { Design } from '../designs/design.entity.js';
 import type { LabelledFrequency, MountSnapshot } from '../selection/selection.types.js';
+import type { Verification } from '../verifications/verification.entity.js';
 import { bomTotals } from './bom-export.js';
 
 /** The caution every report carries (PRODUCT.md, "Cautions the product shows"). */
@@ -38,6 +39,8 @@ const fmt = (value: number, digits = 1) => value.toFixed(digits);
 export interface ReportOptions {
   disturbingFrequencies: LabelledFrequency[];
   releasedAt: Date | null;
+  /** As-built measurements of the design, newest first (the report lists them when there are any). */
+  verifications?: Verification[];
   /** Uncompressed content streams (tests read the text back). */
   compress?: boolean;
 }
@@ -177,6 +180,7 @@ export function designReportPdf(design: Design, options: ReportOptions): Promise
       for (const reason of candidate.reasons) body(`• ${reason}`);
     }
   }
+  if (options.verifications?.length) asBuiltSection(doc, options.verifications, heading, body);
 
   doc.addPage();
   doc.font('heading').fontSize(16).fillColor('black').text('Bill of materials');
@@ -209,6 +213,56 @@ export function designReportPdf(design: Design, options: ReportOptions): Promise
   pageFooters(doc, `${design.project.name} — ${design.name}, revision ${design.revision}`);
   doc.end();
   return done;
+}
+
+const KIND_WORDS = { frf: 'FRF file', impact: 'raw hammer record' } as const;
+const VERDICT_WORDS = { agrees: 'agrees', stiffer: 'stiffer than predicted', softer: 'softer than predicted' } as const;
+/** Measurements listed in full; older ones are summed up in one line. */
+const REPORT_VERIFICATIONS = 5;
+
+/**
+ * The as-built verification: each tap test with who measured it and when, the identified
+ * figures beside the predicted ones, the verdict, its likely causes and the warnings.
+ */
+function asBuiltSection(
+  doc: PDFKit.PDFDocument,
+  verifications: Verification[],
+  heading: (text: string) => unknown,
+  body: (text: string) => unknown,
+): void {
+  heading('As-built verification (tap tests)');
+  body(
+    'Natural frequency and damping identified from measured frequency responses (peak picking and half-power bandwidth), ' +
+      'compared with the design mode nearest to the measured one. Newest first.',
+  );
+  for (const v of verifications.slice(0, REPORT_VERIFICATIONS)) {
+    const o = v.outcome;
+    const sign = o.deviationPct >= 0 ? '+' : '';
+    const processing = o.processing
+      ? `, ${o.processing.hitsAveraged} of ${o.processing.hitsFound} hits averaged`
+      : `, ${o.measured.quantity}`;
+    doc.moveDown(0.4);
+    doc
+      .font('heading')
+      .fontSize(10)
+      .text(`${v.createdAt.toISOString().slice(0, 10)} — measured by ${v.user.name} — ${v.fileName} (${KIND_WORDS[v.kind]}${processing})`);
+    if (v.note) body(v.note);
+    body(
+      `Natural frequency ${fmt(o.identified.naturalFrequencyHz, 3)} Hz measured against ${fmt(o.predicted.naturalFrequencyHz, 3)} Hz predicted ` +
+        `(${o.predicted.mode} mode${o.predicted.source === 'bounce estimate' ? ', uncoupled estimate' : ''}): ${sign}${fmt(o.deviationPct, 1)} % ` +
+        `(tolerance ±${fmt(v.tolerancePct, 0)} %) — ${VERDICT_WORDS[o.verdict]}.`,
+    );
+    body(
+      `Damping ratio ${o.identified.dampingRatio === null ? 'not identified' : o.identified.dampingRatio.toFixed(3)}; ` +
+        `apparent stiffness ${fmt(o.identified.stiffnessNPerM / 1000, 1)} N/mm against ${fmt(o.predicted.stiffnessNPerM / 1000, 1)} N/mm predicted ` +
+        `(design mass ${fmt(o.predicted.massKg, 0)} kg, ${sign}${fmt(o.stiffnessDeviationPct, 1)} %).`,
+    );
+    for (const note of o.notes) body(`• ${note}`);
+    for (const warning of o.warnings) body(`• Caution: ${warning}`);
+  }
+  if (verifications.length > REPORT_VERIFICATIONS) {
+    body(`${verifications.length - REPORT_VERIFICATIONS} older measurement(s) are on the design page.`);
+  }
 }
 
 function dampingOf(mount: MountSnapshot): Damping | undefined {

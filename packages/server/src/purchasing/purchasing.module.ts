@@ -4,6 +4,7 @@ import { Design } from '../designs/design.entity.js';
 import { DesignsModule } from '../designs/designs.module.js';
 import { ReviewModule } from '../review/review.module.js';
 import { Supplier } from '../suppliers/supplier.entity.js';
+import { VerificationsModule } from '../verifications/verifications.module.js';
 import { PurchasingController } from './purchasing.controller.js';
 import { PurchasingService } from './purchasing.service.js';
 import { RfqEvent } from './rfq-event.entity.js';
@@ -12,7 +13,7 @@ import { RfqsController } from './rfqs.controller.js';
 import { RfqsService } from './rfqs.service.js';
 
 @Module({
-  imports: [TypeOrmModule.forFeature([Rfq, RfqEvent, Supplier, Design]), DesignsModule, ReviewModule],
+  imports: [TypeOrmModule.forFeature([Rfq, RfqEvent, Supplier, Design]), DesignsModule, ReviewModule, VerificationsModule],
   controllers: [PurchasingController, RfqsController],
   providers: [PurchasingService, RfqsService],
 })

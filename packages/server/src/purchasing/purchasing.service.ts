@@ -8,6 +8,7 @@ import { DesignsService } from '../designs/designs.service.js';
 import { ReviewService } from '../review/review.service.js';
 import { designFrequencies } from '../selection/selection-problem.js';
 import type { User } from '../users/user.entity.js';
+import { VerificationsService } from '../verifications/verifications.service.js';
 import { bomCsv, bomTotals, bomXlsx, exportFileName, type BomHeading } from './bom-export.js';
 import { designReportPdf } from './design-report.js';
 import type { PurchasingDesignDto } from './dto/rfq.dto.js';
@@ -36,6 +37,7 @@ export class PurchasingService {
     @InjectRepository(Rfq) private readonly rfqs: Repository<Rfq>,
     private readonly designs: DesignsService,
     private readonly review: ReviewService,
+    private readonly verifications: VerificationsService,
   ) {}
 
   async bomCsv(user: User, id: number): Promise<ExportFile> {
@@ -70,7 +72,8 @@ export class PurchasingService {
   /** The PDF of a design already loaded with its project and people. */
   async reportOf(design: Design, compress = true): Promise<Buffer> {
     const releasedAt = (await this.review.releasedAt([design.id])).get(design.id) ?? null;
-    return designReportPdf(design, { disturbingFrequencies: frequenciesOrNone(design), releasedAt, compress });
+    const verifications = await this.verifications.listOf(design.id);
+    return designReportPdf(design, { disturbingFrequencies: frequenciesOrNone(design), releasedAt, verifications, compress });
   }
 
   /** Released designs (status released), newest release first, with their RFQ counts. */

@@ -184,6 +184,12 @@ export async function createFuzzTargets(t: TestApp): Promise<FuzzTargets> {
       body: () => ({ status: 'quoted', quotedPrice: 40.5, quotedAt: '2026-03-01T12:00:00.000Z', note: 'By phone' }),
     },
     'POST /api/rfqs/:id/retry': { url: `/api/rfqs/${rfq.id}/retry`, as: 'admin', body: () => ({}) },
+    // multipart: JSON bodies never carry the file, so every one is refused; the file itself is fuzzed in fuzz-verification.e2e-spec.ts
+    'POST /api/designs/:id/verifications': {
+      url: `/api/designs/${released.id}/verifications`,
+      as: 'admin',
+      body: () => ({ kind: 'frf', quantity: 'receptance', tolerancePct: 10, note: 'Hammer at the centre of gravity' }),
+    },
     'POST /api/selection': {
       url: '/api/selection',
       as: 'admin',

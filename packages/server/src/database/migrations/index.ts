@@ -4,6 +4,7 @@ import { CreateProjectDesign1764806400000 } from './1764806400000-create-project
 import { MountSelectionIndex1764849600000 } from './1764849600000-mount-selection-index.js';
 import { CreateReviewPurchasing1764892800000 } from './1764892800000-create-review-purchasing.js';
 import { CreateCatalogRevision1764979200000 } from './1764979200000-create-catalog-revision.js';
+import { CreateDesignVerification1765100000000 } from './1765100000000-create-design-verification.js';
 
 /** Every migration, oldest first. A new migration is imported and appended here. */
 export const MIGRATIONS = [
@@ -13,4 +14,5 @@ export const MIGRATIONS = [
   MountSelectionIndex1764849600000,
   CreateReviewPurchasing1764892800000,
   CreateCatalogRevision1764979200000,
+  CreateDesignVerification1765100000000,
 ];

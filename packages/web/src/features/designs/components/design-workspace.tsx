@@ -53,7 +53,7 @@ export interface DesignSelectionContext {
   choosing: boolean;
 }
 
-export type DesignTab = 'equipment' | 'layout' | 'running' | 'requirements' | 'selection';
+export type DesignTab = 'equipment' | 'layout' | 'running' | 'requirements' | 'selection' | 'measured';
 
 export interface DesignWorkspaceProps {
   design: Design;
@@ -67,6 +67,8 @@ export interface DesignWorkspaceProps {
    * gets whether there are unsaved edits and a way to save them first.
    */
   renderReview?: (context: DesignReviewContext) => ReactNode;
+  /** The "Measured" tab (as-built tap tests), composed by the route for released and superseded designs. */
+  renderMeasured?: () => ReactNode;
 }
 
 /** What the review part of the page gets from the workspace. */
@@ -140,10 +142,25 @@ interface EditorProps {
   onChoose: (candidate: Candidate, formik: FormikProps<DesignFormValues>) => Promise<boolean>;
   renderSelection: DesignWorkspaceProps['renderSelection'];
   renderReview?: DesignWorkspaceProps['renderReview'];
+  renderMeasured?: DesignWorkspaceProps['renderMeasured'];
 }
 
 function DesignEditor(props: EditorProps) {
-  const { base, newer, readOnlyText, canRun, tab, onTab, conflict, failure, reloading, choosing, renderSelection, renderReview } = props;
+  const {
+    base,
+    newer,
+    readOnlyText,
+    canRun,
+    tab,
+    onTab,
+    conflict,
+    failure,
+    reloading,
+    choosing,
+    renderSelection,
+    renderReview,
+    renderMeasured,
+  } = props;
   const readOnly = readOnlyText !== null;
   const formik = useFormikContext<DesignFormValues>();
   const { values, errors, dirty, submitCount, resetForm, isSubmitting } = formik;
@@ -284,6 +301,9 @@ function DesignEditor(props: EditorProps) {
           panel={<CriteriaPanel readOnly={readOnly} suppliers={supplierList} />}
         />
         <Tab id="selection" title={<TabTitle text="Mount selection" problems={false} />} panel={<>{selection}</>} />
+        {renderMeasured ? (
+          <Tab id="measured" title={<TabTitle text="Measured" problems={false} />} panel={<>{renderMeasured()}</>} />
+        ) : null}
       </Tabs>
       {readOnly ? null : <UnsavedChangesGuard dirty={dirty} />}
     </Form>
@@ -295,11 +315,18 @@ function DesignEditor(props: EditorProps) {
  * (rendered by the route). Everything shown is recomputed in the browser as the user types.
  * A save sends the version the form was loaded from, so a concurrent change answers 409.
  */
-export function DesignWorkspace({ design, onReload, renderSelection, initialTab = 'equipment', renderReview }: DesignWorkspaceProps) {
+export function DesignWorkspace({
+  design,
+  onReload,
+  renderSelection,
+  initialTab = 'equipment',
+  renderReview,
+  renderMeasured,
+}: DesignWorkspaceProps) {
   const user = useUser();
   const units = useUnits();
   const updateDesign = useUpdateDesign();
-  const [tab, setTab] = useState<DesignTab>(initialTab);
+  const [tab, setTab] = useState<DesignTab>(initialTab === 'measured' && !renderMeasured ? 'equipment' : initialTab);
   const [base, setBase] = useState<Design>(design);
   const [conflict, setConflict] = useState(false);
   const [failure, setFailure] = useState<string | null>(null);
@@ -392,6 +419,7 @@ export function DesignWorkspace({ design, onReload, renderSelection, initialTab 
         onChoose={choose}
         renderSelection={renderSelection}
         renderReview={renderReview}
+        renderMeasured={renderMeasured}
       />
     </Formik>
   );

@@ -12,14 +12,18 @@ import { projectDesignsQueryKey } from '@/features/designs/api/get-project-desig
 import { DesignWorkspace, type DesignTab } from '@/features/designs/components/design-workspace';
 import { ReviewPanel } from '@/features/review/components/review-panel';
 import { SelectionPanel } from '@/features/selection/components/selection-panel';
+import { MeasuredPanel } from '@/features/verification/components/measured-panel';
 import { errorMessage, errorStatus } from '@/lib/api-errors';
+import { useUser } from '@/lib/auth';
+import { canDesign } from '@/lib/authorization';
 
-const TABS: readonly DesignTab[] = ['equipment', 'layout', 'running', 'requirements', 'selection'];
+const TABS: readonly DesignTab[] = ['equipment', 'layout', 'running', 'requirements', 'selection', 'measured'];
 
 /**
  * The design workspace: the design's input (designs feature) with the mount selection
  * (selection feature) in its last tab, and check and release (review feature) under the
- * header. `?tab=selection` opens that tab first. A change of status remounts the workspace, so
+ * header, and on a released or superseded design the as-built measurements (verification
+ * feature) in a "Measured" tab. `?tab=selection` (or `measured`) opens that tab first. A change of status remounts the workspace, so
  * it reads the design's new state (e.g. frozen once in review).
  */
 export function Component() {
@@ -29,6 +33,7 @@ export function Component() {
   const [search] = useSearchParams();
   const queryClient = useQueryClient();
   const navigate = useNavigate();
+  const user = useUser();
   const requested = search.get('tab') as DesignTab | null;
   const initialTab = requested && TABS.includes(requested) ? requested : 'equipment';
 
@@ -68,6 +73,11 @@ export function Component() {
             }}
           />
         )}
+        renderMeasured={
+          design.data.status === 'released' || design.data.status === 'superseded'
+            ? () => <MeasuredPanel designId={design.data.id} canUpload={canDesign(user.role)} />
+            : undefined
+        }
         renderSelection={(context) => (
           <SelectionPanel
             designId={context.design.id}
