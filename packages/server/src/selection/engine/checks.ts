@@ -1,7 +1,8 @@
 /**
  * The checks a candidate must pass, as bits of its fail mask (`CandidateStore.fail`, a Uint16Array:
  * room for 16 checks; a candidate passes when its mask is 0). This file says what each check is
- * and where it is applied; the words a user reads for each failed bit are in reasons.ts.
+ * and where it is applied (the rules: docs/engineering/selection.md §5–§9); the words a user reads
+ * for each failed bit are in reasons.ts.
  *
  * Where the checks run:
  * - per mount (row), when the row is stored: supplier (rowChecks); when its details are known:

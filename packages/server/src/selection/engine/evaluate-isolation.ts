@@ -2,7 +2,8 @@
  * Isolation of every candidate at once, uniform and series alike: the transmissibility at each
  * disturbing frequency through `transmissibilityBatch` (hysteretic for loss-factor rows, viscous
  * for damping-ratio rows), the resonance amplification T(r = 1), the isolation check against the
- * target, and the isolation at the worst frequency in dB (for the score).
+ * target, and the isolation at the worst frequency in dB (for the score): docs/engineering/selection.md
+ * §9, §10.
  */
 import { isolationDb, transmissibilityBatch } from '@tacet/vibration';
 import type { SelectionProblem } from '../selection-problem.js';

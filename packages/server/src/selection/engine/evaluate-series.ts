@@ -4,7 +4,8 @@
  * deflection δ₀ = u*·mean(P_r/k) (u* = PREFERRED_UTILIZATION kept inside the utilisation window)
  * and re-solves the loads with those sizes; then the same checks and figures as a uniform
  * candidate. A series is offered only when its level error beats ΔF/k of its stiffest picked size
- * alone (otherwise it duplicates a uniform candidate). One workspace per request; the loop allocates nothing.
+ * alone (otherwise it duplicates a uniform candidate): docs/engineering/selection.md §3. One workspace
+ * per request; the loop allocates nothing.
  */
 import { createLevellingWorkspace, naturalFrequencyHz, selectSizesForLevellingInto } from '@tacet/vibration';
 import { PREFERRED_UTILIZATION } from '../scoring.js';

@@ -3,7 +3,8 @@
  * the rigid-frame loads equal the equal-stiffness loads (`problem.equalLoadsN`), so they are
  * reused for every row. Fills, per candidate: the load checks (utilisation window, static
  * deflection, CG inside the polygon), the figures the score reads, the natural frequency and
- * damping for the isolation kernel, price and lead time. One pass over typed arrays; allocates nothing.
+ * damping for the isolation kernel, price and lead time (docs/engineering/selection.md §3, §5, §6, §8).
+ * One pass over typed arrays; allocates nothing.
  */
 import { naturalFrequencyHz } from '@tacet/vibration';
 import type { SelectionProblem } from '../selection-problem.js';

@@ -2,8 +2,8 @@
  * The rigid-body mode check, a finalist check (run for the best candidates only): the six coupled
  * rigid-body modes of the machine on the candidate's mounts (`rigidBodyModes`, with the mounts'
  * dynamic stiffnesses); a mode within ±MODE_SEPARATION of a disturbing frequency, or a direction
- * without stiffness, fails the candidate. Keeps, per candidate judged, the modes and the conflict
- * found (reasons.ts words them).
+ * without stiffness, fails the candidate (docs/engineering/selection.md §9). Keeps, per candidate
+ * judged, the modes and the conflict found (reasons.ts words them).
  */
 import { isVibrationInputError, rigidBodyModes, type ResilientMount } from '@tacet/vibration';
 import type { SelectionProblem } from '../selection-problem.js';
@@ -39,14 +39,9 @@ export class ModeCheck implements FinalistCheck {
     return this.inertiaUnusable;
   }
 
-  check(c: number): void {
-    this.judge(c);
-  }
-
   /** The modes of candidate c, computed once; sets FAIL.modes on a conflict. */
-  judge(c: number): ModeFindings {
-    const known = this.findings.get(c);
-    if (known) return known;
+  check(c: number): void {
+    if (this.findings.has(c)) return;
     const { problem } = this;
     let findings: ModeFindings = { modes: null, conflict: null };
     if (!this.inertiaUnusable) {
@@ -68,7 +63,6 @@ export class ModeCheck implements FinalistCheck {
     }
     if (findings.conflict) this.store.fail[c] |= FAIL.modes;
     this.findings.set(c, findings);
-    return findings;
   }
 
   /** What the check found for c (undefined when c was not judged). */

@@ -2,7 +2,7 @@
  * Scoring and ranking. The score of each candidate (the formula is in ../scoring.ts) against the
  * references of the request (cheapest price per currency, shortest lead time), the order of two
  * candidates, and the ranking itself: the best passing candidates, judged on the way by the
- * finalist checks, then the best failing ones.
+ * finalist checks, then the best failing ones (docs/engineering/selection.md §11).
  *
  * Finalist checks are the checks too costly for every candidate (today the rigid-body mode check,
  * mode-check.ts). They run on the best passing candidates only, and may fail some of them; the

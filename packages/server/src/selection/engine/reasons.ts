@@ -34,7 +34,7 @@ export interface WordingContext {
 type Words = (x: WordingContext) => string[];
 
 /** The reasons of a failed candidate, check by check, in this order. */
-const REASONS: readonly (readonly [bit: number, words: Words])[] = [
+export const REASONS: readonly (readonly [bit: number, words: Words])[] = [
   [FAIL.cgOutside, cgOutside],
   [FAIL.isolation, isolation],
   [FAIL.utilization, utilization],
