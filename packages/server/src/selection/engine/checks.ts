@@ -8,8 +8,9 @@
  * - per mount (row), when the row is stored: supplier (rowChecks); when its details are known:
  *   temperature and type (detailChecks). A candidate inherits the row bits of every mount it uses;
  *   row bits live in `CandidateStore.rowFail` (a Uint8Array: row checks use the low 8 bits);
- * - per candidate, in the evaluation loops (evaluate-uniform.ts, evaluate-series.ts): CG outside
- *   the mount polygon, utilisation window, static deflection against the mount's travel;
+ * - for the machine, the same for every candidate (machineChecks): CG outside the mount polygon;
+ * - per candidate, in the evaluation loops (evaluate-uniform.ts, evaluate-series.ts): utilisation
+ *   window, static deflection against the mount's travel;
  * - for every candidate at once (evaluate-isolation.ts): isolation at every disturbing frequency;
  * - for the best candidates only, as finalist checks (ranking.ts `FinalistCheck`): the rigid-body
  *   modes (mode-check.ts).
@@ -18,6 +19,7 @@
  */
 import type { MountType } from '../../catalog/mount-rules.js';
 import type { Criteria } from '../dto/design-input.dto.js';
+import type { SelectionProblem } from '../selection-problem.js';
 
 /** Why a candidate fails (bit set). */
 export const FAIL = {
@@ -41,6 +43,11 @@ export const FAIL = {
 
 /** The row checks that need a mount's details (DETAIL_COLUMNS); a candidate takes them once the details are loaded. */
 export const DETAIL_FAILS = FAIL.temperature | FAIL.type;
+
+/** Checks of the machine on its mount points, failed by every candidate alike: the CG inside the polygon. */
+export function machineChecks(problem: SelectionProblem): number {
+  return problem.cgInside ? 0 : FAIL.cgOutside;
+}
 
 /** The allowed suppliers of a request (null: any). */
 export function allowedSuppliersOf(criteria: Criteria): ReadonlySet<number> | null {

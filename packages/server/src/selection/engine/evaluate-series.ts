@@ -11,7 +11,7 @@ import { createLevellingWorkspace, naturalFrequencyHz, selectSizesForLevellingIn
 import { PREFERRED_UTILIZATION } from '../scoring.js';
 import type { SelectionProblem } from '../selection-problem.js';
 import type { CandidateStore } from './candidate-store.js';
-import { FAIL } from './checks.js';
+import { FAIL, machineChecks } from './checks.js';
 
 /**
  * Evaluates every series group; `everySeries` keeps the series that would be dropped (a choice
@@ -23,7 +23,7 @@ export function evaluateSeries(store: CandidateStore, problem: SelectionProblem,
   const loads = problem.equalLoadsN;
   const margin = problem.marginFactor;
   const massKg = problem.massKg;
-  const baseFail = problem.cgInside ? 0 : FAIL.cgOutside;
+  const baseFail = machineChecks(problem);
   const spread = problem.maxLoadN - problem.minLoadN;
   const R = store.rowCount;
   const G = store.groupCount;

@@ -9,7 +9,7 @@
 import { naturalFrequencyHz } from '@tacet/vibration';
 import type { SelectionProblem } from '../selection-problem.js';
 import type { CandidateStore } from './candidate-store.js';
-import { FAIL } from './checks.js';
+import { FAIL, machineChecks } from './checks.js';
 
 export function evaluateUniform(store: CandidateStore, problem: SelectionProblem): void {
   const { minUtilization, maxUtilization } = problem.criteria;
@@ -17,7 +17,7 @@ export function evaluateUniform(store: CandidateStore, problem: SelectionProblem
   const loads = problem.equalLoadsN;
   const margin = problem.marginFactor;
   const massKg = problem.massKg;
-  const baseFail = problem.cgInside ? 0 : FAIL.cgOutside;
+  const baseFail = machineChecks(problem);
   const spread = problem.maxLoadN - problem.minLoadN;
   const { kv, rated, maxDeflectionM, rowFail, nd, rowDamping, rowHysteretic, unitPrice, leadDays, currencyIndex, id } = store;
   const { fail, meanUtilization, levelErrorM, meanDeflectionM, fnHz, damping, hysteretic, price, lead, candidateCurrency, tieKey } = store;
