@@ -24,6 +24,9 @@ export function evaluateSeries(store: CandidateStore, problem: SelectionProblem,
   const margin = problem.marginFactor;
   const massKg = problem.massKg;
   const baseFail = machineChecks(problem);
+  // the bits as locals: read per point, an imported object's field costs a load each time
+  const failUtilization = FAIL.utilization;
+  const failDeflection = FAIL.deflection;
   const spread = problem.maxLoadN - problem.minLoadN;
   const R = store.rowCount;
   const G = store.groupCount;
@@ -84,10 +87,10 @@ export function evaluateSeries(store: CandidateStore, problem: SelectionProblem,
       seriesLoad[g * n + i] = f;
       const u = f / rated[r];
       sumU += u;
-      if (u * margin > maxUtilization || u < minUtilization) fail |= FAIL.utilization;
+      if (u * margin > maxUtilization || u < minUtilization) fail |= failUtilization;
       const d = workspace.deflectionsM[i];
       sumDefl += d;
-      if (d * margin > maxDeflectionM[r]) fail |= FAIL.deflection;
+      if (d * margin > maxDeflectionM[r]) fail |= failDeflection;
       fail |= rowFail[r];
       const k = kv[r];
       sumK += k;

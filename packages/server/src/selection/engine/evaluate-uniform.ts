@@ -18,6 +18,9 @@ export function evaluateUniform(store: CandidateStore, problem: SelectionProblem
   const margin = problem.marginFactor;
   const massKg = problem.massKg;
   const baseFail = machineChecks(problem);
+  // the bits as locals: read per point, an imported object's field costs a load each time
+  const failUtilization = FAIL.utilization;
+  const failDeflection = FAIL.deflection;
   const spread = problem.maxLoadN - problem.minLoadN;
   const { kv, rated, maxDeflectionM, rowFail, nd, rowDamping, rowHysteretic, unitPrice, leadDays, currencyIndex, id } = store;
   const { fail, meanUtilization, levelErrorM, meanDeflectionM, fnHz, damping, hysteretic, price, lead, candidateCurrency, tieKey } = store;
@@ -30,8 +33,8 @@ export function evaluateUniform(store: CandidateStore, problem: SelectionProblem
     for (let i = 0; i < n; i++) {
       const u = loads[i] / ratedN;
       sumU += u;
-      if (u * margin > maxUtilization || u < minUtilization) f |= FAIL.utilization;
-      if ((loads[i] / k) * margin > maxDefl) f |= FAIL.deflection;
+      if (u * margin > maxUtilization || u < minUtilization) f |= failUtilization;
+      if ((loads[i] / k) * margin > maxDefl) f |= failDeflection;
     }
     fail[r] = f;
     meanUtilization[r] = sumU / n;
