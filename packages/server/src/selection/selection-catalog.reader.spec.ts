@@ -1,7 +1,7 @@
 import type { DataSource } from 'typeorm';
 import type { CatalogRevisionService } from '../catalog-revision/catalog-revision.service.js';
 import { SelectionCatalogReader } from './selection-catalog.reader.js';
-import { CATALOG_COLUMNS } from './selection-engine.js';
+import { CATALOG_COLUMNS } from './engine/catalog-tuple.js';
 
 interface FakeMount {
   id: number;

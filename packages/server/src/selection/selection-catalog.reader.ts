@@ -5,7 +5,7 @@ import { dampingModelOf } from '../catalog/mount-rules.js';
 import { Mount } from '../catalog/mount.entity.js';
 import { Supplier } from '../suppliers/supplier.entity.js';
 import { CatalogRevisionService } from '../catalog-revision/catalog-revision.service.js';
-import { CATALOG_COLUMNS, CATALOG_COLUMN_INDEX, DETAIL_COLUMNS, type CatalogTuple, type MountDetails } from './selection-engine.js';
+import { CATALOG_COLUMNS, CATALOG_COLUMN_INDEX, DETAIL_COLUMNS, type CatalogTuple, type MountDetails } from './engine/catalog-tuple.js';
 import type { PrefilterBounds } from './selection-problem.js';
 import type { MountSnapshot } from './selection.types.js';
 

@@ -1,7 +1,8 @@
 import { BadRequestException, Injectable } from '@nestjs/common';
 import { SELECTION_LIMITS, type Component, type Criteria, type DesignInput, type MountPoint } from './dto/design-input.dto.js';
 import { SelectionCatalogReader } from './selection-catalog.reader.js';
-import { SelectionEvaluation, type DetailsLoader } from './selection-engine.js';
+import type { DetailsLoader } from './engine/catalog-tuple.js';
+import { SelectionEvaluation } from './engine/selection-evaluation.js';
 import { designFrequencies, prefilterBounds, prepareProblem, withInputErrors, type SelectionProblem } from './selection-problem.js';
 import type { Candidate, LabelledFrequency, SelectionResult } from './selection.types.js';
 
@@ -73,8 +74,8 @@ export class SelectionService {
 
   /**
    * Re-runs the selection for one candidate of a design: the same evaluation as the ranked list
-   * (so the figures, reasons and score agree with what the engineer saw), plus its rigid-body
-   * modes. A mount or series outside the prefiltered set (e.g. outside the load window) is
+   * (so the figures, reasons and score agree with what the engineer saw), plus the checks run for
+   * the best candidates (its rigid-body modes), whatever else it fails. A mount or series outside the prefiltered set (e.g. outside the load window) is
    * evaluated on its own, with its reasons.
    */
   async evaluateChoice(input: DesignInput, choice: CandidateChoice): Promise<ChosenCandidate> {
@@ -96,7 +97,7 @@ export class SelectionService {
       c = 'mountId' in choice ? 0 : evaluation.findSeries(choice.seriesId);
     }
     await evaluation.ensureDetails([c], this.loadDetails);
-    evaluation.checkModes(c);
+    evaluation.checkFinalist(c);
     const names = await this.catalog.supplierNames([evaluation.supplierOf(c)]);
     return { candidate: evaluation.describe(c, names), problem, frequencies };
   }

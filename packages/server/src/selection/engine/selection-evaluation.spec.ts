@@ -1,13 +1,13 @@
+import { prepareProblem, type SelectionInput } from '../selection-problem.js';
 import {
   CATALOG_COLUMN_INDEX,
   CATALOG_COLUMNS,
-  SelectionEvaluation,
   toCatalogTuple,
   type CatalogRow,
   type DetailsLoader,
   type MountDetails,
-} from './selection-engine.js';
-import { prepareProblem, type SelectionInput } from './selection-problem.js';
+} from './catalog-tuple.js';
+import { SelectionEvaluation } from './selection-evaluation.js';
 
 /**
  * Engine tests over invented rows (no database). Closed forms: docs/engineering/transmissibility.md
@@ -173,12 +173,12 @@ describe('SelectionEvaluation', () => {
   it('notes assumptions: horizontal stiffness taken equal to vertical; no modes without inertia', () => {
     const noHorizontal = row({ horizontalStiffnessNPerM: null });
     const withBox = evaluate(problem(), [noHorizontal]);
-    withBox.checkModes(0);
+    withBox.checkFinalist(0);
     expect(withBox.describe(0, names).notes).toContain(
       'The catalog gives no horizontal stiffness: the rigid-body modes take it equal to the vertical stiffness.',
     );
     const pointMass = evaluate(problem({ components: [{ name: 'M', massKg: 1000, cg: { x: 0, y: 0, z: 0.3 } }] }), [noHorizontal]);
-    pointMass.checkModes(0);
+    pointMass.checkFinalist(0);
     const c = pointMass.describe(0, names);
     expect(c.modes).toBeUndefined();
     expect(c.passes).toBe(true);
