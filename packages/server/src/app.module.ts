@@ -8,6 +8,7 @@ import { DemoModule } from './demo/demo.module.js';
 import { DesignsModule } from './designs/designs.module.js';
 import { HealthModule } from './health/health.module.js';
 import { MailModule } from './mail/mail.module.js';
+import { MyWorkModule } from './my-work/my-work.module.js';
 import { PurchasingModule } from './purchasing/purchasing.module.js';
 import { ReviewModule } from './review/review.module.js';
 import { ProjectsModule } from './projects/projects.module.js';
@@ -38,6 +39,7 @@ export class AppModule {
         ReviewModule,
         VerificationsModule,
         PurchasingModule,
+        MyWorkModule,
         DemoModule,
         ...webClientModules(config.webDist),
       ],

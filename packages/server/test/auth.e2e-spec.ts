@@ -26,6 +26,7 @@ describe('auth (e2e)', () => {
         name: 'Erin Engineer',
         role: 'engineer',
         unitSystem: 'SI',
+        mustChangePassword: false,
       });
       const payload = decodePayload(response.body.accessToken);
       expect(payload).toMatchObject({ sub: response.body.user.id, role: 'engineer' });
@@ -124,6 +125,7 @@ describe('auth (e2e)', () => {
         role: 'purchaser',
         unitSystem: 'SI',
         active: true,
+        mustChangePassword: false,
         createdAt: expect.stringMatching(/^\d{4}-\d\d-\d\dT\d\d:\d\d:\d\d\.\d{3}Z$/),
         updatedAt: expect.stringMatching(/^\d{4}-\d\d-\d\dT/),
       });

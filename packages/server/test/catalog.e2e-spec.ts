@@ -326,6 +326,7 @@ describe('catalog (e2e)', () => {
       'errors',
       'errorsTruncated',
       'importId',
+      'newSuppliers',
       'preview',
       'rejected',
       'updated',

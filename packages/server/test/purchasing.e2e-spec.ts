@@ -108,7 +108,9 @@ describe('purchasing: exports, requests for quotation, queue, report (e2e)', () 
       expect((await download(`/api/designs/${draft.id}/bom.csv`, 'purchaser')).status).toBe(404); // drafts do not exist for purchasers
       const other = await download(`/api/designs/${draft.id}/bom.csv`, 'checker');
       expect(other.status).toBe(409);
-      expect(JSON.parse((other.body as Buffer).toString()).message).toBe('Only released designs can be exported');
+      expect(JSON.parse((other.body as Buffer).toString()).message).toBe(
+        'The bill of materials of an unreleased design goes only to its author, an admin, and engineers while the design is in check',
+      );
       const own = await download(`/api/designs/${draft.id}/bom.csv`, 'engineer');
       expect(own.status).toBe(200);
       expect((own.body as Buffer).toString().split('\n')[0]).toMatch(/^DRAFT/);
@@ -120,7 +122,7 @@ describe('purchasing: exports, requests for quotation, queue, report (e2e)', () 
   });
 
   describe('requests for quotation', () => {
-    it('e-mails the supplier its BOM lines as CSV with the report, and records the request', async () => {
+    it('e-mails the supplier its BOM lines (CSV, XLSX) with the report, and records the request', async () => {
       const response = await t
         .http()
         .post(`/api/designs/${released.id}/rfqs`)
@@ -147,10 +149,11 @@ describe('purchasing: exports, requests for quotation, queue, report (e2e)', () 
       expect(mail!.envelope.rcptTo).toEqual(['quotes@springs-test.invalid']);
       expect(mail!.subject).toContain(`${released.name} rev 1`);
       expect(mail!.text).toContain('Delivery to site by week 12, please.');
-      const csv = mail!.attachments.find((a) => a.filename.endsWith('-rev1-bom.csv'))!;
+      const csv = mail!.attachments.find((a) => a.filename.endsWith('-rev1-quote-list.csv'))!;
       expect(csv.contentType).toMatch(/^text\/csv/);
       const rows = parse(csv.content) as string[][];
       expect(rows.slice(1).map((r) => [r[0], r[1], r[2]])).toEqual([[withEmail.supplier.name, withEmail.partNumber, '4']]);
+      expect(mail!.attachments.map((a) => a.filename.split('-rev1-')[1])).toEqual(['quote-list.csv', 'quote-list.xlsx', 'report.pdf']);
       const pdf = mail!.attachments.find((a) => a.filename.endsWith('.pdf'))!;
       expect(pdf.content.subarray(0, 4).toString()).toBe('%PDF');
 
@@ -183,20 +186,21 @@ describe('purchasing: exports, requests for quotation, queue, report (e2e)', () 
       }
     });
 
-    it('status moves forward only; a quote needs its price', async () => {
+    it('status moves forward only; a quote needs a price for every line', async () => {
       const created = await t
         .http()
         .post(`/api/designs/${released.id}/rfqs`)
         .set(as('purchaser'))
         .send({ supplierId: withEmail.supplier.id });
       const id = created.body.id;
+      const lineId = created.body.lines[0].id;
       const patch = (body: object) => t.http().patch(`/api/rfqs/${id}`).set(as('purchaser')).send(body);
       expect((await patch({ status: 'quoted' })).status).toBe(400);
-      const quoted = await patch({ status: 'quoted', quotedPrice: 165, note: 'Quote Q-77' });
+      const quoted = await patch({ status: 'quoted', lines: [{ lineId, unitPrice: 41.25 }], note: 'Quote Q-77' });
       expect(quoted.status).toBe(200);
       expect(quoted.body).toMatchObject({ status: 'quoted', quotedPrice: 165 });
       expect(quoted.body.quotedAt).toEqual(expect.any(String));
-      expect((await patch({ status: 'quoted', quotedPrice: 160 })).status).toBe(409);
+      expect((await patch({ status: 'quoted', lines: [{ lineId, unitPrice: 40 }] })).status).toBe(409);
       expect((await patch({ status: 'received' })).status).toBe(200); // skipping ahead is still forward
       const back = await patch({ status: 'ordered' });
       expect(back.status).toBe(409);
@@ -229,6 +233,9 @@ describe('purchasing: exports, requests for quotation, queue, report (e2e)', () 
         currency: 'USD',
       });
       expect(item.rfqs).toEqual({ requested: 1, quoted: 0, ordered: 0, received: 1, failed: 0 });
+      expect(item.openRequests).toEqual([
+        expect.objectContaining({ status: 'requested', supplier: expect.objectContaining({ id: withEmail.supplier.id }) }),
+      ]);
       expect(Date.parse(item.releasedAt)).not.toBeNaN();
       expect((await t.http().get('/api/purchasing/designs').set(as('engineer'))).status).toBe(403);
     });

@@ -120,18 +120,18 @@ describe('review workflow (e2e)', () => {
     const design = await createDesign(t, tokens.engineer, catalog);
     await releaseDesign(t, design.id, tokens.engineer, tokens.checker);
 
-    const ready = mailsAbout(`Design ${design.name} rev 1 is ready for check`);
+    const ready = mailsAbout(`Please check: ${design.name} rev 1 (${design.projectName})`);
     const readyTo = ready.map((mail) => mail.to);
     expect(readyTo).toContain('checker@tacet.test');
     expect(readyTo).not.toContain('engineer@tacet.test');
     expect(readyTo).not.toContain('buyer@tacet.test');
 
-    const released = mailsAbout(`Design ${design.name} rev 1 is released`);
-    expect(released.map((mail) => mail.to)).toEqual(['buyer@tacet.test']);
+    const released = mailsAbout(`Released: ${design.name} rev 1 (${design.projectName})`);
+    expect(released.map((mail) => mail.to).sort()).toEqual(['buyer@tacet.test', 'engineer@tacet.test']);
 
     // the same through the admin outbox
     const outbox = await t.http().get('/api/outbox').set(as('admin'));
-    expect(outbox.body.some((m: { subject: string }) => m.subject === `Design ${design.name} rev 1 is released`)).toBe(true);
+    expect(outbox.body.some((m: { subject: string }) => m.subject === `Released: ${design.name} rev 1 (${design.projectName})`)).toBe(true);
   });
 
   it('a new revision is a draft rev n+1 with the same input and mounts; releasing it supersedes the older one', async () => {

@@ -40,7 +40,7 @@ describe('requests for quotation when mail fails (e2e)', () => {
     const id = created.body.id;
 
     // nothing can be recorded on a failed request until it is sent
-    expect((await t.http().patch(`/api/rfqs/${id}`).set(as('purchaser')).send({ status: 'quoted', quotedPrice: 1 })).status).toBe(409);
+    expect((await t.http().patch(`/api/rfqs/${id}`).set(as('purchaser')).send({ status: 'ordered' })).status).toBe(409);
 
     // still failing: stays failed
     const again = await t.http().post(`/api/rfqs/${id}/retry`).set(as('purchaser'));
@@ -61,9 +61,10 @@ describe('requests for quotation when mail fails (e2e)', () => {
       expect(retried.status).toBe(200);
       expect(retried.body).toMatchObject({ status: 'requested', messageId: '<retry-test@tacet.test>', failureReason: null });
       expect(retried.body.history.map((h: { status: string }) => h.status)).toEqual(['failed', 'failed', 'requested']);
-      expect(sent).toHaveLength(1);
-      expect(sent[0].to).toBe('quotes@failing-test.invalid');
+      // the request to the supplier, then the purchaser's copy
+      expect(sent.map((message) => message.to)).toEqual(['quotes@failing-test.invalid', 'buyer@tacet.test']);
       expect(sent[0].subject).toContain(`${design.name} rev 1`);
+      expect(sent[1].subject).toBe(`Sent: RFQ-${id} to ${catalog.supplier.name}`);
     } finally {
       mail.send = original;
     }

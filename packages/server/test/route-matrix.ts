@@ -39,6 +39,13 @@ export const ROUTE_MATRIX: readonly RouteRule[] = [
   { method: 'GET', path: '/api/auth/me', access: 'signed-in' },
   { method: 'PATCH', path: '/api/auth/me', access: 'signed-in' },
   { method: 'POST', path: '/api/auth/me/password', access: 'signed-in' },
+  { method: 'POST', path: '/api/auth/password-reset', access: 'public', body: { email: 'nobody@example.test' } },
+  {
+    method: 'POST',
+    path: '/api/auth/password-reset/confirm',
+    access: 'public',
+    body: { token: 'no-such-token', password: 'long enough 1' },
+  },
 
   // mail outbox (demo and test mode; the local mail catcher's messages)
   { method: 'GET', path: '/api/outbox', access: ['admin'] },
@@ -51,6 +58,7 @@ export const ROUTE_MATRIX: readonly RouteRule[] = [
   { method: 'GET', path: '/api/users/:id', access: ['admin'] },
   { method: 'PATCH', path: '/api/users/:id', access: ['admin'] },
   { method: 'DELETE', path: '/api/users/:id', access: ['admin'] },
+  { method: 'POST', path: '/api/users/:id/temporary-password', access: ['admin'], body: { password: 'temporary password 1' } },
 
   // suppliers
   { method: 'GET', path: '/api/suppliers', access: 'signed-in' },
@@ -87,15 +95,18 @@ export const ROUTE_MATRIX: readonly RouteRule[] = [
   { method: 'POST', path: '/api/designs/:id/transitions', access: ['engineer', 'admin'], body: { to: 'in_review' } },
   { method: 'POST', path: '/api/designs/:id/revisions', access: ['engineer', 'admin'] },
   { method: 'GET', path: '/api/designs/:id/history', access: 'signed-in' },
+  { method: 'GET', path: '/api/designs/:id/checkers', access: ['engineer', 'admin'] },
+  { method: 'GET', path: '/api/my-work', access: 'signed-in' },
 
   // purchasing (exports: drafts only for their author or an admin; checked by the service)
   { method: 'GET', path: '/api/purchasing/designs', access: ['purchaser', 'admin'] },
   { method: 'GET', path: '/api/designs/:id/bom.csv', access: ['purchaser', 'engineer', 'admin'] },
   { method: 'GET', path: '/api/designs/:id/bom.xlsx', access: ['purchaser', 'engineer', 'admin'] },
   { method: 'GET', path: '/api/designs/:id/report.pdf', access: 'signed-in' },
+  { method: 'POST', path: '/api/designs/:id/rfqs/preview', access: ['purchaser', 'admin'], body: { supplierId: 1 } },
   { method: 'POST', path: '/api/designs/:id/rfqs', access: ['purchaser', 'admin'], body: { supplierId: 1 } },
   { method: 'GET', path: '/api/designs/:id/rfqs', access: ['purchaser', 'admin'] },
-  { method: 'PATCH', path: '/api/rfqs/:id', access: ['purchaser', 'admin'], body: { status: 'quoted', quotedPrice: 1 } },
+  { method: 'PATCH', path: '/api/rfqs/:id', access: ['purchaser', 'admin'], body: { status: 'ordered' } },
   { method: 'POST', path: '/api/rfqs/:id/retry', access: ['purchaser', 'admin'] },
 
   // as-built verification (tap tests of released and superseded designs; reading follows the design's visibility)

@@ -64,7 +64,7 @@ describe('time zones (e2e)', () => {
       .http()
       .patch(`/api/rfqs/${rfq.body.id}`)
       .set(as('purchaser'))
-      .send({ status: 'quoted', quotedPrice: 100, quotedAt })
+      .send({ status: 'quoted', lines: [{ lineId: rfq.body.lines[0].id, unitPrice: 25 }], quotedAt })
       .expect(200);
     expect(quoted.body.quotedAt).toBe(quotedAt);
     const list = await t.http().get(`/api/designs/${design.id}/rfqs`).set(as('purchaser')).expect(200);

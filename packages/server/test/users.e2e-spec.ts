@@ -27,7 +27,9 @@ describe('users (e2e)', () => {
     expect(emails).toEqual([...emails].sort());
     expect(emails).toEqual(expect.arrayContaining(['admin@tacet.test', 'viewer@tacet.test', 'checker@tacet.test']));
     for (const user of response.body) {
-      expect(Object.keys(user).sort()).toEqual(['active', 'createdAt', 'email', 'id', 'name', 'role', 'unitSystem', 'updatedAt'].sort());
+      expect(Object.keys(user).sort()).toEqual(
+        ['active', 'createdAt', 'email', 'id', 'mustChangePassword', 'name', 'role', 'unitSystem', 'updatedAt'].sort(),
+      );
     }
   });
 

@@ -1,5 +1,6 @@
 import { Body, Controller, Get, HttpCode, HttpStatus, Patch, Post, UseGuards } from '@nestjs/common';
 import {
+  ApiAcceptedResponse,
   ApiBadRequestResponse,
   ApiBearerAuth,
   ApiNoContentResponse,
@@ -16,7 +17,10 @@ import { UpdateProfileDto } from '../users/dto/update-profile.dto.js';
 import { UserDto } from '../users/dto/user.dto.js';
 import type { User } from '../users/user.entity.js';
 import { UsersService } from '../users/users.service.js';
+import { AllowTemporaryPassword } from '../common/decorators/allow-temporary-password.decorator.js';
 import { AuthService } from './auth.service.js';
+import { PasswordResetAnswerDto, PasswordResetConfirmDto, PasswordResetRequestDto } from './dto/password-reset.dto.js';
+import { PasswordResetService } from './password-reset.service.js';
 import { LoginResponseDto } from './dto/login-response.dto.js';
 import { LoginDto } from './dto/login.dto.js';
 
@@ -26,6 +30,7 @@ export class AuthController {
   constructor(
     private readonly auth: AuthService,
     private readonly users: UsersService,
+    private readonly resets: PasswordResetService,
   ) {}
 
   /** Rate limited per client IP (TACET_LOGIN_LIMIT_PER_MINUTE, see AuthModule). */
@@ -40,7 +45,30 @@ export class AuthController {
     return this.auth.login(dto);
   }
 
+  /** "Forgot password": always 202 with the same answer (no telling which addresses have an account); rate limited like sign-in. */
+  @Public()
+  @UseGuards(ThrottlerGuard)
+  @Post('password-reset')
+  @HttpCode(HttpStatus.ACCEPTED)
+  @ApiAcceptedResponse({ type: PasswordResetAnswerDto, description: 'Whether or not the address has an account' })
+  @ApiTooManyRequestsResponse({ description: 'Too many attempts from this address' })
+  async requestPasswordReset(@Body() dto: PasswordResetRequestDto): Promise<PasswordResetAnswerDto> {
+    return { message: await this.resets.request(dto.email) };
+  }
+
+  @Public()
+  @UseGuards(ThrottlerGuard)
+  @Post('password-reset/confirm')
+  @HttpCode(HttpStatus.OK)
+  @ApiOkResponse({ type: PasswordResetAnswerDto, description: 'The new password is set; the link is spent' })
+  @ApiBadRequestResponse({ description: 'The link was used or has expired, or the password is not acceptable' })
+  @ApiTooManyRequestsResponse({ description: 'Too many attempts from this address' })
+  async confirmPasswordReset(@Body() dto: PasswordResetConfirmDto): Promise<PasswordResetAnswerDto> {
+    return { message: await this.resets.confirm(dto.token, dto.password) };
+  }
+
   @ApiBearerAuth()
+  @AllowTemporaryPassword()
   @Get('me')
   @ApiOkResponse({ type: UserDto })
   me(@CurrentUser() user: User): UserDto {
@@ -55,6 +83,7 @@ export class AuthController {
   }
 
   @ApiBearerAuth()
+  @AllowTemporaryPassword()
   @Post('me/password')
   @HttpCode(HttpStatus.NO_CONTENT)
   @ApiNoContentResponse({ description: 'Password changed' })

@@ -3,12 +3,16 @@ import { APP_GUARD } from '@nestjs/core';
 import { JwtModule } from '@nestjs/jwt';
 import { PassportModule } from '@nestjs/passport';
 import { ThrottlerModule } from '@nestjs/throttler';
+import { TypeOrmModule } from '@nestjs/typeorm';
 import { AppConfig } from '../config/app-config.js';
 import { UsersModule } from '../users/users.module.js';
 import { AuthController } from './auth.controller.js';
 import { AuthService } from './auth.service.js';
 import { JwtAuthGuard } from './guards/jwt-auth.guard.js';
 import { RolesGuard } from './guards/roles.guard.js';
+import { TemporaryPasswordGuard } from './guards/temporary-password.guard.js';
+import { PasswordResetToken } from './password-reset-token.entity.js';
+import { PasswordResetService } from './password-reset.service.js';
 import { JWT_ALGORITHM, TOKEN_LIFETIME } from './jwt-payload.js';
 import { JwtStrategy } from './jwt.strategy.js';
 
@@ -16,6 +20,7 @@ import { JwtStrategy } from './jwt.strategy.js';
   imports: [
     UsersModule,
     PassportModule,
+    TypeOrmModule.forFeature([PasswordResetToken]),
     JwtModule.registerAsync({
       inject: [AppConfig],
       useFactory: (config: AppConfig) => ({
@@ -24,7 +29,7 @@ import { JwtStrategy } from './jwt.strategy.js';
         verifyOptions: { algorithms: [JWT_ALGORITHM] },
       }),
     }),
-    // Only the login route uses ThrottlerGuard; in-memory counters per server instance.
+    // The sign-in and password-reset routes use ThrottlerGuard; in-memory counters per server instance.
     ThrottlerModule.forRootAsync({
       inject: [AppConfig],
       useFactory: (config: AppConfig) => ({
@@ -35,9 +40,11 @@ import { JwtStrategy } from './jwt.strategy.js';
   controllers: [AuthController],
   providers: [
     AuthService,
+    PasswordResetService,
     JwtStrategy,
-    // Order matters: sign-in is checked before roles.
+    // Order matters: sign-in is checked first, then a temporary password, then roles.
     { provide: APP_GUARD, useClass: JwtAuthGuard },
+    { provide: APP_GUARD, useClass: TemporaryPasswordGuard },
     { provide: APP_GUARD, useClass: RolesGuard },
   ],
 })

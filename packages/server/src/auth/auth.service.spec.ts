@@ -23,7 +23,14 @@ describe('AuthService.login', () => {
   it('returns a token carrying {sub, role} and the signed-in user', async () => {
     const { service, jwt } = makeService();
     const result = await service.login({ email: 'erin@example.test', password: 'right password' });
-    expect(result.user).toEqual({ id: 5, email: 'erin@example.test', name: active.name, role: 'engineer', unitSystem: 'SI' });
+    expect(result.user).toEqual({
+      id: 5,
+      email: 'erin@example.test',
+      name: active.name,
+      role: 'engineer',
+      unitSystem: 'SI',
+      mustChangePassword: false,
+    });
     const payload = jwt.verify<{ sub: number; role: string; exp: number; iat: number }>(result.accessToken);
     expect(payload).toMatchObject({ sub: 5, role: 'engineer' });
     expect(payload.exp - payload.iat).toBe(12 * 3600);

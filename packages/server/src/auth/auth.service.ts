@@ -25,7 +25,14 @@ export class AuthService {
     const payload: JwtPayload = { sub: user.id, role: user.role };
     return {
       accessToken: await this.jwt.signAsync(payload),
-      user: { id: user.id, email: user.email, name: user.name, role: user.role, unitSystem: user.unitSystem },
+      user: {
+        id: user.id,
+        email: user.email,
+        name: user.name,
+        role: user.role,
+        unitSystem: user.unitSystem,
+        mustChangePassword: user.mustChangePassword,
+      },
     };
   }
 }

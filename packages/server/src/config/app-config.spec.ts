@@ -137,4 +137,19 @@ describe('loadConfig', () => {
     expect(loadConfig({ ...base, TACET_DEMO: 'true', ...smtp }, cwd).mailCatcher).toBe(false);
     expect(loadConfig({ ...base, NODE_ENV: 'test', ...smtp }, cwd).mailCatcher).toBe(false);
   });
+
+  it('puts TACET_PUBLIC_URL (default http://localhost:<PORT>) in links, without a trailing slash, and refuses a malformed one', () => {
+    const env = { JWT_SECRET: SECRET };
+    expect(loadConfig(env, cwd).publicUrl).toBe('http://localhost:3000');
+    expect(loadConfig({ ...env, PORT: '8080' }, cwd).publicUrl).toBe('http://localhost:8080');
+    expect(loadConfig({ ...env, TACET_PUBLIC_URL: 'https://tacet.example.com/' }, cwd).publicUrl).toBe('https://tacet.example.com');
+    expect(loadConfig({ ...env, TACET_PUBLIC_URL: 'https://example.com/tools/tacet' }, cwd).publicUrl).toBe(
+      'https://example.com/tools/tacet',
+    );
+    for (const bad of ['tacet.example.com', 'ftp://tacet.example.com', 'https://tacet.example.com/?x=1', 'https://a b.test']) {
+      expect(problemsOf({ ...env, TACET_PUBLIC_URL: bad })).toEqual([
+        expect.stringContaining('TACET_PUBLIC_URL must be the http:// or https://'),
+      ]);
+    }
+  });
 });

@@ -40,6 +40,8 @@ export class AppConfig {
   readonly initialAdmin?: { email: string; password: string };
   /** Absolute path of the built web client (may not exist). */
   readonly webDist: string;
+  /** Where people open Tacet (no trailing slash): the base of the links in e-mails (TACET_PUBLIC_URL). */
+  readonly publicUrl: string;
 
   constructor(values: AppConfig) {
     Object.assign(this, values);
@@ -96,5 +98,6 @@ export function loadConfig(rawEnv: Record<string, string | undefined>, cwd = pro
         ? { email: env.TACET_ADMIN_EMAIL, password: env.TACET_ADMIN_PASSWORD }
         : undefined,
     webDist: env.TACET_WEB_DIST ? resolve(cwd, env.TACET_WEB_DIST) : DEFAULT_WEB_DIST,
+    publicUrl: (env.TACET_PUBLIC_URL ?? `http://localhost:${env.PORT}`).replace(/\/+$/, ''),
   });
 }

@@ -115,6 +115,16 @@ export class EnvironmentVariables {
   @Matches(MAILBOX, { message: 'MAIL_FROM must be an address such as "Tacet <no-reply@example.com>"' })
   MAIL_FROM: string = DEFAULT_MAIL_FROM;
 
+  /**
+   * The address people use to open Tacet (scheme, host, port, optional path), put into the links
+   * of every e-mail. Default: `http://localhost:<PORT>`.
+   */
+  @IsOptional()
+  @Matches(/^https?:\/\/[^\s/?#]+(\/[^\s?#]*)?$/, {
+    message: 'TACET_PUBLIC_URL must be the http:// or https:// address people open Tacet at, such as https://tacet.example.com',
+  })
+  TACET_PUBLIC_URL?: string;
+
   /** Read only to recognise a test run (`test` keeps the local mail catcher on, like demo mode). */
   @IsOptional()
   @IsString()

@@ -2,7 +2,9 @@ import { CatalogImport } from '../catalog/catalog-import.entity.js';
 import { CatalogRevision } from '../catalog-revision/catalog-revision.entity.js';
 import { Mount } from '../catalog/mount.entity.js';
 import { Design } from '../designs/design.entity.js';
+import { PasswordResetToken } from '../auth/password-reset-token.entity.js';
 import { Rfq } from '../purchasing/rfq.entity.js';
+import { RfqLine } from '../purchasing/rfq-line.entity.js';
 import { RfqEvent } from '../purchasing/rfq-event.entity.js';
 import { DesignTransition } from '../review/design-transition.entity.js';
 import { Project } from '../projects/project.entity.js';
@@ -23,4 +25,6 @@ export const ENTITIES = [
   RfqEvent,
   CatalogRevision,
   Verification,
+  RfqLine,
+  PasswordResetToken,
 ];

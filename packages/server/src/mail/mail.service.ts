@@ -16,6 +16,8 @@ export interface OutgoingMail {
   subject: string;
   text: string;
   html?: string;
+  /** Where replies go (e.g. the purchaser who sent a request for quotation). */
+  replyTo?: string;
   attachments?: MailAttachment[];
 }
 
@@ -94,6 +96,7 @@ export class MailService implements OnModuleInit, OnModuleDestroy {
         subject: mail.subject,
         text: mail.text,
         html: mail.html,
+        replyTo: mail.replyTo,
         attachments: mail.attachments?.map(({ filename, content, contentType }) => ({ filename, content, contentType })),
       })) as { messageId: string; rejected?: unknown[] };
       const rejected = (info.rejected ?? []).map((address) =>

@@ -5,7 +5,7 @@ import { Design } from '../designs/design.entity.js';
 import { DESIGN_STATUSES, PURCHASER_VISIBLE_STATUSES, type DesignStatus } from '../designs/design-status.js';
 import type { User } from '../users/user.entity.js';
 import type { CreateProjectDto } from './dto/create-project.dto.js';
-import { ProjectDto } from './dto/project.dto.js';
+import { ProjectDto, type DesignStatusCountsDto } from './dto/project.dto.js';
 import type { UpdateProjectDto } from './dto/update-project.dto.js';
 import { canManageProject } from './project-access.js';
 import { Project } from './project.entity.js';
@@ -14,6 +14,8 @@ import { Project } from './project.entity.js';
 export function visibleStatuses(user: Pick<User, 'role'>): readonly DesignStatus[] {
   return user.role === 'purchaser' ? PURCHASER_VISIBLE_STATUSES : DESIGN_STATUSES;
 }
+
+const noDesigns = (): DesignStatusCountsDto => ({ draft: 0, in_review: 0, released: 0, superseded: 0 });
 
 /** '' and whitespace-only become null. */
 const optionalText = (value: string | null | undefined): string | null | undefined =>
@@ -33,7 +35,7 @@ export class ProjectsService {
       user,
       projects.map((p) => p.id),
     );
-    return projects.map((project) => ProjectDto.from(project, counts.get(project.id) ?? 0));
+    return projects.map((project) => ProjectDto.from(project, counts.get(project.id) ?? noDesigns()));
   }
 
   /** The project entity (404 when it does not exist). */
@@ -46,7 +48,7 @@ export class ProjectsService {
   async findOne(user: User, id: number): Promise<ProjectDto> {
     const project = await this.get(id);
     const counts = await this.designCounts(user, [id]);
-    return ProjectDto.from(project, counts.get(id) ?? 0);
+    return ProjectDto.from(project, counts.get(id) ?? noDesigns());
   }
 
   async create(user: User, dto: CreateProjectDto): Promise<ProjectDto> {
@@ -97,16 +99,24 @@ export class ProjectsService {
     }
   }
 
-  private async designCounts(user: User, projectIds: number[]): Promise<Map<number, number>> {
-    if (projectIds.length === 0) return new Map();
+  private async designCounts(user: User, projectIds: number[]): Promise<Map<number, DesignStatusCountsDto>> {
+    const counts = new Map<number, DesignStatusCountsDto>();
+    if (projectIds.length === 0) return counts;
     const rows = await this.designs
       .createQueryBuilder('d')
       .select('d.projectId', 'projectId')
+      .addSelect('d.status', 'status')
       .addSelect('COUNT(*)', 'count')
       .where('d.projectId IN (:...projectIds)', { projectIds })
       .andWhere('d.status IN (:...statuses)', { statuses: visibleStatuses(user) })
       .groupBy('d.projectId')
-      .getRawMany<{ projectId: number; count: number | string }>();
-    return new Map(rows.map((row) => [Number(row.projectId), Number(row.count)]));
+      .addGroupBy('d.status')
+      .getRawMany<{ projectId: number; status: DesignStatus; count: number | string }>();
+    for (const row of rows) {
+      const entry = counts.get(Number(row.projectId)) ?? noDesigns();
+      entry[row.status] = Number(row.count);
+      counts.set(Number(row.projectId), entry);
+    }
+    return counts;
   }
 }

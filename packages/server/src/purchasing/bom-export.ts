@@ -119,3 +119,47 @@ export async function bomXlsx(lines: readonly BomLine[], heading: BomHeading): P
   [28, 18, 14, 18, 12, 14, 10, 16].forEach((width, index) => (sheet.getColumn(index + 1).width = width));
   return Buffer.from(await workbook.xlsx.writeBuffer());
 }
+
+/** One line of a request for quotation as the supplier sees it: no price of ours. */
+export interface QuoteLine {
+  supplierName: string;
+  partNumber: string;
+  quantityPerMachine: number;
+  /** Per machine × the machines of the request. */
+  quantity: number;
+  mountPoints: readonly string[];
+}
+
+/** Columns of the BOM for quoting sent to a supplier (our own): part, quantity, placement — never a price. */
+export const QUOTE_CSV_COLUMNS = ['supplier', 'part_number', 'quantity', 'quantity_per_machine', 'machines', 'mount_points'] as const;
+
+export function quoteBomCsv(lines: readonly QuoteLine[], machineCount: number): string {
+  const rows = lines.map((line) => [
+    line.supplierName,
+    line.partNumber,
+    line.quantity,
+    line.quantityPerMachine,
+    machineCount,
+    line.mountPoints.join(' '),
+  ]);
+  return stringify(rows, { header: true, columns: [...QUOTE_CSV_COLUMNS], escape_formulas: true });
+}
+
+export async function quoteBomXlsx(lines: readonly QuoteLine[], heading: BomHeading, machineCount: number): Promise<Buffer> {
+  const workbook = new ExcelJS.Workbook();
+  workbook.creator = 'Tacet';
+  const sheet = workbook.addWorksheet('Request for quotation');
+  const machines = machineCount === 1 ? 'one machine' : `${machineCount} identical machines`;
+  sheet.addRow([`${heading.projectName} — ${heading.designName} — rev ${heading.revision} — for ${machines}`]).font = {
+    bold: true,
+    size: 13,
+  };
+  sheet.addRow(['Supplier', 'Part number', 'Quantity (pcs)', 'Per machine (pcs)', 'Machines', 'Mount points (each machine)']).font = {
+    bold: true,
+  };
+  for (const line of lines) {
+    sheet.addRow([line.supplierName, line.partNumber, line.quantity, line.quantityPerMachine, machineCount, line.mountPoints.join(' ')]);
+  }
+  [28, 18, 14, 16, 10, 28].forEach((width, index) => (sheet.getColumn(index + 1).width = width));
+  return Buffer.from(await workbook.xlsx.writeBuffer());
+}

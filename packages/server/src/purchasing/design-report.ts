@@ -41,6 +41,15 @@ export interface ReportOptions {
   releasedAt: Date | null;
   /** As-built measurements of the design, newest first (the report lists them when there are any). */
   verifications?: Verification[];
+  /** The checker's release notes, printed under the sign-off. */
+  releaseNotes?: string | null;
+  /**
+   * False: the copy for a supplier's quotation — the bill of materials lists part, quantity and
+   * mount points without our catalog prices, totals or lead times.
+   */
+  prices?: boolean;
+  /** The supplier's copy: the identical machines the request is for (quantities are per machine). */
+  machineCount?: number;
   /** Uncompressed content streams (tests read the text back). */
   compress?: boolean;
 }
@@ -93,6 +102,7 @@ export function designReportPdf(design: Design, options: ReportOptions): Promise
   doc.text(`Design: ${design.name}, revision ${design.revision} (${design.status.replace('_', ' ')})`);
   doc.text(`Author: ${design.author.name}    Checked and released by: ${design.checker?.name ?? '—'}`);
   if (options.releasedAt) doc.text(`Released: ${options.releasedAt.toISOString().slice(0, 10)}`);
+  if (options.releaseNotes) doc.text(`Release notes: ${options.releaseNotes}`);
   if (draft) doc.font('heading').fillColor('#c00000').text('DRAFT — not checked or released; not for purchasing or construction.');
 
   heading('Cautions');
@@ -186,20 +196,27 @@ export function designReportPdf(design: Design, options: ReportOptions): Promise
   doc.font('heading').fontSize(16).fillColor('black').text('Bill of materials');
   const lines = design.bom ?? [];
   if (lines.length === 0) body('No mounts chosen yet.');
-  for (const line of lines) {
-    body(
-      `${line.supplier.name} ${line.partNumber} × ${line.quantity} (points ${line.mountPoints.join(', ')}): ` +
-        `${line.unitPrice === null ? 'price on request' : `${line.unitPrice.toFixed(2)} ${line.currency} each, ${line.extendedPrice?.toFixed(2)} ${line.currency}`}` +
-        `${line.leadTimeDays === null ? '' : `, lead time ${line.leadTimeDays} days`}`,
-    );
-  }
-  for (const total of bomTotals(lines)) {
-    doc
-      .font('heading')
-      .fontSize(10)
-      .text(
-        `Total: ${total.quantity} mounts, ${total.amount.toFixed(2)} ${total.currency}${total.unpricedLines ? ` (${total.unpricedLines} line(s) without a price)` : ''}`,
+  const withPrices = options.prices ?? true;
+  if (!withPrices) {
+    const machines = options.machineCount ?? 1;
+    body(machines > 1 ? `Quantities for one machine; this request is for ${machines} identical machines.` : 'Quantities for one machine.');
+    for (const line of lines) body(`${line.supplier.name} ${line.partNumber} × ${line.quantity} (points ${line.mountPoints.join(', ')})`);
+  } else {
+    for (const line of lines) {
+      body(
+        `${line.supplier.name} ${line.partNumber} × ${line.quantity} (points ${line.mountPoints.join(', ')}): ` +
+          `${line.unitPrice === null ? 'price on request' : `${line.unitPrice.toFixed(2)} ${line.currency} each, ${line.extendedPrice?.toFixed(2)} ${line.currency}`}` +
+          `${line.leadTimeDays === null ? '' : `, lead time ${line.leadTimeDays} days`}`,
       );
+    }
+    for (const total of bomTotals(lines)) {
+      doc
+        .font('heading')
+        .fontSize(10)
+        .text(
+          `Total: ${total.quantity} mounts, ${total.amount.toFixed(2)} ${total.currency}${total.unpricedLines ? ` (${total.unpricedLines} line(s) without a price)` : ''}`,
+        );
+    }
   }
   if (snapshot) {
     heading('Data basis');

@@ -1,7 +1,7 @@
 import { ConflictException, ForbiddenException, Injectable } from '@nestjs/common';
 import { InjectRepository } from '@nestjs/typeorm';
 import { isVibrationInputError } from '@tacet/vibration';
-import type { Repository } from 'typeorm';
+import { In, type Repository } from 'typeorm';
 import { PURCHASER_VISIBLE_STATUSES } from '../designs/design-status.js';
 import { Design } from '../designs/design.entity.js';
 import { DesignsService } from '../designs/designs.service.js';
@@ -11,12 +11,14 @@ import type { User } from '../users/user.entity.js';
 import { VerificationsService } from '../verifications/verifications.service.js';
 import { bomCsv, bomTotals, bomXlsx, exportFileName, type BomHeading } from './bom-export.js';
 import { designReportPdf } from './design-report.js';
-import type { PurchasingDesignDto } from './dto/rfq.dto.js';
+import { dueBy, type OpenRfqDto, type PurchasingDesignDto } from './dto/rfq.dto.js';
+import { RfqLine } from './rfq-line.entity.js';
 import { RFQ_STATUSES, type RfqStatus } from './rfq-status.js';
 import { Rfq } from './rfq.entity.js';
 
 export const EXPORT_MESSAGES = {
-  releasedOnly: 'Only released designs can be exported',
+  releasedOnly:
+    'The bill of materials of an unreleased design goes only to its author, an admin, and engineers while the design is in check',
   chooseFirst: 'Choose mounts before exporting the bill of materials',
   draftReport: 'Reports of unreleased designs are for engineers and admins',
 } as const;
@@ -35,6 +37,7 @@ export class PurchasingService {
   constructor(
     @InjectRepository(Design) private readonly designRepo: Repository<Design>,
     @InjectRepository(Rfq) private readonly rfqs: Repository<Rfq>,
+    @InjectRepository(RfqLine) private readonly rfqLines: Repository<RfqLine>,
     private readonly designs: DesignsService,
     private readonly review: ReviewService,
     private readonly verifications: VerificationsService,
@@ -69,11 +72,22 @@ export class PurchasingService {
     };
   }
 
-  /** The PDF of a design already loaded with its project and people. */
-  async reportOf(design: Design, compress = true): Promise<Buffer> {
-    const releasedAt = (await this.review.releasedAt([design.id])).get(design.id) ?? null;
+  /**
+   * The PDF of a design already loaded with its project and people. `forSupplier`: the copy sent
+   * with a request for quotation, without our prices.
+   */
+  async reportOf(design: Design, compress = true, forSupplier?: { machineCount: number }): Promise<Buffer> {
+    const release = isReleased(design) ? await this.review.releaseOf(design.id) : null;
     const verifications = await this.verifications.listOf(design.id);
-    return designReportPdf(design, { disturbingFrequencies: frequenciesOrNone(design), releasedAt, verifications, compress });
+    return designReportPdf(design, {
+      disturbingFrequencies: frequenciesOrNone(design),
+      releasedAt: release?.at ?? null,
+      releaseNotes: release?.notes ?? null,
+      verifications,
+      compress,
+      prices: !forSupplier,
+      machineCount: forSupplier?.machineCount,
+    });
   }
 
   /** Released designs (status released), newest release first, with their RFQ counts. */
@@ -82,6 +96,7 @@ export class PurchasingService {
     const ids = designs.map((design) => design.id);
     const releasedAt = await this.review.releasedAt(ids);
     const counts = await this.rfqCounts(ids);
+    const open = await this.openRequests(ids);
     const items = designs.map((design): PurchasingDesignDto => {
       const lines = design.bom ?? [];
       const totals = bomTotals(lines);
@@ -98,6 +113,7 @@ export class PurchasingService {
         total: totals.length === 1 ? totals[0].amount : totals.length === 0 ? 0 : null,
         currency: totals.length === 1 ? totals[0].currency : null,
         rfqs: counts.get(design.id) ?? emptyCounts(),
+        openRequests: open.get(design.id) ?? [],
       };
     });
     return items.sort((a, b) => (b.releasedAt ?? '').localeCompare(a.releasedAt ?? '') || b.designId - a.designId);
@@ -105,15 +121,45 @@ export class PurchasingService {
 
   /**
    * Who may export a BOM: released and superseded designs for every role the route admits;
-   * a draft or a design in review only for its author or an admin (marked DRAFT).
+   * a draft only for its author or an admin, a design in check also for any engineer (its
+   * checker) — marked DRAFT.
    */
   private async exportable(user: User, id: number): Promise<{ design: Design; heading: BomHeading }> {
     const design = await this.designs.getVisible(user, id);
-    if (!isReleased(design) && !(user.role === 'admin' || design.authorId === user.id)) {
-      throw new ConflictException(EXPORT_MESSAGES.releasedOnly);
-    }
+    if (!isReleased(design) && !mayExportUnreleased(user, design)) throw new ConflictException(EXPORT_MESSAGES.releasedOnly);
     if (!design.bom?.length) throw new ConflictException(EXPORT_MESSAGES.chooseFirst);
     return { design, heading: headingOf(design) };
+  }
+
+  /** Per design: requests waiting for a quote, quoted, or ordered and not received, oldest first. */
+  private async openRequests(designIds: number[]): Promise<Map<number, OpenRfqDto[]>> {
+    const result = new Map<number, OpenRfqDto[]>();
+    if (designIds.length === 0) return result;
+    const rfqs = await this.rfqs.find({
+      where: { designId: In(designIds), status: In(['requested', 'quoted', 'ordered']) },
+      relations: { supplier: true },
+      order: { id: 'ASC' },
+    });
+    const lines = rfqs.length ? await this.rfqLines.find({ where: { rfqId: In(rfqs.map((rfq) => rfq.id)) } }) : [];
+    for (const rfq of rfqs) {
+      const list = result.get(rfq.designId) ?? [];
+      list.push({
+        rfqId: rfq.id,
+        supplier: { id: rfq.supplier.id, name: rfq.supplier.name },
+        status: rfq.status,
+        requestedAt: rfq.createdAt.toISOString(),
+        quotedPrice: rfq.quotedPrice,
+        quoteCurrency: rfq.quoteCurrency,
+        quoteReference: rfq.quoteReference,
+        quoteValidUntil: rfq.quoteValidUntil,
+        dueBy: dueBy(
+          rfq,
+          lines.filter((line) => line.rfqId === rfq.id),
+        ),
+      });
+      result.set(rfq.designId, list);
+    }
+    return result;
   }
 
   private async rfqCounts(designIds: number[]): Promise<Map<number, Record<RfqStatus, number>>> {
@@ -135,6 +181,11 @@ export class PurchasingService {
     }
     return result;
   }
+}
+
+/** An unreleased design's BOM: its author, an admin, or while it is in check any engineer (who checks it). */
+export function mayExportUnreleased(user: Pick<User, 'id' | 'role'>, design: Pick<Design, 'authorId' | 'status'>): boolean {
+  return user.role === 'admin' || design.authorId === user.id || (design.status === 'in_review' && user.role === 'engineer');
 }
 
 export function headingOf(design: Design): BomHeading {

@@ -36,8 +36,28 @@ export class Rfq {
   @Column({ type: 'varchar', length: 2000, nullable: true })
   failureReason: string | null;
 
+  /** Identical machines the request is for: every line's quantity is per machine × this. */
+  @Column({ type: 'integer', default: 1 })
+  machineCount: number;
+
+  /** The total of the quote (Σ unit price × quantity of its lines), in `quoteCurrency`. */
   @Column({ type: 'double precision', nullable: true })
   quotedPrice: number | null;
+
+  /** The supplier's reference of the quote. */
+  @Column({ type: 'varchar', length: 200, nullable: true })
+  quoteReference: string | null;
+
+  /** Last day the quote holds (YYYY-MM-DD). */
+  @Column({ type: 'varchar', length: 10, nullable: true })
+  quoteValidUntil: string | null;
+
+  @Column({ type: 'varchar', length: 3, nullable: true })
+  quoteCurrency: string | null;
+
+  /** When the order was recorded (the start of the quoted lead times). */
+  @Column({ type: Date, nullable: true })
+  orderedAt: Date | null;
 
   @Column({ type: Date, nullable: true })
   quotedAt: Date | null;

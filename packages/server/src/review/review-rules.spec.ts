@@ -1,6 +1,6 @@
 import { describe, expect, it } from '@jest/globals';
 import { DESIGN_STATUSES } from '../designs/design-status.js';
-import { checkTransition } from './review-rules.js';
+import { canBeNamedChecker, checkTransition, misplacedFields } from './review-rules.js';
 
 const author = { id: 1, role: 'engineer' as const };
 const other = { id: 2, role: 'engineer' as const };
@@ -42,5 +42,23 @@ describe('checkTransition (the review state machine)', () => {
     for (const role of ['viewer', 'purchaser', 'catalog_manager'] as const) {
       expect(checkTransition({ id: 1, role }, design('draft'), 'in_review', undefined)).toMatchObject({ kind: 'forbidden' });
     }
+  });
+
+  it('a note and a named checker go with sending for check only; messages use words, not state codes', () => {
+    expect(misplacedFields('in_review', { note: 'Ready', checkerId: 2 })).toEqual([]);
+    expect(misplacedFields('draft', { note: 'x' }).map((p) => p.field)).toEqual(['note']);
+    expect(misplacedFields('released', { checkerId: 2 }).map((p) => p.field)).toEqual(['checkerId']);
+    expect(checkTransition(author, design('released'), 'in_review', undefined)).toMatchObject({
+      message: 'A design cannot go from released to in check',
+    });
+  });
+
+  it('the named checker is an active engineer or admin other than the author', () => {
+    expect(canBeNamedChecker({ id: 2, role: 'engineer', active: true }, 1)).toBe(true);
+    expect(canBeNamedChecker({ id: 3, role: 'admin', active: true }, 1)).toBe(true);
+    expect(canBeNamedChecker({ id: 1, role: 'engineer', active: true }, 1)).toBe(false);
+    expect(canBeNamedChecker({ id: 2, role: 'engineer', active: false }, 1)).toBe(false);
+    expect(canBeNamedChecker({ id: 4, role: 'purchaser', active: true }, 1)).toBe(false);
+    expect(canBeNamedChecker(null, 1)).toBe(false);
   });
 });

@@ -8,8 +8,33 @@ export const REVIEW_MESSAGES = {
   commentRequired: 'Say why the design goes back to draft (comment)',
   otherReleases: 'A design is released by an engineer other than its author',
   revisionFrom: 'A new revision starts from a released or superseded design',
-  notAllowed: (from: DesignStatus, to: DesignStatus) => `A design cannot go from ${from} to ${to}`,
+  notAllowed: (from: DesignStatus, to: DesignStatus) => `A design cannot go from ${STATE_WORDS[from]} to ${STATE_WORDS[to]}`,
+  noteWhenSending: 'A note goes with sending for check; the checker writes a comment instead',
+  checkerWhenSending: 'A checker is named only when the design is sent for check',
+  checkerNotAllowed: 'Ask an active engineer other than the author of this design to check it',
 } as const;
+
+/** The states in words (messages never show `in_review`). */
+export const STATE_WORDS: Record<DesignStatus, string> = {
+  draft: 'draft',
+  in_review: 'in check',
+  released: 'released',
+  superseded: 'superseded',
+};
+
+/** Fields of a transition that belong to another move: a note and a named checker go only with sending for check. */
+export function misplacedFields(to: DesignStatus, sent: { note?: string; checkerId?: number }): { field: string; message: string }[] {
+  const problems: { field: string; message: string }[] = [];
+  if (to !== 'in_review' && sent.note !== undefined) problems.push({ field: 'note', message: REVIEW_MESSAGES.noteWhenSending });
+  if (to !== 'in_review' && sent.checkerId !== undefined)
+    problems.push({ field: 'checkerId', message: REVIEW_MESSAGES.checkerWhenSending });
+  return problems;
+}
+
+/** Who may be named to check: an active engineer or admin who is not the author. */
+export function canBeNamedChecker(candidate: Pick<User, 'id' | 'role' | 'active'> | null, authorId: number): boolean {
+  return !!candidate && candidate.active && (candidate.role === 'engineer' || candidate.role === 'admin') && candidate.id !== authorId;
+}
 
 export type ReviewVerdict = { ok: true } | { ok: false; kind: 'forbidden' | 'conflict' | 'bad-request'; message: string };
 

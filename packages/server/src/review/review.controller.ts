@@ -11,6 +11,7 @@ import {
 import { CurrentUser } from '../common/decorators/current-user.decorator.js';
 import { Roles } from '../common/decorators/roles.decorator.js';
 import { DesignDto } from '../designs/dto/design.dto.js';
+import { UserRefDto } from '../projects/dto/project.dto.js';
 import type { User } from '../users/user.entity.js';
 import { HistoryEntryDto, TransitionDto } from './dto/transition.dto.js';
 import { ReviewService } from './review.service.js';
@@ -39,6 +40,16 @@ export class ReviewController {
   @ApiConflictResponse({ description: 'The design is not released or superseded' })
   startRevision(@CurrentUser() user: User, @Param('id', ParseIntPipe) id: number): Promise<DesignDto> {
     return this.review.startRevision(user, id);
+  }
+
+  @Get('checkers')
+  @Roles('engineer', 'admin')
+  @ApiOkResponse({
+    type: [UserRefDto],
+    description: 'Who may be asked to check this design: active engineers and admins other than its author, by name',
+  })
+  checkers(@CurrentUser() user: User, @Param('id', ParseIntPipe) id: number): Promise<UserRefDto[]> {
+    return this.review.checkers(user, id);
   }
 
   @Get('history')

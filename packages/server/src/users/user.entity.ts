@@ -30,6 +30,10 @@ export class User {
   @Column({ type: 'boolean', default: true })
   active: boolean;
 
+  /** Signed in with a temporary password an admin set: nothing but choosing a new one until then. */
+  @Column({ type: 'boolean', default: false })
+  mustChangePassword: boolean;
+
   @CreateDateColumn()
   createdAt: Date;
 

@@ -1,8 +1,9 @@
-import { Body, Controller, Delete, Get, Param, ParseIntPipe, Patch, Post } from '@nestjs/common';
+import { Body, Controller, Delete, Get, HttpCode, Param, ParseIntPipe, Patch, Post } from '@nestjs/common';
 import { ApiBearerAuth, ApiConflictResponse, ApiCreatedResponse, ApiOkResponse, ApiTags } from '@nestjs/swagger';
 import { CurrentUser } from '../common/decorators/current-user.decorator.js';
 import { Roles } from '../common/decorators/roles.decorator.js';
 import { CreateUserDto } from './dto/create-user.dto.js';
+import { TemporaryPasswordDto } from './dto/temporary-password.dto.js';
 import { UpdateUserDto } from './dto/update-user.dto.js';
 import { UserDto } from './dto/user.dto.js';
 import type { User } from './user.entity.js';
@@ -39,6 +40,13 @@ export class UsersController {
   @ApiConflictResponse({ description: 'An admin cannot deactivate themselves or drop their own admin role' })
   async update(@CurrentUser() actor: User, @Param('id', ParseIntPipe) id: number, @Body() dto: UpdateUserDto): Promise<UserDto> {
     return UserDto.from(await this.users.update(actor, id, dto));
+  }
+
+  @Post(':id/temporary-password')
+  @HttpCode(200)
+  @ApiOkResponse({ type: UserDto, description: 'Set; the user must choose a new password at the next sign-in (mustChangePassword)' })
+  async temporaryPassword(@Param('id', ParseIntPipe) id: number, @Body() dto: TemporaryPasswordDto): Promise<UserDto> {
+    return UserDto.from(await this.users.setTemporaryPassword(id, dto.password));
   }
 
   @Delete(':id')

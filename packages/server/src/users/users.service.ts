@@ -57,6 +57,7 @@ export class UsersService {
       role: dto.role,
       unitSystem: dto.unitSystem ?? 'SI',
       active: true,
+      mustChangePassword: false,
       passwordHash: await this.passwords.hash(dto.password),
     });
     try {
@@ -94,17 +95,36 @@ export class UsersService {
     return this.users.save(user);
   }
 
+  /** Changes one's own password (which also ends a temporary one). */
   async changePassword(user: User, dto: ChangePasswordDto): Promise<void> {
     if (!(await this.passwords.verify(dto.currentPassword, user.passwordHash))) {
       throw new BadRequestException('Current password is incorrect');
     }
-    this.assertAcceptablePassword(dto.newPassword);
-    user.passwordHash = await this.passwords.hash(dto.newPassword);
+    if (dto.newPassword === dto.currentPassword) throw new BadRequestException('Choose a new password that differs from the current one');
+    await this.setPassword(user, dto.newPassword, false);
+  }
+
+  /** An admin sets a temporary password: its owner must choose a new one at their next sign-in. */
+  async setTemporaryPassword(id: number, password: string): Promise<User> {
+    const user = await this.findOne(id);
+    await this.setPassword(user, password, true);
+    return user;
+  }
+
+  hashPassword(password: string): Promise<string> {
+    return this.passwords.hash(password);
+  }
+
+  /** Sets a password (checked, hashed); `temporary`: to be changed at the next sign-in. */
+  async setPassword(user: User, password: string, temporary: boolean): Promise<void> {
+    this.assertAcceptablePassword(password);
+    user.passwordHash = await this.passwords.hash(password);
+    user.mustChangePassword = temporary;
     await this.users.save(user);
   }
 
   /** Length is checked by the DTOs; the demo password is refused outside demo mode. */
-  private assertAcceptablePassword(password: string): void {
+  assertAcceptablePassword(password: string): void {
     if (!this.config.demo && password === DEMO_PASSWORD) {
       throw new BadRequestException('The demo password cannot be used here; choose another one');
     }

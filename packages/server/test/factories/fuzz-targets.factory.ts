@@ -1,6 +1,23 @@
 import { mountBody } from './catalog.factory.js';
 import { createDesign, createRfqCatalog, releaseDesign } from './review.factory.js';
 import type { TestApp } from '../utils/create-test-app.js';
+import { MailCatcherService } from '../../src/mail/mail-catcher.service.js';
+
+/** Asks for a "forgot password" link for `email` and reads its token from the local mail catcher. */
+async function mailedResetToken(t: TestApp, email: string): Promise<string> {
+  const asked = await t.http().post('/api/auth/password-reset').send({ email });
+  if (asked.status !== 202) throw new Error(`password reset: ${asked.status} ${asked.text}`);
+  for (let attempt = 0; attempt < 100; attempt++) {
+    const mail = t.app
+      .get(MailCatcherService)
+      .store.list()
+      .find((m) => m.to.includes(email) && m.text.includes('reset-password?token='));
+    const token = mail && /reset-password\?token=(\S+)/.exec(mail.text)?.[1];
+    if (token) return decodeURIComponent(token);
+    await new Promise((resolve) => setTimeout(resolve, 50));
+  }
+  throw new Error(`no password link reached ${email}`);
+}
 
 /** Who sends a fuzzed request: an admin (passes every role check), a user of the fuzz's own, or nobody. */
 export type FuzzCaller = 'admin' | 'own-user' | 'anonymous';
@@ -78,7 +95,8 @@ export async function createFuzzTargets(t: TestApp): Promise<FuzzTargets> {
   const toSubmit = await createDesign(t, admin, catalog);
   const released = await createDesign(t, engineer, catalog);
   await releaseDesign(t, released.id, engineer, checker);
-  const rfq = await must('rfq', t.http().post(`/api/designs/${released.id}/rfqs`).set(auth).send({ supplierId }));
+  const rfq = await must('rfq', t.http().post(`/api/designs/${released.id}/rfqs`).set(auth).send({ supplierId, machineCount: 2 }));
+  const rfqLineId = (rfq as unknown as { lines: { id: number }[] }).lines[0].id;
   const victim = await must(
     'user',
     t
@@ -96,6 +114,14 @@ export async function createFuzzTargets(t: TestApp): Promise<FuzzTargets> {
       .send({ ...OWN_USER, name: 'Fay Fuzz', role: 'engineer' }),
   );
   const ownUser = await t.login(OWN_USER.email, OWN_USER.password);
+  // One link, spent by the first valid example request; every later confirmation is refused and changes nothing.
+  const resetToken = await mailedResetToken(t, 'fuzz-victim@example.test');
+  const checkerId = (
+    await t
+      .http()
+      .get('/api/auth/me')
+      .set({ Authorization: `Bearer ${checker}` })
+  ).body.id as number;
 
   const currentVersion = async (id: number): Promise<number> => (await t.http().get(`/api/designs/${id}`).set(auth)).body.version ?? 1;
   const input = designInput(supplierId);
@@ -113,6 +139,18 @@ export async function createFuzzTargets(t: TestApp): Promise<FuzzTargets> {
       url: '/api/users',
       as: 'admin',
       body: () => ({ email: 'fuzz-new@example.test', name: 'Nia New', role: 'viewer', password: 'new user password', unitSystem: 'SI' }),
+      runsFactor: 0.5,
+    },
+    'POST /api/auth/password-reset': { url: '/api/auth/password-reset', as: 'anonymous', body: () => ({ email: OWN_USER.email }) },
+    'POST /api/auth/password-reset/confirm': {
+      url: '/api/auth/password-reset/confirm',
+      as: 'anonymous',
+      body: () => ({ token: resetToken, password: 'victim password 2' }),
+    },
+    'POST /api/users/:id/temporary-password': {
+      url: `/api/users/${victim.id}/temporary-password`,
+      as: 'admin',
+      body: () => ({ password: 'temporary password 1' }),
       runsFactor: 0.5,
     },
     'PATCH /api/users/:id': {
@@ -170,18 +208,31 @@ export async function createFuzzTargets(t: TestApp): Promise<FuzzTargets> {
     'POST /api/designs/:id/transitions': {
       url: `/api/designs/${toSubmit.id}/transitions`,
       as: 'admin',
-      body: () => ({ to: 'in_review', comment: 'Ready' }),
+      body: () => ({ to: 'in_review', note: 'Ready for check', checkerId: checkerId }),
     },
     'POST /api/designs/:id/revisions': { url: `/api/designs/${released.id}/revisions`, as: 'admin', body: () => ({}) },
+    'POST /api/designs/:id/rfqs/preview': {
+      url: `/api/designs/${released.id}/rfqs/preview`,
+      as: 'admin',
+      body: () => ({ supplierId, message: 'Please quote.', machineCount: 3 }),
+    },
     'POST /api/designs/:id/rfqs': {
       url: `/api/designs/${released.id}/rfqs`,
       as: 'admin',
-      body: () => ({ supplierId, message: 'Please quote.' }),
+      body: () => ({ supplierId, message: 'Please quote.', machineCount: 2 }),
     },
     'PATCH /api/rfqs/:id': {
       url: `/api/rfqs/${rfq.id}`,
       as: 'admin',
-      body: () => ({ status: 'quoted', quotedPrice: 40.5, quotedAt: '2026-03-01T12:00:00.000Z', note: 'By phone' }),
+      body: () => ({
+        status: 'quoted',
+        lines: [{ lineId: rfqLineId, unitPrice: 40.5, leadTimeDays: 21 }],
+        reference: 'Q-2026-041',
+        validUntil: '2026-06-30',
+        currency: 'USD',
+        quotedAt: '2026-03-01T12:00:00.000Z',
+        note: 'By phone',
+      }),
     },
     'POST /api/rfqs/:id/retry': { url: `/api/rfqs/${rfq.id}/retry`, as: 'admin', body: () => ({}) },
     // multipart: JSON bodies never carry the file, so every one is refused; the file itself is fuzzed in fuzz-verification.e2e-spec.ts

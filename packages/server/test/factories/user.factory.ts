@@ -13,6 +13,7 @@ export function buildUser(overrides: Partial<User> = {}): User {
     role: 'engineer',
     unitSystem: 'SI',
     active: true,
+    mustChangePassword: false,
     createdAt: new Date('2026-01-01T00:00:00Z'),
     updatedAt: new Date('2026-01-01T00:00:00Z'),
     ...overrides,

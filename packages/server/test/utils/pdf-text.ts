@@ -1,3 +1,4 @@
+import { inflateSync } from 'node:zlib';
 /**
  * Reads the text back out of an uncompressed PDF written by pdfkit (`compress: false`), for
  * tests only. pdfkit writes embedded-font text as glyph ids in hex inside `[...] TJ` arrays and
@@ -43,4 +44,29 @@ export function pdfHasText(pdf: Buffer, text: string): boolean {
 /** Number of page objects (`/Type /Page`, not `/Pages`). */
 export function pdfPageCount(pdf: Buffer): number {
   return pdf.toString('latin1').match(/\/Type\s*\/Page(?![a-zA-Z])/g)?.length ?? 0;
+}
+
+/**
+ * The PDF with every Flate-compressed stream inflated in place, so that `pdfTexts` reads a
+ * compressed PDF as sent (streams that do not inflate are left as they are).
+ */
+export function inflatePdf(pdf: Buffer): Buffer {
+  const raw = pdf.toString('latin1');
+  const out: string[] = [];
+  let at = 0;
+  for (const match of raw.matchAll(/(?<!end)stream\r?\n/g)) {
+    const start = match.index! + match[0].length;
+    const end = raw.indexOf('endstream', start);
+    if (end < 0 || start < at) continue;
+    out.push(raw.slice(at, start));
+    const body = pdf.subarray(start, end);
+    try {
+      out.push(inflateSync(body).toString('latin1'));
+    } catch {
+      out.push(raw.slice(start, end));
+    }
+    at = end;
+  }
+  out.push(raw.slice(at));
+  return Buffer.from(out.join(''), 'latin1');
 }

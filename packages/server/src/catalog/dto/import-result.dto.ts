@@ -78,6 +78,14 @@ export class ImportPreviewRowDto implements ImportPreviewRow {
   leadTimeDays: number | null;
 }
 
+export class NewSupplierDto {
+  @ApiProperty({ example: 'Quillmere Isolaton' }) name: string;
+  @ApiProperty({ description: "The file's first row naming it" }) firstRow: number;
+  @ApiProperty({ description: 'Valid rows naming it' }) rows: number;
+  @ApiProperty({ type: String, nullable: true, description: 'An existing supplier with a very similar name (a likely typo)', example: 'Quillmere Isolation' })
+  similarTo: string | null;
+}
+
 /** The answer of POST /api/mounts/import (200, and 422 with `statusCode` and `message` added). */
 export class ImportResultDto implements ImportResult {
   @ApiProperty({ description: 'Valid rows' })
@@ -103,6 +111,9 @@ export class ImportResultDto implements ImportResult {
 
   @ApiProperty({ type: [ImportPreviewRowDto], description: 'The first 100 accepted rows' })
   preview: ImportPreviewRowDto[];
+
+  @ApiProperty({ type: [NewSupplierDto], description: 'Suppliers not in the catalog that the file creates (or, in a preview, would create)' })
+  newSuppliers: NewSupplierDto[];
 }
 
 export class ImportRejectedDto extends ImportResultDto {

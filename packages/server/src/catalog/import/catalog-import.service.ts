@@ -1,5 +1,6 @@
 import { setImmediate as nextTurn } from 'node:timers/promises';
 import { Injectable, Logger } from '@nestjs/common';
+import { closest, distance } from 'fastest-levenshtein';
 import { DataSource, type EntityManager } from 'typeorm';
 import { CatalogRevisionService } from '../../catalog-revision/catalog-revision.service.js';
 import { Supplier } from '../../suppliers/supplier.entity.js';
@@ -13,7 +14,15 @@ import { readCsvRecords } from './csv-record-reader.js';
 import { ErrorReport } from './error-report.js';
 import { mapHeader, type CellProblem, type HeaderMap } from './header-mapper.js';
 import { CatalogFileError, type RowProblem } from './import-problem.js';
-import { MAX_REPORTED_ERRORS, PREVIEW_ROWS, emptyResult, type ImportPreviewRow, type ImportResult } from './import-result.js';
+import {
+  MAX_NEW_SUPPLIERS,
+  MAX_REPORTED_ERRORS,
+  PREVIEW_ROWS,
+  emptyResult,
+  type ImportPreviewRow,
+  type ImportResult,
+  type NewSupplier,
+} from './import-result.js';
 import { MountBatchWriter, type MountWrite } from './mount-batch-writer.js';
 import { isEmptyRow, rowKeyParts, validateRow } from './row-validator.js';
 
@@ -33,6 +42,19 @@ export interface ImportRequest {
 interface KnownSupplier {
   id: number | null;
   parts: ReadonlySet<string>;
+  /** Not in the catalog before this file (listed in `newSuppliers`). */
+  created: NewSupplier | null;
+}
+
+/**
+ * An existing supplier name close enough to a new one to be a typo: at most 2 edits, or 1 in
+ * 5 characters (Levenshtein distance on the name keys).
+ */
+export function similarSupplier(nameKey: string, existing: ReadonlyMap<string, string>): string | null {
+  if (existing.size === 0) return null;
+  const nearest = closest(nameKey, [...existing.keys()]);
+  const edits = distance(nameKey, nearest);
+  return edits <= Math.max(2, Math.floor(nameKey.length / 5)) ? (existing.get(nearest) ?? null) : null;
 }
 
 /** Rows validated between two turns of the event loop in a dry run. */
@@ -138,6 +160,8 @@ class ImportPass {
   private readonly suppliers = new Map<string, KnownSupplier>();
   private readonly nameKeys = new Map<string, string>();
   private readonly batch: MountWrite[] = [];
+  /** Names of the catalog's suppliers by name key, read once the file names a new supplier. */
+  private existingNames: Map<string, string> | null = null;
   private report: ErrorReport | null = null;
   private readonly result: ImportResult = emptyResult();
 
@@ -210,7 +234,8 @@ class ImportPass {
 
     const result = this.result;
     result.accepted++;
-    const supplier = await this.supplier(values.supplierName);
+    const supplier = await this.supplier(values.supplierName, row);
+    if (supplier.created) supplier.created.rows++;
     const action = supplier.parts.has(values.partNumber) ? 'update' : 'create';
     if (action === 'update') result.updated++;
     else result.created++;
@@ -249,13 +274,22 @@ class ImportPass {
   }
 
   /** The supplier a valid row names, created on first sight unless this is a dry run. */
-  private async supplier(name: string): Promise<KnownSupplier> {
+  private async supplier(name: string, row: number): Promise<KnownSupplier> {
     const nameKey = this.nameKey(name);
     const known = this.suppliers.get(nameKey);
     if (known) return known;
     const manager = this.manager;
     let id = (await manager.findOne(Supplier, { select: { id: true }, where: { nameKey } }))?.id ?? null;
     let parts = new Set<string>();
+    let created: NewSupplier | null = null;
+    if (id === null) {
+      if (!this.existingNames) {
+        const all = await manager.find(Supplier, { select: { name: true, nameKey: true } });
+        this.existingNames = new Map(all.map((supplier) => [supplier.nameKey, supplier.name]));
+      }
+      created = { name: cleanSupplierName(name), firstRow: row, rows: 0, similarTo: similarSupplier(nameKey, this.existingNames) };
+      if (this.result.newSuppliers.length < MAX_NEW_SUPPLIERS) this.result.newSuppliers.push(created);
+    }
     if (id !== null) {
       const rows: Array<{ partNumber: string }> = await manager
         .createQueryBuilder(Mount, 'm')
@@ -267,7 +301,7 @@ class ImportPass {
       const inserted = await manager.insert(Supplier, { name: cleanSupplierName(name), nameKey, active: true });
       id = Number(inserted.identifiers[0].id);
     }
-    const supplier = { id, parts };
+    const supplier = { id, parts, created };
     this.suppliers.set(nameKey, supplier);
     return supplier;
   }

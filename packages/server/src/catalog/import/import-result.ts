@@ -11,6 +11,17 @@ export interface ImportPreviewRow extends Omit<MountValues, 'supplierName'> {
   action: 'create' | 'update';
 }
 
+/** A supplier the file names that is not in the catalog: the import creates it (a typo shows here). */
+export interface NewSupplier {
+  name: string;
+  /** The file's first row naming it. */
+  firstRow: number;
+  /** Valid rows naming it. */
+  rows: number;
+  /** An existing supplier with a very similar name (a likely typo), or null. */
+  similarTo: string | null;
+}
+
 /** What an import did (or, for a dry run or a refused file, would do). */
 export interface ImportResult {
   /** Valid rows (written, unless dry run or refused). */
@@ -27,7 +38,11 @@ export interface ImportResult {
   importId: number | null;
   /** The first PREVIEW_ROWS accepted rows. */
   preview: ImportPreviewRow[];
+  /** Suppliers the file creates (would create, in a dry run), up to MAX_NEW_SUPPLIERS, in the file's order. */
+  newSuppliers: NewSupplier[];
 }
+
+export const MAX_NEW_SUPPLIERS = 200;
 
 export const MAX_REPORTED_ERRORS = 1000;
 export const PREVIEW_ROWS = 100;
@@ -41,4 +56,5 @@ export const emptyResult = (errors: RowProblem[] = []): ImportResult => ({
   errorsTruncated: errors.length > MAX_REPORTED_ERRORS,
   importId: null,
   preview: [],
+  newSuppliers: [],
 });

@@ -23,6 +23,9 @@ export class UserDto {
   @ApiProperty()
   active: boolean;
 
+  @ApiProperty({ description: 'Signed in with a temporary password an admin set: a new one must be chosen first' })
+  mustChangePassword: boolean;
+
   @ApiProperty({ type: String, format: 'date-time' })
   createdAt: string;
 
@@ -37,6 +40,7 @@ export class UserDto {
       role: user.role,
       unitSystem: user.unitSystem,
       active: user.active,
+      mustChangePassword: user.mustChangePassword,
       createdAt: user.createdAt.toISOString(),
       updatedAt: user.updatedAt.toISOString(),
     });
