@@ -56,6 +56,38 @@ export interface paths {
     patch?: never;
     trace?: never;
   };
+  "/api/auth/password-reset": {
+    parameters: {
+      query?: never;
+      header?: never;
+      path?: never;
+      cookie?: never;
+    };
+    get?: never;
+    put?: never;
+    post: operations["AuthController_requestPasswordReset"];
+    delete?: never;
+    options?: never;
+    head?: never;
+    patch?: never;
+    trace?: never;
+  };
+  "/api/auth/password-reset/confirm": {
+    parameters: {
+      query?: never;
+      header?: never;
+      path?: never;
+      cookie?: never;
+    };
+    get?: never;
+    put?: never;
+    post: operations["AuthController_confirmPasswordReset"];
+    delete?: never;
+    options?: never;
+    head?: never;
+    patch?: never;
+    trace?: never;
+  };
   "/api/designs/{id}": {
     parameters: {
       query?: never;
@@ -96,6 +128,22 @@ export interface paths {
       cookie?: never;
     };
     get: operations["PurchasingController_bomXlsx"];
+    put?: never;
+    post?: never;
+    delete?: never;
+    options?: never;
+    head?: never;
+    patch?: never;
+    trace?: never;
+  };
+  "/api/designs/{id}/checkers": {
+    parameters: {
+      query?: never;
+      header?: never;
+      path?: never;
+      cookie?: never;
+    };
+    get: operations["ReviewController_checkers"];
     put?: never;
     post?: never;
     delete?: never;
@@ -162,6 +210,22 @@ export interface paths {
     get: operations["RfqsController_list"];
     put?: never;
     post: operations["RfqsController_create"];
+    delete?: never;
+    options?: never;
+    head?: never;
+    patch?: never;
+    trace?: never;
+  };
+  "/api/designs/{id}/rfqs/preview": {
+    parameters: {
+      query?: never;
+      header?: never;
+      path?: never;
+      cookie?: never;
+    };
+    get?: never;
+    put?: never;
+    post: operations["RfqsController_preview"];
     delete?: never;
     options?: never;
     head?: never;
@@ -326,6 +390,22 @@ export interface paths {
     options?: never;
     head?: never;
     patch: operations["MountsController_update"];
+    trace?: never;
+  };
+  "/api/my-work": {
+    parameters: {
+      query?: never;
+      header?: never;
+      path?: never;
+      cookie?: never;
+    };
+    get: operations["MyWorkController_get"];
+    put?: never;
+    post?: never;
+    delete?: never;
+    options?: never;
+    head?: never;
+    patch?: never;
     trace?: never;
   };
   "/api/outbox": {
@@ -550,6 +630,22 @@ export interface paths {
     options?: never;
     head?: never;
     patch: operations["UsersController_update"];
+    trace?: never;
+  };
+  "/api/users/{id}/temporary-password": {
+    parameters: {
+      query?: never;
+      header?: never;
+      path?: never;
+      cookie?: never;
+    };
+    get?: never;
+    put?: never;
+    post: operations["UsersController_temporaryPassword"];
+    delete?: never;
+    options?: never;
+    head?: never;
+    patch?: never;
     trace?: never;
   };
 }
@@ -789,6 +885,11 @@ export interface components {
       supplierId: number;
       /** @description Added to the e-mail above the list of lines */
       message?: string;
+      /**
+       * @description Identical machines: every quantity is per machine × this
+       * @default 1
+       */
+      machineCount?: number;
     };
     CreateSupplierDto: {
       /**
@@ -885,6 +986,13 @@ export interface components {
     };
     /** @enum {string} */
     DesignStatus: "draft" | "in_review" | "released" | "superseded";
+    DesignStatusCountsDto: {
+      draft: number;
+      /** @description in check */
+      in_review: number;
+      released: number;
+      superseded: number;
+    };
     FrequencyBandDto: {
       /** @description Hz */
       min: number;
@@ -911,7 +1019,14 @@ export interface components {
       /** @description null when the entry starts a revision */
       from: components["schemas"]["DesignStatus"] | null;
       to: components["schemas"]["DesignStatus"];
+      /** @description The checker’s comment (a return to draft) or release notes */
       comment: string | null;
+      /** @description The author’s note or reply when sending for check */
+      note: string | null;
+      /** @description The engineer the author asked to check */
+      requestedChecker: components["schemas"]["UserRefDto"] | null;
+      /** @description Sending for check again (or a later revision): what changed in the input, in the caller’s units */
+      changes: components["schemas"]["SubmissionChangesDto"] | null;
     };
     /** @enum {string} */
     IdentificationQuality: "good" | "fair";
@@ -1010,6 +1125,8 @@ export interface components {
       importId: number | null;
       /** @description The first 100 accepted rows */
       preview: components["schemas"]["ImportPreviewRowDto"][];
+      /** @description Suppliers not in the catalog that the file creates (or, in a preview, would create) */
+      newSuppliers: components["schemas"]["NewSupplierDto"][];
       /** @example 422 */
       statusCode: number;
       /** @example 3 rows have problems; nothing was imported */
@@ -1032,6 +1149,8 @@ export interface components {
       importId: number | null;
       /** @description The first 100 accepted rows */
       preview: components["schemas"]["ImportPreviewRowDto"][];
+      /** @description Suppliers not in the catalog that the file creates (or, in a preview, would create) */
+      newSuppliers: components["schemas"]["NewSupplierDto"][];
     };
     /** @enum {string} */
     ImportRowAction: "create" | "update";
@@ -1053,6 +1172,24 @@ export interface components {
       ixz?: number;
       /** @example 0 */
       iyz?: number;
+    };
+    InputChangeDto: {
+      /** @description Where the value sits in the design input, e.g. mountPoints[B].x */
+      field: string;
+      /** @example Mount point B: x position */
+      label: string;
+      /** @description mass, force, position, deflection, stiffness, frequency, speed, temperature (SI values), percent, inertia (kg·m²), count; null for text */
+      quantity: string | null;
+      /** @description SI (speed in Hz), percent as percent; null when absent or text */
+      before: number | null;
+      after: number | null;
+      /**
+       * @description Before, in the caller’s units, e.g. "31.5 in"; "—" when it was absent
+       * @example 0.8 m
+       */
+      beforeText: string;
+      /** @example 0.85 m */
+      afterText: string;
     };
     LabelledFrequencyDto: {
       frequencyHz: number;
@@ -1167,6 +1304,43 @@ export interface components {
     };
     /** @enum {string} */
     MountType: "elastomer_pad" | "elastomer_mount" | "open_spring" | "housed_spring" | "restrained_spring" | "air_spring" | "wire_rope";
+    MyWorkDto: {
+      /** @description Designs in check that the caller may release (not their own); asked of the caller first */
+      toCheck: components["schemas"]["WorkItemDto"][];
+      /** @description The caller’s designs sent back to draft with a comment */
+      returned: components["schemas"]["WorkItemDto"][];
+      /** @description The caller’s other drafts */
+      drafts: components["schemas"]["WorkItemDto"][];
+      /** @description Purchasers and admins: released designs with no request for quotation yet; others: designs released in the last 30 days */
+      released: components["schemas"]["WorkItemDto"][];
+    };
+    NewSupplierDto: {
+      /** @example Quillmere Isolaton */
+      name: string;
+      /** @description The file's first row naming it */
+      firstRow: number;
+      /** @description Valid rows naming it */
+      rows: number;
+      /**
+       * @description An existing supplier with a very similar name (a likely typo)
+       * @example Quillmere Isolation
+       */
+      similarTo: string | null;
+    };
+    OpenRfqDto: {
+      rfqId: number;
+      supplier: components["schemas"]["SupplierRefDto"];
+      status: components["schemas"]["RfqStatus"];
+      /** Format: date-time */
+      requestedAt: string;
+      quotedPrice: number | null;
+      quoteCurrency: string | null;
+      quoteReference: string | null;
+      /** @description YYYY-MM-DD */
+      quoteValidUntil: string | null;
+      /** @description Ordered: delivery due by, YYYY-MM-DD */
+      dueBy: string | null;
+    };
     OperatingConditionsDto: {
       /**
        * @description fixed speed, rpm
@@ -1246,6 +1420,18 @@ export interface components {
       receivedAt: string;
       attachments: components["schemas"]["OutboxAttachmentDto"][];
     };
+    PasswordResetAnswerDto: {
+      message: string;
+    };
+    PasswordResetConfirmDto: {
+      /** @description The token from the link in the e-mail */
+      token: string;
+      password: string;
+    };
+    PasswordResetRequestDto: {
+      /** @example engineer@tacet.test */
+      email: string;
+    };
     PredictedDampingDto: {
       model: components["schemas"]["DampingModel"];
       /** @description ζ (viscous) or η (hysteretic) */
@@ -1280,6 +1466,8 @@ export interface components {
       archived: boolean;
       /** @description designs the caller may see */
       designCount: number;
+      /** @description the designs the caller may see, by state */
+      statusCounts: components["schemas"]["DesignStatusCountsDto"];
       /** Format: date-time */
       createdAt: string;
       /** Format: date-time */
@@ -1299,6 +1487,24 @@ export interface components {
       total: number | null;
       currency: string | null;
       rfqs: components["schemas"]["RfqCountsDto"];
+      /** @description Requests waiting for a quote, quoted, or ordered and not yet received */
+      openRequests: components["schemas"]["OpenRfqDto"][];
+    };
+    QuotedLineDto: {
+      /** @description The line of the request (RfqLineDto.id) */
+      lineId: number;
+      /** @description Price of one piece, in the quote’s currency */
+      unitPrice: number;
+      /** @description Days from order to delivery */
+      leadTimeDays?: number;
+    };
+    RfqAttachmentDto: {
+      /** @example North-Loop-P-3-rev1-quote-list.csv */
+      filename: string;
+      /** @example text/csv */
+      contentType: string;
+      /** @description bytes */
+      size: number;
     };
     RfqCountsDto: {
       requested: number;
@@ -1314,9 +1520,23 @@ export interface components {
       status: components["schemas"]["RfqStatus"];
       messageId: string | null;
       failureReason: string | null;
+      /** @description Identical machines the request is for */
+      machineCount: number;
+      /** @description As asked, and as quoted once recorded */
+      lines: components["schemas"]["RfqLineDto"][];
+      /** @description Total of the quote: Σ unit price × quantity */
       quotedPrice: number | null;
+      quoteCurrency: string | null;
+      /** @description The supplier’s reference */
+      quoteReference: string | null;
+      /** @description Last day the quote holds (YYYY-MM-DD) */
+      quoteValidUntil: string | null;
       /** Format: date-time */
       quotedAt: string | null;
+      /** Format: date-time */
+      orderedAt: string | null;
+      /** @description Ordered: the delivery is due by (order date + the longest quoted lead time), YYYY-MM-DD */
+      dueBy: string | null;
       createdBy: components["schemas"]["UserRefDto"];
       /** Format: date-time */
       createdAt: string;
@@ -1331,6 +1551,34 @@ export interface components {
       status: components["schemas"]["RfqStatus"];
       user: components["schemas"]["UserRefDto"];
       note: string | null;
+    };
+    RfqLineDto: {
+      id: number;
+      partNumber: string;
+      /** @description Pieces for one machine */
+      quantityPerMachine: number;
+      /** @description Pieces asked for (per machine × machines) */
+      quantity: number;
+      /** @description Mount points of one machine */
+      mountPoints: string[];
+      /** @description Quoted price of one piece */
+      unitPrice: number | null;
+      /** @description Quoted lead time */
+      leadTimeDays: number | null;
+    };
+    RfqPreviewDto: {
+      supplier: components["schemas"]["SupplierRefDto"];
+      /** @description The supplier’s contact e-mail */
+      to: string;
+      /** @description Where the supplier’s reply goes: the purchaser sending it */
+      replyTo: string;
+      subject: string;
+      /** @description The message as the supplier reads it (the request number is given when it is sent) */
+      text: string;
+      machineCount: number;
+      /** @description The lines asked for (ids 0: not yet recorded) */
+      lines: components["schemas"]["RfqLineDto"][];
+      attachments: components["schemas"]["RfqAttachmentDto"][];
     };
     /** @enum {string} */
     RfqProgressStatus: "quoted" | "ordered" | "received";
@@ -1395,6 +1643,8 @@ export interface components {
       name: string;
       role: components["schemas"]["Role"];
       unitSystem: components["schemas"]["UnitSystem"];
+      /** @description Signed in with a temporary password an admin set: a new one must be chosen first */
+      mustChangePassword: boolean;
     };
     SpeedRangeDto: {
       /**
@@ -1407,6 +1657,11 @@ export interface components {
        * @example 1480
        */
       max: number;
+    };
+    SubmissionChangesDto: {
+      /** @description null: since this revision was last sent for check; else since that revision */
+      sinceRevision: number | null;
+      items: components["schemas"]["InputChangeDto"][];
     };
     SupplierDto: {
       /** @example 3 */
@@ -1451,10 +1706,17 @@ export interface components {
       message: string;
       errors: components["schemas"]["TapTestProblemDto"][];
     };
+    TemporaryPasswordDto: {
+      password: string;
+    };
     TransitionDto: {
       to: components["schemas"]["TransitionTarget"];
-      /** @description Required when a design in review goes back to draft */
+      /** @description Sending for check: the author’s note to the checker, or reply to the comment when sending again */
+      note?: string;
+      /** @description The checker’s words: required when a design in check goes back to draft; release notes when releasing */
       comment?: string;
+      /** @description Sending for check: the engineer asked to check it (an engineer or admin other than the author) */
+      checkerId?: number;
     };
     /** @enum {string} */
     TransitionTarget: "in_review" | "draft" | "released";
@@ -1577,11 +1839,23 @@ export interface components {
     };
     UpdateRfqDto: {
       status: components["schemas"]["RfqProgressStatus"];
-      /** @description Required with status quoted; in the design BOM currency */
-      quotedPrice?: number;
+      /** @description With status quoted: a unit price (and lead time) for every line of the request */
+      lines?: components["schemas"]["QuotedLineDto"][];
+      /** @description With status quoted: the supplier’s reference of the quote */
+      reference?: string;
+      /**
+       * @description With status quoted: the last day the quote holds (YYYY-MM-DD)
+       * @example 2026-06-30
+       */
+      validUntil?: string;
+      /**
+       * @description With status quoted: the quote’s currency (default: the catalog’s for these lines)
+       * @example USD
+       */
+      currency?: string;
       /**
        * Format: date-time
-       * @description Defaults to now when the status becomes quoted
+       * @description When the quote came; defaults to now
        */
       quotedAt?: string;
       note?: string;
@@ -1620,6 +1894,8 @@ export interface components {
       role: components["schemas"]["Role"];
       unitSystem: components["schemas"]["UnitSystem"];
       active: boolean;
+      /** @description Signed in with a temporary password an admin set: a new one must be chosen first */
+      mustChangePassword: boolean;
       /** Format: date-time */
       createdAt: string;
       /** Format: date-time */
@@ -1678,6 +1954,21 @@ export interface components {
     VerificationKind: "frf" | "impact";
     /** @enum {string} */
     VerificationVerdict: "agrees" | "stiffer" | "softer";
+    WorkItemDto: {
+      designId: number;
+      projectId: number;
+      projectName: string;
+      name: string;
+      revision: number;
+      status: components["schemas"]["DesignStatus"];
+      /** Format: date-time */
+      updatedAt: string;
+      author: components["schemas"]["UserRefDto"];
+      /** @description In check: the engineer the author asked to check it */
+      requestedChecker: components["schemas"]["UserRefDto"] | null;
+      /** @description The last words on it: the checker’s comment (returned), the author’s note (in check) or the release notes */
+      lastComment: string | null;
+    };
   };
   responses: never;
   parameters: never;
@@ -1788,6 +2079,75 @@ export interface operations {
       };
       /** @description Current password is incorrect, or the new one is not acceptable */
       400: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content?: never;
+      };
+    };
+  };
+  AuthController_requestPasswordReset: {
+    parameters: {
+      query?: never;
+      header?: never;
+      path?: never;
+      cookie?: never;
+    };
+    requestBody: {
+      content: {
+        "application/json": components["schemas"]["PasswordResetRequestDto"];
+      };
+    };
+    responses: {
+      /** @description Whether or not the address has an account */
+      202: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          "application/json": components["schemas"]["PasswordResetAnswerDto"];
+        };
+      };
+      /** @description Too many attempts from this address */
+      429: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content?: never;
+      };
+    };
+  };
+  AuthController_confirmPasswordReset: {
+    parameters: {
+      query?: never;
+      header?: never;
+      path?: never;
+      cookie?: never;
+    };
+    requestBody: {
+      content: {
+        "application/json": components["schemas"]["PasswordResetConfirmDto"];
+      };
+    };
+    responses: {
+      /** @description The new password is set; the link is spent */
+      200: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          "application/json": components["schemas"]["PasswordResetAnswerDto"];
+        };
+      };
+      /** @description The link was used or has expired, or the password is not acceptable */
+      400: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content?: never;
+      };
+      /** @description Too many attempts from this address */
+      429: {
         headers: {
           [name: string]: unknown;
         };
@@ -1914,6 +2274,28 @@ export interface operations {
       };
     };
   };
+  ReviewController_checkers: {
+    parameters: {
+      query?: never;
+      header?: never;
+      path: {
+        id: number;
+      };
+      cookie?: never;
+    };
+    requestBody?: never;
+    responses: {
+      /** @description Who may be asked to check this design: active engineers and admins other than its author, by name */
+      200: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          "application/json": components["schemas"]["UserRefDto"][];
+        };
+      };
+    };
+  };
   ReviewController_history: {
     parameters: {
       query?: never;
@@ -2037,6 +2419,46 @@ export interface operations {
         };
         content: {
           "application/json": components["schemas"]["RfqDto"];
+        };
+      };
+      /** @description The design is not released */
+      409: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content?: never;
+      };
+      /** @description The supplier has no contact e-mail or no line in the BOM */
+      422: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content?: never;
+      };
+    };
+  };
+  RfqsController_preview: {
+    parameters: {
+      query?: never;
+      header?: never;
+      path: {
+        id: number;
+      };
+      cookie?: never;
+    };
+    requestBody: {
+      content: {
+        "application/json": components["schemas"]["CreateRfqDto"];
+      };
+    };
+    responses: {
+      /** @description What would be sent (recipient, text, lines, attachments); nothing is recorded or sent */
+      200: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          "application/json": components["schemas"]["RfqPreviewDto"];
         };
       };
       /** @description The design is not released */
@@ -2543,6 +2965,25 @@ export interface operations {
       };
     };
   };
+  MyWorkController_get: {
+    parameters: {
+      query?: never;
+      header?: never;
+      path?: never;
+      cookie?: never;
+    };
+    requestBody?: never;
+    responses: {
+      200: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          "application/json": components["schemas"]["MyWorkDto"];
+        };
+      };
+    };
+  };
   OutboxController_list: {
     parameters: {
       query?: never;
@@ -2848,6 +3289,13 @@ export interface operations {
         content: {
           "application/json": components["schemas"]["RfqDto"];
         };
+      };
+      /** @description A quote without a unit price for every line, or quote fields with another status */
+      400: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content?: never;
       };
       /** @description Statuses move forward only (requested → quoted → ordered → received) */
       409: {
@@ -3171,6 +3619,32 @@ export interface operations {
           [name: string]: unknown;
         };
         content?: never;
+      };
+    };
+  };
+  UsersController_temporaryPassword: {
+    parameters: {
+      query?: never;
+      header?: never;
+      path: {
+        id: number;
+      };
+      cookie?: never;
+    };
+    requestBody: {
+      content: {
+        "application/json": components["schemas"]["TemporaryPasswordDto"];
+      };
+    };
+    responses: {
+      /** @description Set; the user must choose a new password at the next sign-in (mustChangePassword) */
+      200: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          "application/json": components["schemas"]["UserDto"];
+        };
       };
     };
   };

@@ -22,6 +22,8 @@ export const routes: RouteObject[] = [
     hydrateFallbackElement: <PageLoader />,
     children: [
       { path: '/sign-in', lazy: () => import('./routes/sign-in') },
+      { path: '/forgot-password', lazy: () => import('./routes/forgot-password') },
+      { path: '/reset-password', lazy: () => import('./routes/reset-password') },
       {
         path: '/',
         lazy: () => import('./routes/app/root'),

@@ -178,6 +178,7 @@ export function makeImportResult(overrides: Partial<ImportResult> = {}): ImportR
     errorsTruncated: false,
     importId: null,
     preview: [],
+    newSuppliers: [],
     ...overrides,
   };
 }

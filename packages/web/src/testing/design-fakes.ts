@@ -48,6 +48,7 @@ export function makeProject(overrides: Partial<Project> = {}): Project {
     owner: { id: TEST_USERS.engineer.id, name: TEST_USERS.engineer.name },
     archived: false,
     designCount: 0,
+    statusCounts: { draft: 0, in_review: 0, released: 0, superseded: 0 },
     createdAt: '2025-01-06T09:00:00.000Z',
     updatedAt: '2025-01-08T15:30:00.000Z',
     ...overrides,

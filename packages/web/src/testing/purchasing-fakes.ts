@@ -72,8 +72,25 @@ export function makeRfq(overrides: Partial<Rfq> = {}): Rfq {
     status,
     messageId: status === 'failed' ? null : '<rfq@tacet.test>',
     failureReason: null,
+    machineCount: 1,
+    lines: [
+      {
+        id: 900,
+        partNumber: 'QB-HS-220',
+        quantityPerMachine: 4,
+        quantity: 4,
+        mountPoints: ['A', 'B', 'C', 'D'],
+        unitPrice: null,
+        leadTimeDays: null,
+      },
+    ],
     quotedPrice: null,
+    quoteCurrency: null,
+    quoteReference: null,
+    quoteValidUntil: null,
     quotedAt: null,
+    orderedAt: null,
+    dueBy: null,
     createdBy: buyer,
     createdAt: '2025-02-03T09:00:00.000Z',
     updatedAt: '2025-02-03T09:00:00.000Z',
@@ -95,6 +112,7 @@ export function queueRow(overrides: Partial<PurchasingDesign> = {}): PurchasingD
     total: 644,
     currency: 'USD',
     rfqs: { requested: 1, quoted: 0, ordered: 0, received: 0, failed: 1 },
+    openRequests: [],
     ...overrides,
   };
 }
@@ -114,6 +132,36 @@ export function servePurchasing(fake: FakeApi, design = releasedDesign(), rfqs: 
         : { status: 404, data: { statusCode: 404, message: 'Design not found' } },
     )
     .on('get', '/designs/:id/rfqs', () => ({ status: 200, data: state.rfqs }))
+    .on('post', '/designs/:id/rfqs/preview', ({ body }) => {
+      const { supplierId, machineCount = 1 } = body as { supplierId: number; machineCount?: number };
+      const lines = state.design.bom.filter((line) => line.supplier.id === supplierId);
+      if (lines.length === 0) return { status: 422, data: { statusCode: 422, message: 'That supplier has no line in this BOM' } };
+      const supplier = lines[0]!.supplier;
+      return {
+        status: 200,
+        data: {
+          supplier,
+          to: `quotes@${supplier.name.toLowerCase().replace(/\W+/g, '-')}.invalid`,
+          replyTo: 'buyer@tacet.test',
+          subject: `Request for quotation: ${state.design.name} rev ${state.design.revision}`,
+          text: `Hello ${supplier.name},\n\nPlease quote the resilient mounts below.`,
+          machineCount,
+          lines: lines.map((line) => ({
+            id: 0,
+            partNumber: line.partNumber,
+            quantityPerMachine: line.quantity,
+            quantity: line.quantity * machineCount,
+            mountPoints: line.mountPoints,
+            unitPrice: null,
+            leadTimeDays: null,
+          })),
+          attachments: [
+            { filename: 'quote-list.csv', contentType: 'text/csv', size: 120 },
+            { filename: 'report.pdf', contentType: 'application/pdf', size: 48_000 },
+          ],
+        },
+      };
+    })
     .on('post', '/designs/:id/rfqs', ({ body }) => {
       const { supplierId } = body as { supplierId: number };
       const supplier = state.design.bom.find((line) => line.supplier.id === supplierId)?.supplier;
@@ -129,9 +177,14 @@ export function servePurchasing(fake: FakeApi, design = releasedDesign(), rfqs: 
       return { status: 200, data: sent };
     })
     .on('patch', '/rfqs/:id', ({ params, body }) => {
-      const update = body as { status: RfqStatus; quotedPrice?: number };
+      const update = body as { status: RfqStatus; lines?: { lineId: number; unitPrice: number; leadTimeDays?: number }[] };
       const found = state.rfqs.find((rfq) => rfq.id === Number(params.id))!;
-      const next: Rfq = { ...found, status: update.status, quotedPrice: update.quotedPrice ?? found.quotedPrice };
+      const lines = found.lines.map((line) => {
+        const quoted = update.lines?.find((typed) => typed.lineId === line.id);
+        return quoted ? { ...line, unitPrice: quoted.unitPrice, leadTimeDays: quoted.leadTimeDays ?? null } : line;
+      });
+      const total = update.lines ? lines.reduce((sum, line) => sum + (line.unitPrice ?? 0) * line.quantity, 0) : found.quotedPrice;
+      const next: Rfq = { ...found, status: update.status, lines, quotedPrice: total };
       state.rfqs = state.rfqs.map((rfq) => (rfq.id === next.id ? next : rfq));
       return { status: 200, data: next };
     });

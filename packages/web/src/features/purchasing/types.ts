@@ -31,3 +31,9 @@ export type SendRfqInput = ApiSchemas['CreateRfqDto'] & { designId: number };
 
 /** `PATCH /api/rfqs/:id`: the request, its design (to refresh) and the body. */
 export type UpdateRfqInput = ApiSchemas['UpdateRfqDto'] & { rfqId: number; designId: number };
+
+/** `POST /api/designs/:id/rfqs/preview`: the recipient, text, lines and attachments, before sending. */
+export type RfqPreview = ApiSchemas['RfqPreviewDto'];
+
+/** A request still open, as the queue lists it. */
+export type OpenRfq = ApiSchemas['OpenRfqDto'];

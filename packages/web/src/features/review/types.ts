@@ -15,3 +15,7 @@ export type TransitionTarget = ApiSchemas['TransitionTarget'];
 
 /** What the review panel sends: the design and the body of the transition. */
 export type TransitionInput = ApiSchemas['TransitionDto'] & { designId: number };
+
+/** What changed in a design's input since it was last sent for check, in the reader's units. */
+export type SubmissionChanges = ApiSchemas['SubmissionChangesDto'];
+export type InputChange = ApiSchemas['InputChangeDto'];

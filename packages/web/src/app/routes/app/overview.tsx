@@ -2,6 +2,7 @@ import { Card } from '@blueprintjs/core';
 
 import { PageHeader } from '@/components/page-header';
 import { SafetyCautions } from '@/components/safety-cautions';
+import { WorkLists } from '@/features/work/components/work-lists';
 import { useUser } from '@/lib/auth';
 import { areasFor, ROLE_LABELS, type AreaKey, type Role } from '@/lib/authorization';
 
@@ -56,6 +57,14 @@ export function Component() {
           </>
         }
       />
+      {user.role !== 'catalog_manager' ? (
+        <section aria-labelledby="tc-overview-work" className="tc-section">
+          <h2 id="tc-overview-work" className="tc-section-title">
+            Your work
+          </h2>
+          <WorkLists role={user.role} userId={user.id} />
+        </section>
+      ) : null}
       <section aria-labelledby="tc-overview-areas" className="tc-section">
         <h2 id="tc-overview-areas" className="tc-section-title">
           Your areas

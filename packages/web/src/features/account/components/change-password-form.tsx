@@ -11,8 +11,11 @@ import { changePasswordSchema, PASSWORD_MIN_LENGTH, type ChangePasswordValues } 
 
 const EMPTY: ChangePasswordValues = { currentPassword: '', newPassword: '', confirmPassword: '' };
 
-/** Change the signed-in user's password (`POST /api/auth/me/password`). */
-export function ChangePasswordForm() {
+/**
+ * Change the signed-in user's password (`POST /api/auth/me/password`). `temporary`: the
+ * current password is the one an admin gave; `onChanged` runs once the new one is set.
+ */
+export function ChangePasswordForm({ temporary = false, onChanged }: { temporary?: boolean; onChanged?: () => void } = {}) {
   const changePassword = useChangePassword();
   const [failure, setFailure] = useState<string | null>(null);
   const [changed, setChanged] = useState(false);
@@ -24,6 +27,7 @@ export function ChangePasswordForm() {
       await changePassword.mutateAsync({ currentPassword: values.currentPassword, newPassword: values.newPassword });
       helpers.resetForm({ values: EMPTY });
       setChanged(true);
+      onChanged?.();
     } catch (error) {
       helpers.setErrors(fieldErrors(error));
       setFailure(errorMessage(error));
@@ -37,7 +41,7 @@ export function ChangePasswordForm() {
           <TextField
             name="currentPassword"
             id="current-password"
-            label="Current password"
+            label={temporary ? 'Temporary password' : 'Current password'}
             type="password"
             autoComplete="current-password"
           />

@@ -48,6 +48,7 @@ function withDefaults(body: ImportResult): ImportResult {
     created: body.created ?? 0,
     updated: body.updated ?? 0,
     errors: body.errors ?? [],
+    newSuppliers: body.newSuppliers ?? [],
     errorsTruncated: body.errorsTruncated ?? false,
     importId: body.importId ?? null,
     preview: body.preview ?? [],

@@ -7,7 +7,7 @@ import { formatDateTime } from '@/lib/dates';
 
 import { useDownloadOutboxAttachment } from '../api/download-outbox-attachment';
 import { useOutboxMessage } from '../api/get-outbox-message';
-import { formatBytes } from './format-bytes';
+import { formatBytes } from '@/lib/format-bytes';
 import { NO_SUBJECT } from './outbox-table';
 
 /** One captured message: who sent it to whom, its text and its attachments to download. */

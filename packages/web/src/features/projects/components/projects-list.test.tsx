@@ -30,7 +30,14 @@ function serveProjects(initial: Project[]): { fake: FakeApi; projects: Project[]
 }
 
 const PROJECTS = () => [
-  makeProject({ id: 1, name: 'Harbour Chiller Hall', site: 'Basement plant room', client: 'Harbour Estates', designCount: 2 }),
+  makeProject({
+    id: 1,
+    name: 'Harbour Chiller Hall',
+    site: 'Basement plant room',
+    client: 'Harbour Estates',
+    designCount: 2,
+    statusCounts: { draft: 0, in_review: 1, released: 1, superseded: 0 },
+  }),
   makeProject({
     id: 2,
     name: 'Ridge Road Boiler House',
@@ -53,14 +60,31 @@ describe('Projects page', () => {
     const cells = within(rows[0]!)
       .getAllByRole('cell')
       .map((cell) => cell.textContent);
-    expect(cells).toEqual(['Harbour Chiller Hall', 'Basement plant room', 'Harbour Estates', '2', 'Erin Engineer', '8 Jan 2025']);
+    expect(cells).toEqual([
+      'Harbour Chiller Hall',
+      'Basement plant room',
+      'Harbour Estates',
+      '2',
+      '1 in check1 released',
+      'Erin Engineer',
+      '8 Jan 2025',
+    ]);
     expect(
       within(rows[1]!)
         .getAllByRole('cell')
         .map((cell) => cell.textContent),
-    ).toEqual(['Ridge Road Boiler House', '—', '—', '1', 'Chris Checker', '3 Feb 2025']);
+    ).toEqual(['Ridge Road Boiler House', '—', '—', '1', '—', 'Chris Checker', '3 Feb 2025']);
     expect(within(rows[0]!).getByRole('link', { name: 'Harbour Chiller Hall' })).toHaveAttribute('href', '/projects/1');
     expect(screen.getByText('2 projects, 3 designs')).toBeInTheDocument();
+  });
+
+  it('hides archived projects until asked', async () => {
+    serveProjects([...PROJECTS(), makeProject({ id: 3, name: 'Old Quay Pump House', archived: true })]);
+    const { user } = renderApp({ signedInAs: 'viewer', path: '/projects' });
+    const table = await screen.findByRole('table', { name: 'Projects' });
+    expect(within(table).queryByText('Old Quay Pump House')).not.toBeInTheDocument();
+    await user.click(screen.getByLabelText('Show archived projects (1)'));
+    expect(within(table).getByText('Old Quay Pump House')).toBeInTheDocument();
   });
 
   it('offers “New project” to engineers and admins only', async () => {

@@ -1,4 +1,4 @@
-import { Button, Callout, NonIdealState } from '@blueprintjs/core';
+import { Button, Callout, NonIdealState, Switch } from '@blueprintjs/core';
 import { FolderNewIcon, PlusIcon } from '@blueprintjs/icons';
 import { useState } from 'react';
 import { useNavigate } from 'react-router-dom';
@@ -27,7 +27,10 @@ export function ProjectsList() {
   const projects = useProjects();
   const navigate = useNavigate();
   const [creating, setCreating] = useState(false);
+  const [showArchived, setShowArchived] = useState(false);
   const mayCreate = canDesign(user.role);
+  const archivedCount = projects.data?.filter((project) => project.archived).length ?? 0;
+  const shown = projects.data?.filter((project) => showArchived || !project.archived);
 
   return (
     <>
@@ -53,10 +56,21 @@ export function ProjectsList() {
             description={mayCreate ? 'Start one with “New project”.' : 'Projects appear here once an engineer starts one.'}
           />
         ) : null}
-        {projects.data && projects.data.length > 0 ? (
+        {projects.data && projects.data.length > 0 && shown ? (
           <>
-            <p className="tc-muted tc-table-summary">{summary(projects.data)}</p>
-            <ProjectsTable projects={projects.data} />
+            <div className="tc-table-toolbar">
+              <p className="tc-muted tc-table-summary">{summary(shown)}</p>
+              <Switch
+                checked={showArchived}
+                label={`Show archived projects (${archivedCount})`}
+                onChange={(event) => setShowArchived(event.currentTarget.checked)}
+              />
+            </div>
+            {shown.length > 0 ? (
+              <ProjectsTable projects={shown} />
+            ) : (
+              <p className="tc-muted">Every project is archived. Turn on “Show archived projects” to see them.</p>
+            )}
           </>
         ) : null}
       </div>

@@ -6,6 +6,28 @@ import type { Project } from '@/types/design-api';
 
 const NO_VALUE = '—';
 
+/** The designs by state, in words: "1 in check · 2 released". */
+const STATE_WORDS: [keyof Project['statusCounts'], string][] = [
+  ['draft', 'draft'],
+  ['in_review', 'in check'],
+  ['released', 'released'],
+  ['superseded', 'superseded'],
+];
+
+function DesignStates({ counts }: { counts: Project['statusCounts'] }) {
+  const present = STATE_WORDS.filter(([key]) => counts[key] > 0);
+  if (present.length === 0) return <span className="tc-muted">{NO_VALUE}</span>;
+  return (
+    <span className="tc-project-states">
+      {present.map(([key, words]) => (
+        <Tag key={key} minimal round className={`tc-status tc-status--${key}`}>
+          {counts[key]} {words}
+        </Tag>
+      ))}
+    </span>
+  );
+}
+
 export function ProjectsTable({ projects }: { projects: readonly Project[] }) {
   return (
     <HTMLTable className="tc-table" striped interactive aria-label="Projects">
@@ -17,6 +39,7 @@ export function ProjectsTable({ projects }: { projects: readonly Project[] }) {
           <th scope="col" className="tc-number">
             Designs
           </th>
+          <th scope="col">Status</th>
           <th scope="col">Owner</th>
           <th scope="col">Updated</th>
         </tr>
@@ -35,6 +58,9 @@ export function ProjectsTable({ projects }: { projects: readonly Project[] }) {
             <td>{project.site || NO_VALUE}</td>
             <td>{project.client || NO_VALUE}</td>
             <td className="tc-number">{project.designCount}</td>
+            <td>
+              <DesignStates counts={project.statusCounts} />
+            </td>
             <td>{project.owner.name}</td>
             <td>{formatDate(project.updatedAt)}</td>
           </tr>

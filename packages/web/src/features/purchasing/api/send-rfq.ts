@@ -10,8 +10,8 @@ import { rfqsQueryKey } from './get-rfqs';
  * `POST /api/designs/:id/rfqs {supplierId, message?}`: e-mails the supplier its BOM lines. A
  * failed send still answers 201, with status `failed` and the reason, so nothing is lost.
  */
-export async function sendRfq({ designId, supplierId, message }: SendRfqInput): Promise<Rfq> {
-  const body = message ? { supplierId, message } : { supplierId };
+export async function sendRfq({ designId, supplierId, message, machineCount }: SendRfqInput): Promise<Rfq> {
+  const body = { supplierId, ...(message ? { message } : {}), ...(machineCount && machineCount !== 1 ? { machineCount } : {}) };
   const { data } = await api.post<Rfq>(`/designs/${designId}/rfqs`, body);
   return data;
 }
@@ -24,6 +24,7 @@ export function useSendRfq() {
       Promise.all([
         queryClient.invalidateQueries({ queryKey: rfqsQueryKey(rfq.designId) }),
         queryClient.invalidateQueries({ queryKey: purchasingDesignsQueryKey }),
+        queryClient.invalidateQueries({ queryKey: ['my-work'] }),
       ]),
   });
 }

@@ -7,8 +7,8 @@ import { purchasingDesignsQueryKey } from './get-purchasing-designs';
 import { rfqsQueryKey } from './get-rfqs';
 
 /**
- * `PATCH /api/rfqs/:id {status, quotedPrice?, quotedAt?, note?}`: records a quote, an order or
- * a delivery. Forward only; a quote carries its price.
+ * `PATCH /api/rfqs/:id {status, lines?, reference?, validUntil?, quotedAt?, note?}`: records a
+ * quote (a unit price for every line), an order or a delivery. Forward only.
  */
 export async function updateRfq({ rfqId, designId: _designId, ...body }: UpdateRfqInput): Promise<Rfq> {
   const { data } = await api.patch<Rfq>(`/rfqs/${rfqId}`, body);

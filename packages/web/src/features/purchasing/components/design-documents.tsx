@@ -13,9 +13,17 @@ const ICONS: Record<DesignDocument, ReactElement> = {
 };
 
 /** Downloads of the bill of materials and the calculation report. */
-export function DesignDocuments({ designId, baseName }: { designId: number; baseName: string }) {
+export function DesignDocuments({
+  designId,
+  baseName,
+  documents = Object.keys(DESIGN_DOCUMENTS) as DesignDocument[],
+}: {
+  designId: number;
+  baseName: string;
+  /** The files offered (default: all). */
+  documents?: readonly DesignDocument[];
+}) {
   const download = useDownloadDesignDocument();
-  const documents = Object.keys(DESIGN_DOCUMENTS) as DesignDocument[];
   return (
     <div className="tc-documents">
       {documents.map((document) => (

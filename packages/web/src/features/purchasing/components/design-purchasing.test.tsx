@@ -105,12 +105,24 @@ describe('Design purchasing view', () => {
     expect(within(section).getByText('No request sent to Stillmoor Isolation yet.')).toBeInTheDocument();
 
     await user.type(within(section).getByLabelText('Message to the supplier (optional)'), 'Delivery to site by March, please.');
-    await user.click(within(section).getByRole('button', { name: 'Send request for quotation' }));
+    const machines = within(section).getByLabelText('Identical machines');
+    await user.clear(machines);
+    await user.type(machines, '3');
+    await user.click(within(section).getByRole('button', { name: 'Review request for quotation' }));
+
+    // a confirmation first: recipient, quantities for three machines, attachments; nothing sent yet
+    const confirm = await screen.findByRole('dialog', { name: 'Send this request to Stillmoor Isolation?' });
+    expect(within(confirm).getByTestId('rfq-to')).toHaveTextContent('quotes@stillmoor-isolation.invalid');
+    expect(within(confirm).getByText('3 identical machines')).toBeInTheDocument();
+    expect(within(confirm).getByRole('list', { name: 'Attachments' })).toHaveTextContent('quote-list.csv');
+    expect(fake.calls('post', '/designs/:id/rfqs')).toHaveLength(0);
+    await user.click(within(confirm).getByRole('button', { name: 'Send request' }));
 
     await waitFor(() => expect(fake.calls('post', '/designs/:id/rfqs')).toHaveLength(1));
     expect(fake.calls('post', '/designs/:id/rfqs')[0]!.body).toEqual({
       supplierId: STILLMOOR.id,
       message: 'Delivery to site by March, please.',
+      machineCount: 3,
     });
     const list = await within(section).findByRole('list', { name: 'Requests to Stillmoor Isolation' });
     expect(within(list).getByText('Requested')).toBeInTheDocument();
@@ -119,15 +131,16 @@ describe('Design purchasing view', () => {
 
   it('sends only the supplier when there is no message, and shows a refusal in words', async () => {
     const { user, fake } = openView();
-    fake.on('post', '/designs/:id/rfqs', {
+    fake.on('post', '/designs/:id/rfqs/preview', {
       status: 422,
       data: { statusCode: 422, message: 'Supplier Quellbrook Mounts has no contact e-mail' },
     });
     await waitForView();
     const section = await screen.findByRole('region', { name: /Quellbrook Mounts/ });
-    await user.click(within(section).getByRole('button', { name: 'Send request for quotation' }));
+    await user.click(within(section).getByRole('button', { name: 'Review request for quotation' }));
     expect(await within(section).findByRole('alert')).toHaveTextContent('Supplier Quellbrook Mounts has no contact e-mail.');
-    expect(fake.calls('post', '/designs/:id/rfqs')[0]!.body).toEqual({ supplierId: QUELLBROOK.id });
+    expect(fake.calls('post', '/designs/:id/rfqs/preview')[0]!.body).toEqual({ supplierId: QUELLBROOK.id, machineCount: 1 });
+    expect(fake.calls('post', '/designs/:id/rfqs')).toHaveLength(0);
   });
 
   it('shows a failed request with its reason and sends it again', async () => {
@@ -148,7 +161,7 @@ describe('Design purchasing view', () => {
     expect(await screen.findByText('Requested')).toBeInTheDocument();
   });
 
-  it('records a quote only with a price, and offers only later states', async () => {
+  it('records a quote line by line with its reference and validity, and offers only later states', async () => {
     const { user, fake } = openView(releasedDesign(), [makeRfq({ id: 42, status: 'requested' })]);
     await waitForView();
     await user.click(await screen.findByRole('button', { name: 'Record progress' }));
@@ -161,23 +174,33 @@ describe('Design purchasing view', () => {
     ).toEqual(['Quoted', 'Ordered', 'Received']);
 
     await user.click(within(dialog).getByRole('button', { name: 'Record' }));
-    expect(await within(dialog).findByText('A quote needs its price.')).toBeInTheDocument();
+    expect(await within(dialog).findByText('Enter the unit price of this line.')).toBeInTheDocument();
     expect(fake.calls('patch', '/rfqs/:id')).toHaveLength(0);
 
-    await user.type(within(dialog).getByLabelText('Quoted price for these lines (USD)'), 'abc');
+    const price = within(dialog).getByLabelText('Unit price of QB-HS-220');
+    await user.type(price, 'abc');
     await user.click(within(dialog).getByRole('button', { name: 'Record' }));
-    expect(await within(dialog).findByText('Enter the quoted price as a positive number, e.g. 1240.50.')).toBeInTheDocument();
+    expect(await within(dialog).findByText('Enter the unit price as a positive number, e.g. 41.25.')).toBeInTheDocument();
 
-    const price = within(dialog).getByLabelText('Quoted price for these lines (USD)');
     await user.clear(price);
-    await user.type(price, '351.20');
-    await user.type(within(dialog).getByLabelText('Note (optional)'), 'Valid 30 days');
+    await user.type(price, '87.80');
+    await user.type(within(dialog).getByLabelText('Lead time of QB-HS-220'), '21');
+    expect(within(dialog).getByTestId('quote-total')).toHaveTextContent('USD 351.20'); // 4 × 87.80
+    await user.type(within(dialog).getByLabelText('Supplier’s reference (optional)'), 'QB-7781');
+    await user.type(within(dialog).getByLabelText('Valid until (optional)'), '2025-03-31');
+    await user.type(within(dialog).getByLabelText('Note (optional)'), 'By phone');
     await user.click(within(dialog).getByRole('button', { name: 'Record' }));
 
     await waitFor(() => expect(fake.calls('patch', '/rfqs/:id')).toHaveLength(1));
     const patch = fake.calls('patch', '/rfqs/:id')[0]!;
     expect(patch.params).toEqual({ id: '42' });
-    expect(patch.body).toMatchObject({ status: 'quoted', quotedPrice: 351.2, note: 'Valid 30 days' });
+    expect(patch.body).toMatchObject({
+      status: 'quoted',
+      lines: [{ lineId: 900, unitPrice: 87.8, leadTimeDays: 21 }],
+      reference: 'QB-7781',
+      validUntil: '2025-03-31',
+      note: 'By phone',
+    });
     expect(typeof (patch.body as { quotedAt?: unknown }).quotedAt).toBe('string');
     await waitFor(() => expect(screen.queryByRole('dialog')).not.toBeInTheDocument());
     expect(await screen.findByText('Quoted USD 351.20')).toBeInTheDocument();
@@ -208,7 +231,7 @@ describe('Design purchasing view', () => {
     openView(releasedDesign({ status: 'in_review', checker: null }));
     await waitForView();
     expect(screen.getByText('Purchasing starts once a second engineer has released this design.')).toBeInTheDocument();
-    expect(screen.queryByRole('button', { name: 'Send request for quotation' })).not.toBeInTheDocument();
+    expect(screen.queryByRole('button', { name: 'Review request for quotation' })).not.toBeInTheDocument();
     expect(screen.queryByRole('button', { name: 'BOM (CSV)' })).not.toBeInTheDocument();
   });
 });

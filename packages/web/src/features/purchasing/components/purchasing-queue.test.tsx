@@ -38,6 +38,7 @@ describe('Purchasing queue', () => {
       '3',
       'USD 644.00',
       '1 requested1 not sent',
+      '—',
     ]);
     expect(within(rows[1]!).getByText('None sent')).toBeInTheDocument();
     expect(within(rows[1]!).getAllByRole('cell')[5]).toHaveTextContent('—');

@@ -8,7 +8,7 @@ import { errorMessage } from '@/lib/api-errors';
 import { formatDate } from '@/lib/dates';
 
 import { usePurchasingDesigns } from '../api/get-purchasing-designs';
-import { RFQ_STATUSES, type PurchasingDesign } from '../types';
+import { RFQ_STATUSES, type OpenRfq, type PurchasingDesign } from '../types';
 import { formatPrice } from './format';
 import { RfqStatusTag } from './rfq-status-tag';
 
@@ -25,6 +25,28 @@ function RfqSummary({ counts }: { counts: PurchasingDesign['rfqs'] }) {
         <RfqStatusTag key={status} status={status} count={counts[status]} />
       ))}
     </span>
+  );
+}
+
+/** One open request in words: waiting for a quote, quoted (total, validity), or ordered (due date). */
+export function openRequestText(request: OpenRfq): string {
+  const supplier = request.supplier.name;
+  if (request.status === 'quoted') {
+    const total = formatPrice(request.quotedPrice, request.quoteCurrency);
+    return `Quoted by ${supplier}: ${total}${request.quoteValidUntil ? `, valid until ${request.quoteValidUntil}` : ''}`;
+  }
+  if (request.status === 'ordered') return `Ordered from ${supplier}${request.dueBy ? `: due by ${request.dueBy}` : ''}`;
+  return `Waiting for a quote from ${supplier} (asked ${formatDate(request.requestedAt)})`;
+}
+
+function OpenRequests({ requests }: { requests: readonly OpenRfq[] }) {
+  if (requests.length === 0) return <span className="tc-muted">—</span>;
+  return (
+    <ul className="tc-open-requests">
+      {requests.map((request) => (
+        <li key={request.rfqId}>{openRequestText(request)}</li>
+      ))}
+    </ul>
   );
 }
 
@@ -46,6 +68,7 @@ function QueueTable({ designs }: { designs: readonly PurchasingDesign[] }) {
             Total
           </th>
           <th scope="col">Requests for quotation</th>
+          <th scope="col">Quoted and due</th>
         </tr>
       </thead>
       <tbody>
@@ -61,6 +84,9 @@ function QueueTable({ designs }: { designs: readonly PurchasingDesign[] }) {
             <td className="tc-number">{formatPrice(design.total, design.currency)}</td>
             <td>
               <RfqSummary counts={design.rfqs} />
+            </td>
+            <td>
+              <OpenRequests requests={design.openRequests} />
             </td>
           </tr>
         ))}

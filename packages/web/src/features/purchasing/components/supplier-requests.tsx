@@ -1,4 +1,4 @@
-import { Button, Callout, FormGroup, TextArea } from '@blueprintjs/core';
+import { Button, Callout, FormGroup, InputGroup, TextArea } from '@blueprintjs/core';
 import { EditIcon, EnvelopeIcon, RefreshIcon } from '@blueprintjs/icons';
 import { useState, type FormEvent } from 'react';
 
@@ -6,15 +6,26 @@ import { errorMessage } from '@/lib/api-errors';
 import { formatDateTime } from '@/lib/dates';
 import type { SupplierRef } from '@/types/design-api';
 
+import { usePreviewRfq } from '../api/preview-rfq';
 import { useRetryRfq } from '../api/retry-rfq';
 import { useSendRfq } from '../api/send-rfq';
 import { nextStatuses } from '../schemas/rfq-status-schema';
-import type { Rfq } from '../types';
-import { formatPrice } from './format';
+import type { Rfq, RfqPreview } from '../types';
+import { formatLeadTime, formatPrice } from './format';
+import { RfqConfirmDialog } from './rfq-confirm-dialog';
 import { RfqStatusDialog } from './rfq-status-dialog';
 import { RFQ_STATUS_LABELS, RfqStatusTag } from './rfq-status-tag';
 
 const MESSAGE_MAX = 2000;
+const MACHINES_MAX = 10_000;
+
+/** The machine count as typed: a whole number from 1, or null. */
+export function machineCountOf(text: string): number | null {
+  const trimmed = text.trim();
+  if (!/^\d+$/.test(trimmed)) return null;
+  const count = Number(trimmed);
+  return count >= 1 && count <= MACHINES_MAX ? count : null;
+}
 
 export interface SupplierRequestsProps {
   designId: number;
@@ -38,7 +49,15 @@ function RfqItem({ rfq, currency }: { rfq: Rfq; currency: string }) {
         <span>
           Sent {formatDateTime(rfq.createdAt)} by {rfq.createdBy.name}
         </span>
-        {rfq.quotedPrice !== null ? <span className="tc-rfq-quote">Quoted {formatPrice(rfq.quotedPrice, currency)}</span> : null}
+        {rfq.machineCount > 1 ? <span className="tc-muted">for {rfq.machineCount} machines</span> : null}
+        {rfq.quotedPrice !== null ? (
+          <span className="tc-rfq-quote">
+            Quoted {formatPrice(rfq.quotedPrice, rfq.quoteCurrency ?? currency)}
+            {rfq.quoteReference ? ` (ref. ${rfq.quoteReference})` : ''}
+            {rfq.quoteValidUntil ? `, valid until ${rfq.quoteValidUntil}` : ''}
+          </span>
+        ) : null}
+        {rfq.dueBy ? <span className="tc-rfq-due">Delivery due by {rfq.dueBy}</span> : null}
         <span className="tc-rfq-buttons">
           {rfq.status === 'failed' ? (
             <Button size="small" icon={<RefreshIcon />} text="Send again" loading={retry.isPending} onClick={() => retry.mutate(rfq.id)} />
@@ -55,6 +74,16 @@ function RfqItem({ rfq, currency }: { rfq: Rfq; currency: string }) {
         <p className="tc-alert-error" role="alert">
           {errorMessage(retry.error)}
         </p>
+      ) : null}
+      {rfq.lines.some((line) => line.unitPrice !== null) ? (
+        <ul className="tc-rfq-quoted-lines" aria-label={`Quote of request ${rfq.id}`}>
+          {rfq.lines.map((line) => (
+            <li key={line.id}>
+              {line.partNumber} × {line.quantity}: {formatPrice(line.unitPrice, rfq.quoteCurrency ?? currency)} each,{' '}
+              {formatLeadTime(line.leadTimeDays)}
+            </li>
+          ))}
+        </ul>
       ) : null}
       {rfq.history.length > 0 ? (
         <ol className="tc-rfq-history" aria-label={`History of request ${rfq.id}`}>
@@ -75,21 +104,38 @@ function RfqItem({ rfq, currency }: { rfq: Rfq; currency: string }) {
 /** One supplier of the BOM: a request-for-quotation form and the requests sent so far. */
 export function SupplierRequests({ designId, supplier, lineCount, currency, rfqs, canSend }: SupplierRequestsProps) {
   const send = useSendRfq();
+  const preview = usePreviewRfq();
   const [message, setMessage] = useState('');
+  const [machines, setMachines] = useState('1');
   const [sent, setSent] = useState<Rfq | null>(null);
+  const [confirming, setConfirming] = useState<RfqPreview | null>(null);
   const headingId = `supplier-${supplier.id}-title`;
   const tooLong = message.length > MESSAGE_MAX;
+  const machineCount = machineCountOf(machines);
+  const request = () => ({ designId, supplierId: supplier.id, message: message.trim() || undefined, machineCount: machineCount ?? 1 });
 
+  /** First the confirmation: what would go, to whom, with which files. */
   const submit = async (event: FormEvent) => {
     event.preventDefault();
-    if (tooLong) return;
+    if (tooLong || machineCount === null) return;
     setSent(null);
+    send.reset();
     try {
-      const rfq = await send.mutateAsync({ designId, supplierId: supplier.id, message: message.trim() || undefined });
-      setSent(rfq);
-      setMessage('');
+      setConfirming(await preview.mutateAsync(request()));
     } catch {
       // Shown below from the mutation's error.
+    }
+  };
+
+  const confirmSend = async () => {
+    try {
+      const rfq = await send.mutateAsync(request());
+      setSent(rfq);
+      setConfirming(null);
+      setMessage('');
+      setMachines('1');
+    } catch {
+      // Shown in the confirmation.
     }
   };
 
@@ -108,7 +154,7 @@ export function SupplierRequests({ designId, supplier, lineCount, currency, rfqs
             helperText={
               tooLong
                 ? `Keep the message under ${MESSAGE_MAX} characters.`
-                : 'Their BOM lines go along as a CSV file, with the calculation report.'
+                : 'Their lines go along as CSV and Excel files, with the calculation report — without our prices.'
             }
           >
             <TextArea
@@ -120,17 +166,36 @@ export function SupplierRequests({ designId, supplier, lineCount, currency, rfqs
               onChange={(event) => setMessage(event.target.value)}
             />
           </FormGroup>
+          <FormGroup
+            label="Identical machines"
+            labelFor={`rfq-machines-${supplier.id}`}
+            intent={machineCount === null ? 'danger' : 'none'}
+            helperText={
+              machineCount === null
+                ? `Enter a whole number from 1 to ${MACHINES_MAX}.`
+                : 'The quantities asked for are those of one machine times this.'
+            }
+          >
+            <InputGroup
+              id={`rfq-machines-${supplier.id}`}
+              inputMode="numeric"
+              className="tc-rfq-machines"
+              value={machines}
+              intent={machineCount === null ? 'danger' : 'none'}
+              onChange={(event) => setMachines(event.target.value)}
+            />
+          </FormGroup>
           <Button
             type="submit"
             intent="primary"
             icon={<EnvelopeIcon />}
-            text="Send request for quotation"
-            loading={send.isPending}
-            disabled={tooLong}
+            text="Review request for quotation"
+            loading={preview.isPending}
+            disabled={tooLong || machineCount === null}
           />
-          {send.isError ? (
-            <Callout intent="danger" role="alert" className="tc-note" title="Not sent">
-              {errorMessage(send.error)}
+          {preview.isError ? (
+            <Callout intent="danger" role="alert" className="tc-note" title="Cannot be sent">
+              {errorMessage(preview.error)}
             </Callout>
           ) : null}
           {sent && sent.status === 'failed' ? (
@@ -139,6 +204,15 @@ export function SupplierRequests({ designId, supplier, lineCount, currency, rfqs
             </Callout>
           ) : null}
         </form>
+      ) : null}
+      {confirming ? (
+        <RfqConfirmDialog
+          preview={confirming}
+          busy={send.isPending}
+          failure={send.isError ? errorMessage(send.error) : null}
+          onCancel={() => setConfirming(null)}
+          onSend={() => void confirmSend()}
+        />
       ) : null}
       {rfqs.length === 0 ? (
         <p className="tc-muted">No request sent to {supplier.name} yet.</p>

@@ -2,12 +2,14 @@ import { nextStatuses, rfqStatusSchema } from './rfq-status-schema';
 
 async function problems(current: Parameters<typeof rfqStatusSchema>[0], values: object): Promise<string[]> {
   try {
-    await rfqStatusSchema(current).validate(values, { abortEarly: false });
+    await rfqStatusSchema(current).validate({ lines: [], reference: '', validUntil: '', note: '', ...values }, { abortEarly: false });
     return [];
   } catch (error) {
     return (error as { errors: string[] }).errors;
   }
 }
+
+const line = (unitPrice: string, leadTimeDays = '') => ({ lineId: 1, unitPrice, leadTimeDays });
 
 describe('RFQ state rules', () => {
   it('move forward only, and a failed request has no next state', () => {
@@ -18,17 +20,23 @@ describe('RFQ state rules', () => {
     expect(nextStatuses('failed')).toEqual([]);
   });
 
-  it('require a price with a quote', async () => {
-    expect(await problems('requested', { status: 'quoted', quotedPrice: '', note: '' })).toEqual(['A quote needs its price.']);
-    expect(await problems('requested', { status: 'quoted', quotedPrice: '-3', note: '' })).toEqual([
-      'Enter the quoted price as a positive number, e.g. 1240.50.',
+  it('require a unit price on every line of a quote, and whole days of lead time', async () => {
+    expect(await problems('requested', { status: 'quoted', lines: [line('')] })).toEqual(['Enter the unit price of this line.']);
+    expect(await problems('requested', { status: 'quoted', lines: [line('-3')] })).toEqual([
+      'Enter the unit price as a positive number, e.g. 41.25.',
     ]);
-    expect(await problems('requested', { status: 'quoted', quotedPrice: '1240.5', note: '' })).toEqual([]);
-    expect(await problems('quoted', { status: 'ordered', quotedPrice: '', note: 'PO 4471' })).toEqual([]);
+    expect(await problems('requested', { status: 'quoted', lines: [line('41.25', '2.5')] })).toEqual([
+      'Enter the lead time in whole days, e.g. 21.',
+    ]);
+    expect(await problems('requested', { status: 'quoted', lines: [line('41.25', '21')], validUntil: '30.06.2026' })).toEqual([
+      'Enter the date as YYYY-MM-DD.',
+    ]);
+    expect(await problems('requested', { status: 'quoted', lines: [line('41.25', '21')], validUntil: '2026-06-30' })).toEqual([]);
+    expect(await problems('quoted', { status: 'ordered', lines: [line('')], note: 'PO 4471' })).toEqual([]);
   });
 
   it('refuse a step back', async () => {
-    expect(await problems('ordered', { status: 'quoted', quotedPrice: '10', note: '' })).toEqual([
+    expect(await problems('ordered', { status: 'quoted', lines: [line('10')] })).toEqual([
       'A request moves forward only: choose a later state.',
     ]);
   });

@@ -14,12 +14,24 @@ export function nextStatuses(current: RfqStatus): RecordedRfqStatus[] {
   return RECORDED_STATUSES.filter((status) => ORDER[status] > ORDER[current]);
 }
 
+/** One line of a quote as typed. */
+export interface QuotedLineValues {
+  lineId: number;
+  unitPrice: string;
+  leadTimeDays: string;
+}
+
 export interface RfqStatusValues {
   status: RecordedRfqStatus | '';
-  /** As typed; a number once valid. */
-  quotedPrice: string;
+  /** With a quote: a unit price (and lead time) per line of the request. */
+  lines: QuotedLineValues[];
+  reference: string;
+  /** YYYY-MM-DD (a date input). */
+  validUntil: string;
   note: string;
 }
+
+const isQuote = { is: 'quoted' } as const;
 
 export function rfqStatusSchema(current: RfqStatus) {
   const allowed = nextStatuses(current);
@@ -28,19 +40,32 @@ export function rfqStatusSchema(current: RfqStatus) {
       .string()
       .required('Choose the new state.')
       .oneOf(allowed as string[], 'A request moves forward only: choose a later state.'),
-    quotedPrice: yup.string().when('status', {
-      is: 'quoted',
+    lines: yup.array().when('status', {
+      ...isQuote,
       then: (schema) =>
-        schema
-          .trim()
-          .required('A quote needs its price.')
-          .test('positive', 'Enter the quoted price as a positive number, e.g. 1240.50.', (value) => {
-            if (value === undefined || value === '') return true; // "required" speaks for an empty field
-            const price = Number(value);
-            return Number.isFinite(price) && price > 0;
+        schema.of(
+          yup.object({
+            lineId: yup.number().required(),
+            unitPrice: yup
+              .string()
+              .trim()
+              .required('Enter the unit price of this line.')
+              .test('positive', 'Enter the unit price as a positive number, e.g. 41.25.', (value) => {
+                const price = Number(value);
+                return !value || (Number.isFinite(price) && price > 0);
+              }),
+            leadTimeDays: yup
+              .string()
+              .trim()
+              .test('days', 'Enter the lead time in whole days, e.g. 21.', (value) => !value || /^\d{1,4}$/.test(value)),
           }),
-      otherwise: (schema) => schema.trim(),
+        ),
     }),
+    reference: yup.string().trim().max(200, 'Keep the reference under 200 characters.'),
+    validUntil: yup
+      .string()
+      .trim()
+      .test('date', 'Enter the date as YYYY-MM-DD.', (value) => !value || /^\d{4}-\d{2}-\d{2}$/.test(value)),
     note: yup.string().trim().max(2000, 'Keep the note under 2000 characters.'),
   });
 }

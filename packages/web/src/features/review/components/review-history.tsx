@@ -4,6 +4,7 @@ import { errorMessage } from '@/lib/api-errors';
 import { formatDateTime } from '@/lib/dates';
 
 import { useDesignHistory } from '../api/get-design-history';
+import { changesSince, InputChangesList } from './input-changes-list';
 import { REVIEW_STATE_LABELS } from './review-stage';
 
 /** Who moved the design, when, from which state to which, and what they wrote. Oldest first. */
@@ -30,7 +31,24 @@ export function ReviewHistory({ designId }: { designId: number }) {
               ? `${REVIEW_STATE_LABELS[entry.from]} → ${REVIEW_STATE_LABELS[entry.to]}`
               : `New revision (${REVIEW_STATE_LABELS[entry.to]})`}
           </span>
-          {entry.comment ? <q className="tc-review-comment">{entry.comment}</q> : null}
+          {entry.requestedChecker ? <span className="tc-muted">asked {entry.requestedChecker.name} to check</span> : null}
+          {entry.note ? <q className="tc-review-comment">{entry.note}</q> : null}
+          {entry.comment ? (
+            <q className="tc-review-comment">
+              {entry.to === 'released' ? 'Release notes: ' : ''}
+              {entry.comment}
+            </q>
+          ) : null}
+          {entry.changes ? (
+            <details className="tc-review-changes">
+              <summary>
+                {entry.changes.items.length === 0
+                  ? `No change ${changesSince(entry.changes)}`
+                  : `${entry.changes.items.length === 1 ? '1 change' : `${entry.changes.items.length} changes`} ${changesSince(entry.changes)}`}
+              </summary>
+              <InputChangesList changes={entry.changes} />
+            </details>
+          ) : null}
         </li>
       ))}
     </ol>

@@ -17,7 +17,17 @@ const NAME = 'CHW pump P-3 skid';
 const CHECKER = { ...TEST_USERS.engineer, id: 4, email: 'checker@tacet.test', name: 'Chris Checker' };
 
 const HISTORY: DesignHistoryEntry[] = [
-  { id: 1, at: '2025-01-08T15:30:00.000Z', user: { id: 3, name: 'Erin Engineer' }, from: 'draft', to: 'in_review', comment: null },
+  {
+    id: 1,
+    at: '2025-01-08T15:30:00.000Z',
+    user: { id: 3, name: 'Erin Engineer' },
+    from: 'draft',
+    to: 'in_review',
+    comment: null,
+    note: null,
+    requestedChecker: null,
+    changes: null,
+  },
   {
     id: 2,
     at: '2025-01-09T08:10:00.000Z',
@@ -25,6 +35,9 @@ const HISTORY: DesignHistoryEntry[] = [
     from: 'in_review',
     to: 'draft',
     comment: 'Point C runs at 98 % of its rating; take the next size.',
+    note: null,
+    requestedChecker: null,
+    changes: null,
   },
 ];
 
@@ -32,6 +45,7 @@ const HISTORY: DesignHistoryEntry[] = [
 function openDesign(overrides: Partial<Design>, signedInAs: RenderOptions['signedInAs'] = 'engineer') {
   const fake: FakeApi = installFakeApi();
   const server = serveDesign(fake, makeDesign({ id: DESIGN_ID, name: NAME, chosen: demoCandidates()[0]!, ...overrides }));
+  fake.on('get', '/designs/:id/checkers', { status: 200, data: [{ id: CHECKER.id, name: CHECKER.name }] });
   fake.on('get', '/designs/:id/history', { status: 200, data: HISTORY }).on('post', '/designs/:id/transitions', ({ body }) => {
     const { to } = body as { to: Design['status'] };
     server.design = { ...server.design, status: to, version: server.design.version + 1 };
@@ -39,6 +53,27 @@ function openDesign(overrides: Partial<Design>, signedInAs: RenderOptions['signe
   });
   const rendered = renderApp({ signedInAs, path: `/designs/${DESIGN_ID}` });
   return { ...rendered, fake, server };
+}
+
+/** "Send for check" opens a dialog (note, named checker); its own button sends. */
+async function sendForCheck(
+  user: {
+    click: (element: Element) => Promise<void>;
+    type: (element: Element, text: string) => Promise<void>;
+    selectOptions: (element: Element, value: string) => Promise<void>;
+  },
+  region: HTMLElement,
+  note?: string,
+  checker?: string,
+) {
+  await user.click(within(region).getByRole('button', { name: 'Send for check' }));
+  const dialog = await screen.findByRole('dialog', { name: 'Send for check' });
+  if (note) await user.type(within(dialog).getByRole('textbox'), note);
+  if (checker) {
+    await within(dialog).findByRole('option', { name: checker });
+    await user.selectOptions(within(dialog).getByLabelText('Ask someone to check it'), checker);
+  }
+  await user.click(within(dialog).getByRole('button', { name: 'Send for check' }));
 }
 
 async function panel() {
@@ -53,10 +88,14 @@ describe('Check and release panel', () => {
     expect(within(region).getByTestId('review-stage')).toHaveAttribute('data-status', 'draft');
     expect(within(region).queryByRole('button', { name: 'Release' })).not.toBeInTheDocument();
 
-    await user.click(within(region).getByRole('button', { name: 'Send for check' }));
+    await sendForCheck(user, region, 'Took the next size at C.', 'Chris Checker');
 
     await waitFor(() => expect(fake.calls('post', '/designs/:id/transitions')).toHaveLength(1));
-    expect(fake.calls('post', '/designs/:id/transitions')[0]!.body).toEqual({ to: 'in_review' });
+    expect(fake.calls('post', '/designs/:id/transitions')[0]!.body).toEqual({
+      to: 'in_review',
+      note: 'Took the next size at C.',
+      checkerId: CHECKER.id,
+    });
     await waitFor(() =>
       expect(screen.getByRole('region', { name: 'Check and release' }).querySelector('[data-status]')).toHaveAttribute(
         'data-status',
@@ -74,7 +113,7 @@ describe('Check and release panel', () => {
     await user.clear(mass);
     await user.type(mass, '400');
 
-    await user.click(within(region).getByRole('button', { name: 'Send for check' }));
+    await sendForCheck(user, region);
 
     await waitFor(() => expect(fake.calls('post', '/designs/:id/transitions')).toHaveLength(1));
     const writes = fake.requests.filter((r) => r.method !== 'get').map((r) => r.method);
@@ -97,7 +136,7 @@ describe('Check and release panel', () => {
     await user.clear(mass);
     await user.type(mass, '400');
 
-    await user.click(within(region).getByRole('button', { name: 'Send for check' }));
+    await sendForCheck(user, region);
 
     expect(await within(region).findByText(/Your changes were saved. A changed input clears the chosen mounts/)).toBeInTheDocument();
     expect(fake.calls('post', '/designs/:id/transitions')).toHaveLength(0);
@@ -109,7 +148,7 @@ describe('Check and release panel', () => {
     const region = await panel();
     await user.clear(screen.getByLabelText('Mass of Pump')); // a required value left empty
 
-    await user.click(within(region).getByRole('button', { name: 'Send for check' }));
+    await sendForCheck(user, region);
 
     expect(await within(region).findByText(/Your changes could not be saved, so the design was not sent for check/)).toBeInTheDocument();
     expect(fake.calls('post', '/designs/:id/transitions')).toHaveLength(0);

@@ -1,4 +1,4 @@
-import { Alert, Button, Callout } from '@blueprintjs/core';
+import { Alert, Button, Callout, FormGroup, TextArea } from '@blueprintjs/core';
 import { ConfirmIcon, DuplicateIcon, SendMessageIcon, UndoIcon } from '@blueprintjs/icons';
 import { useState } from 'react';
 
@@ -10,9 +10,12 @@ import { useCreateRevision } from '../api/create-revision';
 import { useTransitionDesign } from '../api/transition-design';
 import { reviewActions, type ActionRule } from '../schemas/review-rules';
 import type { TransitionTarget } from '../types';
+import { useDesignHistory } from '../api/get-design-history';
 import { ReturnToDraftDialog } from './return-to-draft-dialog';
 import { ReviewHistory } from './review-history';
 import { ReviewStage } from './review-stage';
+import { SendForCheckDialog } from './send-for-check-dialog';
+import { SubmissionSummary } from './submission-summary';
 
 import './review.css';
 
@@ -55,12 +58,17 @@ export function ReviewPanel({ design, onChanged, onRevisionCreated, unsavedEdits
   const revision = useCreateRevision();
   const [returning, setReturning] = useState(false);
   const [confirmRelease, setConfirmRelease] = useState(false);
+  const [sending, setSending] = useState(false);
+  const [releaseNotes, setReleaseNotes] = useState('');
+  const history = useDesignHistory(design.id);
+  const lastEntry = history.data?.at(-1);
+  const returnComment = lastEntry?.from === 'in_review' && lastEntry.to === 'draft' ? lastEntry.comment : null;
   const [failure, setFailure] = useState<string | null>(null);
   const [saving, setSaving] = useState(false);
   const actions = reviewActions(design, user);
   const busy = transition.isPending || revision.isPending || saving;
 
-  const move = async (to: TransitionTarget, comment?: string): Promise<boolean> => {
+  const move = async (to: TransitionTarget, comment?: string, extra: { note?: string; checkerId?: number } = {}): Promise<boolean> => {
     setFailure(null);
     // The checker checks what the author sees: unsaved edits are saved first, or nothing is sent.
     if (to === 'in_review' && unsavedEdits && saveEdits) {
@@ -78,7 +86,7 @@ export function ReviewPanel({ design, onChanged, onRevisionCreated, unsavedEdits
       }
     }
     try {
-      const updated = await transition.mutateAsync({ designId: design.id, to, comment });
+      const updated = await transition.mutateAsync({ designId: design.id, to, comment, ...extra });
       onChanged(updated);
       return true;
     } catch (error) {
@@ -119,7 +127,7 @@ export function ReviewPanel({ design, onChanged, onRevisionCreated, unsavedEdits
               title={unsavedEdits ? 'Saves your changes, then sends the design for check' : undefined}
               loading={saving || (transition.isPending && transition.variables?.to === 'in_review')}
               aria-describedby={actions.sendForCheck.blockedBy ? 'why-send' : undefined}
-              onClick={() => void move('in_review')}
+              onClick={() => setSending(true)}
             />
             <Blocked rule={actions.sendForCheck} id="why-send" />
           </span>
@@ -152,6 +160,13 @@ export function ReviewPanel({ design, onChanged, onRevisionCreated, unsavedEdits
         {actions.readOnlyNote ? <span className="tc-muted">{actions.readOnlyNote}</span> : null}
       </div>
 
+      {design.status === 'in_review' ? <SubmissionSummary designId={design.id} /> : null}
+      {design.status === 'draft' && returnComment ? (
+        <Callout intent="warning" className="tc-note" title="Returned to the author">
+          <q className="tc-review-comment">{returnComment}</q>
+        </Callout>
+      ) : null}
+
       {failure ? (
         <Callout intent="danger" role="alert" className="tc-note" title="The design did not move">
           {failure}
@@ -175,6 +190,19 @@ export function ReviewPanel({ design, onChanged, onRevisionCreated, unsavedEdits
           }}
         />
       ) : null}
+      {sending ? (
+        <SendForCheckDialog
+          designId={design.id}
+          busy={transition.isPending || saving}
+          returnComment={returnComment}
+          onCancel={() => setSending(false)}
+          onConfirm={(note, checkerId) => {
+            void move('in_review', undefined, { note: note || undefined, checkerId }).then((moved) => {
+              if (moved) setSending(false);
+            });
+          }}
+        />
+      ) : null}
       <Alert
         isOpen={confirmRelease}
         intent="success"
@@ -184,13 +212,22 @@ export function ReviewPanel({ design, onChanged, onRevisionCreated, unsavedEdits
         onCancel={() => setConfirmRelease(false)}
         onConfirm={() => {
           setConfirmRelease(false);
-          void move('released');
+          void move('released', releaseNotes.trim() || undefined).then((moved) => {
+            if (moved) setReleaseNotes('');
+          });
         }}
       >
         <p>
           Release revision {design.revision} of {design.name}? You are recorded as its checker, the revision is frozen and purchasers can
           order from it.
         </p>
+        <FormGroup
+          label="Release notes (optional)"
+          labelFor="release-notes"
+          helperText="The author and the purchasers read them; the report prints them."
+        >
+          <TextArea id="release-notes" fill rows={3} value={releaseNotes} onChange={(event) => setReleaseNotes(event.target.value)} />
+        </FormGroup>
         <p className="tc-muted">
           Tacet sizes mounts for a rigid machine on linear mounts over a rigid support. Seismic and wind restraint, snubbers, flexible
           connections and the supporting structure follow local codes and need review by a qualified, licensed engineer.

@@ -12,6 +12,7 @@ import type { User } from '../types';
 import { CreateUserDialog } from './create-user-dialog';
 import { DeactivateUserAlert } from './deactivate-user-alert';
 import { EditUserDialog } from './edit-user-dialog';
+import { TemporaryPasswordDialog } from './temporary-password-dialog';
 import { UsersTable } from './users-table';
 
 function summary(users: readonly User[]): string {
@@ -27,6 +28,7 @@ export function UsersAdmin() {
   const [creating, setCreating] = useState(false);
   const [editing, setEditing] = useState<User | null>(null);
   const [deactivating, setDeactivating] = useState<User | null>(null);
+  const [resetting, setResetting] = useState<User | null>(null);
 
   return (
     <>
@@ -46,13 +48,20 @@ export function UsersAdmin() {
         {users.data ? (
           <>
             <p className="tc-muted tc-table-summary">{summary(users.data)}</p>
-            <UsersTable users={users.data} currentUserId={currentUser.id} onEdit={setEditing} onDeactivate={setDeactivating} />
+            <UsersTable
+              users={users.data}
+              currentUserId={currentUser.id}
+              onEdit={setEditing}
+              onDeactivate={setDeactivating}
+              onTemporaryPassword={setResetting}
+            />
           </>
         ) : null}
       </div>
       <CreateUserDialog isOpen={creating} onClose={() => setCreating(false)} />
       <EditUserDialog user={editing} isSelf={editing?.id === currentUser.id} onClose={() => setEditing(null)} />
       <DeactivateUserAlert user={deactivating} onClose={() => setDeactivating(null)} />
+      {resetting ? <TemporaryPasswordDialog user={resetting} onClose={() => setResetting(null)} /> : null}
     </>
   );
 }

@@ -1,5 +1,5 @@
 import { Button, HTMLTable, Tag } from '@blueprintjs/core';
-import { DisableIcon, EditIcon } from '@blueprintjs/icons';
+import { DisableIcon, EditIcon, KeyIcon } from '@blueprintjs/icons';
 
 import { ROLE_LABELS } from '@/lib/authorization';
 
@@ -12,9 +12,10 @@ export interface UsersTableProps {
   currentUserId: number;
   onEdit: (user: User) => void;
   onDeactivate: (user: User) => void;
+  onTemporaryPassword: (user: User) => void;
 }
 
-export function UsersTable({ users, currentUserId, onEdit, onDeactivate }: UsersTableProps) {
+export function UsersTable({ users, currentUserId, onEdit, onDeactivate, onTemporaryPassword }: UsersTableProps) {
   return (
     <HTMLTable className="tc-table" striped aria-label="People">
       <thead>
@@ -49,9 +50,23 @@ export function UsersTable({ users, currentUserId, onEdit, onDeactivate }: Users
                 ) : (
                   <Tag minimal>Deactivated</Tag>
                 )}
+                {user.mustChangePassword ? (
+                  <Tag minimal intent="warning" className="tc-inline-tag">
+                    Temporary password
+                  </Tag>
+                ) : null}
               </td>
               <td className="tc-table-actions">
                 <Button variant="minimal" icon={<EditIcon />} aria-label={`Edit ${user.name}`} title="Edit" onClick={() => onEdit(user)} />
+                {user.active && !isSelf ? (
+                  <Button
+                    variant="minimal"
+                    icon={<KeyIcon />}
+                    aria-label={`Set a temporary password for ${user.name}`}
+                    title="Set a temporary password"
+                    onClick={() => onTemporaryPassword(user)}
+                  />
+                ) : null}
                 {user.active && !isSelf ? (
                   <Button
                     variant="minimal"

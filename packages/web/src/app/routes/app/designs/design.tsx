@@ -10,6 +10,7 @@ import { PageLoader } from '@/components/page-loader';
 import { designQueryKey, useDesign } from '@/features/designs/api/get-design';
 import { projectDesignsQueryKey } from '@/features/designs/api/get-project-designs';
 import { DesignWorkspace, type DesignTab } from '@/features/designs/components/design-workspace';
+import { DesignFilesPanel } from '@/features/purchasing/components/design-files-panel';
 import { ReviewPanel } from '@/features/review/components/review-panel';
 import { SelectionPanel } from '@/features/selection/components/selection-panel';
 import { MeasuredPanel } from '@/features/verification/components/measured-panel';
@@ -21,9 +22,10 @@ const TABS: readonly DesignTab[] = ['equipment', 'layout', 'running', 'requireme
 
 /**
  * The design workspace: the design's input (designs feature) with the mount selection
- * (selection feature) in its last tab, and check and release (review feature) under the
- * header, and on a released or superseded design the as-built measurements (verification
- * feature) in a "Measured" tab. `?tab=selection` (or `measured`) opens that tab first. A change of status remounts the workspace, so
+ * (selection feature) in its last tab, check and release (review feature) with the report and
+ * bill of materials (purchasing feature) under the header, and on a released or superseded
+ * design the as-built measurements (verification feature) in a "Measured" tab.
+ * `?tab=selection` (or `measured`) opens that tab first. A change of status remounts the workspace, so
  * it reads the design's new state (e.g. frozen once in review).
  */
 export function Component() {
@@ -59,19 +61,22 @@ export function Component() {
         initialTab={initialTab}
         onReload={async () => (await design.refetch()).data}
         renderReview={(context) => (
-          <ReviewPanel
-            design={design.data}
-            unsavedEdits={context.dirty}
-            saveEdits={context.saveIfNeeded}
-            onChanged={(changed) => {
-              queryClient.setQueryData(designQueryKey(changed.id), changed);
-              void queryClient.invalidateQueries({ queryKey: projectDesignsQueryKey(changed.projectId) });
-            }}
-            onRevisionCreated={(created) => {
-              void queryClient.invalidateQueries({ queryKey: projectDesignsQueryKey(created.projectId) });
-              void navigate(`/designs/${created.id}`);
-            }}
-          />
+          <>
+            <ReviewPanel
+              design={design.data}
+              unsavedEdits={context.dirty}
+              saveEdits={context.saveIfNeeded}
+              onChanged={(changed) => {
+                queryClient.setQueryData(designQueryKey(changed.id), changed);
+                void queryClient.invalidateQueries({ queryKey: projectDesignsQueryKey(changed.projectId) });
+              }}
+              onRevisionCreated={(created) => {
+                void queryClient.invalidateQueries({ queryKey: projectDesignsQueryKey(created.projectId) });
+                void navigate(`/designs/${created.id}`);
+              }}
+            />
+            <DesignFilesPanel design={design.data} />
+          </>
         )}
         renderMeasured={
           design.data.status === 'released' || design.data.status === 'superseded'

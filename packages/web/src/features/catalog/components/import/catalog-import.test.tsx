@@ -249,6 +249,27 @@ describe('Catalog import page', () => {
     expect(await screen.findByRole('alert')).toHaveTextContent(expected);
   });
 
+  it('names the suppliers the file would create, with the existing one a new name resembles', async () => {
+    const fake = installFakeApi();
+    serveImport(fake);
+    fake.on('post', '/mounts/import', {
+      status: 200,
+      data: {
+        ...CHECKED,
+        newSuppliers: [
+          { name: 'Quilmere Isolation', firstRow: 2, rows: 2, similarTo: 'Quillmere Isolation' },
+          { name: 'Brand New Mounts', firstRow: 4, rows: 1, similarTo: null },
+        ],
+      },
+    });
+    const { user } = renderApp({ signedInAs: 'catalog_manager', path: '/catalog/import' });
+    await chooseAndCheck(user);
+    const list = await screen.findByRole('list', { name: 'New suppliers' });
+    expect(screen.getByText('New suppliers this file would create: 2')).toBeInTheDocument();
+    expect(list).toHaveTextContent('Quilmere Isolation — row 2 and 1 more — very like the existing supplier Quillmere Isolation: a typo?');
+    expect(list).toHaveTextContent('Brand New Mounts — row 4');
+  });
+
   it('says when only the first problems are listed', async () => {
     const fake = installFakeApi();
     fake.on('get', '/mounts/imports', { status: 200, data: [] }).on('post', '/mounts/import', {

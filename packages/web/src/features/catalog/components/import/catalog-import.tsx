@@ -74,6 +74,35 @@ function Counts({ outcome }: { outcome: ImportOutcome }) {
   );
 }
 
+/** The suppliers a file would create: a typo in a supplier's name shows here before anything is written. */
+function NewSuppliers({ suppliers, preview }: { suppliers: ImportOutcome['result']['newSuppliers']; preview: boolean }) {
+  if (suppliers.length === 0) return null;
+  const likelyTypos = suppliers.filter((supplier) => supplier.similarTo !== null).length;
+  return (
+    <Callout
+      intent={likelyTypos > 0 ? 'warning' : 'primary'}
+      className="tc-import-callout"
+      title={`${preview ? 'New suppliers this file would create' : 'New suppliers created'}: ${suppliers.length}`}
+    >
+      <ul className="tc-new-suppliers" aria-label="New suppliers">
+        {suppliers.map((supplier) => (
+          <li key={supplier.name}>
+            <strong>{supplier.name}</strong> — row {supplier.firstRow}
+            {supplier.rows > 1 ? ` and ${supplier.rows - 1} more` : ''}
+            {supplier.similarTo ? (
+              <span className="tc-new-supplier-typo">
+                {' '}
+                — very like the existing supplier <strong>{supplier.similarTo}</strong>: a typo?
+              </span>
+            ) : null}
+          </li>
+        ))}
+      </ul>
+      {preview ? <p className="tc-muted">If a name is misspelt, correct it in the file and check it again before importing.</p> : null}
+    </Callout>
+  );
+}
+
 export interface CatalogImportProps {
   /** After mounts were written (e.g. to refresh the supplier list, which an import can add to). */
   onImported?: () => void;
@@ -200,6 +229,7 @@ export function CatalogImport({ onImported }: CatalogImportProps) {
             {hasProblems ? `, ${rows(result.rejected)} with problems` : ''}.
           </p>
           <Counts outcome={check} />
+          <NewSuppliers suppliers={result.newSuppliers} preview={check.mode === 'dry-run' || check.status !== 200} />
           <Tabs id="import-review" selectedTabId={tab} onChange={setTab} className="tc-import-tabs">
             <Tab
               id="problems"
