@@ -59,3 +59,15 @@ export async function screenshot(page: Page, name: string): Promise<void> {
   mkdirSync(SCREENSHOT_DIR, { recursive: true });
   await page.screenshot({ path: join(SCREENSHOT_DIR, `${name}.png`), fullPage: true });
 }
+
+/** A call to the server's API as the browser tests set things up (throws on anything but 2xx). */
+export async function apiCall<T>(token: string | null, method: string, path: string, body?: unknown): Promise<T> {
+  const response = await fetch(new URL(`/api${path}`, baseURL()), {
+    method,
+    headers: { 'content-type': 'application/json', ...(token ? { authorization: `Bearer ${token}` } : {}) },
+    body: body === undefined ? undefined : JSON.stringify(body),
+  });
+  const text = await response.text();
+  if (!response.ok) throw new Error(`${method} ${path} answered ${response.status}: ${text}`);
+  return (text ? JSON.parse(text) : undefined) as T;
+}

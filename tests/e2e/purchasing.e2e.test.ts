@@ -76,6 +76,10 @@ async function authorSendsForCheck(browser: Browser): Promise<void> {
   await shot(page, 'purchasing-01-author-draft');
 
   await panel.getByRole('button', { name: 'Send for check' }).click();
+  // a note for the checker (optional), then send
+  const send = page.getByRole('dialog', { name: 'Send for check' });
+  await send.getByLabel('Note to the checker (optional)').fill('Ready for check.');
+  await send.getByRole('button', { name: 'Send for check' }).click();
   await page.locator('[data-testid="review-stage"][data-status="in_review"]').waitFor();
   await page.getByText('This revision is in review, so it cannot be changed now.').waitFor();
   // The author may not release their own design, and the page says why.
@@ -128,7 +132,11 @@ async function purchaserRequestsQuotation(browser: Browser): Promise<void> {
   const supplierName = ((await supplier.locator('.tc-supplier-title').textContent()) ?? '').split(' · ')[0]!.trim();
   expect(supplierName).not.toBe('');
   await supplier.getByLabel('Message to the supplier (optional)').fill('Please quote delivery to site within six weeks.');
-  await supplier.getByRole('button', { name: 'Send request for quotation' }).click();
+  await supplier.getByRole('button', { name: 'Review request for quotation' }).click();
+  await page
+    .getByRole('dialog', { name: `Send this request to ${supplierName}?` })
+    .getByRole('button', { name: 'Send request' })
+    .click();
   await supplier
     .getByRole('list', { name: `Requests to ${supplierName}` })
     .getByText('Requested', { exact: true })
