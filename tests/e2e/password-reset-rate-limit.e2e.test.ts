@@ -1,11 +1,14 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { startServer, type RunningServer } from './server-process';
+import { startServer as startBuiltServer, type TacetServer } from '../../tools/harness/server.mjs';
+
+/** A server of its own, with a low limit. */
+const startServer = (env: Record<string, string>) => startBuiltServer({ web: true, label: 'e2e', env });
 
 // The "forgot password" routes share the sign-in limit (TACET_LOGIN_LIMIT_PER_MINUTE). The
 // throttle runs only in the real server (jest loads a stub of @nestjs/throttler), so it is
 // checked here over HTTP.
 describe('password reset rate limit (real server)', () => {
-  let server: RunningServer;
+  let server: TacetServer;
   beforeAll(async () => {
     server = await startServer({ TACET_LOGIN_LIMIT_PER_MINUTE: '3' });
   });

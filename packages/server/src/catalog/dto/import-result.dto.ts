@@ -82,7 +82,12 @@ export class NewSupplierDto {
   @ApiProperty({ example: 'Quillmere Isolaton' }) name: string;
   @ApiProperty({ description: "The file's first row naming it" }) firstRow: number;
   @ApiProperty({ description: 'Valid rows naming it' }) rows: number;
-  @ApiProperty({ type: String, nullable: true, description: 'An existing supplier with a very similar name (a likely typo)', example: 'Quillmere Isolation' })
+  @ApiProperty({
+    type: String,
+    nullable: true,
+    description: 'An existing supplier with a very similar name (a likely typo)',
+    example: 'Quillmere Isolation',
+  })
   similarTo: string | null;
 }
 
@@ -112,7 +117,10 @@ export class ImportResultDto implements ImportResult {
   @ApiProperty({ type: [ImportPreviewRowDto], description: 'The first 100 accepted rows' })
   preview: ImportPreviewRowDto[];
 
-  @ApiProperty({ type: [NewSupplierDto], description: 'Suppliers not in the catalog that the file creates (or, in a preview, would create)' })
+  @ApiProperty({
+    type: [NewSupplierDto],
+    description: 'Suppliers not in the catalog that the file creates (or, in a preview, would create)',
+  })
   newSuppliers: NewSupplierDto[];
 }
 

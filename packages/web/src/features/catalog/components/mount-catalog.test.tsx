@@ -219,7 +219,14 @@ describe('Catalog page', () => {
   it('edits a mount in US units and sends only the changes, in SI', async () => {
     const fake = installFakeApi();
     serveCatalog(fake, { mounts: [makeMount({ id: 12, partNumber: 'QM-S1-01200' })] });
-    const manager = { id: 2, email: 'catalog@tacet.test', name: 'Cato Catalog', role: 'catalog_manager', unitSystem: 'US', mustChangePassword: false } as const;
+    const manager = {
+      id: 2,
+      email: 'catalog@tacet.test',
+      name: 'Cato Catalog',
+      role: 'catalog_manager',
+      unitSystem: 'US',
+      mustChangePassword: false,
+    } as const;
     const { user } = renderApp({ signedInAs: manager, path: '/catalog?mount=12' });
     const drawer = await screen.findByRole('dialog', { name: 'Mount QM-S1-01200' });
 
