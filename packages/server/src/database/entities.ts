@@ -2,6 +2,7 @@ import { CatalogImport } from '../catalog/catalog-import.entity.js';
 import { CatalogRevision } from '../catalog-revision/catalog-revision.entity.js';
 import { Mount } from '../catalog/mount.entity.js';
 import { Design } from '../designs/design.entity.js';
+import { DesignSelection } from '../designs/design-selection.entity.js';
 import { Rfq } from '../purchasing/rfq.entity.js';
 import { RfqEvent } from '../purchasing/rfq-event.entity.js';
 import { DesignTransition } from '../review/design-transition.entity.js';
@@ -23,4 +24,5 @@ export const ENTITIES = [
   RfqEvent,
   CatalogRevision,
   Verification,
+  DesignSelection,
 ];
