@@ -51,11 +51,20 @@ interface FigureRow {
   /** The figure per candidate for finding the best one (NaN = none), and which way is better. */
   values?: number[];
   better?: 'high' | 'low';
+  /** The rounding the cells show (default: none). */
+  round?: (v: number) => number;
 }
 
-/** Indices of the best value(s) of a row; none when fewer than two candidates have one or all are equal. */
-export function bestOf(values: readonly number[], better: 'high' | 'low'): Set<number> {
-  const finite = values.map((v, i) => ({ v, i })).filter((x) => Number.isFinite(x.v));
+/** Rounding to what a row shows, so that figures that read the same are not told apart. */
+const toDecimals = (decimals: number) => (v: number) => Math.round(v * 10 ** decimals) / 10 ** decimals;
+const toSignificant = (digits: number) => (v: number) => (Number.isFinite(v) && v !== 0 ? Number(v.toPrecision(digits)) : v);
+
+/**
+ * Indices of the best value(s) of a row, compared as shown (`round`); none when fewer than two
+ * candidates have one or all read the same.
+ */
+export function bestOf(values: readonly number[], better: 'high' | 'low', round: (v: number) => number = (v) => v): Set<number> {
+  const finite = values.map((v, i) => ({ v: round(v), i })).filter((x) => Number.isFinite(x.v));
   if (finite.length < 2) return new Set();
   const target = better === 'high' ? Math.max(...finite.map((x) => x.v)) : Math.min(...finite.map((x) => x.v));
   const best = finite.filter((x) => Math.abs(x.v - target) <= 1e-9 * Math.max(1, Math.abs(target))).map((x) => x.i);
@@ -103,6 +112,7 @@ export function CandidateComparison({
         cells: values.map(formatPct),
         values,
         better: 'high' as const,
+        round: toDecimals(1),
       };
     });
     return byFrequency;
@@ -115,6 +125,7 @@ export function CandidateComparison({
       cells: candidates.map((c) => formatPct(worstIsolationPct(c))),
       values: candidates.map(worstIsolationPct),
       better: 'high',
+      round: toDecimals(1),
     },
     ...isolationRows,
     {
@@ -122,12 +133,14 @@ export function CandidateComparison({
       cells: candidates.map((c) => formatFrequency(c.verticalNaturalFrequencyHz)),
       values: candidates.map((c) => c.verticalNaturalFrequencyHz),
       better: 'low',
+      round: toSignificant(3),
     },
     {
       label: 'Resonance amplification',
       cells: candidates.map((c) => formatRatio(c.resonanceAmplification)),
       values: candidates.map((c) => c.resonanceAmplification),
       better: 'low',
+      round: toDecimals(2),
     },
     {
       label: 'Utilisation (as checked)',
@@ -139,6 +152,7 @@ export function CandidateComparison({
       cells: candidates.map((c) => units.format('deflection', c.levelErrorMm / 1000)),
       values: candidates.map((c) => c.levelErrorMm),
       better: 'low',
+      round: toSignificant(3),
     },
     {
       label: 'Price, all points',
@@ -146,6 +160,7 @@ export function CandidateComparison({
       // prices in different currencies are not compared
       values: new Set(candidates.map((c) => c.currency)).size === 1 ? candidates.map((c) => c.totalPrice ?? NaN) : undefined,
       better: 'low',
+      round: toDecimals(0),
     },
     {
       label: 'Longest lead time',
@@ -235,7 +250,7 @@ export function CandidateComparison({
           </thead>
           <tbody>
             {rows.map((row, r) => {
-              const best = row.values && row.better ? bestOf(row.values, row.better) : new Set<number>();
+              const best = row.values && row.better ? bestOf(row.values, row.better, row.round) : new Set<number>();
               return (
                 <tr key={r}>
                   <th scope="row">{row.label}</th>

@@ -54,6 +54,8 @@ describe('candidate figures', () => {
     expect([...bestOf([5, 5], 'low')]).toEqual([]);
     expect([...bestOf([5, NaN], 'low')]).toEqual([]);
     expect([...bestOf([4, 4, 9], 'low')]).toEqual([0, 1]);
+    // figures that read the same (100.0 % and 100.0 %) are not told apart
+    expect([...bestOf([99.996, 99.9991], 'high', (v) => Math.round(v * 10) / 10)]).toEqual([]);
   });
 
   it('names a mode by the motions that carry it (docs/engineering/rigid-body-modes.md §6)', () => {

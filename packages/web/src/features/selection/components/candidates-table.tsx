@@ -110,11 +110,13 @@ interface HeaderProps {
   onSort: (sort: CandidateSort) => void;
   className?: string;
   children: ReactNode;
+  /** A second, smaller line under the name. */
+  note?: ReactNode;
   title?: string;
 }
 
 /** A column header that sorts by its column (a second click turns the order round). */
-function SortHeader({ column, sort, onSort, className, children, title }: HeaderProps) {
+function SortHeader({ column, sort, onSort, className, children, note, title }: HeaderProps) {
   const active = sort.column === column;
   const next: SortDirection = active && sort.direction === 'asc' ? 'desc' : 'asc';
   return (
@@ -125,8 +127,11 @@ function SortHeader({ column, sort, onSort, className, children, title }: Header
       title={title}
     >
       <button type="button" className="tc-sort-button" onClick={() => onSort({ column, direction: next })}>
-        {children}
-        <span aria-hidden="true">{active ? (sort.direction === 'asc' ? ' ▲' : ' ▼') : ''}</span>
+        <span className="tc-sort-label">
+          {children}
+          <span aria-hidden="true">{active ? (sort.direction === 'asc' ? ' ▲' : ' ▼') : ''}</span>
+        </span>
+        {note ? <span className="tc-header-note">{note}</span> : null}
       </button>
     </th>
   );
@@ -261,8 +266,9 @@ export const CandidatesTable = memo(function CandidatesTable({
                 onSort={onSort}
                 className="tc-number"
                 title={rows[0] ? utilizationBasis(rows[0].candidate) : undefined}
+                note={margin > 0 ? `+${formatMargin(margin)} % weight` : null}
               >
-                Utilisation{margin > 0 ? <span className="tc-header-note">+{formatMargin(margin)} % weight</span> : null}
+                Utilisation
               </SortHeader>
               <SortHeader column="price" sort={sort} onSort={onSort} className="tc-number">
                 Price
