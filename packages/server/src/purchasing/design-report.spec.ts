@@ -107,6 +107,16 @@ describe('modeMotionText', () => {
     ).toBe('bounce');
   });
 
+  it('never writes 90 % for the largest share of a mixed mode', () => {
+    expect(
+      modeMotionText({
+        dominant: 'pitch',
+        coupled: true,
+        energyFractions: { ...fractions, sway: 0, roll: 0, yaw: 0, pitch: 0.8962, surge: 0.1038 },
+      }),
+    ).toBe('pitch + surge (mixed): pitch 89.6 %, surge 10 %');
+  });
+
   it('falls back to the dominant coordinate for a candidate stored without the shares', () => {
     expect(modeMotionText({ dominant: 'pitch', coupled: true })).toBe('mostly pitch (coupled)');
   });

@@ -400,5 +400,11 @@ export function modeMotionText(
   if (!mode.energyFractions) return `mostly ${mode.dominant}${mode.coupled ? ' (coupled)' : ''}`;
   const motion = describeModeMotion(mode.energyFractions);
   if (!motion.mixed) return motion.name;
-  return `${motion.name}: ${motion.participants.map((p) => `${p.dof} ${Math.round(p.share * 100)} %`).join(', ')}`;
+  return `${motion.name}: ${motion.participants.map((p) => `${p.dof} ${shareText(p.share)}`).join(', ')}`;
+}
+
+/** Whole percent, or one decimal where whole percent would read 90 % for a share below it (a mixed mode). */
+function shareText(share: number): string {
+  const whole = Math.round(share * 100);
+  return whole >= 90 && share < 0.9 ? `${(Math.floor(share * 1000) / 10).toFixed(1)} %` : `${whole} %`;
 }

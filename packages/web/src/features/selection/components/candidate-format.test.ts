@@ -10,7 +10,7 @@ import {
   utilizationRange,
   worstIsolationPct,
 } from './candidate-format';
-import { modeMotionText } from './mode-format';
+import { formatShare, modeMotionText } from './mode-format';
 import { sortCandidates } from './candidates-table';
 
 const rows = () => demoCandidates().map((candidate, index) => ({ rank: index + 1, candidate }));
@@ -74,6 +74,11 @@ describe('candidate figures', () => {
       }),
     ).toEqual({ name: 'bounce — vertical', mixed: false, shares: '' });
     expect(modeMotionText({ frequencyHz: 3, dominant: 'yaw', coupled: true }).name).toBe('mostly yaw — about z (mixed)');
+    // a mixed mode never reads as 90 %
+    expect(formatShare(0.8962)).toBe('89.6 %');
+    expect(formatShare(0.8999)).toBe('89.9 %');
+    expect(formatShare(0.9)).toBe('90 %');
+    expect(formatShare(0.054)).toBe('5 %');
   });
 
   it('shortens disturbing-frequency labels for chart lines', () => {

@@ -14,7 +14,17 @@ export const MODE_NAMES: Record<ModeName, string> = {
   yaw: 'yaw — about z',
 };
 
-const pct = new Intl.NumberFormat('en-US', { maximumFractionDigits: 0 });
+const pct0 = new Intl.NumberFormat('en-US', { maximumFractionDigits: 0 });
+const pct1 = new Intl.NumberFormat('en-US', { minimumFractionDigits: 1, maximumFractionDigits: 1 });
+
+/**
+ * A share of a mode's energy in whole percent — with one decimal where whole percent would reach
+ * the 90 % that makes a mode pure while the share is below it (89.6 %, not "90 %").
+ */
+export function formatShare(share: number): string {
+  const whole = Math.round(share * 100);
+  return whole >= 90 && share < 0.9 ? `${pct1.format(Math.floor(share * 1000) / 10)} %` : `${pct0.format(whole)} %`;
+}
 
 export interface ModeMotionText {
   /** "bounce — vertical", or "roll + yaw (mixed)". */
@@ -43,6 +53,6 @@ export function modeMotionText(mode: CandidateMode): ModeMotionText {
   return {
     name: motion.name,
     mixed: true,
-    shares: motion.participants.map((p) => `${p.dof} ${pct.format(p.share * 100)} %`).join(', '),
+    shares: motion.participants.map((p) => `${p.dof} ${formatShare(p.share)}`).join(', '),
   };
 }
