@@ -2,29 +2,14 @@ import type { Browser, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { join } from 'node:path';
 import type { Locator } from 'playwright-core';
-import { baseURL, launch, outsideRequests, screenshot, SCREENSHOT_DIR, signIn } from './browser';
+import { launch, newPage, outsideRequests, screenshot, SCREENSHOT_DIR, signIn } from './browser';
 
 // The demo draft "CHW pump P-3 skid" (PRODUCT.md "Demo"), driven at a desk width of 1,440 px.
 const PROJECT = 'North Loop Chilled Water Plant';
 const DRAFT = 'CHW pump P-3 skid';
 
-async function openAt(browser: Browser, width: number, height = 900): Promise<Page> {
-  const context = await browser.newContext({ baseURL: baseURL(), viewport: { width, height } });
-  const ownHost = new URL(baseURL()).host;
-  await context.route('**/*', (route) => {
-    const url = new URL(route.request().url());
-    if (url.protocol.startsWith('http') && url.host !== ownHost) {
-      outsideRequests.push(url.href);
-      return route.abort();
-    }
-    return route.continue();
-  });
-  return context.newPage();
-}
-
-async function shot(page: Page, name: string): Promise<void> {
-  await page.evaluate('window.scrollTo(0, 0)');
-  await screenshot(page, name);
+function openAt(browser: Browser, width: number, height = 900): Promise<Page> {
+  return newPage(browser, { width, height });
 }
 
 /** A screenshot of one part of the page, to look at closely. */
