@@ -293,7 +293,7 @@ export const CandidatesTable = memo(function CandidatesTable({
                 compared.has(key) ? 'is-compared' : '',
               ];
               return (
-                <tr key={key} className={classes.filter(Boolean).join(' ')} onClick={() => onOpen(key)} aria-selected={key === selectedKey}>
+                <tr key={key} className={classes.filter(Boolean).join(' ')} onClick={() => onOpen(key)}>
                   <th scope="row" className="tc-results-sticky tc-candidate-cell">
                     <div className="tc-candidate-cell-inner">
                       <span onClick={(event) => event.stopPropagation()}>
