@@ -12,6 +12,11 @@ function openAt(browser: Browser, width: number, height = 900): Promise<Page> {
   return newPage(browser, { width, height });
 }
 
+async function shot(page: Page, name: string): Promise<void> {
+  await page.evaluate('window.scrollTo(0, 0)');
+  await screenshot(page, name);
+}
+
 /** A screenshot of one part of the page, to look at closely. */
 async function partShot(locator: Locator, name: string): Promise<void> {
   await locator.screenshot({ path: join(SCREENSHOT_DIR, `${name}.png`) });
