@@ -38,8 +38,7 @@ describe('candidate figures', () => {
     expect(formatUtilizationRange(spring)).toBe('0.68–0.93');
     expect(utilizationBasis(spring)).toContain('with the 10 % weight margin');
     // a candidate kept from before the margin travelled with it: none assumed
-    const old = { ...spring };
-    delete old.weightMarginPct;
+    const old = { ...spring, weightMarginPct: undefined };
     expect(formatUtilizationRange(old)).toBe('0.68–0.85');
   });
 
