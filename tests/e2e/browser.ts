@@ -33,8 +33,8 @@ export async function launch(): Promise<Browser> {
 /** Requests a page tried to send anywhere but our own server (fonts or assets from a CDN...). */
 export const outsideRequests: string[] = [];
 
-export async function newPage(browser: Browser): Promise<Page> {
-  const context = await browser.newContext({ baseURL: baseURL(), viewport: { width: 1400, height: 900 } });
+export async function newPage(browser: Browser, viewport = { width: 1400, height: 900 }): Promise<Page> {
+  const context = await browser.newContext({ baseURL: baseURL(), viewport });
   const ownHost = new URL(baseURL()).host;
   await context.route('**/*', (route) => {
     const url = new URL(route.request().url());

@@ -1,5 +1,6 @@
 import { DataSource } from 'typeorm';
 import { DEMO_PROJECT } from '../src/designs/demo-designs.seed.js';
+import { DesignSelection } from '../src/designs/design-selection.entity.js';
 import { Design } from '../src/designs/design.entity.js';
 import { createMount, createSupplier, type CreatedMount, type CreatedSupplier } from './factories/selection-catalog.factory.js';
 import { createTestApp, type TestApp } from './utils/create-test-app.js';
@@ -434,6 +435,67 @@ describe('projects and designs (e2e)', () => {
         ['candidates', 'cg', 'considered', 'disturbingFrequenciesHz', 'elapsedMs', 'pointLoadsN', 'totalMassKg'].sort(),
       );
       await t.http().post(`/api/designs/${design.id}/selection`).set(as('engineer')).send({ limit: 0 }).expect(400);
+    });
+
+    it('keeps the last selection with the design while its input is unchanged', async () => {
+      const design = await newDesign((await newProject()).id);
+      expect((await get(design.id)).body.lastSelection).toBeNull();
+      const run = await t.http().post(`/api/designs/${design.id}/selection`).set(as('engineer')).send({ limit: 7 });
+      expect(run.status).toBe(200);
+
+      // every role that reads the design gets it back exactly as the run answered; the design itself is untouched
+      for (const who of ['engineer', 'checker', 'viewer', 'admin']) {
+        const read = await get(design.id, who).expect(200);
+        expect(read.body.version).toBe(1);
+        expect(read.body.lastSelection).toMatchObject({ ranBy: { name: 'Erin Engineer' }, limit: 7, catalogChanged: false });
+        expect(Date.parse(read.body.lastSelection.ranAt)).not.toBeNaN();
+        expect(read.body.lastSelection.result).toEqual(run.body);
+      }
+
+      // a save that sends the same input again (key order aside) keeps the selection and the choice
+      const chosen = await put(design.id, { version: 1, chosenMountId: spring.id });
+      expect(chosen.status).toBe(200);
+      const same = input();
+      const reordered = { criteria: same.criteria, operating: same.operating, mountPoints: same.mountPoints, components: same.components };
+      const resent = await put(design.id, { version: 2, name: 'Renamed skid', input: reordered });
+      expect(resent.status).toBe(200);
+      expect(resent.body).toMatchObject({ version: 3, name: 'Renamed skid', chosen: { mountId: spring.id } });
+      expect(resent.body.lastSelection.result).toEqual(run.body);
+
+      // a later run replaces it; the checker may run it too
+      const again = await t.http().post(`/api/designs/${design.id}/selection`).set(as('checker')).send({});
+      expect(again.status).toBe(200);
+      const replaced = (await get(design.id)).body.lastSelection;
+      expect(replaced).toMatchObject({ ranBy: { name: 'Chris Checker' }, limit: 20 });
+      expect(replaced.result).toEqual(again.body);
+
+      // a catalog change since the run is reported, the result still shown
+      await t.http().patch(`/api/mounts/${spring.id}`).set(as('catalog_manager')).send({ leadTimeDays: 13 }).expect(200);
+      expect((await get(design.id)).body.lastSelection.catalogChanged).toBe(true);
+      await t.http().patch(`/api/mounts/${spring.id}`).set(as('catalog_manager')).send({ leadTimeDays: 12 }).expect(200);
+
+      // a changed input ends it (and the choice), and the stored row goes
+      const changed = await put(design.id, {
+        version: 3,
+        input: input({ operating: { speedRpm: 1450, orders: [1, 2], lineFrequencyHz: 50 } }),
+      });
+      expect(changed.status).toBe(200);
+      expect(changed.body).toMatchObject({ chosen: null, lastSelection: null });
+      expect(await t.app.get(DataSource).getRepository(DesignSelection).countBy({ designId: design.id })).toBe(0);
+    });
+
+    it('does not keep a run that failed, nor return a run made on another input', async () => {
+      const design = await newDesign((await newProject()).id);
+      await t.http().post(`/api/designs/${design.id}/selection`).set(as('viewer')).send({}).expect(403);
+      await t.http().post(`/api/designs/${design.id}/selection`).set(as('engineer')).send({ limit: 0 }).expect(400);
+      expect((await get(design.id)).body.lastSelection).toBeNull();
+
+      await t.http().post(`/api/designs/${design.id}/selection`).set(as('engineer')).send({}).expect(200);
+      // the input changes behind the stored row's back (as when a save races a run): it is not shown
+      const repo = t.app.get(DataSource).getRepository(Design);
+      const row = await repo.findOneByOrFail({ id: design.id });
+      await repo.update({ id: design.id }, { input: { ...row.input, criteria: { ...row.input.criteria, minIsolationPct: 91 } } });
+      expect((await get(design.id)).body.lastSelection).toBeNull();
     });
   });
 

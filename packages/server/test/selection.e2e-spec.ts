@@ -46,7 +46,8 @@ type Candidate = {
   verticalNaturalFrequencyHz: number;
   isolation: { frequencyHz: number; transmissibility: number; efficiencyPct: number; dB: number }[];
   levelErrorMm: number;
-  modes?: { frequencyHz: number; dominant: string; coupled: boolean }[];
+  modes?: { frequencyHz: number; dominant: string; coupled: boolean; energyFractions: Record<string, number> }[];
+  weightMarginPct: number;
   score: number;
   scoreTerms: Record<string, number>;
   totalPrice: number | null;
@@ -154,6 +155,14 @@ describe('selection (e2e)', () => {
     expect(c.modes).toHaveLength(6);
     const bounce = c.modes!.find((m) => m.dominant === 'bounce')!;
     expect(bounce.frequencyHz).toBeCloseTo(fn, 8);
+    // each mode carries its kinetic-energy shares (docs/engineering/rigid-body-modes.md §6)
+    for (const mode of c.modes!) {
+      expect(Object.keys(mode.energyFractions).sort()).toEqual(['bounce', 'pitch', 'roll', 'surge', 'sway', 'yaw']);
+      expect(Object.values(mode.energyFractions).reduce((a, b) => a + b, 0)).toBeCloseTo(1, 9);
+      expect(mode.energyFractions[mode.dominant]).toBe(Math.max(...Object.values(mode.energyFractions)));
+    }
+    expect(bounce.energyFractions.bounce).toBeCloseTo(1, 9);
+    expect(c.weightMarginPct).toBe(0);
     expect(Object.values(c.scoreTerms).reduce((a, b) => a + b, 0)).toBeCloseTo(c.score, 12);
   });
 
@@ -221,6 +230,8 @@ describe('selection (e2e)', () => {
       'Load outside the allowed 50 %–85 % of the rated load with the 5 % weight margin at point A (95 %), point B (89 %).',
     ]);
     expect(find(candidates, offset.id).passes).toBe(true);
+    // the margin the checks applied travels with every candidate, so screens show utilisation on the same basis
+    expect(candidates.every((c) => c.weightMarginPct === 5)).toBe(true);
     expect(response.body.considered).toBe(2);
     expect(response.body.elapsedMs).toBeGreaterThanOrEqual(0);
   });

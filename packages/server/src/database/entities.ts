@@ -3,6 +3,7 @@ import { CatalogRevision } from '../catalog-revision/catalog-revision.entity.js'
 import { Mount } from '../catalog/mount.entity.js';
 import { Design } from '../designs/design.entity.js';
 import { PasswordResetToken } from '../auth/password-reset-token.entity.js';
+import { DesignSelection } from '../designs/design-selection.entity.js';
 import { Rfq } from '../purchasing/rfq.entity.js';
 import { RfqLine } from '../purchasing/rfq-line.entity.js';
 import { RfqEvent } from '../purchasing/rfq-event.entity.js';
@@ -27,4 +28,5 @@ export const ENTITIES = [
   Verification,
   RfqLine,
   PasswordResetToken,
+  DesignSelection,
 ];

@@ -1,9 +1,11 @@
 import { ConflictException } from '@nestjs/common';
 import type { Repository } from 'typeorm';
+import type { CatalogRevisionService } from '../catalog-revision/catalog-revision.service.js';
 import type { ProjectsService } from '../projects/projects.service.js';
 import type { SelectionCatalogReader } from '../selection/selection-catalog.reader.js';
 import type { SelectionService } from '../selection/selection.service.js';
 import { buildUser } from '../../test/factories/user.factory.js';
+import type { DesignSelection } from './design-selection.entity.js';
 import { Design } from './design.entity.js';
 import { DesignsService, STALE_VERSION } from './designs.service.js';
 
@@ -24,7 +26,14 @@ describe('DesignsService.update', () => {
       findOne: async () => stored,
       createQueryBuilder: () => builder,
     } as unknown as Repository<Design>;
-    const service = new DesignsService(repo, {} as ProjectsService, {} as SelectionService, {} as SelectionCatalogReader);
+    const service = new DesignsService(
+      repo,
+      {} as Repository<DesignSelection>,
+      {} as ProjectsService,
+      {} as SelectionService,
+      {} as SelectionCatalogReader,
+      {} as CatalogRevisionService,
+    );
     return { service, calls };
   }
 

@@ -2,9 +2,10 @@ import { BadRequestException, ConflictException, ForbiddenException, Injectable,
 import { InjectRepository } from '@nestjs/typeorm';
 import { isVibrationInputError } from '@tacet/vibration';
 import { In, type Repository } from 'typeorm';
+import { CatalogRevisionService } from '../catalog-revision/catalog-revision.service.js';
 import { isUniqueViolation } from '../database/unique-violation.js';
 import { ProjectsService, visibleStatuses } from '../projects/projects.service.js';
-import type { DesignInput } from '../selection/dto/design-input.dto.js';
+import { SELECTION_LIMITS, type DesignInput } from '../selection/dto/design-input.dto.js';
 import { designFrequencies } from '../selection/selection-problem.js';
 import { SelectionCatalogReader } from '../selection/selection-catalog.reader.js';
 import { SelectionService, type CandidateChoice } from '../selection/selection.service.js';
@@ -12,8 +13,10 @@ import type { LabelledFrequency, SelectionResult } from '../selection/selection.
 import type { User } from '../users/user.entity.js';
 import { buildBom } from './bom.js';
 import { defaultDesignInput } from './default-design-input.js';
+import { DesignSelection } from './design-selection.entity.js';
 import { Design } from './design.entity.js';
-import { DesignDto, DesignListItemDto } from './dto/design.dto.js';
+import { DesignDto, DesignListItemDto, type StoredSelectionDto } from './dto/design.dto.js';
+import { inputFingerprint } from './input-fingerprint.js';
 import type { CreateDesignDto } from './dto/create-design.dto.js';
 import type { UpdateDesignDto } from './dto/update-design.dto.js';
 
@@ -33,9 +36,11 @@ type DesignChanges = Partial<Pick<Design, 'name' | 'input' | 'chosen' | 'bom' | 
 export class DesignsService {
   constructor(
     @InjectRepository(Design) private readonly designs: Repository<Design>,
+    @InjectRepository(DesignSelection) private readonly selections: Repository<DesignSelection>,
     private readonly projects: ProjectsService,
     private readonly selection: SelectionService,
     private readonly catalog: SelectionCatalogReader,
+    private readonly catalogRevision: CatalogRevisionService,
   ) {}
 
   async listForProject(user: User, projectId: number): Promise<DesignListItemDto[]> {
@@ -79,7 +84,20 @@ export class DesignsService {
 
   async findOne(user: User, id: number): Promise<DesignDto> {
     const design = await this.getVisible(user, id);
-    return DesignDto.from(design, frequenciesOrNone(design.input));
+    return DesignDto.from(design, frequenciesOrNone(design.input), await this.lastSelection(design));
+  }
+
+  /** The last selection run on the design's current input, or null (none, or run on another input). */
+  private async lastSelection(design: Design): Promise<StoredSelectionDto | null> {
+    const stored = await this.selections.findOne({ where: { designId: design.id }, relations: { ranBy: true } });
+    if (!stored || stored.inputFingerprint !== inputFingerprint(design.input)) return null;
+    return {
+      ranAt: stored.ranAt.toISOString(),
+      ranBy: stored.ranBy ? { id: stored.ranBy.id, name: stored.ranBy.name } : null,
+      limit: stored.candidateLimit,
+      catalogChanged: stored.catalogRevision !== (await this.catalogRevision.current()),
+      result: stored.result,
+    };
   }
 
   /**
@@ -99,15 +117,17 @@ export class DesignsService {
     const changes: DesignChanges = {};
     if (dto.name !== undefined) changes.name = dto.name;
     const input = dto.input ? plain(dto.input) : design.input;
-    if (dto.input) {
+    // the same values sent again (e.g. a save that changed only the name) are no change
+    const inputChanged = dto.input !== undefined && inputFingerprint(input) !== inputFingerprint(design.input);
+    if (inputChanged) {
       this.selection.assertComputable(input);
       changes.input = input;
     }
     const choice = choiceOf(dto);
     if (choice) {
       Object.assign(changes, await this.choose(input, choice));
-    } else if (dto.chosenMountId === null || dto.chosenSeriesId === null || dto.input) {
-      // an explicit clear, or a new input that makes the old choice stale
+    } else if (dto.chosenMountId === null || dto.chosenSeriesId === null || inputChanged) {
+      // an explicit clear, or a changed input that makes the old choice stale
       Object.assign(changes, { chosen: null, bom: null, snapshot: null });
     }
 
@@ -125,13 +145,33 @@ export class DesignsService {
       throw error;
     }
     if (!affected) throw new ConflictException(STALE_VERSION);
+    // the last selection belongs to the old input (GET would no longer return it anyway)
+    if (inputChanged) await this.selections.delete({ designId: id });
     return this.findOne(user, id);
   }
 
-  /** Selection over the saved input (any engineer may run it; nothing is stored). */
-  async runSelection(user: User, id: number, limit?: number): Promise<SelectionResult> {
+  /**
+   * Selection over the saved input (any engineer may run it). The answer is kept with the design,
+   * with the fingerprint of the input it ran on, so that the design page shows it again until the
+   * input changes; the design itself (and its version) is not touched.
+   */
+  async runSelection(user: User, id: number, limit: number = SELECTION_LIMITS.limit.default): Promise<SelectionResult> {
     const design = await this.getVisible(user, id);
-    return this.selection.selectForDesign(design.input, limit);
+    const catalogRevision = await this.catalogRevision.current();
+    const result = await this.selection.selectForDesign(design.input, limit);
+    await this.selections.upsert(
+      {
+        designId: id,
+        inputFingerprint: inputFingerprint(design.input),
+        catalogRevision,
+        candidateLimit: limit,
+        result,
+        ranById: user.id,
+        ranAt: new Date(),
+      },
+      ['designId'],
+    );
+    return result;
   }
 
   /** The chosen candidate, its bill of materials and the snapshot of its catalog data and figures. */

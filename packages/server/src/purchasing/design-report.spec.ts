@@ -1,7 +1,7 @@
 import { describe, expect, it } from '@jest/globals';
 import type { Design } from '../designs/design.entity.js';
 import { pdfHasText, pdfPageCount } from '../../test/utils/pdf-text.js';
-import { designReportPdf } from './design-report.js';
+import { designReportPdf, modeMotionText } from './design-report.js';
 
 const design = (status: Design['status']) =>
   ({
@@ -96,4 +96,28 @@ describe('designReportPdf', () => {
     ];
     expect(wanted.filter((text) => !pdfHasText(pdf, text))).toEqual([]);
   }, 20000);
+});
+
+describe('modeMotionText', () => {
+  const fractions = { surge: 0, sway: 0.05, bounce: 0, roll: 0.4, pitch: 0, yaw: 0.55 };
+  it('names a mixed mode by the coordinates that carry it, with their shares (docs/engineering/rigid-body-modes.md §6)', () => {
+    expect(modeMotionText({ dominant: 'yaw', coupled: true, energyFractions: fractions })).toBe('yaw + roll (mixed): yaw 55 %, roll 40 %');
+    expect(
+      modeMotionText({ dominant: 'bounce', coupled: false, energyFractions: { ...fractions, sway: 0, roll: 0, yaw: 0, bounce: 1 } }),
+    ).toBe('bounce');
+  });
+
+  it('never writes 90 % for the largest share of a mixed mode', () => {
+    expect(
+      modeMotionText({
+        dominant: 'pitch',
+        coupled: true,
+        energyFractions: { ...fractions, sway: 0, roll: 0, yaw: 0, pitch: 0.8962, surge: 0.1038 },
+      }),
+    ).toBe('pitch + surge (mixed): pitch 89.6 %, surge 10 %');
+  });
+
+  it('falls back to the dominant coordinate for a candidate stored without the shares', () => {
+    expect(modeMotionText({ dominant: 'pitch', coupled: true })).toBe('mostly pitch (coupled)');
+  });
 });

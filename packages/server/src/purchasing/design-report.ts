@@ -1,8 +1,8 @@
 import { createRequire } from 'node:module';
-import { hystereticDamping, logSpace, transmissibility, viscousDamping, type Damping } from '@tacet/vibration';
+import { describeModeMotion, hystereticDamping, logSpace, transmissibility, viscousDamping, type Damping } from '@tacet/vibration';
 import PDFDocument from 'pdfkit';
 import type { Design } from '../designs/design.entity.js';
-import type { LabelledFrequency, MountSnapshot } from '../selection/selection.types.js';
+import type { CandidateMode, LabelledFrequency, MountSnapshot } from '../selection/selection.types.js';
 import type { Verification } from '../verifications/verification.entity.js';
 import { bomTotals } from './bom-export.js';
 
@@ -174,8 +174,7 @@ export function designReportPdf(design: Design, options: ReportOptions): Promise
     }
     if (candidate.modes?.length) {
       heading('Rigid-body modes');
-      for (const mode of candidate.modes)
-        body(`${fmt(mode.frequencyHz, 2)} Hz — mostly ${mode.dominant}${mode.coupled ? ' (coupled)' : ''}`);
+      for (const mode of candidate.modes) body(`${fmt(mode.frequencyHz, 2)} Hz — ${modeMotionText(mode)}`);
     }
     const mounts = snapshot?.mounts ?? [];
     if (mounts.length) {
@@ -405,4 +404,24 @@ function pageFooters(doc: PDFKit.PDFDocument, identity: string): void {
     });
     doc.page.margins.bottom = bottom;
   }
+}
+
+/**
+ * How a mode moves: "bounce", or "yaw + roll (mixed): yaw 55 %, roll 40 %"
+ * (docs/engineering/rigid-body-modes.md §6). A candidate stored before the shares were kept
+ * names its dominant coordinate.
+ */
+export function modeMotionText(
+  mode: Pick<CandidateMode, 'dominant' | 'coupled'> & Partial<Pick<CandidateMode, 'energyFractions'>>,
+): string {
+  if (!mode.energyFractions) return `mostly ${mode.dominant}${mode.coupled ? ' (coupled)' : ''}`;
+  const motion = describeModeMotion(mode.energyFractions);
+  if (!motion.mixed) return motion.name;
+  return `${motion.name}: ${motion.participants.map((p) => `${p.dof} ${shareText(p.share)}`).join(', ')}`;
+}
+
+/** Whole percent, or one decimal where whole percent would read 90 % for a share below it (a mixed mode). */
+function shareText(share: number): string {
+  const whole = Math.round(share * 100);
+  return whole >= 90 && share < 0.9 ? `${(Math.floor(share * 1000) / 10).toFixed(1)} %` : `${whole} %`;
 }

@@ -54,6 +54,8 @@ export interface SelectionProblem {
   frequenciesHz: Float64Array;
   frequencyLabels: (string | undefined)[];
   criteria: Criteria;
+  /** The allowance on the weight the overload checks use, % (the criteria's, or the default). */
+  weightMarginPct: number;
   /** 1 + weightMarginPct/100: applied to loads in the overload checks (utilisation above the window, deflection). */
   marginFactor: number;
   /** Highest transmissibility that still meets minIsolationPct. */
@@ -130,6 +132,7 @@ export function prepareProblem(input: SelectionInput): SelectionProblem {
     frequenciesHz[i] = f.frequencyHz;
   });
   const criteria = input.criteria;
+  const weightMarginPct = criteria.weightMarginPct ?? 0;
   const transmissibilityTarget = transmissibilityFromEfficiency(criteria.minIsolationPct);
   return {
     points: input.mountPoints,
@@ -146,7 +149,8 @@ export function prepareProblem(input: SelectionInput): SelectionProblem {
     frequenciesHz,
     frequencyLabels: input.frequencies.map((f) => f.label),
     criteria,
-    marginFactor: 1 + (criteria.weightMarginPct ?? 0) / 100,
+    weightMarginPct,
+    marginFactor: 1 + weightMarginPct / 100,
     transmissibilityTarget,
     isolationDbTarget: isolationDb(transmissibilityTarget),
     cgInside: isInsideConvexHull(mass.cg, input.mountPoints),

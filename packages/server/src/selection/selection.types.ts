@@ -25,6 +25,8 @@ export interface CandidateMode {
   frequencyHz: number;
   dominant: RigidBodyDof;
   coupled: boolean;
+  /** Share of the mode's kinetic energy in each coordinate (sums to 1). */
+  energyFractions: Record<RigidBodyDof, number>;
 }
 
 /** Weighted score terms; they add up to `score` (see scoring.ts). */
@@ -48,6 +50,11 @@ export interface Candidate {
   label: string;
   supplier: { id: number; name: string };
   perPoint: CandidatePoint[];
+  /**
+   * The allowance on the weight the checks applied, %: the upper utilisation and deflection
+   * checks compare utilisation × (1 + weightMarginPct/100).
+   */
+  weightMarginPct: number;
   /** Uncoupled bounce estimate √(Σ n_d·k_v / m)/2π, Hz. */
   verticalNaturalFrequencyHz: number;
   isolation: CandidateIsolation[];

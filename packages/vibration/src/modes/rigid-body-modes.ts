@@ -11,6 +11,13 @@ export type RigidBodyDof = 'surge' | 'sway' | 'bounce' | 'roll' | 'pitch' | 'yaw
 /** Order of the coordinates q = [u_x, u_y, u_z, θ_x, θ_y, θ_z]. */
 export const RIGID_BODY_DOFS: readonly RigidBodyDof[] = Object.freeze(['surge', 'sway', 'bounce', 'roll', 'pitch', 'yaw']);
 
+/**
+ * Share of a mode's kinetic energy that one coordinate must carry for the mode to count as a
+ * pure motion; below it the mode is coupled (docs/engineering/rigid-body-modes.md §6, a design
+ * choice).
+ */
+export const PURE_MODE_SHARE = 0.9;
+
 /** A resilient mount for the 6-DOF model. */
 export interface ResilientMount {
   /** Elastic centre of the mount (normally mid-height of the resilient element), same axes as `cg` [m]. */
@@ -213,7 +220,7 @@ export function rigidBodyModes(input: RigidBodyModesInput): RigidBodyModesResult
       eigenvalue: status === 'mechanism' ? 0 : lambda,
       dominant: RIGID_BODY_DOFS[dom],
       energyFractions,
-      coupled: fractions[dom] < 0.9,
+      coupled: fractions[dom] < PURE_MODE_SHARE,
       shape: phi.map((v) => v * inv),
       status,
     };

@@ -703,6 +703,8 @@ export interface components {
       supplier: components["schemas"]["SupplierRefDto"];
       /** @description in the order of mountPoints */
       perPoint: components["schemas"]["CandidatePointDto"][];
+      /** @description allowance on the weight the checks applied, %: the upper utilisation and deflection checks use utilization × (1 + weightMarginPct/100) (absent in candidates chosen before it was kept) */
+      weightMarginPct?: number;
       /** @description √(Σ n_d·k_v / m)/2π */
       verticalNaturalFrequencyHz: number;
       /** @description in the order of the disturbing frequencies */
@@ -732,8 +734,12 @@ export interface components {
     CandidateKind: "uniform" | "series";
     CandidateModeDto: {
       frequencyHz: number;
+      /** @description the coordinate with the largest share */
       dominant: components["schemas"]["RigidBodyMode"];
+      /** @description no coordinate carries 90 % of the kinetic energy */
       coupled: boolean;
+      /** @description share of the kinetic energy per coordinate, summing to 1 (absent in candidates chosen before it was kept) */
+      energyFractions?: components["schemas"]["ModeEnergyFractionsDto"];
     };
     CandidatePointDto: {
       label: string;
@@ -962,6 +968,8 @@ export interface components {
       chosen: components["schemas"]["CandidateDto"] | null;
       /** @description empty until a candidate is chosen */
       bom: components["schemas"]["BomLineDto"][];
+      /** @description the last selection run on this input; null when none was run since the input last changed */
+      lastSelection: components["schemas"]["StoredSelectionDto"] | null;
       author: components["schemas"]["UserRefDto"];
       checker: components["schemas"]["UserRefDto"] | null;
       /** Format: date-time */
@@ -1215,6 +1223,14 @@ export interface components {
       phaseDeg: number[];
       /** @description γ² per point (averaged hits), null otherwise */
       coherence: number[] | null;
+    };
+    ModeEnergyFractionsDto: {
+      surge: number;
+      sway: number;
+      bounce: number;
+      roll: number;
+      pitch: number;
+      yaw: number;
     };
     MountDto: {
       /** @example 42 */
@@ -1584,7 +1600,10 @@ export interface components {
     RfqProgressStatus: "quoted" | "ordered" | "received";
     /** @enum {string} */
     RfqStatus: "requested" | "quoted" | "ordered" | "received" | "failed";
-    /** @enum {string} */
+    /**
+     * @description the coordinate with the largest share
+     * @enum {string}
+     */
     RigidBodyMode: "surge" | "sway" | "bounce" | "roll" | "pitch" | "yaw";
     /** @enum {string} */
     Role: "admin" | "catalog_manager" | "engineer" | "purchaser" | "viewer";
@@ -1657,6 +1676,18 @@ export interface components {
        * @example 1480
        */
       max: number;
+    };
+    StoredSelectionDto: {
+      /** Format: date-time */
+      ranAt: string;
+      /** @description who ran it (null when that account is gone) */
+      ranBy: components["schemas"]["UserRefDto"] | null;
+      /** @description the most candidates the run asked for */
+      limit: number;
+      /** @description mounts or suppliers were added, changed or retired since the run */
+      catalogChanged: boolean;
+      /** @description as POST /api/designs/:id/selection returned it */
+      result: components["schemas"]["SelectionResponseDto"];
     };
     SubmissionChangesDto: {
       /** @description null: since this revision was last sent for check; else since that revision */

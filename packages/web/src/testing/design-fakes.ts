@@ -69,6 +69,7 @@ export function makeDesign(overrides: Partial<Design> = {}): Design {
     disturbingFrequencies: [],
     chosen: null,
     bom: [],
+    lastSelection: null,
     author: { id: TEST_USERS.engineer.id, name: TEST_USERS.engineer.name },
     checker: null,
     createdAt: '2025-01-06T09:00:00.000Z',
@@ -99,7 +100,11 @@ interface CandidateSpec {
   leadTimeDays?: number | null;
   partNumbers?: string[];
   withModes?: boolean;
+  weightMarginPct?: number;
 }
+
+type Shares = NonNullable<NonNullable<Candidate['modes']>[number]['energyFractions']>;
+const shares = (given: Partial<Shares>): Shares => ({ surge: 0, sway: 0, bounce: 0, roll: 0, pitch: 0, yaw: 0, ...given });
 
 /** A candidate whose isolation figures follow from its fn (ζ = 0.05) with the library. */
 export function makeCandidate(spec: CandidateSpec): Candidate {
@@ -129,14 +134,16 @@ export function makeCandidate(spec: CandidateSpec): Candidate {
     totalPrice: spec.price === undefined ? 4 * 85 : spec.price,
     currency: 'USD',
     maxLeadTimeDays: spec.leadTimeDays === undefined ? 21 : spec.leadTimeDays,
+    weightMarginPct: spec.weightMarginPct ?? 0,
     modes: spec.withModes
       ? [
-          { frequencyHz: 2.1, dominant: 'sway', coupled: true },
-          { frequencyHz: 2.4, dominant: 'surge', coupled: true },
-          { frequencyHz: 2.9, dominant: 'yaw', coupled: false },
-          { frequencyHz: spec.fnHz, dominant: 'bounce', coupled: false },
-          { frequencyHz: 4.2, dominant: 'roll', coupled: true },
-          { frequencyHz: 5.3, dominant: 'pitch', coupled: true },
+          { frequencyHz: 2.1, dominant: 'sway', coupled: true, energyFractions: shares({ sway: 0.7, roll: 0.3 }) },
+          { frequencyHz: 2.4, dominant: 'surge', coupled: true, energyFractions: shares({ surge: 0.8, pitch: 0.2 }) },
+          // two modes a dominant-only name would both call yaw: mixed roll and yaw
+          { frequencyHz: 2.9, dominant: 'yaw', coupled: true, energyFractions: shares({ yaw: 0.55, roll: 0.4, sway: 0.05 }) },
+          { frequencyHz: spec.fnHz, dominant: 'bounce', coupled: false, energyFractions: shares({ bounce: 1 }) },
+          { frequencyHz: 4.2, dominant: 'yaw', coupled: true, energyFractions: shares({ yaw: 0.5, roll: 0.45, sway: 0.05 }) },
+          { frequencyHz: 5.3, dominant: 'pitch', coupled: false, energyFractions: shares({ pitch: 0.92, surge: 0.08 }) },
         ]
       : undefined,
     passes: spec.passes,
@@ -231,7 +238,12 @@ export function serveDesign(fake: FakeApi, initial: Design, candidates = demoCan
       }
       const next: Design = { ...state.design, version: state.design.version + 1, updatedAt: '2025-01-09T10:00:00.000Z' };
       if (update.name) next.name = update.name;
-      if (update.input) next.input = update.input;
+      // like the server: a changed input clears the choice and ends the kept selection
+      if (update.input && JSON.stringify(update.input) !== JSON.stringify(state.design.input)) {
+        next.input = update.input;
+        next.chosen = null;
+        next.lastSelection = null;
+      }
       if (update.chosenMountId !== undefined || update.chosenSeriesId !== undefined) {
         next.chosen =
           candidates.find((c) =>
@@ -241,7 +253,21 @@ export function serveDesign(fake: FakeApi, initial: Design, candidates = demoCan
       state.design = next;
       return { status: 200, data: next };
     })
-    .on('post', '/designs/:id/selection', () => ({ status: 200, data: selectionResultFor(state.design.input, candidates) }))
+    .on('post', '/designs/:id/selection', ({ body }) => {
+      const result = selectionResultFor(state.design.input, candidates);
+      const limit = (body as { limit?: number } | undefined)?.limit ?? 20;
+      state.design = {
+        ...state.design,
+        lastSelection: {
+          ranAt: '2025-01-09T11:00:00.000Z',
+          ranBy: { id: TEST_USERS.engineer.id, name: TEST_USERS.engineer.name },
+          limit,
+          catalogChanged: false,
+          result,
+        },
+      };
+      return { status: 200, data: result };
+    })
     .on('get', '/mounts/:id', ({ params }) => ({
       status: 200,
       data: { id: Number(params.id), partNumber: `P-${params.id}`, dampingModel: 'viscous', dampingRatio: 0.05, lossFactor: null },

@@ -37,6 +37,8 @@ export type CandidatePoint = ApiSchemas['CandidatePointDto'];
 export type CandidateIsolation = ApiSchemas['CandidateIsolationDto'];
 export type Candidate = ApiSchemas['CandidateDto'];
 export type SelectionResult = ApiSchemas['SelectionResponseDto'];
+/** The last selection run on a design's current input, as the design carries it. */
+export type StoredSelection = ApiSchemas['StoredSelectionDto'];
 
 // ---- Designs ----
 

@@ -6,6 +6,7 @@ import { CreateReviewPurchasing1764892800000 } from './1764892800000-create-revi
 import { CreateCatalogRevision1764979200000 } from './1764979200000-create-catalog-revision.js';
 import { CreateDesignVerification1765100000000 } from './1765100000000-create-design-verification.js';
 import { HandOffs1765152000000 } from './1765152000000-hand-offs.js';
+import { CreateDesignSelection1765200000000 } from './1765200000000-create-design-selection.js';
 
 /** Every migration, oldest first. A new migration is imported and appended here. */
 export const MIGRATIONS = [
@@ -17,4 +18,5 @@ export const MIGRATIONS = [
   CreateCatalogRevision1764979200000,
   CreateDesignVerification1765100000000,
   HandOffs1765152000000,
+  CreateDesignSelection1765200000000,
 ];

@@ -1,9 +1,9 @@
 import { ApiProperty, PickType } from '@nestjs/swagger';
 import { UserRefDto } from '../../projects/dto/project.dto.js';
 import { DesignInputDto } from '../../selection/dto/design-input.dto.js';
-import { CandidateDto, SupplierRefDto } from '../../selection/dto/selection-response.dto.js';
+import { CandidateDto, SelectionResponseDto, SupplierRefDto } from '../../selection/dto/selection-response.dto.js';
 import type { DesignInput } from '../../selection/dto/design-input.dto.js';
-import type { BomLine, Candidate, LabelledFrequency } from '../../selection/selection.types.js';
+import type { BomLine, Candidate, LabelledFrequency, SelectionResult } from '../../selection/selection.types.js';
 import { DESIGN_STATUSES, type DesignStatus } from '../design-status.js';
 import type { Design } from '../design.entity.js';
 
@@ -24,6 +24,15 @@ export class BomLineDto {
   @ApiProperty({ type: Number, nullable: true }) leadTimeDays: number | null;
 }
 
+/** The last selection run on the design's current input (see DesignSelection). */
+export class StoredSelectionDto {
+  @ApiProperty({ type: String, format: 'date-time' }) ranAt: string;
+  @ApiProperty({ type: UserRefDto, nullable: true, description: 'who ran it (null when that account is gone)' }) ranBy: UserRefDto | null;
+  @ApiProperty({ description: 'the most candidates the run asked for' }) limit: number;
+  @ApiProperty({ description: 'mounts or suppliers were added, changed or retired since the run' }) catalogChanged: boolean;
+  @ApiProperty({ type: SelectionResponseDto, description: 'as POST /api/designs/:id/selection returned it' }) result: SelectionResult;
+}
+
 export class DesignDto {
   @ApiProperty() id: number;
   @ApiProperty() projectId: number;
@@ -37,12 +46,18 @@ export class DesignDto {
   disturbingFrequencies: LabelledFrequency[];
   @ApiProperty({ type: CandidateDto, nullable: true }) chosen: Candidate | null;
   @ApiProperty({ type: [BomLineDto], description: 'empty until a candidate is chosen' }) bom: BomLine[];
+  @ApiProperty({
+    type: StoredSelectionDto,
+    nullable: true,
+    description: 'the last selection run on this input; null when none was run since the input last changed',
+  })
+  lastSelection: StoredSelectionDto | null;
   @ApiProperty({ type: UserRefDto }) author: UserRefDto;
   @ApiProperty({ type: UserRefDto, nullable: true }) checker: UserRefDto | null;
   @ApiProperty({ type: String, format: 'date-time' }) createdAt: string;
   @ApiProperty({ type: String, format: 'date-time' }) updatedAt: string;
 
-  static from(design: Design, disturbingFrequencies: LabelledFrequency[]): DesignDto {
+  static from(design: Design, disturbingFrequencies: LabelledFrequency[], lastSelection: StoredSelectionDto | null = null): DesignDto {
     return Object.assign(new DesignDto(), {
       id: design.id,
       projectId: design.projectId,
@@ -55,6 +70,7 @@ export class DesignDto {
       disturbingFrequencies,
       chosen: design.chosen ?? null,
       bom: design.bom ?? [],
+      lastSelection,
       author: { id: design.author.id, name: design.author.name },
       checker: design.checker ? { id: design.checker.id, name: design.checker.name } : null,
       createdAt: design.createdAt.toISOString(),

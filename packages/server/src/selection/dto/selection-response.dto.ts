@@ -25,10 +25,24 @@ export class CandidateIsolationDto {
   @ApiProperty() dB: number;
 }
 
+export class ModeEnergyFractionsDto {
+  @ApiProperty() surge: number;
+  @ApiProperty() sway: number;
+  @ApiProperty() bounce: number;
+  @ApiProperty() roll: number;
+  @ApiProperty() pitch: number;
+  @ApiProperty() yaw: number;
+}
+
 export class CandidateModeDto {
   @ApiProperty() frequencyHz: number;
-  @ApiProperty({ enum: RIGID_BODY_DOFS, enumName: 'RigidBodyMode' }) dominant: string;
-  @ApiProperty() coupled: boolean;
+  @ApiProperty({ enum: RIGID_BODY_DOFS, enumName: 'RigidBodyMode', description: 'the coordinate with the largest share' }) dominant: string;
+  @ApiProperty({ description: 'no coordinate carries 90 % of the kinetic energy' }) coupled: boolean;
+  @ApiPropertyOptional({
+    type: ModeEnergyFractionsDto,
+    description: 'share of the kinetic energy per coordinate, summing to 1 (absent in candidates chosen before it was kept)',
+  })
+  energyFractions?: ModeEnergyFractionsDto;
 }
 
 export class ScoreTermsDto {
@@ -46,6 +60,12 @@ export class CandidateDto {
   @ApiProperty() label: string;
   @ApiProperty({ type: SupplierRefDto }) supplier: SupplierRefDto;
   @ApiProperty({ type: [CandidatePointDto], description: 'in the order of mountPoints' }) perPoint: CandidatePointDto[];
+  @ApiPropertyOptional({
+    description:
+      'allowance on the weight the checks applied, %: the upper utilisation and deflection checks use utilization × (1 + weightMarginPct/100) ' +
+      '(absent in candidates chosen before it was kept)',
+  })
+  weightMarginPct?: number;
   @ApiProperty({ description: '√(Σ n_d·k_v / m)/2π' }) verticalNaturalFrequencyHz: number;
   @ApiProperty({ type: [CandidateIsolationDto], description: 'in the order of the disturbing frequencies' })
   isolation: CandidateIsolationDto[];

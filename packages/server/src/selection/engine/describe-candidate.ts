@@ -71,6 +71,7 @@ export function describeCandidate(
     label: uniform ? store.partNumberOf(c) : seriesLabel(store, points),
     supplier: { id: supplierId, name: supplierNames.get(supplierId) ?? `Supplier ${supplierId}` },
     perPoint,
+    weightMarginPct: problem.weightMarginPct,
     verticalNaturalFrequencyHz: store.fnHz[c],
     isolation,
     resonanceAmplification: store.resonance[c],

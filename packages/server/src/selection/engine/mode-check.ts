@@ -54,7 +54,12 @@ export class ModeCheck implements FinalistCheck {
       });
       try {
         const result = rigidBodyModes({ massKg: problem.massKg, inertia: problem.inertia, cg: problem.cg, mounts });
-        const modes = result.modes.map((m) => ({ frequencyHz: m.frequencyHz, dominant: m.dominant, coupled: m.coupled }));
+        const modes = result.modes.map((m) => ({
+          frequencyHz: m.frequencyHz,
+          dominant: m.dominant,
+          coupled: m.coupled,
+          energyFractions: { ...m.energyFractions },
+        }));
         findings = { modes, conflict: this.conflict(result.modes) };
       } catch (error) {
         if (!isVibrationInputError(error)) throw error;
@@ -84,7 +89,12 @@ export class ModeCheck implements FinalistCheck {
       }
     }
     if (!hit) return null;
-    const { frequencyHz, dominant, coupled } = modes[hit.mode];
-    return { kind: 'near', mode: { frequencyHz, dominant, coupled }, frequencyHz: frequenciesHz[hit.j], label: frequencyLabels[hit.j] };
+    const { frequencyHz, dominant, coupled, energyFractions } = modes[hit.mode];
+    return {
+      kind: 'near',
+      mode: { frequencyHz, dominant, coupled, energyFractions: { ...energyFractions } },
+      frequencyHz: frequenciesHz[hit.j],
+      label: frequencyLabels[hit.j],
+    };
   }
 }

@@ -7,7 +7,7 @@
  * To word a new check: a function (context → sentences) and its row in REASONS, placed where its
  * sentence should come in the list.
  */
-import { isolationEfficiencyPct } from '@tacet/vibration';
+import { describeModeMotion, isolationEfficiencyPct } from '@tacet/vibration';
 import { formatHz, formatMm, formatNumber, formatPct, formatPctValue } from '../selection-format.js';
 import type { SelectionProblem } from '../selection-problem.js';
 import type { CandidatePoint } from '../selection.types.js';
@@ -165,7 +165,7 @@ function modeConflict(conflict: ModeConflict): string {
   }
   const { mode, frequencyHz, label } = conflict;
   return (
-    `The ${mode.coupled ? 'coupled ' : ''}${mode.dominant} mode at ${formatHz(mode.frequencyHz)} lies within ` +
+    `The ${describeModeMotion(mode.energyFractions).name} mode at ${formatHz(mode.frequencyHz)} lies within ` +
     `±${Math.round(MODE_SEPARATION * 100)} % of the disturbing frequency ${formatHz(frequencyHz)}${labelSuffix(label)}: ` +
     'the machine would rock or sway strongly there.'
   );

@@ -14,7 +14,14 @@ export const CHART_COLORS = {
   markerGoverning: '#8c3d1f',
   target: '#7a6a2f',
   naturalFrequency: '#5b6f9a',
+  unity: '#9aa09a',
 } as const;
+
+/**
+ * Colours of the curves of several candidates drawn together (comparison), in order. Distinct in
+ * hue and lightness so that they also part in grey and for the common colour-vision deficiencies.
+ */
+export const SERIES_COLORS = ['#2f5d62', '#b0643a', '#5b6f9a', '#8a7a2a'] as const;
 
 const FONT = "'Noto Sans', system-ui, sans-serif";
 
@@ -51,6 +58,14 @@ export const NATURAL_FREQUENCY_STYLE = {
   labels: { fontFamily: FONT, fontSize: 10.5, fill: CHART_COLORS.naturalFrequency },
 } as const;
 export const REGION_LABEL_STYLE = { fontFamily: FONT, fontSize: 11, fill: CHART_COLORS.curve } as const;
+export const UNITY_STYLE = {
+  data: { stroke: CHART_COLORS.unity, strokeWidth: 1 },
+  labels: { fontFamily: FONT, fontSize: 10.5, fill: CHART_COLORS.muted },
+} as const;
+/** Marker labels above the plot (laid out by marker-labels.ts). */
+export const MARKER_LABEL_FONT = { fontFamily: FONT, fontSize: 10.5 } as const;
+/** Average advance of one character of MARKER_LABEL_FONT [px], for the label layout. */
+export const MARKER_LABEL_CHAR_WIDTH = 5.9;
 
 /** 10^e exactly as written (10 ** -4 is 0.00009999999999999999 in binary floating point). */
 const pow10 = (e: number): number => Number(`1e${e}`);

@@ -6,7 +6,7 @@ import { createTestQueryClient } from '@/testing/render';
 
 import { decades, formatTick, oneTwoFive } from './chart-style';
 import { FrfChart, inverseUnit } from './frf-chart';
-import { frequencySpan, TransmissibilityChart } from './transmissibility-chart';
+import { frequencySpan, markerLabelLayout, TransmissibilityChart } from './transmissibility-chart';
 
 const MARKERS = [
   { frequencyHz: 24.67, label: '1× shaft', governing: true },
@@ -48,6 +48,44 @@ describe('TransmissibilityChart', () => {
     for (const marker of MARKERS) expect(screen.getByText(marker.label)).toBeInTheDocument();
     expect(screen.getByText('fn')).toBeInTheDocument();
     expect(screen.getByText('Transmissibility T')).toBeInTheDocument();
+  });
+
+  it('labels close disturbing frequencies without overlap: 2× shaft at 49.3 Hz beside 2× line at 50 Hz', () => {
+    const markers = [...MARKERS, { frequencyHz: 50, label: '2× line (50 Hz)' }, { frequencyHz: 148, label: 'vane pass' }];
+    const layout = markerLabelLayout(markers, [1, 1000]);
+    expect(layout.unplaced).toEqual([]);
+    const byText = new Map(layout.placed.map((p) => [p.text, p]));
+    expect(byText.get('2× shaft')!.row).not.toBe(byText.get('2× line (50 Hz)')!.row);
+    const { container } = render(<TransmissibilityChart naturalFrequencyHz={3.15} damping={viscousDamping(0.05)} markers={markers} />);
+    const labels = Array.from(container.querySelectorAll('.tc-marker-labels text')).map((t) => t.textContent);
+    expect(labels.sort()).toEqual(markers.map((m) => m.label).sort());
+    expect(screen.queryByTestId('unlabelled-markers')).toBeNull();
+  });
+
+  it('lists the labels it has no room for under the chart', () => {
+    const crowded = Array.from({ length: 8 }, (_, i) => ({ frequencyHz: 100 + i * 0.5, label: `harmonic ${i + 1}` }));
+    render(<TransmissibilityChart naturalFrequencyHz={3.15} damping={viscousDamping(0.05)} markers={crowded} />);
+    expect(screen.getByTestId('unlabelled-markers')).toHaveTextContent(/Also marked, not labelled for want of room: harmonic 4 \(102 Hz\)/);
+  });
+
+  it('overlays several curves in their colours with the line T = 1 and no single-curve shading', () => {
+    const { container } = render(
+      <TransmissibilityChart
+        curves={[
+          { key: 'a', naturalFrequencyHz: 3, damping: viscousDamping(0.05), color: '#111111' },
+          { key: 'b', naturalFrequencyHz: 6, damping: hystereticDamping(0.2), color: '#222222' },
+        ]}
+        markers={MARKERS}
+        targetTransmissibility={0.1}
+      />,
+    );
+    const strokes = Array.from(container.querySelectorAll('path')).map((p) => p.getAttribute('style') ?? '');
+    // jsdom writes the colours as rgb()
+    expect(strokes.some((s) => s.includes('stroke: rgb(17, 17, 17)'))).toBe(true);
+    expect(strokes.some((s) => s.includes('stroke: rgb(34, 34, 34)'))).toBe(true);
+    expect(screen.getByText('T = 1')).toBeInTheDocument();
+    expect(screen.queryByText('isolation (T < 1)')).toBeNull();
+    expect(screen.queryByText('fn')).toBeNull();
   });
 
   it('draws an undamped curve without breaking at resonance', () => {

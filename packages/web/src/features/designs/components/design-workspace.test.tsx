@@ -1,6 +1,6 @@
 import { screen, waitFor, within } from '@testing-library/react';
 
-import { demoInput, makeDesign, serveDesign } from '@/testing/design-fakes';
+import { demoCandidates, demoInput, makeDesign, serveDesign } from '@/testing/design-fakes';
 import { installFakeApi } from '@/testing/fake-api';
 import { TEST_USERS } from '@/testing/factories';
 import { renderApp, type RenderOptions } from '@/testing/render';
@@ -248,6 +248,48 @@ describe('Design page — saving', () => {
       mountTypes: ['open_spring', 'housed_spring'],
       supplierIds: [3],
     });
+  });
+
+  it('says in words that saving a changed input clears the chosen mounts, before and after', async () => {
+    const chosen = demoCandidates()[0]!;
+    const { user, server } = openDesign(makeDesign({ id: DESIGN_ID, name: 'CHW pump P-3 skid', chosen }));
+    await waitForPage();
+    expect(screen.getByTestId('chosen-mounts')).toHaveTextContent('QB-HS-300 housed spring');
+    expect(screen.queryByTestId('save-clears-choice')).not.toBeInTheDocument();
+
+    const mass = screen.getByLabelText('Mass of Pump');
+    await user.clear(mass);
+    await user.type(mass, '310');
+    expect(screen.getByTestId('save-clears-choice')).toHaveTextContent('Saving clears the chosen mounts');
+    await user.click(screen.getByRole('button', { name: 'Save' }));
+
+    const notice = await screen.findByTestId('choice-cleared');
+    expect(notice).toHaveTextContent('The chosen mounts were cleared');
+    expect(notice).toHaveTextContent('Saving the changed input cleared the choice of QB-HS-300 housed spring');
+    expect(server.design.chosen).toBeNull();
+    expect(screen.getByTestId('chosen-mounts')).toHaveTextContent('None chosen yet');
+
+    await user.click(within(notice).getByRole('button', { name: 'Go to Mount selection' }));
+    expect(screen.getByRole('tab', { name: 'Mount selection' })).toHaveAttribute('aria-selected', 'true');
+    await user.click(within(screen.getByTestId('choice-cleared')).getByRole('button', { name: 'Dismiss' }));
+    expect(screen.queryByTestId('choice-cleared')).not.toBeInTheDocument();
+  });
+
+  it('says nothing about the choice when a save keeps it', async () => {
+    const chosen = demoCandidates()[0]!;
+    const { user, fake } = openDesign(makeDesign({ id: DESIGN_ID, name: 'CHW pump P-3 skid', chosen }));
+    // a server that keeps the choice (e.g. the input came back the same)
+    fake.on('put', '/designs/:id', ({ body }) => ({
+      status: 200,
+      data: makeDesign({ id: DESIGN_ID, name: 'CHW pump P-3 skid', chosen, version: 4, input: (body as UpdateDesignInput).input! }),
+    }));
+    await waitForPage();
+    const mass = screen.getByLabelText('Mass of Pump');
+    await user.clear(mass);
+    await user.type(mass, '310');
+    await user.click(screen.getByRole('button', { name: 'Save' }));
+    await screen.findByText('All changes saved');
+    expect(screen.queryByTestId('choice-cleared')).not.toBeInTheDocument();
   });
 
   it('works without the supplier list', async () => {

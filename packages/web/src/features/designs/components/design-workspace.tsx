@@ -136,6 +136,9 @@ interface EditorProps {
   onTab: (tab: DesignTab) => void;
   conflict: boolean;
   failure: string | null;
+  /** The chosen mounts a save just cleared (their label), until dismissed. */
+  clearedChoice: string | null;
+  onDismissClearedChoice: () => void;
   reloading: boolean;
   choosing: boolean;
   onReload: (formik: FormikProps<DesignFormValues>) => Promise<void>;
@@ -155,6 +158,7 @@ function DesignEditor(props: EditorProps) {
     onTab,
     conflict,
     failure,
+    clearedChoice,
     reloading,
     choosing,
     renderSelection,
@@ -232,6 +236,11 @@ function DesignEditor(props: EditorProps) {
               ) : (
                 <span className="tc-muted tc-saved-note">All changes saved</span>
               )}
+              {dirty && base.chosen ? (
+                <span className="tc-muted tc-save-consequence" data-testid="save-clears-choice">
+                  Saving clears the chosen mounts
+                </span>
+              ) : null}
               {dirty ? (
                 <Button icon={<UndoIcon />} text="Discard" variant="minimal" onClick={() => resetForm()} disabled={isSubmitting} />
               ) : null}
@@ -262,6 +271,18 @@ function DesignEditor(props: EditorProps) {
             Reloading shows their version{dirty ? ' and discards your unsaved edits' : ''}.
           </p>
           <Button icon={<RefreshIcon />} intent="warning" text="Reload" loading={reloading} onClick={() => void props.onReload(formik)} />
+        </Callout>
+      ) : null}
+      {clearedChoice ? (
+        <Callout intent="warning" role="status" className="tc-note" title="The chosen mounts were cleared" data-testid="choice-cleared">
+          <p>
+            Saving the changed input cleared the choice of {clearedChoice}: its loads and figures were worked out for the earlier input.
+            Find mounts again and choose from the new results.
+          </p>
+          <div className="tc-callout-actions">
+            {tab !== 'selection' ? <Button text="Go to Mount selection" onClick={() => onTab('selection')} /> : null}
+            <Button variant="minimal" text="Dismiss" onClick={props.onDismissClearedChoice} />
+          </div>
         </Callout>
       ) : null}
       {failure ? (
@@ -330,6 +351,7 @@ export function DesignWorkspace({
   const [base, setBase] = useState<Design>(design);
   const [conflict, setConflict] = useState(false);
   const [failure, setFailure] = useState<string | null>(null);
+  const [clearedChoice, setClearedChoice] = useState<string | null>(null);
   const [reloading, setReloading] = useState(false);
   const [choosing, setChoosing] = useState(false);
 
@@ -353,6 +375,8 @@ export function DesignWorkspace({
     }
     try {
       const saved = await updateDesign.mutateAsync({ designId: base.id, version: base.version, input });
+      // the server clears the choice when the input changed: say so rather than let it vanish
+      setClearedChoice(base.chosen && !saved.chosen ? base.chosen.label : null);
       setBase(saved);
       setConflict(false);
       helpers.resetForm({ values: toFormValues(saved.input, units) });
@@ -374,6 +398,7 @@ export function DesignWorkspace({
       const chosen =
         candidate.kind === 'series' && candidate.seriesId ? { chosenSeriesId: candidate.seriesId } : { chosenMountId: candidate.mountId };
       const saved = await updateDesign.mutateAsync({ designId: base.id, version: base.version, ...chosen });
+      setClearedChoice(null);
       setBase(saved);
       setConflict(false);
       return true;
@@ -413,6 +438,8 @@ export function DesignWorkspace({
         onTab={setTab}
         conflict={conflict}
         failure={failure}
+        clearedChoice={clearedChoice}
+        onDismissClearedChoice={() => setClearedChoice(null)}
         reloading={reloading}
         choosing={choosing}
         onReload={reload}

@@ -5,21 +5,25 @@ import { useMemo } from 'react';
 
 import type { FrequencyMarker } from '@/components/charts/transmissibility-chart';
 import { useUnits } from '@/lib/units';
-import type { Candidate, ModeName } from '@/types/design-api';
+import type { Candidate } from '@/types/design-api';
 
 import { useCandidateDamping } from '../hooks/use-candidate-damping';
 import { CandidateCharts } from './candidate-charts';
 import {
   formatDays,
   formatFrequency,
+  formatMargin,
   formatMoney,
   formatPct,
   formatRatio,
   formatTransmissibility,
   KIND_LABELS,
   shortLabel,
+  utilizationWithMargin,
+  weightMarginPct,
 } from './candidate-format';
 import { VerdictTag } from './candidates-table';
+import { modeMotionText } from './mode-format';
 
 /** A disturbing frequency as the design page lists it. */
 export interface DisturbingFrequencyLine {
@@ -27,15 +31,6 @@ export interface DisturbingFrequencyLine {
   label: string;
   governing: boolean;
 }
-
-export const MODE_NAMES: Record<ModeName, string> = {
-  surge: 'surge — along x',
-  sway: 'sway — along y',
-  bounce: 'bounce — vertical',
-  roll: 'roll — about x',
-  pitch: 'pitch — about y',
-  yaw: 'yaw — about z',
-};
 
 export interface CandidateDetailProps {
   candidate: Candidate;
@@ -74,6 +69,7 @@ export function CandidateDetail({
 }: CandidateDetailProps) {
   const units = useUnits();
   const damping = useCandidateDamping(candidate);
+  const margin = weightMarginPct(candidate);
 
   // Σk_dyn follows from the server's fn and mass; the live fn re-uses it with the current mass.
   const stiffness = useMemo(
@@ -184,23 +180,38 @@ export function CandidateDetail({
             <th scope="col" className="tc-number">
               Utilisation
             </th>
+            {margin > 0 ? (
+              <th scope="col" className="tc-number">
+                With the {formatMargin(margin)} % weight margin
+              </th>
+            ) : null}
             <th scope="col" className="tc-number">
               Static deflection
             </th>
           </tr>
         </thead>
         <tbody>
-          {candidate.perPoint.map((point) => (
-            <tr key={point.label}>
-              <td>{point.label}</td>
-              <td>{point.partNumber}</td>
-              <td className="tc-number">{units.format('force', point.loadN)}</td>
-              <td className={`tc-number${point.utilization > 1 ? ' tc-text-danger' : ''}`}>{formatRatio(point.utilization)}</td>
-              <td className="tc-number">{units.format('deflection', point.staticDeflectionMm / 1000)}</td>
-            </tr>
-          ))}
+          {candidate.perPoint.map((point) => {
+            const checked = utilizationWithMargin(candidate, point.utilization);
+            return (
+              <tr key={point.label}>
+                <td>{point.label}</td>
+                <td>{point.partNumber}</td>
+                <td className="tc-number">{units.format('force', point.loadN)}</td>
+                <td className={`tc-number${point.utilization > 1 ? ' tc-text-danger' : ''}`}>{formatRatio(point.utilization)}</td>
+                {margin > 0 ? <td className={`tc-number${checked > 1 ? ' tc-text-danger' : ''}`}>{formatRatio(checked)}</td> : null}
+                <td className="tc-number">{units.format('deflection', point.staticDeflectionMm / 1000)}</td>
+              </tr>
+            );
+          })}
         </tbody>
       </HTMLTable>
+      <p className="tc-muted tc-note">
+        Utilisation is load ÷ rated load.{' '}
+        {margin > 0
+          ? `The upper limit of the window is checked with the ${formatMargin(margin)} % weight margin, the lower limit without it.`
+          : 'No weight margin is asked for.'}
+      </p>
 
       <h4 className="tc-subsection-title">Isolation at each disturbing frequency</h4>
       <HTMLTable compact striped className="tc-table" aria-label="Isolation per frequency">
@@ -258,24 +269,28 @@ export function CandidateDetail({
                 <th scope="col" className="tc-number">
                   Frequency
                 </th>
-                <th scope="col">Dominant motion</th>
-                <th scope="col">Coupling</th>
+                <th scope="col">Motion</th>
+                <th scope="col">Share of the motion</th>
               </tr>
             </thead>
             <tbody>
-              {candidate.modes.map((mode, index) => (
-                <tr key={index}>
-                  <td className="tc-number">{index + 1}</td>
-                  <td className="tc-number">{formatFrequency(mode.frequencyHz)}</td>
-                  <td>{MODE_NAMES[mode.dominant] ?? mode.dominant}</td>
-                  <td>{mode.coupled ? <Tag minimal>coupled</Tag> : <span className="tc-muted">—</span>}</td>
-                </tr>
-              ))}
+              {candidate.modes.map((mode, index) => {
+                const motion = modeMotionText(mode);
+                return (
+                  <tr key={index}>
+                    <td className="tc-number">{index + 1}</td>
+                    <td className="tc-number">{formatFrequency(mode.frequencyHz)}</td>
+                    <td>{motion.mixed ? <strong>{motion.name}</strong> : motion.name}</td>
+                    <td>{motion.shares || <span className="tc-muted">one motion</span>}</td>
+                  </tr>
+                );
+              })}
             </tbody>
           </HTMLTable>
           <p className="tc-muted tc-note">
-            Six modes of the machine as a rigid body on the mounts. Coupled: no single motion carries 90 % of the mode's kinetic energy.
-            Keep every mode well below the governing frequency.
+            Six modes of the machine as a rigid body on the mounts. A mode is named after the motion that carries at least 90 % of its
+            kinetic energy; a mixed mode after every motion it needs to reach 90 %, largest share first. Keep every mode well below the
+            governing frequency.
           </p>
         </>
       ) : null}

@@ -1,6 +1,16 @@
 import { demoCandidates } from '@/testing/design-fakes';
 
-import { formatMoney, formatUtilizationRange, shortLabel, worstIsolationPct } from './candidate-format';
+import { bestOf } from './candidate-comparison';
+import {
+  formatMoney,
+  formatUtilizationRange,
+  governingIsolation,
+  shortLabel,
+  utilizationBasis,
+  utilizationRange,
+  worstIsolationPct,
+} from './candidate-format';
+import { formatShare, modeMotionText } from './mode-format';
 import { sortCandidates } from './candidates-table';
 
 const rows = () => demoCandidates().map((candidate, index) => ({ rank: index + 1, candidate }));
@@ -17,6 +27,58 @@ describe('candidate figures', () => {
     expect(formatMoney(368, 'USD')).toBe('$368');
     expect(formatMoney(null, 'USD')).toBe('—');
     expect(formatMoney(1200, 'not a code')).toBe('1,200 not a code');
+  });
+
+  it('puts the utilisation on the checks’ basis: the heaviest point with the weight margin, the lightest without', () => {
+    const spring = { ...demoCandidates()[0]!, weightMarginPct: 10 };
+    // CV-15 loads 2186.1 … 2717.3 N on 3200 N mounts
+    const [low, high] = utilizationRange(spring);
+    expect(low).toBeCloseTo(2186.1 / 3200, 12);
+    expect(high).toBeCloseTo((2717.3 / 3200) * 1.1, 12);
+    expect(formatUtilizationRange(spring)).toBe('0.68–0.93');
+    expect(utilizationBasis(spring)).toContain('with the 10 % weight margin');
+    // a candidate kept from before the margin travelled with it: none assumed
+    const old = { ...spring, weightMarginPct: undefined };
+    expect(formatUtilizationRange(old)).toBe('0.68–0.85');
+  });
+
+  it('finds the governing isolation row', () => {
+    const [spring] = demoCandidates();
+    expect(governingIsolation(spring!)?.frequencyHz).toBeCloseTo(1480 / 60, 12);
+    expect(governingIsolation({ ...spring!, isolation: [] })).toBeNull();
+  });
+
+  it('marks the best figure of a comparison row, and none when all agree or one has none', () => {
+    expect([...bestOf([3.15, 3.6, 12.5], 'low')]).toEqual([0]);
+    expect([...bestOf([97.9, 99.1, 57.8], 'high')]).toEqual([1]);
+    expect([...bestOf([5, 5], 'low')]).toEqual([]);
+    expect([...bestOf([5, NaN], 'low')]).toEqual([]);
+    expect([...bestOf([4, 4, 9], 'low')]).toEqual([0, 1]);
+    // figures that read the same (100.0 % and 100.0 %) are not told apart
+    expect([...bestOf([99.996, 99.9991], 'high', (v) => Math.round(v * 10) / 10)]).toEqual([]);
+  });
+
+  it('names a mode by the motions that carry it (docs/engineering/rigid-body-modes.md §6)', () => {
+    const fractions = { surge: 0, sway: 0.05, bounce: 0, roll: 0.4, pitch: 0, yaw: 0.55 };
+    expect(modeMotionText({ frequencyHz: 3, dominant: 'yaw', coupled: true, energyFractions: fractions })).toEqual({
+      name: 'yaw + roll (mixed)',
+      mixed: true,
+      shares: 'yaw 55 %, roll 40 %',
+    });
+    expect(
+      modeMotionText({
+        frequencyHz: 3,
+        dominant: 'bounce',
+        coupled: false,
+        energyFractions: { ...fractions, sway: 0, roll: 0, yaw: 0, bounce: 1 },
+      }),
+    ).toEqual({ name: 'bounce — vertical', mixed: false, shares: '' });
+    expect(modeMotionText({ frequencyHz: 3, dominant: 'yaw', coupled: true }).name).toBe('mostly yaw — about z (mixed)');
+    // a mixed mode never reads as 90 %
+    expect(formatShare(0.8962)).toBe('89.6 %');
+    expect(formatShare(0.8999)).toBe('89.9 %');
+    expect(formatShare(0.9)).toBe('90 %');
+    expect(formatShare(0.054)).toBe('5 %');
   });
 
   it('shortens disturbing-frequency labels for chart lines', () => {

@@ -3,6 +3,7 @@ import type { Candidate } from '@/types/design-api';
 const hz3 = new Intl.NumberFormat('en-US', { minimumSignificantDigits: 3, maximumSignificantDigits: 3, useGrouping: false });
 const pct1 = new Intl.NumberFormat('en-US', { minimumFractionDigits: 1, maximumFractionDigits: 1 });
 const two = new Intl.NumberFormat('en-US', { minimumFractionDigits: 2, maximumFractionDigits: 2 });
+const upTo1 = new Intl.NumberFormat('en-US', { maximumFractionDigits: 1 });
 const t3 = new Intl.NumberFormat('en-US', { minimumSignificantDigits: 3, maximumSignificantDigits: 3 });
 
 export const NO_VALUE = '—';
@@ -47,15 +48,55 @@ export function worstIsolationPct(candidate: Candidate): number {
   return candidate.isolation.length === 0 ? NaN : Math.min(...candidate.isolation.map((i) => i.efficiencyPct));
 }
 
+/** The allowance on the weight the candidate's checks applied [%] (0 for a candidate stored before it was kept). */
+export function weightMarginPct(candidate: Candidate): number {
+  return candidate.weightMarginPct ?? 0;
+}
+
+/** A point's utilisation as the upper check compares it: load × (1 + margin) / rated load. */
+export function utilizationWithMargin(candidate: Candidate, utilization: number): number {
+  return utilization * (1 + weightMarginPct(candidate) / 100);
+}
+
+/**
+ * The utilisation on the checks' basis: the lowest point's as it is (the lower limit), the
+ * highest point's with the weight margin (the upper limit), so that the range is what the
+ * checks compare with the window.
+ */
 export function utilizationRange(candidate: Candidate): [number, number] {
   const values = candidate.perPoint.map((p) => p.utilization);
-  return values.length === 0 ? [NaN, NaN] : [Math.min(...values), Math.max(...values)];
+  return values.length === 0 ? [NaN, NaN] : [Math.min(...values), utilizationWithMargin(candidate, Math.max(...values))];
 }
 
 export function formatUtilizationRange(candidate: Candidate): string {
   const [low, high] = utilizationRange(candidate);
   if (!Number.isFinite(low)) return NO_VALUE;
   return low.toFixed(2) === high.toFixed(2) ? two.format(low) : `${two.format(low)}–${two.format(high)}`;
+}
+
+/** A weight margin in % as written in sentences: 10, 7.5. */
+export function formatMargin(pct: number): string {
+  return upTo1.format(pct);
+}
+
+/** How the utilisation range reads, for a tooltip or a caption. */
+export function utilizationBasis(candidate: Candidate): string {
+  const margin = weightMarginPct(candidate);
+  return margin > 0
+    ? `Load ÷ rated load, from the lightest point to the heaviest with the ${formatMargin(margin)} % weight margin — as the checks compare it.`
+    : 'Load ÷ rated load, from the lightest point to the heaviest — as the checks compare it.';
+}
+
+/** The isolation row with the lowest efficiency (the governing disturbing frequency), or null. */
+export function governingIsolation(candidate: Candidate): Candidate['isolation'][number] | null {
+  let worst: Candidate['isolation'][number] | null = null;
+  for (const row of candidate.isolation) if (!worst || row.efficiencyPct < worst.efficiencyPct) worst = row;
+  return worst;
+}
+
+/** Every reason and note of a candidate, reasons first. */
+export function allRemarks(candidate: Candidate): string[] {
+  return [...candidate.reasons, ...(candidate.notes ?? [])];
 }
 
 /** Why it fails, or else its first note, or that it meets every requirement. */

@@ -1,21 +1,24 @@
-import { Button, HTMLSelect, Menu, MenuItem, Tag } from '@blueprintjs/core';
+import { Button, Checkbox, HTMLSelect, Tag } from '@blueprintjs/core';
 import { SortAscIcon, SortDescIcon } from '@blueprintjs/icons';
-import { Cell, Column, ColumnHeaderCell, RegionCardinality, Regions, Table, type Region } from '@blueprintjs/table';
-import { memo, useCallback, useMemo, type ReactNode } from 'react';
+import { memo, useMemo, useState, type ReactNode } from 'react';
 
-import type { Units } from '@/lib/units';
 import type { Candidate } from '@/types/design-api';
 
 import {
+  allRemarks,
   candidateKey,
   firstReason,
   formatDays,
   formatFrequency,
+  formatMargin,
   formatMoney,
   formatPct,
   formatUtilizationRange,
+  governingIsolation,
   KIND_LABELS,
+  utilizationBasis,
   utilizationRange,
+  weightMarginPct,
   worstIsolationPct,
 } from './candidate-format';
 
@@ -33,109 +36,35 @@ export interface RankedCandidate {
 type ColumnKey =
   'rank' | 'label' | 'supplier' | 'kind' | 'fn' | 'isolation' | 'utilization' | 'level' | 'price' | 'leadTime' | 'verdict' | 'reason';
 
-interface ColumnSpec {
+/** The most candidates compared side by side. */
+export const MAX_COMPARED = 4;
+
+interface SortSpec {
   key: ColumnKey;
   name: string;
-  width: number;
   /** Sort value; null sorts last. */
   value: (row: RankedCandidate) => number | string | null;
-  render: (row: RankedCandidate, units: Units, open: (key: string) => void) => ReactNode;
-  numeric?: boolean;
 }
 
 const finiteOrNull = (v: number | null | undefined) => (v === null || v === undefined || !Number.isFinite(v) ? null : v);
 
-const COLUMNS: readonly ColumnSpec[] = [
-  { key: 'rank', name: 'Rank', width: 56, numeric: true, value: (r) => r.rank, render: (r) => r.rank },
-  {
-    key: 'verdict',
-    name: 'Result',
-    width: 76,
-    value: (r) => (r.candidate.passes ? 0 : 1),
-    render: (r) => <VerdictTag passes={r.candidate.passes} />,
-  },
-  {
-    key: 'label',
-    name: 'Mounts',
-    width: 250,
-    value: (r) => r.candidate.label.toLowerCase(),
-    render: (r, _units, open) => (
-      <Button
-        variant="minimal"
-        size="small"
-        className="tc-candidate-open"
-        text={r.candidate.label}
-        title={`Show the details of ${r.candidate.label}`}
-        onClick={() => open(candidateKey(r.candidate))}
-      />
-    ),
-  },
-  {
-    key: 'supplier',
-    name: 'Supplier',
-    width: 140,
-    value: (r) => r.candidate.supplier.name.toLowerCase(),
-    render: (r) => r.candidate.supplier.name,
-  },
-  { key: 'kind', name: 'Kind', width: 112, value: (r) => r.candidate.kind, render: (r) => KIND_LABELS[r.candidate.kind] },
-  {
-    key: 'fn',
-    name: 'fn',
-    width: 76,
-    numeric: true,
-    value: (r) => finiteOrNull(r.candidate.verticalNaturalFrequencyHz),
-    render: (r) => formatFrequency(r.candidate.verticalNaturalFrequencyHz),
-  },
-  {
-    key: 'isolation',
-    name: 'Isolation, worst',
-    width: 112,
-    numeric: true,
-    value: (r) => finiteOrNull(worstIsolationPct(r.candidate)),
-    render: (r) => formatPct(worstIsolationPct(r.candidate)),
-  },
-  {
-    key: 'utilization',
-    name: 'Utilisation',
-    width: 104,
-    numeric: true,
-    value: (r) => finiteOrNull(utilizationRange(r.candidate)[1]),
-    render: (r) => formatUtilizationRange(r.candidate),
-  },
-  {
-    key: 'level',
-    name: 'Level error',
-    width: 96,
-    numeric: true,
-    value: (r) => finiteOrNull(r.candidate.levelErrorMm),
-    render: (r, units) => units.format('deflection', r.candidate.levelErrorMm / 1000),
-  },
-  {
-    key: 'price',
-    name: 'Price',
-    width: 92,
-    numeric: true,
-    value: (r) => finiteOrNull(r.candidate.totalPrice),
-    render: (r) => formatMoney(r.candidate.totalPrice, r.candidate.currency),
-  },
-  {
-    key: 'leadTime',
-    name: 'Lead time',
-    width: 88,
-    numeric: true,
-    value: (r) => finiteOrNull(r.candidate.maxLeadTimeDays),
-    render: (r) => formatDays(r.candidate.maxLeadTimeDays),
-  },
-  {
-    key: 'reason',
-    name: 'First reason',
-    width: 320,
-    value: (r) => firstReason(r.candidate).toLowerCase(),
-    render: (r) => firstReason(r.candidate),
-  },
+/** Every order the candidates can be put in (the table's columns and a few more). */
+const SORTS: readonly SortSpec[] = [
+  { key: 'rank', name: 'Rank', value: (r) => r.rank },
+  { key: 'verdict', name: 'Result', value: (r) => (r.candidate.passes ? 0 : 1) },
+  { key: 'label', name: 'Mounts', value: (r) => r.candidate.label.toLowerCase() },
+  { key: 'supplier', name: 'Supplier', value: (r) => r.candidate.supplier.name.toLowerCase() },
+  { key: 'kind', name: 'Kind', value: (r) => r.candidate.kind },
+  { key: 'isolation', name: 'Isolation', value: (r) => finiteOrNull(worstIsolationPct(r.candidate)) },
+  { key: 'fn', name: 'Natural frequency', value: (r) => finiteOrNull(r.candidate.verticalNaturalFrequencyHz) },
+  { key: 'utilization', name: 'Utilisation', value: (r) => finiteOrNull(utilizationRange(r.candidate)[1]) },
+  { key: 'level', name: 'Level error', value: (r) => finiteOrNull(r.candidate.levelErrorMm) },
+  { key: 'price', name: 'Price', value: (r) => finiteOrNull(r.candidate.totalPrice) },
+  { key: 'leadTime', name: 'Lead time', value: (r) => finiteOrNull(r.candidate.maxLeadTimeDays) },
+  { key: 'reason', name: 'Reason', value: (r) => firstReason(r.candidate).toLowerCase() },
 ];
 
-export const SORT_OPTIONS = COLUMNS.map((c) => ({ value: c.key, label: c.name }));
+export const SORT_OPTIONS = SORTS.map((c) => ({ value: c.key, label: c.name }));
 
 export function VerdictTag({ passes }: { passes: boolean }) {
   return (
@@ -147,7 +76,7 @@ export function VerdictTag({ passes }: { passes: boolean }) {
 
 /** Sorts a copy; missing values last whichever the direction; ties keep the server's rank. */
 export function sortCandidates(rows: readonly RankedCandidate[], sort: CandidateSort): RankedCandidate[] {
-  const column = COLUMNS.find((c) => c.key === sort.column) ?? COLUMNS[0]!;
+  const column = SORTS.find((c) => c.key === sort.column) ?? SORTS[0]!;
   const sign = sort.direction === 'asc' ? 1 : -1;
   return [...rows].sort((a, b) => {
     const va = column.value(a);
@@ -165,47 +94,105 @@ export interface CandidatesTableProps {
   sort: CandidateSort;
   onSort: (sort: CandidateSort) => void;
   selectedKey: string | null;
+  /** The candidate chosen for the design, if it is in the list. */
+  chosenKey: string | null;
   onOpen: (key: string) => void;
-  units: Units;
+  /** Candidates ticked for comparison (at most MAX_COMPARED). */
+  compareKeys: readonly string[];
+  onToggleCompare: (key: string) => void;
+  /** Shows the ticked candidates side by side. */
+  onCompare: () => void;
 }
 
-const ROW_HEIGHT = 30;
+interface HeaderProps {
+  column: ColumnKey;
+  sort: CandidateSort;
+  onSort: (sort: CandidateSort) => void;
+  className?: string;
+  children: ReactNode;
+  /** A second, smaller line under the name. */
+  note?: ReactNode;
+  title?: string;
+}
+
+/** A column header that sorts by its column (a second click turns the order round). */
+function SortHeader({ column, sort, onSort, className, children, note, title }: HeaderProps) {
+  const active = sort.column === column;
+  const next: SortDirection = active && sort.direction === 'asc' ? 'desc' : 'asc';
+  return (
+    <th
+      scope="col"
+      className={[className, active ? 'tc-sorted-column' : ''].filter(Boolean).join(' ')}
+      aria-sort={active ? (sort.direction === 'asc' ? 'ascending' : 'descending') : 'none'}
+      title={title}
+    >
+      <button type="button" className="tc-sort-button" onClick={() => onSort({ column, direction: next })}>
+        <span className="tc-sort-label">
+          {children}
+          <span aria-hidden="true">{active ? (sort.direction === 'asc' ? ' ▲' : ' ▼') : ''}</span>
+        </span>
+        {note ? <span className="tc-header-note">{note}</span> : null}
+      </button>
+    </th>
+  );
+}
+
+/** The first reason in full, and the others (with the notes) on request: nothing cut off. */
+function ReasonCell({ candidate }: { candidate: Candidate }) {
+  const [open, setOpen] = useState(false);
+  const remarks = allRemarks(candidate);
+  const first = firstReason(candidate);
+  const more = Math.max(0, remarks.length - 1);
+  return (
+    <td className="tc-reason-cell">
+      {open && remarks.length > 1 ? (
+        <ul className="tc-reason-list">
+          {remarks.map((remark) => (
+            <li key={remark}>{remark}</li>
+          ))}
+        </ul>
+      ) : (
+        <span className="tc-reason-text">{first}</span>
+      )}
+      {more > 0 ? (
+        <button
+          type="button"
+          className="tc-link-button"
+          aria-expanded={open}
+          onClick={(event) => {
+            event.stopPropagation();
+            setOpen(!open);
+          }}
+        >
+          {open ? 'Show less' : `${more} more`}
+        </button>
+      ) : null}
+    </td>
+  );
+}
 
 /**
- * The ranked candidates in a Blueprint table, sortable in the browser. Clicking a row (or the
- * mount name) opens its details.
+ * The ranked candidates in a table that fits its column: the candidate column stays in place
+ * when the table scrolls sideways inside its own box (narrow screens), the header when it
+ * scrolls down, and the reasons wrap. Clicking a row opens its details; the boxes tick up to four
+ * candidates to compare side by side.
  */
-export const CandidatesTable = memo(function CandidatesTable({ rows, sort, onSort, selectedKey, onOpen, units }: CandidatesTableProps) {
+export const CandidatesTable = memo(function CandidatesTable({
+  rows,
+  sort,
+  onSort,
+  selectedKey,
+  chosenKey,
+  onOpen,
+  compareKeys,
+  onToggleCompare,
+  onCompare,
+}: CandidatesTableProps) {
   const sorted = useMemo(() => sortCandidates(rows, sort), [rows, sort]);
-  const selectedRow = sorted.findIndex((r) => candidateKey(r.candidate) === selectedKey);
-  const selectedRegions = useMemo(() => (selectedRow >= 0 ? [Regions.row(selectedRow)] : []), [selectedRow]);
-
-  const onSelection = useCallback(
-    (regions: Region[]) => {
-      const row = regions[regions.length - 1]?.rows?.[0];
-      if (row !== undefined && row !== null && sorted[row]) onOpen(candidateKey(sorted[row]!.candidate));
-    },
-    [sorted, onOpen],
-  );
-
-  const headerRenderer = (spec: ColumnSpec) => () => (
-    <ColumnHeaderCell
-      name={spec.name}
-      className={sort.column === spec.key ? 'tc-sorted-column' : undefined}
-      nameRenderer={(name) => (
-        <span className="tc-column-name">
-          {name}
-          {sort.column === spec.key ? (sort.direction === 'asc' ? ' ▲' : ' ▼') : ''}
-        </span>
-      )}
-      menuRenderer={() => (
-        <Menu>
-          <MenuItem icon={<SortAscIcon />} text="Sort ascending" onClick={() => onSort({ column: spec.key, direction: 'asc' })} />
-          <MenuItem icon={<SortDescIcon />} text="Sort descending" onClick={() => onSort({ column: spec.key, direction: 'desc' })} />
-        </Menu>
-      )}
-    />
-  );
+  const compared = new Set(compareKeys);
+  const full = compareKeys.length >= MAX_COMPARED;
+  const margins = new Set(rows.map((r) => weightMarginPct(r.candidate)));
+  const margin = margins.size === 1 ? [...margins][0]! : 0;
 
   return (
     <div className="tc-candidates">
@@ -225,42 +212,146 @@ export const CandidatesTable = memo(function CandidatesTable({ rows, sort, onSor
           text={sort.direction === 'asc' ? 'Ascending' : 'Descending'}
           onClick={() => onSort({ column: sort.column, direction: sort.direction === 'asc' ? 'desc' : 'asc' })}
         />
+        <span className="tc-toolbar-spacer" />
+        <span className="tc-muted tc-compare-hint" role="status">
+          {compareKeys.length === 0
+            ? 'Tick two to four candidates to compare them.'
+            : full
+              ? `${compareKeys.length} ticked (the most that can be compared).`
+              : `${compareKeys.length} ticked.`}
+        </span>
+        <Button intent="primary" variant="outlined" text="Compare" disabled={compareKeys.length < 2} onClick={onCompare} />
       </div>
-      <div className="tc-candidates-table" style={{ height: Math.min(sorted.length, 12) * ROW_HEIGHT + 34 }} data-testid="candidates-table">
-        <Table
-          numRows={sorted.length}
-          columnWidths={COLUMNS.map((c) => c.width)}
-          defaultRowHeight={ROW_HEIGHT}
-          enableRowHeader={false}
-          enableMultipleSelection={false}
-          selectionModes={[RegionCardinality.FULL_ROWS]}
-          selectedRegions={selectedRegions}
-          onSelection={onSelection}
-          cellRendererDependencies={[sorted, units, selectedKey]}
-          enableFocusedCell={false}
-        >
-          {COLUMNS.map((spec) => (
-            <Column
-              key={spec.key}
-              id={spec.key}
-              name={spec.name}
-              columnHeaderCellRenderer={headerRenderer(spec)}
-              cellRenderer={(rowIndex) => {
-                const row = sorted[rowIndex];
-                if (!row) return <Cell />;
-                return (
-                  <Cell
-                    interactive={spec.key === 'label'}
-                    className={[spec.numeric ? 'tc-cell-number' : '', row.candidate.passes ? '' : 'tc-cell-failing'].join(' ').trim()}
-                  >
-                    {spec.render(row, units, onOpen)}
-                  </Cell>
-                );
-              }}
-            />
-          ))}
-        </Table>
+      <div className="tc-results-scroll" data-testid="candidates-table" role="region" aria-label="Candidates, ranked" tabIndex={0}>
+        <table className="tc-results" aria-label="Candidates">
+          <colgroup>
+            <col className="tc-col-candidate" />
+            <col className="tc-col-verdict" />
+            <col className="tc-col-isolation" />
+            <col className="tc-col-fn" />
+            <col className="tc-col-utilization" />
+            <col className="tc-col-price" />
+            <col className="tc-col-lead" />
+            <col className="tc-col-reason" />
+          </colgroup>
+          <thead>
+            <tr>
+              <SortHeader column="rank" sort={sort} onSort={onSort} className="tc-results-sticky">
+                Candidate
+              </SortHeader>
+              <SortHeader column="verdict" sort={sort} onSort={onSort}>
+                Result
+              </SortHeader>
+              <SortHeader
+                column="isolation"
+                sort={sort}
+                onSort={onSort}
+                className="tc-number"
+                title="The lowest isolation over the disturbing frequencies: the figure the requirement is checked against"
+              >
+                Isolation
+              </SortHeader>
+              <SortHeader
+                column="fn"
+                sort={sort}
+                onSort={onSort}
+                className="tc-number"
+                title="Natural frequency, vertical (bounce estimate)"
+              >
+                fn
+              </SortHeader>
+              <SortHeader
+                column="utilization"
+                sort={sort}
+                onSort={onSort}
+                className="tc-number"
+                title={rows[0] ? utilizationBasis(rows[0].candidate) : undefined}
+                note={margin > 0 ? `+${formatMargin(margin)} % weight` : null}
+              >
+                Utilisation
+              </SortHeader>
+              <SortHeader column="price" sort={sort} onSort={onSort} className="tc-number">
+                Price
+              </SortHeader>
+              <SortHeader column="leadTime" sort={sort} onSort={onSort} className="tc-number">
+                Lead time
+              </SortHeader>
+              <SortHeader column="reason" sort={sort} onSort={onSort}>
+                Reason
+              </SortHeader>
+            </tr>
+          </thead>
+          <tbody>
+            {sorted.map((row) => {
+              const { candidate } = row;
+              const key = candidateKey(candidate);
+              const governing = governingIsolation(candidate);
+              const classes = [
+                'tc-results-row',
+                key === selectedKey ? 'is-selected' : '',
+                candidate.passes ? '' : 'is-failing',
+                compared.has(key) ? 'is-compared' : '',
+              ];
+              return (
+                <tr key={key} className={classes.filter(Boolean).join(' ')} onClick={() => onOpen(key)}>
+                  <th scope="row" className="tc-results-sticky tc-candidate-cell">
+                    <div className="tc-candidate-cell-inner">
+                      <span onClick={(event) => event.stopPropagation()}>
+                        <Checkbox
+                          className="tc-compare-box"
+                          checked={compared.has(key)}
+                          disabled={!compared.has(key) && full}
+                          aria-label={`Compare ${candidate.label}`}
+                          onChange={() => onToggleCompare(key)}
+                        />
+                      </span>
+                      <span className="tc-rank">{row.rank}</span>
+                      <span className="tc-candidate-name">
+                        <button
+                          type="button"
+                          className="tc-candidate-open"
+                          title={`Show the details of ${candidate.label}`}
+                          onClick={(event) => {
+                            event.stopPropagation();
+                            onOpen(key);
+                          }}
+                        >
+                          {candidate.label}
+                        </button>
+                        <span className="tc-candidate-meta">
+                          {candidate.supplier.name} · {KIND_LABELS[candidate.kind]}
+                          {key === chosenKey ? (
+                            <Tag minimal intent="success" className="tc-chosen-tag">
+                              Chosen
+                            </Tag>
+                          ) : null}
+                        </span>
+                      </span>
+                    </div>
+                  </th>
+                  <td>
+                    <VerdictTag passes={candidate.passes} />
+                  </td>
+                  <td className="tc-number">
+                    {formatPct(worstIsolationPct(candidate))}
+                    {governing ? <span className="tc-cell-note">at {formatFrequency(governing.frequencyHz)}</span> : null}
+                  </td>
+                  <td className="tc-number">{formatFrequency(candidate.verticalNaturalFrequencyHz)}</td>
+                  <td className="tc-number">{formatUtilizationRange(candidate)}</td>
+                  <td className="tc-number">{formatMoney(candidate.totalPrice, candidate.currency)}</td>
+                  <td className="tc-number">{formatDays(candidate.maxLeadTimeDays)}</td>
+                  <ReasonCell candidate={candidate} />
+                </tr>
+              );
+            })}
+          </tbody>
+        </table>
       </div>
+      <p className="tc-muted tc-table-note">
+        Isolation: the lowest over the disturbing frequencies. Utilisation: load ÷ rated load from the lightest point to the heaviest
+        {margin > 0 ? `, the heaviest with the ${formatMargin(margin)} % weight margin` : ''}, as the checks compare it. Level error and the
+        figures per point are in each candidate’s details.
+      </p>
     </div>
   );
 });

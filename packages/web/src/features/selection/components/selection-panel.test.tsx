@@ -1,6 +1,6 @@
 import { screen, waitFor, within } from '@testing-library/react';
 
-import { demoCandidates, makeDesign, serveDesign } from '@/testing/design-fakes';
+import { demoCandidates, makeCandidate, makeDesign, QUELLBROOK, selectionResultFor, serveDesign } from '@/testing/design-fakes';
 import { installFakeApi } from '@/testing/fake-api';
 import { renderApp } from '@/testing/render';
 import type { Design, UpdateDesignInput } from '@/types/design-api';
@@ -23,29 +23,22 @@ async function findMounts(user: ReturnType<typeof renderApp>['user']) {
   return screen.findByTestId('candidates-table');
 }
 
-/** The rows of the Blueprint table as text, one string per rendered cell. */
+/** The body rows of the candidates table, each as the text of its cells. */
 function tableRows(table: HTMLElement): string[][] {
-  const cells = Array.from(table.querySelectorAll<HTMLElement>('.bp6-table-cell'));
-  const rows = new Map<string, string[]>();
-  for (const cell of cells) {
-    const row = Array.from(cell.classList).find((c) => c.startsWith('bp6-table-cell-row-'));
-    if (!row) continue;
-    rows.set(row, [...(rows.get(row) ?? []), cell.textContent ?? '']);
-  }
-  return [...rows.values()];
+  return within(table)
+    .getAllByRole('row')
+    .slice(1)
+    .map((row) => Array.from(row.querySelectorAll('th, td')).map((cell) => cell.textContent ?? ''));
 }
+
+/** The candidate's name as the first cell shows it (tick box, rank, name, supplier · kind). */
+const nameOf = (row: string[]) => row[0] ?? '';
 
 // Each test drives the whole design page through typing and tables in jsdom; on a busy 2-core
 // machine that can take longer than the default 5 s. A harness limit, not a speed check.
 vi.setConfig({ testTimeout: 20_000 });
 
 describe('Mount selection', () => {
-  beforeEach(() => {
-    // jsdom lays nothing out: give Blueprint's table a viewport so it renders every column.
-    vi.spyOn(HTMLElement.prototype, 'clientWidth', 'get').mockReturnValue(1600);
-    vi.spyOn(HTMLElement.prototype, 'clientHeight', 'get').mockReturnValue(800);
-  });
-
   it('runs the selection on the saved input and ranks the candidates with pass/fail and reasons', async () => {
     const { user, fake } = openSelection();
     const table = await findMounts(user);
@@ -58,23 +51,20 @@ describe('Mount selection', () => {
     const rows = tableRows(table);
     expect(rows).toHaveLength(3);
     expect(rows[0]).toEqual([
-      '1',
+      '1QB-HS-300 housed springQuellbrook Mounts · One part',
       'Passes',
-      'QB-HS-300 housed spring',
-      'Quellbrook Mounts',
-      'One part',
-      '3.15 Hz',
       // CV-13 with ζ = 0.05: T = 0.02108 at 24.67 Hz → 97.9 % (docs/engineering/check-values.md CV-13).
-      '97.9 %',
+      '97.9 %at 24.7 Hz',
+      '3.15 Hz',
       '0.68–0.85',
-      '2.66 mm',
       '$368',
       '21 days',
       'Level error 2.7 mm: shim the low corner',
     ]);
-    expect(rows[1]?.slice(1, 5)).toEqual(['Passes', 'SM-LV series, sized per point', 'Stillmoor Isolation', 'Sized per point']);
+    expect(nameOf(rows[1]!)).toBe('2SM-LV series, sized per pointStillmoor Isolation · Sized per point');
     expect(rows[2]?.[1]).toBe('Fails');
-    expect(rows[2]?.[11]).toBe('Isolation 57.8 % at 24.67 Hz is below the 90 % asked for');
+    // the whole first reason, never cut short; the others on request
+    expect(rows[2]?.[7]).toBe('Isolation 57.8 % at 24.67 Hz is below the 90 % asked for1 more');
   });
 
   it('saves unsaved input before running, so the results match what is stored', async () => {
@@ -99,13 +89,19 @@ describe('Mount selection', () => {
     const table = await findMounts(user);
 
     await user.selectOptions(screen.getByLabelText('Sort by'), 'Price');
-    expect(tableRows(table).map((r) => r[2])).toEqual([
-      'QB-EP-40 elastomer pad',
-      'SM-LV series, sized per point',
-      'QB-HS-300 housed spring',
-    ]);
+    const names = () =>
+      within(table)
+        .getAllByRole('button', { name: /^Show the details|QB-|SM-/ })
+        .map((b) => b.textContent);
+    expect(names()).toEqual(['QB-EP-40 elastomer pad', 'SM-LV series, sized per point', 'QB-HS-300 housed spring']);
     await user.click(screen.getByRole('button', { name: 'Ascending' }));
-    expect(tableRows(table).map((r) => r[0])).toEqual(['1', '2', '3']);
+    expect(names()).toEqual(['QB-HS-300 housed spring', 'SM-LV series, sized per point', 'QB-EP-40 elastomer pad']);
+    // a column header sorts too, and a second click turns the order round
+    await user.click(within(table).getByRole('button', { name: /^Lead time/ }));
+    expect(within(table).getByRole('columnheader', { name: /Lead time/ })).toHaveAttribute('aria-sort', 'ascending');
+    expect(names()).toEqual(['QB-EP-40 elastomer pad', 'QB-HS-300 housed spring', 'SM-LV series, sized per point']);
+    await user.click(within(table).getByRole('button', { name: /^Lead time/ }));
+    expect(names()[0]).toBe('SM-LV series, sized per point');
     expect(fake.calls('post', `/designs/${DESIGN_ID}/selection`)).toHaveLength(1);
   });
 
@@ -224,6 +220,157 @@ describe('Mount selection', () => {
     // Same Σk, twice the mass: fn falls by √2, 3.15 Hz → 2.23 Hz.
     expect(within(detail).getByTestId('live-fn')).toHaveTextContent('2.23 Hz');
     expect(within(detail).getByTestId('live-fn')).toHaveTextContent('2,000 kg');
+  });
+
+  it('shows the selection kept with the design after a reload, without running it again', async () => {
+    const design = makeDesign({ id: DESIGN_ID, name: NAME });
+    design.lastSelection = {
+      ranAt: '2025-01-09T11:00:00.000Z',
+      ranBy: { id: 3, name: 'Erin Engineer' },
+      limit: 50,
+      catalogChanged: false,
+      result: selectionResultFor(design.input),
+    };
+    const { fake } = openSelection(design);
+    const table = await screen.findByTestId('candidates-table');
+    expect(tableRows(table)).toHaveLength(3);
+    expect(fake.calls('post', `/designs/${DESIGN_ID}/selection`)).toHaveLength(0);
+    expect(screen.getByText('3 candidates, 2 passing')).toBeInTheDocument();
+    expect(screen.getByText(/run 9 Jan 2025, \d\d:\d\d by Erin Engineer, kept with the design/)).toBeInTheDocument();
+    expect(screen.queryByText('The catalog changed since this run')).not.toBeInTheDocument();
+  });
+
+  it('says when the catalog changed since the kept run', async () => {
+    const design = makeDesign({ id: DESIGN_ID, name: NAME });
+    design.lastSelection = {
+      ranAt: '2025-01-09T11:00:00.000Z',
+      ranBy: null,
+      limit: 50,
+      catalogChanged: true,
+      result: selectionResultFor(design.input),
+    };
+    openSelection(design);
+    expect(await screen.findByText('The catalog changed since this run')).toBeInTheDocument();
+  });
+
+  it('asks the page to read the design again after a run, so the kept run survives leaving the tab', async () => {
+    const { user, fake } = openSelection();
+    const before = fake.calls('get', `/designs/${DESIGN_ID}`).length;
+    await findMounts(user);
+    await waitFor(() => expect(fake.calls('get', `/designs/${DESIGN_ID}`).length).toBeGreaterThan(before));
+  });
+
+  it('shows every reason of a row on request, none cut short', async () => {
+    const { user } = openSelection();
+    const table = await findMounts(user);
+    const failing = within(table).getAllByRole('row')[3]!;
+    expect(failing).not.toHaveTextContent('Utilisation 1.13 at point A exceeds 1.00');
+    await user.click(within(failing).getByRole('button', { name: '1 more' }));
+    expect(failing).toHaveTextContent('Isolation 57.8 % at 24.67 Hz is below the 90 % asked for');
+    expect(failing).toHaveTextContent('Utilisation 1.13 at point A exceeds 1.00');
+    expect(screen.queryByRole('region', { name: 'Candidate 3' })).not.toBeInTheDocument();
+    await user.click(within(failing).getByRole('button', { name: 'Show less' }));
+    expect(failing).not.toHaveTextContent('Utilisation 1.13 at point A exceeds 1.00');
+  });
+
+  it('compares two to four candidates side by side: figures, reasons and the curves together', async () => {
+    const { user } = openSelection();
+    const table = await findMounts(user);
+    const compareButton = screen.getByRole('button', { name: 'Compare' });
+    expect(compareButton).toBeDisabled();
+    await user.click(within(table).getByRole('checkbox', { name: 'Compare QB-HS-300 housed spring' }));
+    expect(compareButton).toBeDisabled();
+    await user.click(within(table).getByRole('checkbox', { name: 'Compare QB-EP-40 elastomer pad' }));
+    expect(screen.getByText('2 ticked.')).toBeInTheDocument();
+    await user.click(compareButton);
+
+    const comparison = await screen.findByRole('region', { name: 'Comparison' });
+    const figures = within(comparison).getByRole('table', { name: 'Compared candidates' });
+    const head = within(figures).getAllByRole('columnheader');
+    expect(head[0]).toHaveTextContent('#1 QB-HS-300 housed spring');
+    expect(head[1]).toHaveTextContent('#3 QB-EP-40 elastomer pad');
+    const row = (name: string) =>
+      within(figures)
+        .getByRole('rowheader', { name: new RegExp(`^${name}`) })
+        .closest('tr')!;
+    expect(row('Result')).toHaveTextContent(/Passes.*Fails/);
+    // the better figure of a row is marked: lower fn, lower price
+    const fn = within(row('Natural frequency, vertical')).getAllByRole('cell');
+    expect(fn[0]).toHaveClass('tc-best');
+    expect(fn[0]).toHaveTextContent('3.15 Hz (best)');
+    expect(fn[1]).not.toHaveClass('tc-best');
+    expect(within(row('Price, all points')).getAllByRole('cell')[1]).toHaveClass('tc-best');
+    expect(row('Why it fails')).toHaveTextContent('Meets every requirement');
+    expect(row('Why it fails')).toHaveTextContent('Utilisation 1.13 at point A exceeds 1.00');
+    expect(row('Isolation at 24.7 Hz')).toHaveTextContent('1× shaft at 1480 rpm');
+
+    const chart = within(comparison).getByTestId('comparison-chart');
+    expect(within(chart).getByText(/#1 QB-HS-300 housed spring — fn 3\.15 Hz, viscous, damping ratio ζ = 0\.050/)).toBeInTheDocument();
+    await waitFor(() => expect(chart.querySelector('.VictoryContainer svg')).not.toBeNull(), { timeout: 10_000 });
+    expect(within(chart).getByText('T = 1')).toBeInTheDocument();
+
+    // removing one leaves too few to compare; Details opens the candidate
+    await user.click(within(comparison).getByRole('button', { name: 'Details of QB-HS-300 housed spring' }));
+    expect(await screen.findByRole('region', { name: 'Candidate 1' })).toBeInTheDocument();
+    await user.click(within(comparison).getByRole('button', { name: 'Remove QB-EP-40 elastomer pad from the comparison' }));
+    expect(screen.queryByRole('region', { name: 'Comparison' })).not.toBeInTheDocument();
+    expect(within(table).getByRole('checkbox', { name: 'Compare QB-EP-40 elastomer pad' })).not.toBeChecked();
+  });
+
+  it('ticks at most four candidates', async () => {
+    const many = Array.from({ length: 5 }, (_, i) =>
+      makeCandidate({
+        kind: 'uniform',
+        id: 20 + i,
+        label: `QB-${i}`,
+        supplier: QUELLBROOK,
+        fnHz: 3 + i / 10,
+        ratedLoadN: 3200,
+        passes: true,
+      }),
+    );
+    const fake = installFakeApi();
+    serveDesign(fake, makeDesign({ id: DESIGN_ID, name: NAME }), many);
+    const { user } = renderApp({ signedInAs: 'engineer', path: `/designs/${DESIGN_ID}?tab=selection` });
+    const table = await findMounts(user);
+    for (let i = 0; i < 4; i++) await user.click(within(table).getByRole('checkbox', { name: `Compare QB-${i}` }));
+    expect(within(table).getByRole('checkbox', { name: 'Compare QB-4' })).toBeDisabled();
+    expect(screen.getByText('4 ticked (the most that can be compared).')).toBeInTheDocument();
+    await user.click(screen.getByRole('button', { name: 'Compare' }));
+    const figures = await screen.findByRole('table', { name: 'Compared candidates' });
+    expect(within(figures).getAllByRole('columnheader')).toHaveLength(4);
+  });
+
+  it('shows utilisation on the checks’ basis: the heaviest point with the weight margin', async () => {
+    const candidates = demoCandidates().map((c) => ({ ...c, weightMarginPct: 10 }));
+    const fake = installFakeApi();
+    serveDesign(fake, makeDesign({ id: DESIGN_ID, name: NAME }), candidates);
+    const { user } = renderApp({ signedInAs: 'engineer', path: `/designs/${DESIGN_ID}?tab=selection` });
+    const table = await findMounts(user);
+    // CV-15 loads on 3200 N mounts: 2186.1/3200 = 0.683 lightest; 2717.3/3200 × 1.10 = 0.934 heaviest with the margin
+    expect(tableRows(table)[0]![4]).toBe('0.68–0.93');
+    expect(within(table).getByRole('columnheader', { name: /Utilisation/ })).toHaveTextContent('Utilisation+10 % weight');
+
+    await user.click(within(table).getByRole('button', { name: 'QB-HS-300 housed spring' }));
+    const detail = await screen.findByRole('region', { name: 'Candidate 1' });
+    const loads = within(detail).getByRole('table', { name: 'Loads per point' });
+    expect(within(loads).getByRole('columnheader', { name: 'With the 10 % weight margin' })).toBeInTheDocument();
+    expect(within(loads).getAllByRole('row')[1]).toHaveTextContent(/0\.85\s*0\.93/);
+  });
+
+  it('names mixed modes by the motions that carry them, with their shares', async () => {
+    const { user } = openSelection();
+    const table = await findMounts(user);
+    await user.click(within(table).getByRole('button', { name: 'QB-HS-300 housed spring' }));
+    const detail = await screen.findByRole('region', { name: 'Candidate 1' });
+    const modes = within(detail).getByRole('table', { name: 'Rigid-body modes' });
+    const rows = within(modes).getAllByRole('row').slice(1);
+    // the two modes a dominant-only name called "yaw" both
+    expect(rows[2]).toHaveTextContent('yaw + roll (mixed)yaw 55 %, roll 40 %');
+    expect(rows[4]).toHaveTextContent('yaw + roll (mixed)yaw 50 %, roll 45 %');
+    expect(rows[3]).toHaveTextContent('bounce — verticalone motion');
+    expect(rows[5]).toHaveTextContent('pitch — about y');
+    expect(modes).not.toHaveTextContent('yaw — about z');
   });
 
   it('explains a failed run', async () => {

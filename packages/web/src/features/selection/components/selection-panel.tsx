@@ -5,13 +5,14 @@ import { memo, useCallback, useEffect, useMemo, useRef, useState } from 'react';
 
 import { SafetyCautions } from '@/components/safety-cautions';
 import { errorMessage } from '@/lib/api-errors';
-import { useUnits } from '@/lib/units';
-import type { Candidate, DesignInput, SelectionResult } from '@/types/design-api';
+import { formatDateTime } from '@/lib/dates';
+import type { Candidate, DesignInput, SelectionResult, StoredSelection } from '@/types/design-api';
 
 import { useRunDesignSelection } from '../api/run-design-selection';
 import { candidateKey } from './candidate-format';
+import { CandidateComparison } from './candidate-comparison';
 import { CandidateDetail, type DisturbingFrequencyLine } from './candidate-detail';
-import { CandidatesTable, type CandidateSort, type RankedCandidate } from './candidates-table';
+import { CandidatesTable, MAX_COMPARED, type CandidateSort, type RankedCandidate } from './candidates-table';
 
 /** How many candidates a run asks for: enough to see why plausible mounts were rejected. */
 export const SELECTION_LIMIT = 50;
@@ -21,6 +22,8 @@ export interface SelectionPanelProps {
   /** The input as saved (the selection runs on it). */
   savedInput: DesignInput;
   chosen: Candidate | null;
+  /** The last selection run on the saved input, kept with the design (null when none). */
+  stored: StoredSelection | null;
   /** Mass of the input as it is now [kg], or null while incomplete. */
   liveMassKg: number | null;
   frequencies: readonly DisturbingFrequencyLine[] | null;
@@ -33,12 +36,16 @@ export interface SelectionPanelProps {
   saveIfNeeded: () => Promise<{ input: DesignInput } | null>;
   choose: (candidate: Candidate) => Promise<boolean>;
   choosing: boolean;
+  /** A run finished and was kept with the design on the server. */
+  onRun?: () => void;
 }
 
 interface Run {
   result: SelectionResult;
   /** The saved input the run was computed from. */
   inputKey: string;
+  /** When and by whom, for a run kept from earlier; null for a run made here. */
+  kept: { ranAt: string; ranBy: string | null; catalogChanged: boolean } | null;
 }
 
 const DEFAULT_SORT: CandidateSort = { column: 'rank', direction: 'asc' };
@@ -52,15 +59,27 @@ function savedMassKg(input: DesignInput): number | null {
   }
 }
 
+function keptRun(stored: StoredSelection | null, savedInput: DesignInput): Run | null {
+  if (!stored) return null;
+  return {
+    result: stored.result,
+    inputKey: JSON.stringify(savedInput),
+    kept: { ranAt: stored.ranAt, ranBy: stored.ranBy?.name ?? null, catalogChanged: stored.catalogChanged },
+  };
+}
+
 /**
  * "Find mounts" and its results. A run uses the design's saved input (`POST
  * /api/designs/:id/selection`), saving unsaved input first, so that the candidates shown are
- * exactly what "Choose this" records on the server.
+ * exactly what "Choose this" records on the server. The server keeps the last run with the
+ * design, so the results come back after a reload until the input changes. Up to four
+ * candidates can be compared side by side.
  */
 export const SelectionPanel = memo(function SelectionPanel({
   designId,
   savedInput,
   chosen,
+  stored,
   liveMassKg,
   frequencies,
   targetTransmissibility,
@@ -70,15 +89,18 @@ export const SelectionPanel = memo(function SelectionPanel({
   saveIfNeeded,
   choose,
   choosing,
+  onRun,
 }: SelectionPanelProps) {
-  const units = useUnits();
   const runSelection = useRunDesignSelection();
-  const [run, setRun] = useState<Run | null>(null);
+  const [run, setRun] = useState<Run | null>(() => keptRun(stored, savedInput));
   const [sort, setSort] = useState<CandidateSort>(DEFAULT_SORT);
   const [selectedKey, setSelectedKey] = useState<string | null>(null);
+  const [compareKeys, setCompareKeys] = useState<string[]>([]);
+  const [comparing, setComparing] = useState(false);
   const [runError, setRunError] = useState<string | null>(null);
   const [saving, setSaving] = useState(false);
   const detailRef = useRef<HTMLDivElement>(null);
+  const comparisonRef = useRef<HTMLDivElement>(null);
 
   const savedKey = useMemo(() => JSON.stringify(savedInput), [savedInput]);
   const stale = run !== null && (dirty || run.inputKey !== savedKey);
@@ -87,10 +109,9 @@ export const SelectionPanel = memo(function SelectionPanel({
     () => (run ? run.result.candidates.map((candidate, index) => ({ rank: index + 1, candidate })) : []),
     [run],
   );
-  const selected = useMemo(
-    () => (selectedKey ? (run?.result.candidates.find((c) => candidateKey(c) === selectedKey) ?? null) : null),
-    [run, selectedKey],
-  );
+  const byKey = useMemo(() => new Map(rows.map((row) => [candidateKey(row.candidate), row])), [rows]);
+  const selected = selectedKey ? (byKey.get(selectedKey)?.candidate ?? null) : null;
+  const compared = useMemo(() => compareKeys.map((key) => byKey.get(key)).filter((row) => row !== undefined), [compareKeys, byKey]);
   const chosenKey = chosen ? candidateKey(chosen) : null;
   const savedMass = useMemo(() => savedMassKg(savedInput), [savedInput]);
 
@@ -105,23 +126,35 @@ export const SelectionPanel = memo(function SelectionPanel({
     }
     try {
       const result = await runSelection.mutateAsync({ designId, limit: SELECTION_LIMIT });
-      setRun({ result, inputKey: JSON.stringify(saved.input) });
+      setRun({ result, inputKey: JSON.stringify(saved.input), kept: null });
       setSelectedKey(null);
+      setCompareKeys([]);
+      setComparing(false);
       setSort(DEFAULT_SORT);
+      onRun?.();
     } catch (error) {
       setRunError(errorMessage(error));
     }
   };
 
   const open = useCallback((key: string) => setSelectedKey(key), []);
+  const toggleCompare = useCallback((key: string) => {
+    setCompareKeys((keys) => (keys.includes(key) ? keys.filter((k) => k !== key) : keys.length >= MAX_COMPARED ? keys : [...keys, key]));
+  }, []);
+  const compare = useCallback(() => setComparing(true), []);
   useEffect(() => {
     if (selectedKey) detailRef.current?.scrollIntoView?.({ behavior: 'smooth', block: 'start' });
   }, [selectedKey]);
+  useEffect(() => {
+    if (comparing) comparisonRef.current?.scrollIntoView?.({ behavior: 'smooth', block: 'start' });
+  }, [comparing]);
+  const showComparison = comparing && compared.length >= 2;
 
   const passing = run ? run.result.candidates.filter((c) => c.passes).length : 0;
   const busy = saving || runSelection.isPending;
 
-  const detailCandidate = selected ?? (run ? null : chosen);
+  // the candidate opened from the list, else the chosen mounts
+  const detailCandidate = selected ?? chosen;
   const referenceMass = selected ? run!.result.totalMassKg : savedMass;
 
   return (
@@ -145,7 +178,11 @@ export const SelectionPanel = memo(function SelectionPanel({
                 {run.result.candidates.length} candidates, {passing} passing
               </strong>{' '}
               <span className="tc-muted">
-                from {run.result.considered.toLocaleString('en-US')} catalog mounts considered in {Math.round(run.result.elapsedMs)} ms.
+                from {run.result.considered.toLocaleString('en-US')} catalog mounts considered in {Math.round(run.result.elapsedMs)} ms
+                {run.kept
+                  ? `; run ${formatDateTime(run.kept.ranAt)}${run.kept.ranBy ? ` by ${run.kept.ranBy}` : ''}, kept with the design`
+                  : ''}
+                .
               </span>
             </>
           ) : canRun ? (
@@ -169,6 +206,12 @@ export const SelectionPanel = memo(function SelectionPanel({
           The input changed since this run. Find mounts again before choosing.
         </Callout>
       ) : null}
+      {!stale && run?.kept?.catalogChanged ? (
+        <Callout intent="warning" className="tc-note" title="The catalog changed since this run">
+          Mounts or suppliers were added, changed or retired after these results were found. Find mounts again to rank the catalog as it is
+          now.
+        </Callout>
+      ) : null}
 
       {run && rows.length === 0 ? (
         <NonIdealState
@@ -178,7 +221,30 @@ export const SelectionPanel = memo(function SelectionPanel({
         />
       ) : null}
       {rows.length > 0 ? (
-        <CandidatesTable rows={rows} sort={sort} onSort={setSort} selectedKey={selectedKey} onOpen={open} units={units} />
+        <CandidatesTable
+          rows={rows}
+          sort={sort}
+          onSort={setSort}
+          selectedKey={selectedKey}
+          chosenKey={chosenKey}
+          onOpen={open}
+          compareKeys={compareKeys}
+          onToggleCompare={toggleCompare}
+          onCompare={compare}
+        />
+      ) : null}
+
+      {showComparison ? (
+        <div ref={comparisonRef} className="tc-comparison-anchor">
+          <CandidateComparison
+            compared={compared}
+            frequencies={frequencies}
+            targetTransmissibility={targetTransmissibility}
+            onOpen={open}
+            onRemove={toggleCompare}
+            onClose={() => setComparing(false)}
+          />
+        </div>
       ) : null}
 
       <div className="tc-selection-body">
@@ -187,7 +253,7 @@ export const SelectionPanel = memo(function SelectionPanel({
             <CandidateDetail
               key={candidateKey(detailCandidate)}
               candidate={detailCandidate}
-              heading={selected ? `Candidate ${rows.find((r) => r.candidate === selected)?.rank ?? ''}` : 'Chosen mounts'}
+              heading={selected ? `Candidate ${byKey.get(selectedKey!)?.rank ?? ''}` : 'Chosen mounts'}
               referenceMassKg={referenceMass}
               liveMassKg={liveMassKg}
               frequencies={frequencies}

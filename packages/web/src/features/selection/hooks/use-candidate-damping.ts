@@ -36,25 +36,43 @@ function sameDamping(a: Damping | undefined, b: Damping | undefined): boolean {
   return JSON.stringify(a) === JSON.stringify(b);
 }
 
+const UNKNOWN: CandidateDampingState = { damping: undefined, source: 'unknown', varies: false, description: null };
+const LOADING: CandidateDampingState = { damping: undefined, source: 'loading', varies: false, description: null };
+
+/** A candidate's damping from the catalog rows of its parts (by mount id); undefined = not read yet. */
+export function candidateDamping(candidate: Candidate, rows: ReadonlyMap<number, MountDampingData | undefined>): CandidateDampingState {
+  const ids = [...new Set(candidate.perPoint.map((p) => p.mountId))];
+  const dampings = ids.map((id) => {
+    const row = rows.get(id);
+    return row ? mountDamping(row) : undefined;
+  });
+  const first = dampings[0];
+  if (!first) return UNKNOWN;
+  const varies = dampings.some((d) => !sameDamping(d, first));
+  return { damping: first, source: 'catalog', varies, description: describeDamping(first) };
+}
+
 /**
- * The damping of a candidate's mounts, read from the catalog rows of its parts (a candidate
- * carries none). Unknown (catalog unreachable) → undamped.
+ * The damping of several candidates' mounts, read from the catalog rows of their parts (a
+ * candidate carries none) in one set of requests. Unknown (catalog unreachable) → undamped.
  */
-export function useCandidateDamping(candidate: Candidate | null): CandidateDampingState {
-  const mountIds = useMemo(() => (candidate ? [...new Set(candidate.perPoint.map((p) => p.mountId))] : []), [candidate]);
+export function useCandidatesDamping(candidates: readonly Candidate[]): CandidateDampingState[] {
+  const mountIds = useMemo(() => [...new Set(candidates.flatMap((c) => c.perPoint.map((p) => p.mountId)))], [candidates]);
   const mounts = useMounts(mountIds, mountIds.length > 0);
-  const loaded = mounts.map((m) => m.data);
   const loading = mounts.some((m) => m.isPending);
+  const loaded = mounts.map((m) => m.data);
   const key = JSON.stringify(loaded);
 
-  return useMemo<CandidateDampingState>(() => {
-    if (!candidate) return { damping: undefined, source: 'unknown', varies: false, description: null };
-    if (loading) return { damping: undefined, source: 'loading', varies: false, description: null };
-    const dampings = loaded.map((m) => (m ? mountDamping(m) : undefined));
-    const first = dampings[0];
-    if (!first) return { damping: undefined, source: 'unknown', varies: false, description: null };
-    const varies = dampings.some((d) => !sameDamping(d, first));
-    return { damping: first, source: 'catalog', varies, description: describeDamping(first) };
+  return useMemo<CandidateDampingState[]>(() => {
+    if (loading) return candidates.map(() => LOADING);
+    const rows = new Map(mountIds.map((id, i) => [id, loaded[i]]));
+    return candidates.map((candidate) => candidateDamping(candidate, rows));
     // eslint-disable-next-line react-hooks/exhaustive-deps -- `key` stands for `loaded`, a new array every render
-  }, [candidate, loading, key]);
+  }, [candidates, mountIds, loading, key]);
+}
+
+/** The damping of one candidate's mounts (see useCandidatesDamping). */
+export function useCandidateDamping(candidate: Candidate | null): CandidateDampingState {
+  const list = useMemo(() => (candidate ? [candidate] : []), [candidate]);
+  return useCandidatesDamping(list)[0] ?? UNKNOWN;
 }

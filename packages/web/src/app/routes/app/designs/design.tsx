@@ -88,6 +88,7 @@ export function Component() {
             designId={context.design.id}
             savedInput={context.design.input}
             chosen={context.design.chosen}
+            stored={context.design.lastSelection}
             liveMassKg={context.figures.mass?.massKg ?? null}
             frequencies={context.figures.frequencies}
             targetTransmissibility={context.figures.targetTransmissibility}
@@ -97,6 +98,7 @@ export function Component() {
             saveIfNeeded={context.saveIfNeeded}
             choose={context.choose}
             choosing={context.choosing}
+            onRun={() => void queryClient.invalidateQueries({ queryKey: designQueryKey(context.design.id) })}
           />
         )}
       />
