@@ -762,6 +762,16 @@ export interface components {
        */
       heightMm?: number | null;
       /**
+       * @description Horizontal restraint rating (strength level), N: the horizontal force the restraint carries in any direction
+       * @example 9000
+       */
+      restraintCapacityN?: number | null;
+      /**
+       * @description Uplift rating (strength level), N: the upward pull the restraint carries
+       * @example 4500
+       */
+      upliftCapacityN?: number | null;
+      /**
        * @description Price of one mount in `currency`
        * @example 48.2
        */
@@ -975,6 +985,8 @@ export interface components {
       tempMinC: number | null;
       tempMaxC: number | null;
       heightMm: number | null;
+      restraintCapacityN: number | null;
+      upliftCapacityN: number | null;
       unitPrice: number | null;
       currency: string;
       leadTimeDays: number | null;
@@ -1119,6 +1131,10 @@ export interface components {
       tempMaxC: number | null;
       /** @description Free height, mm */
       heightMm: number | null;
+      /** @description Horizontal restraint rating (strength level), N; null where the supplier gives none */
+      restraintCapacityN: number | null;
+      /** @description Uplift rating (strength level), N; null where the supplier gives none */
+      upliftCapacityN: number | null;
       /** @description Price of one mount in `currency` */
       unitPrice: number | null;
       /** @example USD */
@@ -1543,6 +1559,16 @@ export interface components {
        * @example 120
        */
       heightMm?: number | null;
+      /**
+       * @description Horizontal restraint rating (strength level), N: the horizontal force the restraint carries in any direction
+       * @example 9000
+       */
+      restraintCapacityN?: number | null;
+      /**
+       * @description Uplift rating (strength level), N: the upward pull the restraint carries
+       * @example 4500
+       */
+      upliftCapacityN?: number | null;
       /**
        * @description Price of one mount in `currency`
        * @example 48.2
