@@ -5,6 +5,7 @@ import type { Design } from '../designs/design.entity.js';
 import type { LabelledFrequency, MountSnapshot } from '../selection/selection.types.js';
 import type { Verification } from '../verifications/verification.entity.js';
 import { bomTotals } from './bom-export.js';
+import { restraintReportLines } from './report-restraint.js';
 
 /** The caution every report carries (PRODUCT.md, "Cautions the product shows"). */
 export const REPORT_CAUTION =
@@ -47,8 +48,9 @@ export interface ReportOptions {
 
 /**
  * The calculation report of one design: identity and sign-off, cautions, equipment, mount
- * points and loads, the chosen mounts' figures at every disturbing frequency, rigid-body modes
- * and the bill of materials. Drafts carry a diagonal DRAFT watermark on every page.
+ * points and loads, the chosen mounts' figures at every disturbing frequency, rigid-body modes,
+ * the seismic restraint check when the design asks for one, and the bill of materials. Drafts
+ * carry a diagonal DRAFT watermark on every page.
  */
 export function designReportPdf(design: Design, options: ReportOptions): Promise<Buffer> {
   const fonts = reportFonts();
@@ -179,6 +181,11 @@ export function designReportPdf(design: Design, options: ReportOptions): Promise
       heading('Checks not met');
       for (const reason of candidate.reasons) body(`• ${reason}`);
     }
+  }
+  if (design.input.restraint) {
+    const section = restraintReportLines(design.input.restraint, candidate?.restraint);
+    heading(section.heading);
+    for (const paragraph of section.paragraphs) body(paragraph);
   }
   if (options.verifications?.length) asBuiltSection(doc, options.verifications, heading, body);
 
