@@ -1,6 +1,6 @@
 import { DataSource } from 'typeorm';
 import { databaseOptions } from '../config/database.config.js';
-import { MountRestraintRatings1765200000000 } from '../database/migrations/1765200000000-mount-restraint-ratings.js';
+import { MountRestraintRatings1765300000000 } from '../database/migrations/1765300000000-mount-restraint-ratings.js';
 import { MIGRATIONS } from '../database/migrations/index.js';
 
 describe('MountRestraintRatings migration', () => {
@@ -13,8 +13,8 @@ describe('MountRestraintRatings migration', () => {
       statements.push(sql);
       return [];
     };
-    await new MountRestraintRatings1765200000000().up(queryRunner);
-    await new MountRestraintRatings1765200000000().down(queryRunner);
+    await new MountRestraintRatings1765300000000().up(queryRunner);
+    await new MountRestraintRatings1765300000000().down(queryRunner);
     expect(statements).toEqual([
       'ALTER TABLE "mount" ADD "restraintCapacityN" double precision',
       'ALTER TABLE "mount" ADD "upliftCapacityN" double precision',
@@ -24,7 +24,7 @@ describe('MountRestraintRatings migration', () => {
   });
 
   it('keeps the existing mounts (with no ratings) on SQLite, where the table is rebuilt, and back again', async () => {
-    const before = MIGRATIONS.slice(0, MIGRATIONS.indexOf(MountRestraintRatings1765200000000));
+    const before = MIGRATIONS.slice(0, MIGRATIONS.indexOf(MountRestraintRatings1765300000000));
     const dataSource = new DataSource({ ...databaseOptions({ dataDir: '.' }), database: ':memory:', migrations: before } as never);
     await dataSource.initialize();
     const queryRunner = dataSource.createQueryRunner();
@@ -33,7 +33,7 @@ describe('MountRestraintRatings migration', () => {
       await dataSource.query(
         `INSERT INTO "mount" ("supplierId", "partNumber", "mountType", "ratedLoadN", "verticalStiffnessNPerM", "dampingRatio") VALUES (1, 'VM-1', 'restrained_spring', 2400, 72500, 0.01)`,
       );
-      await new MountRestraintRatings1765200000000().up(queryRunner);
+      await new MountRestraintRatings1765300000000().up(queryRunner);
       expect(await dataSource.query(`SELECT "partNumber", "ratedLoadN", "restraintCapacityN", "upliftCapacityN" FROM "mount"`)).toEqual([
         { partNumber: 'VM-1', ratedLoadN: 2400, restraintCapacityN: null, upliftCapacityN: null },
       ]);
@@ -45,7 +45,7 @@ describe('MountRestraintRatings migration', () => {
         'IDX_mount_type',
       ]);
       expect(table?.checks.map((check) => check.name)).toEqual(['CHK_mount_damping']);
-      await new MountRestraintRatings1765200000000().down(queryRunner);
+      await new MountRestraintRatings1765300000000().down(queryRunner);
       expect(await dataSource.query(`SELECT "partNumber", "ratedLoadN" FROM "mount"`)).toEqual([{ partNumber: 'VM-1', ratedLoadN: 2400 }]);
     } finally {
       await queryRunner.release();

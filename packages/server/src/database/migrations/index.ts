@@ -5,7 +5,7 @@ import { MountSelectionIndex1764849600000 } from './1764849600000-mount-selectio
 import { CreateReviewPurchasing1764892800000 } from './1764892800000-create-review-purchasing.js';
 import { CreateCatalogRevision1764979200000 } from './1764979200000-create-catalog-revision.js';
 import { CreateDesignVerification1765100000000 } from './1765100000000-create-design-verification.js';
-import { MountRestraintRatings1765200000000 } from './1765200000000-mount-restraint-ratings.js';
+import { MountRestraintRatings1765300000000 } from './1765300000000-mount-restraint-ratings.js';
 
 /** Every migration, oldest first. A new migration is imported and appended here. */
 export const MIGRATIONS = [
@@ -16,5 +16,5 @@ export const MIGRATIONS = [
   CreateReviewPurchasing1764892800000,
   CreateCatalogRevision1764979200000,
   CreateDesignVerification1765100000000,
-  MountRestraintRatings1765200000000,
+  MountRestraintRatings1765300000000,
 ];

@@ -14,8 +14,8 @@ const RATINGS: TableColumnOptions[] = [
  * passed); PostgreSQL adds it in place and needs only the name, given as a Table object so that
  * the statements also compile without a connection (migrations.spec.ts).
  */
-export class MountRestraintRatings1765200000000 implements MigrationInterface {
-  name = 'MountRestraintRatings1765200000000';
+export class MountRestraintRatings1765300000000 implements MigrationInterface {
+  name = 'MountRestraintRatings1765300000000';
 
   async up(queryRunner: QueryRunner): Promise<void> {
     await queryRunner.addColumns(
