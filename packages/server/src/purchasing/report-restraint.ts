@@ -46,7 +46,9 @@ export function restraintReportLines(restraint: RestraintInput, figures: Candida
       `gap to the restraints ${restraint.snubberGapMm === undefined || restraint.snubberGapMm === null ? 'not specified' : `${num(restraint.snubberGapMm, 1)} mm`}.`,
   );
   if (!figures) {
-    paragraphs.push('The chosen mounts were evaluated without the restraint check: run the selection again and choose the mounts to record the figures.');
+    paragraphs.push(
+      'The chosen mounts were evaluated without the restraint check: run the selection again and choose the mounts to record the figures.',
+    );
     paragraphs.push(SEISMIC_RESTRAINT_CAUTION);
     return { heading: `Seismic restraint (${SEISMIC_CODE_EDITION})`, paragraphs };
   }

@@ -84,7 +84,10 @@ describe('design form values', () => {
     values.restraint = { ...values.restraint, sdsG: 'lots', zOverH: '3' };
     expect(errorsOf(values)).toEqual({});
     values.restraint.enabled = true;
-    expect(errorsOf(values)).toMatchObject({ 'restraint.sdsG': 'S_DS must be a number', 'restraint.zOverH': 'z/h is from 0 (grade) to 1 (roof)' });
+    expect(errorsOf(values)).toMatchObject({
+      'restraint.sdsG': 'S_DS must be a number',
+      'restraint.zOverH': 'z/h is from 0 (grade) to 1 (roof)',
+    });
     values.restraint = { ...values.restraint, sdsG: '150', zOverH: '0', rp: '20', snubberGap: '-1' };
     expect(errorsOf(values)).toEqual({
       'restraint.sdsG': 'S_DS must be at most 4 g: give it in g, not in %',

@@ -482,9 +482,18 @@ function restraintSchema(units: Units) {
       'Enter S_DS, in g',
     ),
     importanceFactor: yup.string().oneOf(['1', '1.5'], 'The importance factor I_p is 1.0 or 1.5').required(),
-    zOverH: whenOn(number('z/h').min(0, 'z/h is from 0 (grade) to 1 (roof)').max(1, 'z/h is from 0 (grade) to 1 (roof)'), 'Enter z/h, from 0 to 1'),
-    ap: whenOn(number('a_p').min(R.ap.min, `a_p is from ${R.ap.min} to ${R.ap.max}`).max(R.ap.max, `a_p is from ${R.ap.min} to ${R.ap.max}`), null),
-    rp: whenOn(number('R_p').min(R.rp.min, `R_p is from ${R.rp.min} to ${R.rp.max}`).max(R.rp.max, `R_p is from ${R.rp.min} to ${R.rp.max}`), null),
+    zOverH: whenOn(
+      number('z/h').min(0, 'z/h is from 0 (grade) to 1 (roof)').max(1, 'z/h is from 0 (grade) to 1 (roof)'),
+      'Enter z/h, from 0 to 1',
+    ),
+    ap: whenOn(
+      number('a_p').min(R.ap.min, `a_p is from ${R.ap.min} to ${R.ap.max}`).max(R.ap.max, `a_p is from ${R.ap.min} to ${R.ap.max}`),
+      null,
+    ),
+    rp: whenOn(
+      number('R_p').min(R.rp.min, `R_p is from ${R.rp.min} to ${R.rp.max}`).max(R.rp.max, `R_p is from ${R.rp.min} to ${R.rp.max}`),
+      null,
+    ),
     snubberGap: whenOn(
       number('The gap')
         .min(0, 'The gap cannot be negative')

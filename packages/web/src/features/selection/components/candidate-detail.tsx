@@ -9,6 +9,7 @@ import type { Candidate, ModeName } from '@/types/design-api';
 
 import { useCandidateDamping } from '../hooks/use-candidate-damping';
 import { CandidateCharts } from './candidate-charts';
+import { CandidateRestraintSection, type RestraintPlanLayout } from './candidate-restraint';
 import {
   formatDays,
   formatFrequency,
@@ -54,6 +55,8 @@ export interface CandidateDetailProps {
   chooseBlockedReason: string | null;
   choosing: boolean;
   onChoose: () => void;
+  /** Mount points and CG in plan (of the input the candidate was computed from), for the restraint plan. */
+  restraintLayout?: RestraintPlanLayout | null;
 }
 
 const SAME_MASS_TOLERANCE = 1e-9;
@@ -71,6 +74,7 @@ export function CandidateDetail({
   chooseBlockedReason,
   choosing,
   onChoose,
+  restraintLayout = null,
 }: CandidateDetailProps) {
   const units = useUnits();
   const damping = useCandidateDamping(candidate);
@@ -201,6 +205,8 @@ export function CandidateDetail({
           ))}
         </tbody>
       </HTMLTable>
+
+      {candidate.restraint ? <CandidateRestraintSection restraint={candidate.restraint} layout={restraintLayout} /> : null}
 
       <h4 className="tc-subsection-title">Isolation at each disturbing frequency</h4>
       <HTMLTable compact striped className="tc-table" aria-label="Isolation per frequency">
