@@ -81,8 +81,9 @@ describe('seismic restraint', () => {
     await screenshot(page, 'restraint-02-candidate');
 
     // Further down, mounts without restraint ratings fail and say why.
-    const failing = page.locator('tr', { has: page.locator('.tc-verdict--fail') }).locator('.tc-candidate-open').first();
-    await failing.click();
+    await page.getByLabel('Sort by').selectOption('verdict');
+    await page.getByRole('button', { name: 'Ascending' }).click();
+    await page.locator('.tc-cell-failing .tc-candidate-open').first().click();
     await page.getByTestId('candidate-reasons').getByText(/has no horizontal restraint rating/).first().waitFor();
     await page.getByRole('region', { name: 'Seismic restraint' }).getByText('no rating').first().waitFor();
     await screenshot(page, 'restraint-03-unrated');
