@@ -200,6 +200,22 @@ export interface paths {
     patch?: never;
     trace?: never;
   };
+  "/api/designs/{id}/verifications": {
+    parameters: {
+      query?: never;
+      header?: never;
+      path?: never;
+      cookie?: never;
+    };
+    get: operations["VerificationsController_list"];
+    put?: never;
+    post: operations["VerificationsController_create"];
+    delete?: never;
+    options?: never;
+    head?: never;
+    patch?: never;
+    trace?: never;
+  };
   "/api/health": {
     parameters: {
       query?: never;
@@ -908,12 +924,26 @@ export interface components {
       name: string;
       revision: number;
       status: components["schemas"]["DesignStatus"];
+      author: components["schemas"]["UserRefDto"];
       /** Format: date-time */
       updatedAt: string;
-      author: components["schemas"]["UserRefDto"];
     };
     /** @enum {string} */
     DesignStatus: "draft" | "in_review" | "released" | "superseded";
+    FrequencyBandDto: {
+      /** @description Hz */
+      min: number;
+      /** @description Hz */
+      max: number;
+    };
+    /** @enum {string} */
+    FrfQuantity: "accelerance" | "mobility" | "receptance";
+    HalfPowerBandDto: {
+      /** @description Hz */
+      lower: number;
+      /** @description Hz */
+      upper: number;
+    };
     HealthDto: {
       /** @enum {string} */
       status: "ok";
@@ -927,6 +957,38 @@ export interface components {
       from: components["schemas"]["DesignStatus"] | null;
       to: components["schemas"]["DesignStatus"];
       comment: string | null;
+    };
+    /** @enum {string} */
+    IdentificationQuality: "good" | "fair";
+    IdentifiedFiguresDto: {
+      /** @description Undamped natural frequency fn = f_p/√(1 − 2ζ²), Hz */
+      naturalFrequencyHz: number;
+      /** @description ζ after the exponential-window correction; null when it could not be identified */
+      dampingRatio: number | null;
+      /** @description k = m·(2π·fn)² with the design mass, N/m (an apparent stiffness) */
+      stiffnessNPerM: number;
+      /** @description Receptance peak, Hz */
+      peakFrequencyHz: number;
+      /** @description ζ from the half-power bandwidth before the window correction */
+      measuredDampingRatio: number | null;
+      /** @description Δζ = 1/(ωn·τ) taken off for the exponential window (0 without one) */
+      windowDampingCorrection: number;
+      halfPowerHz: components["schemas"]["HalfPowerBandDto"] | null;
+      /** @description Mean coherence γ² over the half-power band (averaged hits) */
+      meanCoherence: number | null;
+      quality: components["schemas"]["IdentificationQuality"];
+    };
+    ImpactProcessingDto: {
+      sampleRateHz: number;
+      hitsFound: number;
+      hitsAveraged: number;
+      hitTimesS: number[];
+      blockDurationS: number;
+      resolutionHz: number;
+      preTriggerS: number;
+      forceWindowS: number;
+      exponentialTimeConstantS: number | null;
+      usableBandHz: components["schemas"]["FrequencyBandDto"];
     };
     /** @enum {string} */
     ImportMode: "all_or_nothing" | "skip_invalid";
@@ -1059,6 +1121,15 @@ export interface components {
       /** @description JWT for `Authorization: Bearer <token>`; valid for 12 hours */
       accessToken: string;
       user: components["schemas"]["SignedInUserDto"];
+    };
+    MeasuredCurveDto: {
+      quantity: components["schemas"]["FrfQuantity"];
+      frequencyHz: number[];
+      /** @description in SI units of the quantity */
+      magnitude: number[];
+      phaseDeg: number[];
+      /** @description γ² per point (averaged hits), null otherwise */
+      coherence: number[] | null;
     };
     MountDto: {
       /** @example 42 */
@@ -1231,6 +1302,30 @@ export interface components {
       receivedAt: string;
       attachments: components["schemas"]["OutboxAttachmentDto"][];
     };
+    PredictedDampingDto: {
+      model: components["schemas"]["DampingModel"];
+      /** @description ζ (viscous) or η (hysteretic) */
+      value: number;
+    };
+    PredictedFiguresDto: {
+      /** @description The design mode nearest the measured one, Hz */
+      naturalFrequencyHz: number;
+      /**
+       * @description The mode: its dominant motion (surge, sway, bounce, roll, pitch, yaw)
+       * @example bounce
+       */
+      mode: string;
+      coupled: boolean;
+      source: components["schemas"]["PredictionSource"];
+      /** @description Design mass, kg */
+      massKg: number;
+      /** @description m·(2π·f)² for the predicted mode, N/m */
+      stiffnessNPerM: number;
+      /** @description The chosen mounts’ catalog damping */
+      damping: components["schemas"]["PredictedDampingDto"] | null;
+    };
+    /** @enum {string} */
+    PredictionSource: "rigid-body modes" | "bounce estimate";
     ProjectDto: {
       id: number;
       name: string;
@@ -1486,6 +1581,23 @@ export interface components {
       id: number;
       name: string;
     };
+    TapTestProblemDto: {
+      /** @example 7 */
+      row: number;
+      /**
+       * @description The column as the file names it; empty for the whole row or file
+       * @example frequency_hz
+       */
+      column: string;
+      /** @example frequencies must increase: 5.2 Hz follows 5.3 Hz */
+      message: string;
+    };
+    TapTestRejectedDto: {
+      /** @example 422 */
+      statusCode: number;
+      message: string;
+      errors: components["schemas"]["TapTestProblemDto"][];
+    };
     TransitionDto: {
       to: components["schemas"]["TransitionTarget"];
       /** @description Required when a design in review goes back to draft */
@@ -1496,9 +1608,10 @@ export interface components {
     /** @enum {string} */
     UnitSystem: "SI" | "US";
     UpdateDesignDto: {
+      /** @example CHW pump P-2 skid */
+      name?: string;
       /** @example 3 */
       version: number;
-      name?: string;
       input?: components["schemas"]["DesignInputDto"];
       /** @description a uniform candidate (one part number at every point) */
       chosenMountId?: number | null;
@@ -1607,10 +1720,12 @@ export interface components {
       active?: boolean;
     };
     UpdateProfileDto: {
+      /** @example New Person */
       name?: string;
       unitSystem?: components["schemas"]["UnitSystem"];
     };
     UpdateProjectDto: {
+      /** @example North Loop Chilled Water Plant */
       name?: string;
       site?: string | null;
       client?: string | null;
@@ -1629,14 +1744,24 @@ export interface components {
       note?: string;
     };
     UpdateSupplierDto: {
+      /**
+       * @description Unique regardless of case and spacing
+       * @example Quillmere Isolation
+       */
       name?: string;
+      /**
+       * @description Where requests for quotation go
+       * @example quotes@quillmere.example
+       */
       contactEmail?: string | null;
+      /** @example +1 555 0101 */
       phone?: string | null;
       notes?: string | null;
       /** @description false retires the supplier: its mounts leave searches and the export */
       active?: boolean;
     };
     UpdateUserDto: {
+      /** @example New Person */
       name?: string;
       role?: components["schemas"]["Role"];
       active?: boolean;
@@ -1678,6 +1803,38 @@ export interface components {
        */
       z: number;
     };
+    VerificationDto: {
+      id: number;
+      designId: number;
+      kind: components["schemas"]["VerificationKind"];
+      quantity: components["schemas"]["FrfQuantity"];
+      fileName: string;
+      note: string | null;
+      /** @description Who uploaded it */
+      measuredBy: components["schemas"]["UserRefDto"];
+      /** Format: date-time */
+      createdAt: string;
+      /** @description % */
+      tolerancePct: number;
+      identified: components["schemas"]["IdentifiedFiguresDto"];
+      predicted: components["schemas"]["PredictedFiguresDto"];
+      /** @description (measured − predicted)/predicted × 100, % */
+      deviationPct: number;
+      /** @description ((measured/predicted)² − 1) × 100 at the same mass, % */
+      stiffnessDeviationPct: number;
+      verdict: components["schemas"]["VerificationVerdict"];
+      /** @description The verdict in words, likely causes, remarks */
+      notes: string[];
+      /** @description What makes the measurement doubtful (clipping, double hits, short record, low coherence…) */
+      warnings: string[];
+      /** @description How a raw record was processed; null for an FRF file */
+      processing: components["schemas"]["ImpactProcessingDto"] | null;
+      measured: components["schemas"]["MeasuredCurveDto"];
+    };
+    /** @enum {string} */
+    VerificationKind: "frf" | "impact";
+    /** @enum {string} */
+    VerificationVerdict: "agrees" | "stiffer" | "softer";
   };
   responses: never;
   parameters: never;
@@ -2124,6 +2281,100 @@ export interface operations {
           [name: string]: unknown;
         };
         content?: never;
+      };
+    };
+  };
+  VerificationsController_list: {
+    parameters: {
+      query?: never;
+      header?: never;
+      path: {
+        id: number;
+      };
+      cookie?: never;
+    };
+    requestBody?: never;
+    responses: {
+      /** @description Every measurement of the design, newest first */
+      200: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          "application/json": components["schemas"]["VerificationDto"][];
+        };
+      };
+    };
+  };
+  VerificationsController_create: {
+    parameters: {
+      query?: never;
+      header?: never;
+      path: {
+        id: number;
+      };
+      cookie?: never;
+    };
+    requestBody: {
+      content: {
+        "multipart/form-data": {
+          /**
+           * Format: binary
+           * @description CSV: frequency_hz,real,imag or frequency_hz,magnitude,phase_deg (kind=frf); time_s,force_n,acceleration_m_s2 (kind=impact)
+           */
+          file: string;
+          /** @enum {string} */
+          kind: "frf" | "impact";
+          /**
+           * @description Required for kind=frf (SI units)
+           * @enum {string}
+           */
+          quantity?: "accelerance" | "mobility" | "receptance";
+          /** @default 10 */
+          tolerancePct?: number;
+          note?: string;
+        };
+      };
+    };
+    responses: {
+      /** @description Analysed and recorded */
+      201: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          "application/json": components["schemas"]["VerificationDto"];
+        };
+      };
+      /** @description No file, or bad fields */
+      400: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content?: never;
+      };
+      /** @description The design is not released or superseded */
+      409: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content?: never;
+      };
+      /** @description The file is larger than 10 MB */
+      413: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content?: never;
+      };
+      /** @description Nothing stored: the file has problems, or no resonance can be identified */
+      422: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          "application/json": components["schemas"]["TapTestRejectedDto"];
+        };
       };
     };
   };
@@ -3089,15 +3340,20 @@ type ReadonlyArray<T> = [
 ] extends [
   unknown[]
 ] ? Readonly<Exclude<T, undefined>> : Readonly<Exclude<T, undefined>[]>;
+export const pathsApiDesignsIdVerificationsPostRequestBodyContentMultipartFormDataKindValues: ReadonlyArray<FlattenedDeepRequired<paths>["/api/designs/{id}/verifications"]["post"]["requestBody"]["content"]["multipart/form-data"]["kind"]> = ["frf", "impact"];
+export const pathsApiDesignsIdVerificationsPostRequestBodyContentMultipartFormDataQuantityValues: ReadonlyArray<FlattenedDeepRequired<paths>["/api/designs/{id}/verifications"]["post"]["requestBody"]["content"]["multipart/form-data"]["quantity"]> = ["accelerance", "mobility", "receptance"];
 export const candidateKindValues: ReadonlyArray<FlattenedDeepRequired<components>["schemas"]["CandidateKind"]> = ["uniform", "series"];
 export const dampingModelValues: ReadonlyArray<FlattenedDeepRequired<components>["schemas"]["DampingModel"]> = ["viscous", "hysteretic"];
 export const designStatusValues: ReadonlyArray<FlattenedDeepRequired<components>["schemas"]["DesignStatus"]> = ["draft", "in_review", "released", "superseded"];
+export const frfQuantityValues: ReadonlyArray<FlattenedDeepRequired<components>["schemas"]["FrfQuantity"]> = ["accelerance", "mobility", "receptance"];
 export const healthDtoStatusValues: ReadonlyArray<FlattenedDeepRequired<components>["schemas"]["HealthDto"]["status"]> = ["ok"];
+export const identificationQualityValues: ReadonlyArray<FlattenedDeepRequired<components>["schemas"]["IdentificationQuality"]> = ["good", "fair"];
 export const importModeValues: ReadonlyArray<FlattenedDeepRequired<components>["schemas"]["ImportMode"]> = ["all_or_nothing", "skip_invalid"];
 export const importOnInvalidValues: ReadonlyArray<FlattenedDeepRequired<components>["schemas"]["ImportOnInvalid"]> = ["refuse", "skip"];
 export const importRowActionValues: ReadonlyArray<FlattenedDeepRequired<components>["schemas"]["ImportRowAction"]> = ["create", "update"];
 export const importanceFactorValues: ReadonlyArray<FlattenedDeepRequired<components>["schemas"]["ImportanceFactor"]> = [1, 1.5];
 export const mountTypeValues: ReadonlyArray<FlattenedDeepRequired<components>["schemas"]["MountType"]> = ["elastomer_pad", "elastomer_mount", "open_spring", "housed_spring", "restrained_spring", "air_spring", "wire_rope"];
+export const predictionSourceValues: ReadonlyArray<FlattenedDeepRequired<components>["schemas"]["PredictionSource"]> = ["rigid-body modes", "bounce estimate"];
 export const restraintCheckKindValues: ReadonlyArray<FlattenedDeepRequired<components>["schemas"]["RestraintCheckKind"]> = ["shear", "tension"];
 export const rfqProgressStatusValues: ReadonlyArray<FlattenedDeepRequired<components>["schemas"]["RfqProgressStatus"]> = ["quoted", "ordered", "received"];
 export const rfqStatusValues: ReadonlyArray<FlattenedDeepRequired<components>["schemas"]["RfqStatus"]> = ["requested", "quoted", "ordered", "received", "failed"];
@@ -3106,3 +3362,5 @@ export const roleValues: ReadonlyArray<FlattenedDeepRequired<components>["schema
 export const seismicForceLimitValues: ReadonlyArray<FlattenedDeepRequired<components>["schemas"]["SeismicForceLimit"]> = ["formula", "minimum", "maximum"];
 export const transitionTargetValues: ReadonlyArray<FlattenedDeepRequired<components>["schemas"]["TransitionTarget"]> = ["in_review", "draft", "released"];
 export const unitSystemValues: ReadonlyArray<FlattenedDeepRequired<components>["schemas"]["UnitSystem"]> = ["SI", "US"];
+export const verificationKindValues: ReadonlyArray<FlattenedDeepRequired<components>["schemas"]["VerificationKind"]> = ["frf", "impact"];
+export const verificationVerdictValues: ReadonlyArray<FlattenedDeepRequired<components>["schemas"]["VerificationVerdict"]> = ["agrees", "stiffer", "softer"];
