@@ -84,7 +84,11 @@ describe('seismic restraint', () => {
     await page.getByLabel('Sort by').selectOption('verdict');
     await page.getByRole('button', { name: 'Ascending' }).click();
     await page.locator('.tc-cell-failing .tc-candidate-open').first().click();
-    await page.getByTestId('candidate-reasons').getByText(/has no horizontal restraint rating/).first().waitFor();
+    await page
+      .getByTestId('candidate-reasons')
+      .getByText(/has no horizontal restraint rating/)
+      .first()
+      .waitFor();
     await page.getByRole('region', { name: 'Seismic restraint' }).getByText('no rating').first().waitFor();
     await screenshot(page, 'restraint-03-unrated');
     await page.context().close();

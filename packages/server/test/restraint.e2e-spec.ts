@@ -161,7 +161,12 @@ describe('seismic restraint in the selection (e2e)', () => {
 
   it('a design with restraint keeps its figures when the mounts are chosen, and the report has the restraint section', async () => {
     const auth = { Authorization: `Bearer ${engineer}` };
-    const project = await t.http().post('/api/projects').set(auth).send({ name: `Restraint project ${process.pid}` }).expect(201);
+    const project = await t
+      .http()
+      .post('/api/projects')
+      .set(auth)
+      .send({ name: `Restraint project ${process.pid}` })
+      .expect(201);
     const input = {
       components: CV14_SKID,
       mountPoints: CORNERS,
@@ -169,7 +174,12 @@ describe('seismic restraint in the selection (e2e)', () => {
       criteria: { minIsolationPct: 80, minUtilization: 0.5, maxUtilization: 1.0, supplierIds: [supplier.id] },
       restraint: RESTRAINT,
     };
-    const design = await t.http().post(`/api/projects/${project.body.id}/designs`).set(auth).send({ name: 'Restrained skid', input }).expect(201);
+    const design = await t
+      .http()
+      .post(`/api/projects/${project.body.id}/designs`)
+      .set(auth)
+      .send({ name: 'Restrained skid', input })
+      .expect(201);
     expect(design.body.input.restraint).toEqual(RESTRAINT);
     const run = await t.http().post(`/api/designs/${design.body.id}/selection`).set(auth).send({}).expect(200);
     expect((run.body.candidates as Candidate[])[0]!.restraint).toBeDefined();

@@ -175,7 +175,11 @@ export const MOUNT_FIELDS = {
     required: false,
     nullable: true,
   },
-  upliftCapacityN: { ...positive('Uplift rating (strength level), N: the upward pull the restraint carries', 4500), required: false, nullable: true },
+  upliftCapacityN: {
+    ...positive('Uplift rating (strength level), N: the upward pull the restraint carries', 4500),
+    required: false,
+    nullable: true,
+  },
   unitPrice: {
     api: { type: Number, description: 'Price of one mount in `currency`', example: 48.2, minimum: 0 },
     rules: () => [finite(), Min(0)],
