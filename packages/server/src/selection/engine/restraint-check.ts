@@ -32,7 +32,7 @@ export class RestraintCheck implements FinalistCheck {
     private readonly problem: SelectionProblem,
     rows: readonly CatalogTuple[],
   ) {
-    const R = store.rowCount;
+    const R = problem.restraint ? store.rowCount : 0;
     this.restraintCapacityN = new Float64Array(R).fill(Number.NaN);
     this.upliftCapacityN = new Float64Array(R).fill(Number.NaN);
     if (!problem.restraint) return;
