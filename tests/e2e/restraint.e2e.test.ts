@@ -1,6 +1,7 @@
 import type { Browser, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { launch, newPage, outsideRequests, screenshot, signIn } from './browser';
+import { join } from 'node:path';
+import { launch, newPage, outsideRequests, SCREENSHOT_DIR, screenshot, signIn } from './browser';
 
 // A new design in the demo project, checked for seismic restraint (ASCE 7-16 §13.3.1). The demo
 // catalog gives (invented) restraint ratings to its restrained springs and to some housed springs.
@@ -58,7 +59,7 @@ describe('seismic restraint', () => {
     // A gap above 0.25 in doubles the force (Table 13.6-1 footnote).
     await page.getByLabel('Gap to the restraints').fill('10');
     await page.getByText(/doubled: the gap exceeds 0.25 in/).waitFor();
-    expect(await text(page, 'restraint-design-force')).toContain('17,653 N (1.80 × W)');
+    expect(await text(page, 'restraint-design-force')).toContain('17,652 N (1.80 × W)');
     await page.getByLabel('Gap to the restraints').fill('5');
 
     await page.getByRole('tab', { name: 'Mount selection' }).click();
@@ -77,8 +78,8 @@ describe('seismic restraint', () => {
     expect(governing).toMatch(/^(horizontal restraint|uplift) at point [ABCD]: /);
     const arrow = section.getByTestId('restraint-arrow');
     await arrow.waitFor();
-    await section.scrollIntoViewIfNeeded();
-    await screenshot(page, 'restraint-02-candidate');
+    await shot(page, 'restraint-02-candidate');
+    await section.screenshot({ path: join(SCREENSHOT_DIR, 'restraint-02b-candidate-section.png') });
 
     // Further down, mounts without restraint ratings fail and say why.
     await page.getByLabel('Sort by').selectOption('verdict');
@@ -89,8 +90,9 @@ describe('seismic restraint', () => {
       .getByText(/has no horizontal restraint rating/)
       .first()
       .waitFor();
-    await page.getByRole('region', { name: 'Seismic restraint' }).getByText('no rating').first().waitFor();
-    await screenshot(page, 'restraint-03-unrated');
+    const unrated = page.getByRole('region', { name: 'Seismic restraint' });
+    await unrated.getByText('no rating').first().waitFor();
+    await unrated.screenshot({ path: join(SCREENSHOT_DIR, 'restraint-03-unrated-section.png') });
     await page.context().close();
   });
 

@@ -51,6 +51,12 @@ export function RestraintPlan({ layout, restraint }: { layout: RestraintPlanLayo
     };
   }, [layout]);
   const { px, py } = geometry;
+  // The outline joins the points around their centroid (input order may cross over itself).
+  const outline = useMemo(() => {
+    const cx = layout.points.reduce((sum, p) => sum + p.x, 0) / layout.points.length;
+    const cy = layout.points.reduce((sum, p) => sum + p.y, 0) / layout.points.length;
+    return [...layout.points].sort((a, b) => Math.atan2(a.y - cy, a.x - cx) - Math.atan2(b.y - cy, b.x - cx));
+  }, [layout]);
   const theta = (restraint.governing.directionDeg * Math.PI) / 180;
   const length = Math.min(WIDTH, HEIGHT) * 0.32;
   const x0 = px(layout.cg.x);
@@ -70,7 +76,7 @@ export function RestraintPlan({ layout, restraint }: { layout: RestraintPlanLayo
           <path d="M0,0 L10,5 L0,10 z" className="tc-restraint-arrowhead" />
         </marker>
       </defs>
-      <polygon points={layout.points.map((p) => `${px(p.x)},${py(p.y)}`).join(' ')} className="tc-restraint-outline" />
+      <polygon points={outline.map((p) => `${px(p.x)},${py(p.y)}`).join(' ')} className="tc-restraint-outline" />
       {layout.points.map((p) => (
         <g key={p.label} data-governing={p.label === governingLabel ? 'true' : undefined}>
           {p.label === governingLabel ? <circle cx={px(p.x)} cy={py(p.y)} r={11} className="tc-restraint-governing" /> : null}
@@ -116,69 +122,74 @@ export function RestraintPlan({ layout, restraint }: { layout: RestraintPlanLayo
 }
 
 function RestraintTable({ restraint, units }: { restraint: CandidateRestraint; units: Units }) {
-  const force = (n: number | null) => (n === null ? <span className="tc-muted">none</span> : units.format('force', n));
-  const over = (u: number | null, demand: number) => (demand > 0 && (u === null || u > 1) ? ' tc-text-danger' : '');
+  /** A rating with the share of it used, or why there is none. */
+  const rated = (capacityN: number | null, utilization: number | null, demandN: number) => {
+    if (capacityN === null) return <span className={demandN > 0 ? 'tc-text-danger' : 'tc-muted'}>none</span>;
+    const over = utilization !== null && utilization > 1;
+    return (
+      <>
+        {units.format('force', capacityN)}
+        {demandN > 0 ? <span className={over ? 'tc-text-danger' : 'tc-muted'}> · {percent(utilization)}</span> : null}
+      </>
+    );
+  };
   return (
-    <HTMLTable compact striped className="tc-table" aria-label="Restraint demand per point">
-      <thead>
-        <tr>
-          <th scope="col">Point</th>
-          <th scope="col">Part number</th>
-          <th scope="col" className="tc-number">
-            Horizontal force
-          </th>
-          <th scope="col" className="tc-number">
-            Restraint rating
-          </th>
-          <th scope="col" className="tc-number">
-            Use
-          </th>
-          <th scope="col" className="tc-number">
-            Uplift
-          </th>
-          <th scope="col" className="tc-number">
-            Uplift rating
-          </th>
-          <th scope="col" className="tc-number">
-            Use
-          </th>
-          <th scope="col" className="tc-number">
-            Compression
-          </th>
-          <th scope="col">Verdict</th>
-        </tr>
-      </thead>
-      <tbody>
-        {restraint.perPoint.map((p) => (
-          <tr key={p.label}>
-            <td>{p.label}</td>
-            <td>{p.partNumber}</td>
-            <td className="tc-number" title={`worst with the force at ${degrees(p.shearDirectionDeg)}`}>
-              {units.format('force', p.shearN)}
-            </td>
-            <td className="tc-number">{force(p.restraintCapacityN)}</td>
-            <td className={`tc-number${over(p.shearUtilization, p.shearN)}`}>{percent(p.shearUtilization)}</td>
-            <td className="tc-number" title={p.tensionN > 0 ? `worst with the force at ${degrees(p.tensionDirectionDeg)}` : undefined}>
-              {p.tensionN > 0 ? units.format('force', p.tensionN) : <span className="tc-muted">none</span>}
-            </td>
-            <td className="tc-number">{force(p.upliftCapacityN)}</td>
-            <td className={`tc-number${over(p.tensionUtilization, p.tensionN)}`}>{p.tensionN > 0 ? percent(p.tensionUtilization) : '—'}</td>
-            <td className="tc-number">{units.format('force', p.compressionN)}</td>
-            <td>
-              {p.passes ? (
-                <Tag minimal intent="success">
-                  within rating
-                </Tag>
-              ) : (
-                <Tag minimal intent="danger">
-                  {p.restraintCapacityN === null || (p.tensionN > 0 && p.upliftCapacityN === null) ? 'no rating' : 'over rating'}
-                </Tag>
-              )}
-            </td>
+    <div className="tc-table-scroll">
+      <HTMLTable compact striped className="tc-table" aria-label="Restraint demand per point">
+        <thead>
+          <tr>
+            <th scope="col">Point</th>
+            <th scope="col">Part number</th>
+            <th scope="col">Verdict</th>
+            <th scope="col" className="tc-number">
+              Horizontal force
+            </th>
+            <th scope="col" className="tc-number">
+              Restraint rating · use
+            </th>
+            <th scope="col" className="tc-number">
+              Uplift
+            </th>
+            <th scope="col" className="tc-number">
+              Uplift rating · use
+            </th>
+            <th scope="col" className="tc-number">
+              Compression
+            </th>
           </tr>
-        ))}
-      </tbody>
-    </HTMLTable>
+        </thead>
+        <tbody>
+          {restraint.perPoint.map((p) => (
+            <tr key={p.label}>
+              <td>{p.label}</td>
+              <td className="tc-nowrap">{p.partNumber}</td>
+              <td>
+                {p.passes ? (
+                  <Tag minimal intent="success">
+                    within rating
+                  </Tag>
+                ) : (
+                  <Tag minimal intent="danger">
+                    {p.restraintCapacityN === null || (p.tensionN > 0 && p.upliftCapacityN === null) ? 'no rating' : 'over rating'}
+                  </Tag>
+                )}
+              </td>
+              <td className="tc-number" title={`worst with the force at ${degrees(p.shearDirectionDeg)}`}>
+                {units.format('force', p.shearN)}
+              </td>
+              <td className="tc-number">{rated(p.restraintCapacityN, p.shearUtilization, p.shearN)}</td>
+              <td className="tc-number" title={p.tensionN > 0 ? `worst with the force at ${degrees(p.tensionDirectionDeg)}` : undefined}>
+                {p.tensionN > 0 ? units.format('force', p.tensionN) : <span className="tc-muted">none</span>}
+              </td>
+              <td className="tc-number">{rated(p.upliftCapacityN, p.tensionUtilization, p.tensionN)}</td>
+              <td className="tc-number" title={`worst with the force at ${degrees(p.compressionDirectionDeg)}`}>
+                {units.format('force', p.compressionN)}
+              </td>
+            </tr>
+          ))}
+        </tbody>
+      </HTMLTable>
+    </div>
   );
 }
 
