@@ -84,8 +84,8 @@ export function designReportPdf(design: Design, options: ReportOptions): Promise
     doc.x = x;
     doc.y = y;
   };
-  doc.on('pageAdded', watermark);
-  watermark();
+  // Drawn on every page at the end (pageFooters): text drawn from a 'pageAdded' handler while a
+  // paragraph wraps onto the new page narrowed the rest of that paragraph to a sliver.
 
   const heading = (text: string) => doc.moveDown(0.8).font('heading').fontSize(13).fillColor('black').text(text).moveDown(0.3);
   const body = (text: string) => doc.font('body').fontSize(10).fillColor('black').text(text);
@@ -217,7 +217,7 @@ export function designReportPdf(design: Design, options: ReportOptions): Promise
   heading('Cautions');
   body(REPORT_CAUTION);
 
-  pageFooters(doc, `${design.project.name} — ${design.name}, revision ${design.revision}`);
+  pageFooters(doc, `${design.project.name} — ${design.name}, revision ${design.revision}`, watermark);
   doc.end();
   return done;
 }
@@ -381,10 +381,11 @@ function transmissibilityChart(
 }
 
 /** "page i of n" and the design's identity at the foot of every page. */
-function pageFooters(doc: PDFKit.PDFDocument, identity: string): void {
+function pageFooters(doc: PDFKit.PDFDocument, identity: string, decorate: () => void): void {
   const range = doc.bufferedPageRange();
   for (let i = range.start; i < range.start + range.count; i++) {
     doc.switchToPage(i);
+    decorate();
     const bottom = doc.page.margins.bottom;
     doc.page.margins.bottom = 0; // writing inside the bottom margin must not open a new page
     doc.font('body').fontSize(8).fillColor('#555555');
