@@ -1,18 +1,12 @@
 import { DataSource } from 'typeorm';
+import { capturingPostgresQueryRunner } from '../../test/utils/postgres-sql-capture.js';
 import { databaseOptions } from '../config/database.config.js';
 import { MountRestraintRatings1765300000000 } from '../database/migrations/1765300000000-mount-restraint-ratings.js';
 import { MIGRATIONS } from '../database/migrations/index.js';
 
 describe('MountRestraintRatings migration', () => {
   it('compiles to PostgreSQL as two nullable columns added in place', async () => {
-    // The driver is built but never connected: every statement is captured instead of run.
-    const dataSource = new DataSource({ type: 'postgres', url: 'postgres://tacet@127.0.0.1:9/tacet' });
-    const queryRunner = dataSource.createQueryRunner();
-    const statements: string[] = [];
-    (queryRunner as unknown as { query: (sql: string) => Promise<unknown> }).query = async (sql: string) => {
-      statements.push(sql);
-      return [];
-    };
+    const { queryRunner, statements } = capturingPostgresQueryRunner();
     await new MountRestraintRatings1765300000000().up(queryRunner);
     await new MountRestraintRatings1765300000000().down(queryRunner);
     expect(statements).toEqual([
