@@ -44,7 +44,8 @@ async function baseline(csvPath: string, ddlPath: string, dbPath: string): Promi
   const insertMount = db.prepare(
     'INSERT INTO "mount" ("supplierId", "partNumber", "series", "mountType", "ratedLoadN", "verticalStiffnessNPerM", ' +
       '"horizontalStiffnessNPerM", "dynamicStiffnessRatio", "dampingRatio", "lossFactor", "maxDeflectionMm", "tempMinC", ' +
-      '"tempMaxC", "heightMm", "unitPrice", "currency", "leadTimeDays", "active") VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, 1)',
+      '"tempMaxC", "heightMm", "restraintCapacityN", "upliftCapacityN", "unitPrice", "currency", "leadTimeDays", "active") ' +
+      'VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, 1)',
   );
   const supplierIds = new Map<string, number>();
   const num = (text: string) => (text === '' ? null : Number(text));
@@ -74,8 +75,10 @@ async function baseline(csvPath: string, ddlPath: string, dbPath: string): Promi
       num(r[12]),
       num(r[13]),
       num(r[14]),
-      r[15] || 'USD',
+      num(r[15]),
       num(r[16]),
+      r[17] || 'USD',
+      num(r[18]),
     );
     rows++;
   }

@@ -11,6 +11,11 @@
  * undamped (ζ ≈ 0.005–0.03 with housing friction) with a dynamic-to-static stiffness ratio of 1.0;
  * elastomers with loss factors 0.1–0.25 and dynamic ratios 1.2–2.0; springs with about 50 % travel
  * beyond the rated deflection.
+ *
+ * Restraint ratings (horizontal and uplift, strength level) are invented too: every restrained-spring
+ * series has them (horizontal 1.0–2.0 × rated load, uplift 0.5–1.0 ×), and the housed springs of
+ * every other supplier (horizontal 0.4–0.8 ×, uplift 0.2–0.4 ×); the other mounts have none. They
+ * come from a PRNG of their own, so adding them left every other figure of the file as it was.
  */
 import { createWriteStream, mkdirSync, writeFileSync } from 'node:fs';
 import { dirname, join, resolve } from 'node:path';
@@ -193,15 +198,37 @@ const HEADER = [
   'temp_min_c',
   'temp_max_c',
   'height_mm',
+  'restraint_capacity_n',
+  'uplift_capacity_n',
   'unit_price',
   'currency',
   'lead_time_days',
 ];
 
+/** Restraint ratings of a series as multiples of the rated load (invented), or none. */
+interface RatingRatios {
+  horizontal: number;
+  uplift: number;
+}
+
+/** Which series carry restraint ratings, and how strong (see the file comment). */
+function ratingRatios(ratingRand: () => number, supplierIndex: number, p: TypeProfile): RatingRatios | null {
+  if (p.type === 'restrained_spring') return { horizontal: 1 + ratingRand(), uplift: 0.5 + ratingRand() * 0.5 };
+  if (p.type === 'housed_spring' && supplierIndex % 2 === 0)
+    return { horizontal: 0.4 + ratingRand() * 0.4, uplift: 0.2 + ratingRand() * 0.2 };
+  return null;
+}
+
 const round = (v: number, digits: number): number => Number(v.toFixed(digits));
 
 /** Rows of one series: rated loads in a geometric progression, one deflection family. */
-function* seriesRows(rand: () => number, supplier: DemoSupplier, p: TypeProfile, seriesName: string): Generator<string[]> {
+function* seriesRows(
+  rand: () => number,
+  supplier: DemoSupplier,
+  p: TypeProfile,
+  seriesName: string,
+  ratings: RatingRatios | null,
+): Generator<string[]> {
   const span = p.loadRangeN[1] / p.loadRangeN[0];
   const start = p.loadRangeN[0] * Math.pow(span, rand() * 0.15);
   const step = 1.3 + rand() * 0.25;
@@ -232,6 +259,8 @@ function* seriesRows(rand: () => number, supplier: DemoSupplier, p: TypeProfile,
       String(p.tempC[0]),
       String(p.tempC[1]),
       String(Math.round(height)),
+      ratings ? String(Math.round((ratedLoad * ratings.horizontal) / 10) * 10) : '',
+      ratings ? String(Math.round((ratedLoad * ratings.uplift) / 10) * 10) : '',
       String(round(p.basePrice + (pricePerKn * ratedLoad) / 1000, 2)),
       'USD',
       String(lead + size),
@@ -242,6 +271,7 @@ function* seriesRows(rand: () => number, supplier: DemoSupplier, p: TypeProfile,
 /** The demo catalog's rows (without the header). With `rows`, series repeat in variants until that many rows. */
 export function* demoCatalogRows(seed = 1, rows?: number): Generator<string[]> {
   const rand = prng(seed);
+  const ratingRand = prng(seed + 0x5eed);
   let produced = 0;
   for (let variant = 0; rows === undefined ? variant < 1 : produced < rows; variant++) {
     for (const [si, supplier] of DEMO_SUPPLIERS.entries()) {
@@ -250,7 +280,8 @@ export function* demoCatalogRows(seed = 1, rows?: number): Generator<string[]> {
         const count = p.seriesPerSupplier || (si % 2 === 0 && si < 4 ? 1 : 0);
         for (let s = 1; s <= count; s++) {
           const seriesName = `${p.code}${s}${variant ? `V${variant}` : ''}`;
-          for (const row of seriesRows(rand, supplier, p, seriesName)) {
+          const ratings = ratingRatios(ratingRand, si, p);
+          for (const row of seriesRows(rand, supplier, p, seriesName, ratings)) {
             if (rows !== undefined && produced >= rows) return;
             produced++;
             yield row;

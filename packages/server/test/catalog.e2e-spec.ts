@@ -39,6 +39,8 @@ const MOUNT_KEYS = [
   'tempMinC',
   'tempMaxC',
   'heightMm',
+  'restraintCapacityN',
+  'upliftCapacityN',
   'unitPrice',
   'currency',
   'leadTimeDays',
@@ -390,10 +392,15 @@ describe('catalog (e2e)', () => {
         '-30',
         '80',
         '12',
+        '',
+        '',
         '4.27',
         'USD',
         '8',
       ]);
+      // demo restrained springs carry (invented) restraint ratings
+      const restrained = rows.find((row) => row[1] === 'QM-R1-05050');
+      expect(restrained?.slice(14, 16)).toEqual(['6220', '4500']);
     });
 
     it('guards text against spreadsheet formulas, never numbers, and the import reads it back as the same text', async () => {
@@ -439,6 +446,88 @@ describe('catalog (e2e)', () => {
 
       await upload(bytes).expect(200);
       expect(await figures()).toEqual(before);
+    });
+
+    it('round-trips the restraint ratings given in N and in lbf (exact factor 1 lbf = 4.4482216152605 N, NIST SP 811)', async () => {
+      const header = ['supplier', 'part_number', 'mount_type', 'rated_load_n', 'vertical_stiffness_n_per_mm', 'damping_ratio'];
+      await upload(
+        csvOf(
+          [
+            {
+              supplier: 'Restraint Example Supplier',
+              part_number: 'RS-N',
+              mount_type: 'restrained_spring',
+              rated_load_n: '5000',
+              vertical_stiffness_n_per_mm: '100',
+              damping_ratio: '0.02',
+              restraint_capacity_n: '9000.5',
+              uplift_capacity_n: '4500',
+            },
+          ],
+          [...header, 'restraint_capacity_n', 'uplift_capacity_n'],
+        ),
+      ).expect(200);
+      await upload(
+        csvOf(
+          [
+            {
+              supplier: 'Restraint Example Supplier',
+              part_number: 'RS-LBF',
+              mount_type: 'restrained_spring',
+              rated_load_n: '5000',
+              vertical_stiffness_n_per_mm: '100',
+              damping_ratio: '0.02',
+              restraint_capacity_lbf: '2000',
+              uplift_capacity_lbf: '1011.6',
+            },
+          ],
+          [...header, 'restraint_capacity_lbf', 'uplift_capacity_lbf'],
+        ),
+      ).expect(200);
+      const stored = async (part: string) => (await search({ q: part })).body.items.find((m: MountJson) => m.partNumber === part);
+      expect(await stored('RS-N')).toMatchObject({ restraintCapacityN: 9000.5, upliftCapacityN: 4500 });
+      expect(await stored('RS-LBF')).toMatchObject({
+        restraintCapacityN: 2000 * 4.4482216152605,
+        upliftCapacityN: 1011.6 * 4.4482216152605,
+      });
+
+      // the export writes N; importing it back changes nothing, and an lbf file written from it reads back the same figures
+      const rows: string[][] = parse((await exportCsv()).bytes, { bom: true });
+      const column = (name: string) => rows[0].indexOf(name);
+      const exported = (part: string) => rows.find((row) => row[1] === part) as string[];
+      expect(exported('RS-N')[column('restraint_capacity_n')]).toBe('9000.5');
+      expect(exported('RS-N')[column('uplift_capacity_n')]).toBe('4500');
+      expect(Number(exported('RS-LBF')[column('restraint_capacity_n')])).toBe(2000 * 4.4482216152605);
+      const mine = rows.filter((row) => row[0] === 'Restraint Example Supplier');
+      const n = rows[0].map((name, i) => [name, i] as const);
+      const si = csvOf(
+        mine.map((row) => Object.fromEntries(n.map(([name, i]) => [name, row[i]]))),
+        rows[0],
+      );
+      expect((await upload(si, '?dryRun=true').expect(200)).body).toMatchObject({ accepted: 2, created: 0, updated: 2, errors: [] });
+      await upload(si).expect(200);
+      expect(await stored('RS-LBF')).toMatchObject({
+        restraintCapacityN: 2000 * 4.4482216152605,
+        upliftCapacityN: 1011.6 * 4.4482216152605,
+      });
+      const usHeader = rows[0].map((name) => name.replace(/^(restraint|uplift)_capacity_n$/, '$1_capacity_lbf'));
+      const us = csvOf(
+        mine.map((row) =>
+          Object.fromEntries(
+            usHeader.map((name, i) => [name, /_capacity_lbf$/.test(name) && row[i] ? String(Number(row[i]) / 4.4482216152605) : row[i]]),
+          ),
+        ),
+        usHeader,
+      );
+      await upload(us).expect(200);
+      for (const [part, restraint, uplift] of [
+        ['RS-N', 9000.5, 4500],
+        ['RS-LBF', 2000 * 4.4482216152605, 1011.6 * 4.4482216152605],
+      ] as const) {
+        const mount = await stored(part);
+        expect(Math.abs(mount.restraintCapacityN / restraint - 1)).toBeLessThan(1e-14);
+        expect(Math.abs(mount.upliftCapacityN / uplift - 1)).toBeLessThan(1e-14);
+      }
     });
 
     it('leaves out retired mounts and the mounts of retired suppliers', async () => {

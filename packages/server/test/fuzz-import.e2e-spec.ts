@@ -95,6 +95,20 @@ const COLUMNS: Record<string, Column> = {
     valid: fc.oneof(fc.constant(''), fc.integer({ min: 1, max: 250 }).map(String)),
   },
   height_mm: { kind: 'number', field: 'heightMm', factor: 1, valid: fc.oneof(fc.constant(''), decimal(0.1, 2000)) },
+  restraint_capacity_n: { kind: 'number', field: 'restraintCapacityN', factor: 1, valid: fc.oneof(fc.constant(''), decimal(1e-3, 1e6)) },
+  restraint_capacity_lbf: {
+    kind: 'number',
+    field: 'restraintCapacityN',
+    factor: N_PER_LBF,
+    valid: fc.oneof(fc.constant(''), decimal(1e-3, 2e5)),
+  },
+  uplift_capacity_n: { kind: 'number', field: 'upliftCapacityN', factor: 1, valid: fc.oneof(fc.constant(''), decimal(1e-3, 1e6)) },
+  uplift_capacity_lbf: {
+    kind: 'number',
+    field: 'upliftCapacityN',
+    factor: N_PER_LBF,
+    valid: fc.oneof(fc.constant(''), decimal(1e-3, 2e5)),
+  },
   unit_price: { kind: 'number', field: 'unitPrice', factor: 1, valid: fc.oneof(fc.constant(''), decimal(0, 1e5), fc.constant('0')) },
   currency: { kind: 'currency', field: 'currency', valid: fc.constantFrom('', 'USD', 'eur', ' Gbp ') },
   lead_time_days: {
@@ -115,6 +129,8 @@ const US_SET = [
   'vertical_stiffness_lbf_per_in',
   'loss_factor',
   'max_deflection_in',
+  'restraint_capacity_lbf',
+  'uplift_capacity_lbf',
 ];
 
 /** Cells no valid row holds (or holds only by chance: any cell may still be accepted, the checks read it back). */
@@ -269,6 +285,8 @@ function mountProblems(mount: Record<string, unknown>, cells: Record<string, str
   positive('horizontalStiffnessNPerM', false);
   positive('maxDeflectionMm', false);
   positive('heightMm', false);
+  positive('restraintCapacityN', false);
+  positive('upliftCapacityN', false);
   const ratio = number('dynamicStiffnessRatio');
   if (!(ratio !== null && ratio >= 1 && ratio <= 5)) problems.push(`dynamicStiffnessRatio = ${ratio}`);
   const zeta = number('dampingRatio');

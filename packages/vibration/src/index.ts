@@ -18,3 +18,4 @@ export * from './loads/index.js';
 export * from './modes/index.js';
 export * from './identification/index.js';
 export * from './tap-test/index.js';
+export * from './restraint/index.js';

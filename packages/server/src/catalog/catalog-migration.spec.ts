@@ -1,16 +1,9 @@
-import { DataSource } from 'typeorm';
+import { capturingPostgresQueryRunner } from '../../test/utils/postgres-sql-capture.js';
 import { CreateCatalog1764720000000 } from '../database/migrations/1764720000000-create-catalog.js';
 
 describe('CreateCatalog migration', () => {
   it('compiles to PostgreSQL through the schema API (types, check, foreign keys, indexes)', async () => {
-    // The driver is built but never connected: every statement is captured instead of run.
-    const dataSource = new DataSource({ type: 'postgres', url: 'postgres://tacet@127.0.0.1:9/tacet' });
-    const queryRunner = dataSource.createQueryRunner();
-    const statements: string[] = [];
-    (queryRunner as unknown as { query: (sql: string) => Promise<unknown> }).query = async (sql: string) => {
-      statements.push(sql);
-      return [];
-    };
+    const { queryRunner, statements } = capturingPostgresQueryRunner();
     await new CreateCatalog1764720000000().up(queryRunner);
 
     const sql = statements.join('\n');

@@ -88,6 +88,14 @@ export class Mount {
   @Column({ type: 'double precision', nullable: true })
   heightMm: number | null;
 
+  /** Horizontal restraint rating (strength level), N; null where the supplier gives none. */
+  @Column({ type: 'double precision', nullable: true })
+  restraintCapacityN: number | null;
+
+  /** Uplift rating (strength level), N; null where the supplier gives none. */
+  @Column({ type: 'double precision', nullable: true })
+  upliftCapacityN: number | null;
+
   /** Price of one mount in `currency` (list price; binary floating point is enough here). */
   @Column({ type: 'double precision', nullable: true })
   unitPrice: number | null;

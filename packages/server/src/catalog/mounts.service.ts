@@ -127,6 +127,8 @@ export class MountsService {
       tempMinC: dto.tempMinC ?? null,
       tempMaxC: dto.tempMaxC ?? null,
       heightMm: dto.heightMm ?? null,
+      restraintCapacityN: dto.restraintCapacityN ?? null,
+      upliftCapacityN: dto.upliftCapacityN ?? null,
       unitPrice: dto.unitPrice ?? null,
       currency: dto.currency ?? MOUNT_LIMITS.defaultCurrency,
       leadTimeDays: dto.leadTimeDays ?? null,

@@ -5,6 +5,7 @@ import type { Design } from '../designs/design.entity.js';
 import type { CandidateMode, LabelledFrequency, MountSnapshot } from '../selection/selection.types.js';
 import type { Verification } from '../verifications/verification.entity.js';
 import { bomTotals } from './bom-export.js';
+import { restraintReportLines } from './report-restraint.js';
 
 /** The caution every report carries (PRODUCT.md, "Cautions the product shows"). */
 export const REPORT_CAUTION =
@@ -56,8 +57,9 @@ export interface ReportOptions {
 
 /**
  * The calculation report of one design: identity and sign-off, cautions, equipment, mount
- * points and loads, the chosen mounts' figures at every disturbing frequency, rigid-body modes
- * and the bill of materials. Drafts carry a diagonal DRAFT watermark on every page.
+ * points and loads, the chosen mounts' figures at every disturbing frequency, rigid-body modes,
+ * the seismic restraint check when the design asks for one, and the bill of materials. Drafts
+ * carry a diagonal DRAFT watermark on every page.
  */
 export function designReportPdf(design: Design, options: ReportOptions): Promise<Buffer> {
   const fonts = reportFonts();
@@ -91,8 +93,8 @@ export function designReportPdf(design: Design, options: ReportOptions): Promise
     doc.x = x;
     doc.y = y;
   };
-  doc.on('pageAdded', watermark);
-  watermark();
+  // Drawn on every page at the end (pageFooters): text drawn from a 'pageAdded' handler while a
+  // paragraph wraps onto the new page narrowed the rest of that paragraph to a sliver.
 
   const heading = (text: string) => doc.moveDown(0.8).font('heading').fontSize(13).fillColor('black').text(text).moveDown(0.3);
   const body = (text: string) => doc.font('body').fontSize(10).fillColor('black').text(text);
@@ -189,6 +191,11 @@ export function designReportPdf(design: Design, options: ReportOptions): Promise
       for (const reason of candidate.reasons) body(`• ${reason}`);
     }
   }
+  if (design.input.restraint) {
+    const section = restraintReportLines(design.input.restraint, candidate?.restraint);
+    heading(section.heading);
+    for (const paragraph of section.paragraphs) body(paragraph);
+  }
   if (options.verifications?.length) asBuiltSection(doc, options.verifications, heading, body);
 
   doc.addPage();
@@ -226,7 +233,7 @@ export function designReportPdf(design: Design, options: ReportOptions): Promise
   heading('Cautions');
   body(REPORT_CAUTION);
 
-  pageFooters(doc, `${design.project.name} — ${design.name}, revision ${design.revision}`);
+  pageFooters(doc, `${design.project.name} — ${design.name}, revision ${design.revision}`, watermark);
   doc.end();
   return done;
 }
@@ -390,10 +397,11 @@ function transmissibilityChart(
 }
 
 /** "page i of n" and the design's identity at the foot of every page. */
-function pageFooters(doc: PDFKit.PDFDocument, identity: string): void {
+function pageFooters(doc: PDFKit.PDFDocument, identity: string, decorate: () => void): void {
   const range = doc.bufferedPageRange();
   for (let i = range.start; i < range.start + range.count; i++) {
     doc.switchToPage(i);
+    decorate();
     const bottom = doc.page.margins.bottom;
     doc.page.margins.bottom = 0; // writing inside the bottom margin must not open a new page
     doc.font('body').fontSize(8).fillColor('#555555');

@@ -256,6 +256,8 @@ export class SelectionCatalogReader {
       tempMinC: num(m.tempMinC),
       tempMaxC: num(m.tempMaxC),
       heightMm: num(m.heightMm),
+      restraintCapacityN: num(m.restraintCapacityN),
+      upliftCapacityN: num(m.upliftCapacityN),
       unitPrice: num(m.unitPrice),
       currency: m.currency,
       leadTimeDays: num(m.leadTimeDays),

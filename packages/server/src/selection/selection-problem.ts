@@ -7,6 +7,7 @@ import {
   massProperties,
   mountLoads,
   prepareMountLayout,
+  seismicDesignForce,
   transmissibilityFromEfficiency,
   VibrationInputError,
   type AssemblyComponent,
@@ -23,6 +24,7 @@ import {
   type OperatingConditions,
   type Vec3,
 } from './dto/design-input.dto.js';
+import type { RestraintInput } from './dto/restraint.dto.js';
 import { formatHz } from './selection-format.js';
 import type { LabelledFrequency } from './selection.types.js';
 
@@ -32,6 +34,8 @@ export interface SelectionInput {
   mountPoints: readonly MountPoint[];
   frequencies: readonly { frequencyHz: number; label?: string }[];
   criteria: Criteria;
+  /** Seismic restraint to check (docs/engineering/seismic-restraint.md); absent: not checked. */
+  restraint?: RestraintInput;
 }
 
 /**
@@ -64,6 +68,8 @@ export interface SelectionProblem {
   isolationDbTarget: number;
   /** The CG lies inside the polygon of the mount points. */
   cgInside: boolean;
+  /** Seismic restraint to check; undefined: not checked. */
+  restraint: RestraintInput | undefined;
 }
 
 /** What the SQL prefilter reads: only rows that could serve at least one point. */
@@ -154,7 +160,29 @@ export function prepareProblem(input: SelectionInput): SelectionProblem {
     transmissibilityTarget,
     isolationDbTarget: isolationDb(transmissibilityTarget),
     cgInside: isInsideConvexHull(mass.cg, input.mountPoints),
+    restraint: input.restraint ? checkedRestraint(input.restraint, mass.weightN) : undefined,
   };
+}
+
+/**
+ * The restraint input, checked once by the calculation (the DTO checks it first; this catches
+ * what only the formula knows), with errors placed under `restraint.`.
+ */
+function checkedRestraint(restraint: RestraintInput, weightN: number): RestraintInput {
+  try {
+    seismicDesignForce({
+      ...restraint,
+      snubberGapM: restraint.snubberGapMm === undefined || restraint.snubberGapMm === null ? null : restraint.snubberGapMm / 1000,
+      weightN,
+    });
+  } catch (error) {
+    if (isVibrationInputError(error)) {
+      const field = error.field === 'snubberGapM' ? 'snubberGapMm' : error.field;
+      throw new VibrationInputError(`restraint.${field}`, error.message.slice(error.field.length + 2), error.code);
+    }
+    throw error;
+  }
+  return restraint;
 }
 
 /**

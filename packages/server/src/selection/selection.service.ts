@@ -1,5 +1,6 @@
 import { BadRequestException, Injectable } from '@nestjs/common';
 import { SELECTION_LIMITS, type Component, type Criteria, type DesignInput, type MountPoint } from './dto/design-input.dto.js';
+import type { RestraintInput } from './dto/restraint.dto.js';
 import { SelectionCatalogReader } from './selection-catalog.reader.js';
 import type { DetailsLoader } from './engine/catalog-tuple.js';
 import { SelectionEvaluation } from './engine/selection-evaluation.js';
@@ -11,6 +12,7 @@ export interface SelectionRequest {
   mountPoints: readonly MountPoint[];
   frequencies: readonly { frequencyHz: number; label?: string }[];
   criteria: Criteria;
+  restraint?: RestraintInput;
   limit?: number;
 }
 

@@ -29,6 +29,50 @@ export interface CandidateMode {
   energyFractions: Record<RigidBodyDof, number>;
 }
 
+/** One mount point's seismic demand against its ratings (restraint-figures.ts; N, degrees). */
+export interface RestraintPoint {
+  label: string;
+  partNumber: string;
+  deadLoadN: number;
+  shearN: number;
+  shearDirectionDeg: number;
+  tensionN: number;
+  tensionDirectionDeg: number;
+  compressionN: number;
+  compressionDirectionDeg: number;
+  restraintCapacityN: number | null;
+  upliftCapacityN: number | null;
+  shearUtilization: number | null;
+  tensionUtilization: number | null;
+  passes: boolean;
+}
+
+/** The seismic restraint figures of a candidate (ASCE 7-16 §13.3.1; docs/engineering/seismic-restraint.md). */
+export interface CandidateRestraint {
+  codeEdition: string;
+  ap: number;
+  rp: number;
+  fpFormulaN: number;
+  fpMinN: number;
+  fpMaxN: number;
+  fpN: number;
+  limit: 'formula' | 'minimum' | 'maximum';
+  doubled: boolean;
+  designForceN: number;
+  verticalForceN: number;
+  cgHeightM: number;
+  governing: {
+    label: string;
+    kind: 'shear' | 'tension';
+    demandN: number;
+    capacityN: number | null;
+    utilization: number | null;
+    directionDeg: number;
+  };
+  perPoint: RestraintPoint[];
+  passes: boolean;
+}
+
 /** Weighted score terms; they add up to `score` (see scoring.ts). */
 export interface ScoreTerms {
   isolation: number;
@@ -66,6 +110,8 @@ export interface Candidate {
   maxLeadTimeDays: number | null;
   /** The six coupled rigid-body modes, where computed (the best candidates). */
   modes?: CandidateMode[];
+  /** Seismic restraint figures, when the input asks for restraint. */
+  restraint?: CandidateRestraint;
   passes: boolean;
   /** Why it fails, in words a user understands (empty when it passes). */
   reasons: string[];
@@ -127,6 +173,9 @@ export interface MountSnapshot {
   tempMinC: number | null;
   tempMaxC: number | null;
   heightMm: number | null;
+  /** Absent in snapshots taken before the restraint ratings existed. */
+  restraintCapacityN?: number | null;
+  upliftCapacityN?: number | null;
   unitPrice: number | null;
   currency: string;
   leadTimeDays: number | null;

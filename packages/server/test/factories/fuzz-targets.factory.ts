@@ -249,6 +249,7 @@ export async function createFuzzTargets(t: TestApp): Promise<FuzzTargets> {
         mountPoints: input.mountPoints,
         disturbingFrequenciesHz: [24.67, 49.33, 100],
         criteria: input.criteria,
+        restraint: { sdsG: 1.0, importanceFactor: 1.5, zOverH: 0.5, ap: 2.5, rp: 2, snubberGapMm: 6 },
         limit: 5,
       }),
     },

@@ -717,6 +717,8 @@ export interface components {
       maxLeadTimeDays: number | null;
       /** @description the six coupled rigid-body modes, where computed */
       modes?: components["schemas"]["CandidateModeDto"][];
+      /** @description seismic restraint figures, when the input asks for restraint */
+      restraint?: components["schemas"]["CandidateRestraintDto"];
       passes: boolean;
       reasons: string[];
       /** @description assumptions and remarks that do not fail the candidate */
@@ -750,6 +752,37 @@ export interface components {
       /** @description load / rated load */
       utilization: number;
       staticDeflectionMm: number;
+    };
+    CandidateRestraintDto: {
+      /** @example ASCE 7-16 */
+      codeEdition: string;
+      /** @description a_p used */
+      ap: number;
+      /** @description R_p used */
+      rp: number;
+      /** @description 0.4·a_p·S_DS·W_p·(1 + 2z/h)/(R_p/I_p), N */
+      fpFormulaN: number;
+      /** @description lower limit 0.3·S_DS·I_p·W_p, N */
+      fpMinN: number;
+      /** @description upper limit 1.6·S_DS·I_p·W_p, N */
+      fpMaxN: number;
+      /** @description F_p within its limits, N */
+      fpN: number;
+      /** @description which of formula, minimum or maximum gives F_p */
+      limit: components["schemas"]["SeismicForceLimit"];
+      /** @description the design force is 2·F_p (gap above 0.25 in, or not given) */
+      doubled: boolean;
+      /** @description horizontal design force at the CG, any direction, N */
+      designForceN: number;
+      /** @description vertical seismic effect E_v = 0.2·S_DS·D on the whole machine, N */
+      verticalForceN: number;
+      /** @description height of the CG above the mount plane used for overturning, m */
+      cgHeightM: number;
+      governing: components["schemas"]["RestraintGoverningDto"];
+      /** @description in the order of the mount points */
+      perPoint: components["schemas"]["RestraintPointDto"][];
+      /** @description every point within its ratings */
+      passes: boolean;
     };
     CatalogImportDto: {
       id: number;
@@ -863,6 +896,16 @@ export interface components {
        * @example 120
        */
       heightMm?: number | null;
+      /**
+       * @description Horizontal restraint rating (strength level), N: the horizontal force the restraint carries in any direction
+       * @example 9000
+       */
+      restraintCapacityN?: number | null;
+      /**
+       * @description Uplift rating (strength level), N: the upward pull the restraint carries
+       * @example 4500
+       */
+      upliftCapacityN?: number | null;
       /**
        * @description Price of one mount in `currency`
        * @example 48.2
@@ -982,6 +1025,8 @@ export interface components {
       mountPoints: components["schemas"]["MountPointDto"][];
       operating: components["schemas"]["OperatingConditionsDto"];
       criteria: components["schemas"]["CriteriaDto"];
+      /** @description seismic restraint (ASCE 7-16 §13.3.1); absent: not checked */
+      restraint?: components["schemas"]["RestraintInputDto"];
     };
     DesignListItemDto: {
       id: number;
@@ -1098,6 +1143,8 @@ export interface components {
       tempMinC: number | null;
       tempMaxC: number | null;
       heightMm: number | null;
+      restraintCapacityN: number | null;
+      upliftCapacityN: number | null;
       unitPrice: number | null;
       currency: string;
       leadTimeDays: number | null;
@@ -1167,6 +1214,11 @@ export interface components {
       /** @example Cato Catalog */
       name: string;
     };
+    /**
+     * @description I_p, component importance factor: 1.0, or 1.5 for life-safety and hazardous components
+     * @enum {number}
+     */
+    ImportanceFactor: 1 | 1.5;
     InertiaDto: {
       /** @example 12.5 */
       ixx: number;
@@ -1272,6 +1324,10 @@ export interface components {
       tempMaxC: number | null;
       /** @description Free height, mm */
       heightMm: number | null;
+      /** @description Horizontal restraint rating (strength level), N; null where the supplier gives none */
+      restraintCapacityN: number | null;
+      /** @description Uplift rating (strength level), N; null where the supplier gives none */
+      upliftCapacityN: number | null;
       /** @description Price of one mount in `currency` */
       unitPrice: number | null;
       /** @example USD */
@@ -1514,6 +1570,90 @@ export interface components {
       /** @description Days from order to delivery */
       leadTimeDays?: number;
     };
+    /**
+     * @description horizontal restraint (shear) or uplift (tension)
+     * @enum {string}
+     */
+    RestraintCheckKind: "shear" | "tension";
+    RestraintGoverningDto: {
+      /**
+       * @description mount point
+       * @example B
+       */
+      label: string;
+      /** @description horizontal restraint (shear) or uplift (tension) */
+      kind: components["schemas"]["RestraintCheckKind"];
+      /** @description N */
+      demandN: number;
+      /** @description N; null without a rating */
+      capacityN: number | null;
+      /** @description demand / rating; null without a rating */
+      utilization: number | null;
+      /** @description plan direction of the design force, degrees from +x towards +y */
+      directionDeg: number;
+    };
+    RestraintInputDto: {
+      /**
+       * @description S_DS, design spectral response acceleration at short periods, in g (from the site)
+       * @example 1
+       */
+      sdsG: number;
+      /**
+       * @description I_p, component importance factor: 1.0, or 1.5 for life-safety and hazardous components
+       * @example 1
+       */
+      importanceFactor: components["schemas"]["ImportanceFactor"];
+      /**
+       * @description z/h, height of the attachment over the roof height of the building, 0 (grade) … 1 (roof)
+       * @example 0
+       */
+      zOverH: number;
+      /**
+       * @description a_p, component amplification factor (default 2.5, Table 13.6-1, vibration-isolated)
+       * @example 2.5
+       */
+      ap?: number;
+      /**
+       * @description R_p, component response modification factor (default 2.0, Table 13.6-1, vibration-isolated)
+       * @example 2
+       */
+      rp?: number;
+      /**
+       * @description nominal gap between the machine and its restraints, mm; above 6.35 mm (0.25 in), or not given, the design force doubles
+       * @example 6
+       */
+      snubberGapMm?: number;
+    };
+    RestraintPointDto: {
+      /** @example A */
+      label: string;
+      /** @example QM-R1-05050 */
+      partNumber: string;
+      /** @description dead load D_i on the mount, N (negative: it lifts under its own weight) */
+      deadLoadN: number;
+      /** @description largest horizontal force on the mount, N */
+      shearN: number;
+      /** @description plan direction of the design force giving shearN, degrees from +x towards +y, 0 ≤ θ < 180 (either sense) */
+      shearDirectionDeg: number;
+      /** @description largest uplift max(0, −(0.9 − 0.2·S_DS)·D_i − ΔR_i), N */
+      tensionN: number;
+      /** @description plan direction of the design force giving the most uplift, degrees, 0 ≤ θ < 360 */
+      tensionDirectionDeg: number;
+      /** @description largest compression (1.2 + 0.2·S_DS)·D_i + ΔR_i, N */
+      compressionN: number;
+      /** @description plan direction of the design force giving compressionN, degrees, 0 ≤ θ < 360 */
+      compressionDirectionDeg: number;
+      /** @description the mount’s horizontal restraint rating, N (null: none in the catalog) */
+      restraintCapacityN: number | null;
+      /** @description the mount’s uplift rating, N (null: none in the catalog) */
+      upliftCapacityN: number | null;
+      /** @description shearN / restraintCapacityN (null without a rating) */
+      shearUtilization: number | null;
+      /** @description tensionN / upliftCapacityN (null without uplift or without a rating) */
+      tensionUtilization: number | null;
+      /** @description the demand at this point is within its ratings */
+      passes: boolean;
+    };
     RfqAttachmentDto: {
       /** @example North-Loop-P-3-rev1-quote-list.csv */
       filename: string;
@@ -1621,6 +1761,11 @@ export interface components {
       price: number;
       leadTime: number;
     };
+    /**
+     * @description which of formula, minimum or maximum gives F_p
+     * @enum {string}
+     */
+    SeismicForceLimit: "formula" | "minimum" | "maximum";
     SelectionRequestDto: {
       /**
        * @default 20
@@ -1639,6 +1784,8 @@ export interface components {
        */
       disturbingFrequenciesHz: number[];
       criteria: components["schemas"]["CriteriaDto"];
+      /** @description seismic restraint (ASCE 7-16 §13.3.1); absent: not checked */
+      restraint?: components["schemas"]["RestraintInputDto"];
     };
     SelectionResponseDto: {
       /** @description passing best first, then failing best first */
@@ -1836,6 +1983,16 @@ export interface components {
        * @example 120
        */
       heightMm?: number | null;
+      /**
+       * @description Horizontal restraint rating (strength level), N: the horizontal force the restraint carries in any direction
+       * @example 9000
+       */
+      restraintCapacityN?: number | null;
+      /**
+       * @description Uplift rating (strength level), N: the upward pull the restraint carries
+       * @example 4500
+       */
+      upliftCapacityN?: number | null;
       /**
        * @description Price of one mount in `currency`
        * @example 48.2
@@ -3699,12 +3856,15 @@ export const identificationQualityValues: ReadonlyArray<FlattenedDeepRequired<co
 export const importModeValues: ReadonlyArray<FlattenedDeepRequired<components>["schemas"]["ImportMode"]> = ["all_or_nothing", "skip_invalid"];
 export const importOnInvalidValues: ReadonlyArray<FlattenedDeepRequired<components>["schemas"]["ImportOnInvalid"]> = ["refuse", "skip"];
 export const importRowActionValues: ReadonlyArray<FlattenedDeepRequired<components>["schemas"]["ImportRowAction"]> = ["create", "update"];
+export const importanceFactorValues: ReadonlyArray<FlattenedDeepRequired<components>["schemas"]["ImportanceFactor"]> = [1, 1.5];
 export const mountTypeValues: ReadonlyArray<FlattenedDeepRequired<components>["schemas"]["MountType"]> = ["elastomer_pad", "elastomer_mount", "open_spring", "housed_spring", "restrained_spring", "air_spring", "wire_rope"];
 export const predictionSourceValues: ReadonlyArray<FlattenedDeepRequired<components>["schemas"]["PredictionSource"]> = ["rigid-body modes", "bounce estimate"];
+export const restraintCheckKindValues: ReadonlyArray<FlattenedDeepRequired<components>["schemas"]["RestraintCheckKind"]> = ["shear", "tension"];
 export const rfqProgressStatusValues: ReadonlyArray<FlattenedDeepRequired<components>["schemas"]["RfqProgressStatus"]> = ["quoted", "ordered", "received"];
 export const rfqStatusValues: ReadonlyArray<FlattenedDeepRequired<components>["schemas"]["RfqStatus"]> = ["requested", "quoted", "ordered", "received", "failed"];
 export const rigidBodyModeValues: ReadonlyArray<FlattenedDeepRequired<components>["schemas"]["RigidBodyMode"]> = ["surge", "sway", "bounce", "roll", "pitch", "yaw"];
 export const roleValues: ReadonlyArray<FlattenedDeepRequired<components>["schemas"]["Role"]> = ["admin", "catalog_manager", "engineer", "purchaser", "viewer"];
+export const seismicForceLimitValues: ReadonlyArray<FlattenedDeepRequired<components>["schemas"]["SeismicForceLimit"]> = ["formula", "minimum", "maximum"];
 export const transitionTargetValues: ReadonlyArray<FlattenedDeepRequired<components>["schemas"]["TransitionTarget"]> = ["in_review", "draft", "released"];
 export const unitSystemValues: ReadonlyArray<FlattenedDeepRequired<components>["schemas"]["UnitSystem"]> = ["SI", "US"];
 export const verificationKindValues: ReadonlyArray<FlattenedDeepRequired<components>["schemas"]["VerificationKind"]> = ["frf", "impact"];

@@ -4,7 +4,7 @@
  * generated from the server's OpenAPI document (`@/api/schema`, `npm run api-types`): change
  * the server's DTOs, never these.
  */
-import { designStatusValues, mountTypeValues, type ApiSchemas } from '@/api/schema';
+import { designStatusValues, importanceFactorValues, mountTypeValues, type ApiSchemas } from '@/api/schema';
 
 export type Vec3 = ApiSchemas['Vec3Dto'];
 export type PersonRef = ApiSchemas['UserRefDto'];
@@ -28,6 +28,10 @@ export const MOUNT_TYPES = mountTypeValues;
 export type MountType = ApiSchemas['MountType'];
 
 export type Criteria = ApiSchemas['CriteriaDto'];
+/** Seismic restraint input (ASCE 7-16 §13.3.1): S_DS in g, I_p, z/h, a_p, R_p, gap in mm. */
+export type RestraintInput = ApiSchemas['RestraintInputDto'];
+/** The component importance factors the code allows (1.0, 1.5). */
+export const IMPORTANCE_FACTORS = importanceFactorValues;
 export type DesignInput = ApiSchemas['DesignInputDto'];
 
 // ---- Selection ----
@@ -36,6 +40,9 @@ export type ModeName = ApiSchemas['RigidBodyMode'];
 export type CandidatePoint = ApiSchemas['CandidatePointDto'];
 export type CandidateIsolation = ApiSchemas['CandidateIsolationDto'];
 export type Candidate = ApiSchemas['CandidateDto'];
+/** A candidate's seismic restraint figures (N, degrees). */
+export type CandidateRestraint = ApiSchemas['CandidateRestraintDto'];
+export type RestraintPoint = ApiSchemas['RestraintPointDto'];
 export type SelectionResult = ApiSchemas['SelectionResponseDto'];
 /** The last selection run on a design's current input, as the design carries it. */
 export type StoredSelection = ApiSchemas['StoredSelectionDto'];

@@ -45,6 +45,12 @@ export class CreateMountDto {
   @MountField('heightMm')
   heightMm?: number | null;
 
+  @MountField('restraintCapacityN')
+  restraintCapacityN?: number | null;
+
+  @MountField('upliftCapacityN')
+  upliftCapacityN?: number | null;
+
   @MountField('unitPrice')
   unitPrice?: number | null;
 

@@ -69,6 +69,12 @@ export class ImportPreviewRowDto implements ImportPreviewRow {
   heightMm: number | null;
 
   @nullableNumber()
+  restraintCapacityN: number | null;
+
+  @nullableNumber()
+  upliftCapacityN: number | null;
+
+  @nullableNumber()
   unitPrice: number | null;
 
   @ApiProperty()

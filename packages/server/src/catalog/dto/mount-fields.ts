@@ -170,6 +170,16 @@ export const MOUNT_FIELDS = {
     nullable: true,
   },
   heightMm: { ...positive('Free height, mm', 120), required: false, nullable: true },
+  restraintCapacityN: {
+    ...positive('Horizontal restraint rating (strength level), N: the horizontal force the restraint carries in any direction', 9000),
+    required: false,
+    nullable: true,
+  },
+  upliftCapacityN: {
+    ...positive('Uplift rating (strength level), N: the upward pull the restraint carries', 4500),
+    required: false,
+    nullable: true,
+  },
   unitPrice: {
     api: { type: Number, description: 'Price of one mount in `currency`', example: 48.2, minimum: 0 },
     rules: () => [finite(), Min(0)],

@@ -62,6 +62,12 @@ export class MountDto {
   @nullableNumber('Free height, mm')
   heightMm: number | null;
 
+  @nullableNumber('Horizontal restraint rating (strength level), N; null where the supplier gives none')
+  restraintCapacityN: number | null;
+
+  @nullableNumber('Uplift rating (strength level), N; null where the supplier gives none')
+  upliftCapacityN: number | null;
+
   @nullableNumber('Price of one mount in `currency`')
   unitPrice: number | null;
 
@@ -99,6 +105,8 @@ export class MountDto {
       tempMinC: mount.tempMinC,
       tempMaxC: mount.tempMaxC,
       heightMm: mount.heightMm,
+      restraintCapacityN: mount.restraintCapacityN,
+      upliftCapacityN: mount.upliftCapacityN,
       unitPrice: mount.unitPrice,
       currency: mount.currency,
       leadTimeDays: mount.leadTimeDays,

@@ -23,6 +23,10 @@ export interface MountValues {
   tempMinC: number | null;
   tempMaxC: number | null;
   heightMm: number | null;
+  /** Horizontal restraint rating (strength level), N. */
+  restraintCapacityN: number | null;
+  /** Uplift rating (strength level), N. */
+  upliftCapacityN: number | null;
   unitPrice: number | null;
   currency: string;
   leadTimeDays: number | null;
@@ -149,6 +153,18 @@ export const COLUMNS: readonly ColumnSpec[] = [
     required: false,
   },
   { field: 'heightMm', rule: positive, variants: single('height_mm'), required: false },
+  {
+    field: 'restraintCapacityN',
+    rule: positive,
+    variants: [stored('restraint_capacity_n'), customary('restraint_capacity_lbf', lbfToN, nToLbf)],
+    required: false,
+  },
+  {
+    field: 'upliftCapacityN',
+    rule: positive,
+    variants: [stored('uplift_capacity_n'), customary('uplift_capacity_lbf', lbfToN, nToLbf)],
+    required: false,
+  },
   { field: 'unitPrice', rule: { kind: 'number', min: 0 }, variants: single('unit_price'), required: false },
   { field: 'currency', rule: { kind: 'currency' }, variants: single('currency'), required: false },
   {

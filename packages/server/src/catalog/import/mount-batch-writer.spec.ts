@@ -18,6 +18,8 @@ const values: MountValues = {
   tempMinC: null,
   tempMaxC: null,
   heightMm: null,
+  restraintCapacityN: 9000,
+  upliftCapacityN: null,
   unitPrice: null,
   currency: 'USD',
   leadTimeDays: null,
@@ -48,15 +50,16 @@ describe('MountBatchWriter', () => {
     expect(calls).toHaveLength(1);
     const { sql, parameters } = calls[0];
     expect(sql).toMatch(
-      /^INSERT INTO "mount" \("supplierId", "partNumber", "series", .*"active"\) VALUES \(\$1, \$2, .*\$18\), \(\$19, .*\$36\) /,
+      /^INSERT INTO "mount" \("supplierId", "partNumber", "series", .*"active"\) VALUES \(\$1, \$2, .*\$20\), \(\$21, .*\$40\) /,
     );
     expect(sql).toMatch(
       /ON CONFLICT \("supplierId", "partNumber"\) DO UPDATE SET "series" = excluded."series", .*"active" = excluded."active", "updatedAt" = now\(\)$/,
     );
     expect(sql).not.toMatch(/"supplierId" = excluded|"partNumber" = excluded/);
-    expect(parameters).toHaveLength(36);
+    expect(parameters).toHaveLength(40);
     expect(parameters.slice(0, 4)).toEqual([3, 'WX-1', null, 'open_spring']);
-    expect(parameters[17]).toBe(true);
+    expect(parameters[14]).toBe(9000); // restraintCapacityN
+    expect(parameters[19]).toBe(true);
   });
 
   it('uses ? placeholders and datetime(now) on SQLite, and writes nothing for an empty batch', async () => {
@@ -65,7 +68,7 @@ describe('MountBatchWriter', () => {
     await writer.upsert(manager, []);
     await writer.upsert(manager, rows.slice(0, 1));
     expect(calls).toHaveLength(1);
-    expect(calls[0].sql).toMatch(/VALUES \((\?, ){17}\?\) ON CONFLICT/);
+    expect(calls[0].sql).toMatch(/VALUES \((\?, ){19}\?\) ON CONFLICT/);
     expect(calls[0].sql).toMatch(/"updatedAt" = datetime\('now'\)$/);
   });
 

@@ -25,6 +25,8 @@ const COLUMNS = [
   'tempMinC',
   'tempMaxC',
   'heightMm',
+  'restraintCapacityN',
+  'upliftCapacityN',
   'unitPrice',
   'currency',
   'leadTimeDays',
@@ -49,6 +51,8 @@ function pushParameters(target: unknown[], { supplierId, values: v }: MountWrite
     v.tempMinC,
     v.tempMaxC,
     v.heightMm,
+    v.restraintCapacityN,
+    v.upliftCapacityN,
     v.unitPrice,
     v.currency,
     v.leadTimeDays,
@@ -67,7 +71,7 @@ function pushParameters(target: unknown[], { supplierId, values: v }: MountWrite
  */
 @Injectable()
 export class MountBatchWriter {
-  /** Rows per batch: 500 × 18 parameters stays far below SQLite's and PostgreSQL's limits. */
+  /** Rows per batch: 500 × 20 parameters stays far below SQLite's and PostgreSQL's limits. */
   readonly batchRows: number = 500;
 
   private readonly sqlCache = new Map<string, string>();

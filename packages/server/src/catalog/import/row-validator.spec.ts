@@ -16,6 +16,8 @@ const SI_HEADER = [
   'temp_min_c',
   'temp_max_c',
   'height_mm',
+  'restraint_capacity_n',
+  'uplift_capacity_n',
   'unit_price',
   'currency',
   'lead_time_days',
@@ -46,6 +48,8 @@ function row(overrides: Record<string, string> = {}): string[] {
     temp_min_c: '-40',
     temp_max_c: '120',
     height_mm: '110',
+    restraint_capacity_n: '',
+    uplift_capacity_n: '',
     unit_price: '42.5',
     currency: 'USD',
     lead_time_days: '21',
@@ -74,6 +78,8 @@ describe('validateRow', () => {
         tempMinC: -40,
         tempMaxC: 120,
         heightMm: 110,
+        restraintCapacityN: null,
+        upliftCapacityN: null,
         unitPrice: 42.5,
         currency: 'USD',
         leadTimeDays: 21,
@@ -91,14 +97,18 @@ describe('validateRow', () => {
       'horizontal_stiffness_lbf_per_in',
       'loss_factor',
       'max_deflection_in',
+      'restraint_capacity_lbf',
+      'uplift_capacity_lbf',
     ]);
-    const { values, problems } = validateRow(['S', 'P', 'wire_rope', '1', '1', '2', '0.2', '1'], us);
+    const { values, problems } = validateRow(['S', 'P', 'wire_rope', '1', '1', '2', '0.2', '1', '1000', '0.5'], us);
     expect(problems).toEqual([]);
     expect(values?.ratedLoadN).toBe(4.4482216152605);
     expect(values?.verticalStiffnessNPerM).toBe(4.4482216152605 / 0.0254);
     expect(values?.verticalStiffnessNPerM).toBeCloseTo(175.126835246476, 9);
     expect(values?.horizontalStiffnessNPerM).toBeCloseTo(350.253670492952, 9);
     expect(values?.maxDeflectionMm).toBe(25.4);
+    expect(values?.restraintCapacityN).toBe(1000 * 4.4482216152605);
+    expect(values?.upliftCapacityN).toBe(0.5 * 4.4482216152605);
   });
 
   it('applies the defaults: dynamic stiffness ratio 1.0, currency USD, optional fields null', () => {
@@ -179,6 +189,16 @@ describe('validateRow', () => {
       { lead_time_days: '731' },
       [{ column: 'lead_time_days', message: 'must be a whole number from 0 to 730 (got "731")' }],
     ],
+    [
+      'a zero restraint rating',
+      { restraint_capacity_n: '0' },
+      [{ column: 'restraint_capacity_n', message: 'must be a positive number (got "0")' }],
+    ],
+    [
+      'a negative uplift rating',
+      { uplift_capacity_n: '-5' },
+      [{ column: 'uplift_capacity_n', message: 'must be a positive number (got "-5")' }],
+    ],
     ['a negative price', { unit_price: '-1' }, [{ column: 'unit_price', message: 'must be zero or a positive number (got "-1")' }]],
     [
       'a bad currency',
@@ -224,9 +244,9 @@ describe('validateRow', () => {
   });
 
   it('refuses a row whose field count differs from the header, with one row problem', () => {
-    expect(problemsOf(['Wrenfield Example Mounts', 'WX-1'])).toEqual([{ column: '', message: 'the row has 2 fields; the header has 17' }]);
-    const wide = [...row(), ...Array.from({ length: 9_983 }, () => 'x')];
-    expect(problemsOf(wide)).toEqual([{ column: '', message: 'the row has 10000 fields; the header has 17' }]);
+    expect(problemsOf(['Wrenfield Example Mounts', 'WX-1'])).toEqual([{ column: '', message: 'the row has 2 fields; the header has 19' }]);
+    const wide = [...row(), ...Array.from({ length: 10_000 - SI_HEADER.length }, () => 'x')];
+    expect(problemsOf(wide)).toEqual([{ column: '', message: 'the row has 10000 fields; the header has 19' }]);
   });
 
   it('tolerates extra empty fields after the last column (trailing separators)', () => {
@@ -237,7 +257,7 @@ describe('validateRow', () => {
     const header = headerOf([...SI_HEADER, '']);
     expect(problemsOf([...row(), ''], header)).toEqual([]);
     expect(problemsOf([...row(), 'stray'], header)).toEqual([
-      { column: 'column 18', message: 'has a value but the header gives this column no name' },
+      { column: 'column 20', message: 'has a value but the header gives this column no name' },
     ]);
   });
 });

@@ -149,6 +149,8 @@ export function validateRow(fields: readonly string[], header: HeaderMap): RowRe
       tempMinC: numberOf('tempMinC'),
       tempMaxC: numberOf('tempMaxC'),
       heightMm: numberOf('heightMm'),
+      restraintCapacityN: numberOf('restraintCapacityN'),
+      upliftCapacityN: numberOf('upliftCapacityN'),
       unitPrice: numberOf('unitPrice'),
       currency: text('currency') ?? MOUNT_LIMITS.defaultCurrency,
       leadTimeDays: numberOf('leadTimeDays'),

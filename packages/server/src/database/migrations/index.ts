@@ -7,6 +7,7 @@ import { CreateCatalogRevision1764979200000 } from './1764979200000-create-catal
 import { CreateDesignVerification1765100000000 } from './1765100000000-create-design-verification.js';
 import { HandOffs1765152000000 } from './1765152000000-hand-offs.js';
 import { CreateDesignSelection1765200000000 } from './1765200000000-create-design-selection.js';
+import { MountRestraintRatings1765300000000 } from './1765300000000-mount-restraint-ratings.js';
 
 /** Every migration, oldest first. A new migration is imported and appended here. */
 export const MIGRATIONS = [
@@ -19,4 +20,5 @@ export const MIGRATIONS = [
   CreateDesignVerification1765100000000,
   HandOffs1765152000000,
   CreateDesignSelection1765200000000,
+  MountRestraintRatings1765300000000,
 ];

@@ -1,4 +1,5 @@
-import { DataSource, Table } from 'typeorm';
+import { DataSource } from 'typeorm';
+import { capturingPostgresQueryRunner } from '../../../test/utils/postgres-sql-capture.js';
 import { databaseOptions } from '../../config/database.config.js';
 import { MIGRATIONS } from './index.js';
 
@@ -15,17 +16,7 @@ describe('migrations', () => {
   });
 
   it('compile to PostgreSQL through the schema API (no SQLite-only SQL)', async () => {
-    // The driver is built but never connected: every statement is captured instead of run.
-    const dataSource = new DataSource({ type: 'postgres', url: 'postgres://tacet@127.0.0.1:9/tacet' });
-    const queryRunner = dataSource.createQueryRunner();
-    const statements: string[] = [];
-    (queryRunner as unknown as { query: (sql: string) => Promise<unknown> }).query = async (sql: string) => {
-      statements.push(sql);
-      return [];
-    };
-    // A migration that changes an existing table names it; the query runner would read that
-    // table from the database first, and there is none: hand it the bare table instead.
-    (queryRunner as unknown as { getCachedTable: (name: string) => Promise<Table> }).getCachedTable = async (name) => new Table({ name });
+    const { queryRunner, statements } = capturingPostgresQueryRunner();
     for (const Migration of MIGRATIONS) await new Migration().up(queryRunner);
 
     const sql = statements.join('\n');

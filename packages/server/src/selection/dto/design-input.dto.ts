@@ -18,6 +18,7 @@ import {
   ValidateNested,
 } from 'class-validator';
 import { MOUNT_TYPES, type MountType } from '../../catalog/mount-rules.js';
+import { RestraintInputDto } from './restraint.dto.js';
 import { IsAbove, IsFiniteNumber, NotTogetherWith } from './validators.js';
 
 /**
@@ -322,6 +323,12 @@ export class DesignInputDto {
   @ValidateNested()
   @Type(() => CriteriaDto)
   criteria: CriteriaDto;
+
+  @ApiPropertyOptional({ type: RestraintInputDto, description: 'seismic restraint (ASCE 7-16 §13.3.1); absent: not checked' })
+  @IsOptional()
+  @ValidateNested()
+  @Type(() => RestraintInputDto)
+  restraint?: RestraintInputDto;
 }
 
 /** The plain shapes (as stored in a design and sent by clients). */

@@ -14,6 +14,7 @@ import {
   ValidateNested,
 } from 'class-validator';
 import { ComponentDto, CriteriaDto, MountPointDto, SELECTION_LIMITS } from './design-input.dto.js';
+import { RestraintInputDto } from './restraint.dto.js';
 import { IsFiniteNumber } from './validators.js';
 
 /** `limit`: passing candidates returned (and up to as many failing ones). */
@@ -59,4 +60,10 @@ export class SelectionRequestDto extends SelectionLimitDto {
   @ValidateNested()
   @Type(() => CriteriaDto)
   criteria: CriteriaDto;
+
+  @ApiPropertyOptional({ type: RestraintInputDto, description: 'seismic restraint (ASCE 7-16 §13.3.1); absent: not checked' })
+  @IsOptional()
+  @ValidateNested()
+  @Type(() => RestraintInputDto)
+  restraint?: RestraintInputDto;
 }

@@ -1,3 +1,4 @@
+import { CandidateRestraintDto } from './restraint.dto.js';
 import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
 import { RIGID_BODY_DOFS } from '@tacet/vibration';
 import { Vec3Dto } from './design-input.dto.js';
@@ -76,6 +77,8 @@ export class CandidateDto {
   @ApiProperty({ type: Number, nullable: true }) maxLeadTimeDays: number | null;
   @ApiPropertyOptional({ type: [CandidateModeDto], description: 'the six coupled rigid-body modes, where computed' })
   modes?: CandidateModeDto[];
+  @ApiPropertyOptional({ type: CandidateRestraintDto, description: 'seismic restraint figures, when the input asks for restraint' })
+  restraint?: CandidateRestraintDto;
   @ApiProperty() passes: boolean;
   @ApiProperty({ type: [String] }) reasons: string[];
   @ApiProperty({ type: [String], description: 'assumptions and remarks that do not fail the candidate' }) notes: string[];

@@ -24,6 +24,9 @@ export interface CatalogRow {
   unitPrice: number | null;
   currency: string;
   leadTimeDays: number | null;
+  /** Horizontal restraint and uplift ratings, N (seismic restraint; restraint-check.ts); absent: none. */
+  restraintCapacityN?: number | null;
+  upliftCapacityN?: number | null;
 }
 
 /**
@@ -44,6 +47,8 @@ export const CATALOG_COLUMNS = [
   'unitPrice',
   'currency',
   'leadTimeDays',
+  'restraintCapacityN',
+  'upliftCapacityN',
 ] as const satisfies readonly (keyof CatalogRow)[];
 
 /**
@@ -81,6 +86,8 @@ export const CATALOG_COLUMN_INDEX = {
   unitPrice: 9,
   currency: 10,
   leadTimeDays: 11,
+  restraintCapacityN: 12,
+  upliftCapacityN: 13,
 } as const satisfies { [K in (typeof CATALOG_COLUMNS)[number]]: number };
 
 /** Position of the first DETAIL_COLUMNS value in a tuple that carries them. */

@@ -13,7 +13,10 @@
  *   window, static deflection against the mount's travel;
  * - for every candidate at once (evaluate-isolation.ts): isolation at every disturbing frequency;
  * - for the best candidates only, as finalist checks (ranking.ts `FinalistCheck`): the rigid-body
- *   modes (mode-check.ts).
+ *   modes (mode-check.ts);
+ * - seismic restraint, when the input asks for it (restraint-check.ts): every candidate screened
+ *   before scoring (no rating, or a uniform candidate's demand over its ratings), then the exact
+ *   figures of the best ones as a finalist check.
  *
  * To add a check: a new bit here, the place that sets it, and its sentence in reasons.ts.
  */
@@ -39,6 +42,8 @@ export const FAIL = {
   type: 64,
   /** Supplier not among the allowed suppliers. */
   supplier: 128,
+  /** Seismic restraint: a point's demand over its mount's rating, or no rating (restraint-check.ts). */
+  restraint: 256,
 } as const;
 
 /** The row checks that need a mount's details (DETAIL_COLUMNS); a candidate takes them once the details are loaded. */

@@ -9,6 +9,7 @@ import type { SelectionProblem } from '../selection-problem.js';
 import type { Candidate, CandidatePoint, ScoreTerms } from '../selection.types.js';
 import type { CandidateStore } from './candidate-store.js';
 import type { ModeCheck } from './mode-check.js';
+import type { RestraintCheck } from './restraint-check.js';
 import { fillScoreInputs, newScoreInputs, type ScoreReferences } from './ranking.js';
 import { notesFor, reasonsFor, type WordingContext } from './reasons.js';
 
@@ -17,10 +18,11 @@ export interface DescribeSources {
   problem: SelectionProblem;
   refs: ScoreReferences;
   modeCheck: ModeCheck;
+  restraintCheck: RestraintCheck;
 }
 
 export function describeCandidate(
-  { store, problem, refs, modeCheck }: DescribeSources,
+  { store, problem, refs, modeCheck, restraintCheck }: DescribeSources,
   c: number,
   supplierNames: ReadonlyMap<number, string>,
 ): Candidate {
@@ -53,6 +55,7 @@ export function describeCandidate(
   fillScoreInputs(store, refs, c, s);
   const score = scoreCandidate(s, terms);
   const modes = modeCheck.findingsOf(c);
+  const restraint = restraintCheck.figuresOf(c);
   const wording: WordingContext = {
     problem,
     store,
@@ -62,6 +65,7 @@ export function describeCandidate(
     supplierName: supplierNames.get(supplierId),
     modes,
     modesUnavailable: modeCheck.unavailable,
+    restraint,
   };
   const price = store.price[c];
   const lead = store.lead[c];
@@ -80,6 +84,7 @@ export function describeCandidate(
     currency: store.currencies[store.candidateCurrency[c]] ?? 'USD',
     maxLeadTimeDays: Number.isFinite(lead) ? lead : null,
     ...(modes?.modes ? { modes: modes.modes } : {}),
+    ...(restraint ? { restraint } : {}),
     passes: store.fail[c] === 0,
     reasons: reasonsFor(wording),
     notes: notesFor(wording),

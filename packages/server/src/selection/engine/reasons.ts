@@ -10,7 +10,7 @@
 import { describeModeMotion, isolationEfficiencyPct } from '@tacet/vibration';
 import { formatHz, formatMm, formatNumber, formatPct, formatPctValue } from '../selection-format.js';
 import type { SelectionProblem } from '../selection-problem.js';
-import type { CandidatePoint } from '../selection.types.js';
+import type { CandidatePoint, CandidateRestraint, RestraintPoint } from '../selection.types.js';
 import type { CandidateStore, PointMount } from './candidate-store.js';
 import { FAIL } from './checks.js';
 import { MODE_SEPARATION, type ModeConflict, type ModeFindings } from './mode-check.js';
@@ -29,6 +29,8 @@ export interface WordingContext {
   modes: ModeFindings | undefined;
   /** The machine's inertia is unusable: no modes for any candidate. */
   modesUnavailable: boolean;
+  /** The seismic restraint figures (undefined when the input asks for no restraint). */
+  restraint: CandidateRestraint | undefined;
 }
 
 type Words = (x: WordingContext) => string[];
@@ -41,6 +43,7 @@ export const REASONS: readonly (readonly [bit: number, words: Words])[] = [
   [FAIL.deflection, deflection],
   [FAIL.temperature, temperature],
   [FAIL.modes, modes],
+  [FAIL.restraint, restraint],
   [FAIL.type, mountType],
   [FAIL.supplier, supplier],
 ];
@@ -72,6 +75,11 @@ export function notesFor(x: WordingContext): string[] {
         notes.push(`${store.partNumberOf(r)}: the supplier states no temperature range.`);
       }
     }
+  }
+  if (x.restraint && !store.isUniform(c) && rows.some((r) => store.hasDetails[r] && Number.isNaN(store.kh[r]))) {
+    notes.push(
+      'Seismic restraint: where the catalog gives no horizontal stiffness, the shares of the horizontal force take it equal to the vertical stiffness.',
+    );
   }
   if (!store.isUniform(c) && store.levelErrorM[c] > 0) {
     notes.push(
@@ -169,6 +177,47 @@ function modeConflict(conflict: ModeConflict): string {
     `±${Math.round(MODE_SEPARATION * 100)} % of the disturbing frequency ${formatHz(frequencyHz)}${labelSuffix(label)}: ` +
     'the machine would rock or sway strongly there.'
   );
+}
+
+function restraint({ restraint: figures }: WordingContext): string[] {
+  if (!figures) return [];
+  const reasons: string[] = [];
+  const n = (value: number) => `${formatNumber(value, 0)} N`;
+  const grouped = (points: readonly RestraintPoint[]) => {
+    const byPart = new Map<string, RestraintPoint[]>();
+    for (const p of points) byPart.set(p.partNumber, [...(byPart.get(p.partNumber) ?? []), p]);
+    return [...byPart];
+  };
+  const where = (points: readonly RestraintPoint[]) =>
+    points.length === 1 ? `point ${points[0].label}` : `points ${points.map((p) => p.label).join(', ')}`;
+  for (const [part, points] of grouped(figures.perPoint.filter((p) => p.restraintCapacityN === null))) {
+    reasons.push(
+      `Seismic restraint: ${part} has no horizontal restraint rating (${where(points)}); ` +
+        `the design force puts up to ${n(Math.max(...points.map((p) => p.shearN)))} on a mount.`,
+    );
+  }
+  for (const p of figures.perPoint) {
+    if (p.restraintCapacityN !== null && p.shearN > p.restraintCapacityN) {
+      reasons.push(
+        `Seismic restraint at point ${p.label}: the horizontal force ${n(p.shearN)} exceeds the restraint rating ` +
+          `${n(p.restraintCapacityN)} of ${p.partNumber}.`,
+      );
+    }
+  }
+  for (const [part, points] of grouped(figures.perPoint.filter((p) => p.tensionN > 0 && p.upliftCapacityN === null))) {
+    reasons.push(
+      `Seismic restraint: ${part} has no uplift rating, and the design force lifts ${where(points)} ` +
+        `with up to ${n(Math.max(...points.map((p) => p.tensionN)))}.`,
+    );
+  }
+  for (const p of figures.perPoint) {
+    if (p.upliftCapacityN !== null && p.tensionN > p.upliftCapacityN) {
+      reasons.push(
+        `Seismic restraint at point ${p.label}: the uplift ${n(p.tensionN)} exceeds the uplift rating ${n(p.upliftCapacityN)} of ${p.partNumber}.`,
+      );
+    }
+  }
+  return reasons;
 }
 
 function mountType({ store, c }: WordingContext): string[] {

@@ -7,9 +7,12 @@
  *   2. evaluate-uniform.ts     one row at every point: load checks and figures
  *      evaluate-series.ts      a size per point from one series, for a level skid
  *   3. evaluate-isolation.ts   transmissibility of every candidate at once, the isolation check
+ *      restraint-check.ts      seismic restraint, when asked for: the ratings screen of every
+ *                              candidate (and, as a finalist check, the exact figures)
  *   4. ranking.ts              score references and scores; `rank` picks the best passing
  *                              candidates, judged by the finalist checks on the way
  *   5. mode-check.ts           finalist check: the six coupled rigid-body modes
+ *      restraint-check.ts      finalist check: the restraint figures with each size's stiffness
  *   6. describe-candidate.ts   a candidate as the API shows it, with reasons.ts for the words
  *
  * checks.ts lists the checks (fail bits); catalog-tuple.ts the columns the engine reads. The
@@ -24,6 +27,7 @@ import { evaluateIsolation } from './evaluate-isolation.js';
 import { evaluateSeries } from './evaluate-series.js';
 import { evaluateUniform } from './evaluate-uniform.js';
 import { ModeCheck } from './mode-check.js';
+import { RestraintCheck } from './restraint-check.js';
 import { candidateOrder, rankCandidates, scoreAll, scoreReferences, type FinalistCheck, type ScoreReferences } from './ranking.js';
 
 export class SelectionEvaluation {
@@ -36,6 +40,7 @@ export class SelectionEvaluation {
   private readonly store: CandidateStore;
   private readonly refs: ScoreReferences;
   private readonly modeCheck: ModeCheck;
+  private readonly restraintCheck: RestraintCheck;
   /** The checks run for the best candidates only, in this order (ranking.ts `FinalistCheck`). */
   private readonly finalistChecks: readonly FinalistCheck[];
   private readonly better: (a: number, b: number) => boolean;
@@ -52,11 +57,13 @@ export class SelectionEvaluation {
     const skipped = evaluateSeries(store, problem, options.everySeries === true);
     this.considered = store.candidateCount - skipped;
     evaluateIsolation(store, problem);
+    this.restraintCheck = new RestraintCheck(store, problem, rows);
+    this.restraintCheck.screen();
     this.refs = scoreReferences(store, problem);
     scoreAll(store, this.refs);
     this.better = candidateOrder(store);
     this.modeCheck = new ModeCheck(store, problem);
-    this.finalistChecks = [this.modeCheck];
+    this.finalistChecks = [this.restraintCheck, this.modeCheck];
   }
 
   /**
@@ -100,6 +107,12 @@ export class SelectionEvaluation {
 
   /** The candidate as the API shows it. */
   describe(c: number, supplierNames: ReadonlyMap<number, string>): Candidate {
-    return describeCandidate({ store: this.store, problem: this.problem, refs: this.refs, modeCheck: this.modeCheck }, c, supplierNames);
+    // Every candidate shown carries its restraint figures, and its verdict agrees with them.
+    this.restraintCheck.check(c);
+    return describeCandidate(
+      { store: this.store, problem: this.problem, refs: this.refs, modeCheck: this.modeCheck, restraintCheck: this.restraintCheck },
+      c,
+      supplierNames,
+    );
   }
 }

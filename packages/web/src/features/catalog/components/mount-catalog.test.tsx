@@ -124,7 +124,7 @@ describe('Catalog page', () => {
   it('opens a mount with the figures computed at its rated load', async () => {
     // 2,400 N on 72.5 N/mm: δ = W/k = 33.1 mm; fn = (1/2π)·√(g/δ) = 2.74 Hz with a steel spring's
     // dynamic ratio of 1 (closed form; the trade's rule of thumb 15.76/√δ[mm] gives the same).
-    const mount = makeMount({ id: 7, partNumber: 'QM-S1-02400' });
+    const mount = makeMount({ id: 7, partNumber: 'QM-S1-02400', restraintCapacityN: 6220 });
     serveCatalog(installFakeApi(), { mounts: [mount] });
     const { user, router } = renderApp({ signedInAs: 'engineer', path: '/catalog' });
     await screen.findByText('1 mount');
@@ -139,6 +139,8 @@ describe('Catalog page', () => {
     expect(facts.getByText('Damping').nextElementSibling).toHaveTextContent('ζ 0.00800 (viscous)');
     expect(facts.getByText('Temperature range').nextElementSibling).toHaveTextContent('−40 … 120 °C');
     expect(facts.getByText('Unit price').nextElementSibling).toHaveTextContent('USD 48.20');
+    expect(facts.getByText('Horizontal restraint rating').nextElementSibling).toHaveTextContent('6,220 N');
+    expect(facts.getByText('Uplift rating').nextElementSibling).toHaveTextContent('—');
     expect(await facts.findByRole('figure', { name: 'Static load against deflection' })).toBeInTheDocument();
     expect(facts.getByRole('figure', { name: 'Natural frequency against load' })).toBeInTheDocument();
     expect(facts.getByText('2.74 Hz at rated load')).toBeInTheDocument();

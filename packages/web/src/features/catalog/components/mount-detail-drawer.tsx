@@ -97,6 +97,8 @@ function MountDetails({ mount }: { mount: Mount }) {
           />
           <Fact label="Maximum deflection" value={displayQuantity(units, 'deflection', maxDeflectionM)} />
           <Fact label="Free height" value={displayQuantity(units, 'deflection', mmToM(mount.heightMm))} />
+          <Fact label="Horizontal restraint rating" value={displayQuantity(units, 'force', mount.restraintCapacityN)} />
+          <Fact label="Uplift rating" value={displayQuantity(units, 'force', mount.upliftCapacityN)} />
           <Fact label="Temperature range" value={temperatureRangeText(units, mount.tempMinC, mount.tempMaxC)} />
         </dl>
       </section>

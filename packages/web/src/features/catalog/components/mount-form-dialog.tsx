@@ -32,6 +32,8 @@ const SERVER_FIELDS: Record<string, keyof MountFormValues> = {
   tempMinC: 'tempMin',
   tempMaxC: 'tempMax',
   heightMm: 'height',
+  restraintCapacityN: 'restraintCapacity',
+  upliftCapacityN: 'upliftCapacity',
   unitPrice: 'unitPrice',
   currency: 'currency',
   leadTimeDays: 'leadTimeDays',
@@ -173,6 +175,20 @@ export function MountFormDialog({ isOpen, mount, suppliers, onClose, onSaved }: 
                 <QuantityField name="tempMin" id="mount-temp-min" label="Lowest temperature" unit={temperatureUnit} />
                 <QuantityField name="tempMax" id="mount-temp-max" label="Highest temperature" unit={temperatureUnit} />
                 <QuantityField name="height" id="mount-height" label="Free height" unit={lengthUnit} />
+                <QuantityField
+                  name="restraintCapacity"
+                  id="mount-restraint-capacity"
+                  label="Horizontal restraint rating"
+                  unit={loadUnit}
+                  helperText="Optional; strength level, for seismic restraint"
+                />
+                <QuantityField
+                  name="upliftCapacity"
+                  id="mount-uplift-capacity"
+                  label="Uplift rating"
+                  unit={loadUnit}
+                  helperText="Optional; strength level, for seismic restraint"
+                />
                 <QuantityField name="unitPrice" id="mount-unit-price" label="Unit price" />
                 <TextField name="currency" id="mount-currency" label="Currency" autoComplete="off" helperText="ISO code, e.g. USD" />
                 <QuantityField name="leadTimeDays" id="mount-lead-time" label="Lead time" unit="days" />

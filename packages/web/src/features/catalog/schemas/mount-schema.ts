@@ -33,6 +33,8 @@ export interface MountFormValues {
   tempMin: string;
   tempMax: string;
   height: string;
+  restraintCapacity: string;
+  upliftCapacity: string;
   unitPrice: string;
   currency: string;
   leadTimeDays: string;
@@ -106,6 +108,8 @@ export function mountFormSchema(units: Units) {
       return Number(min) < value;
     }),
     height: positive(),
+    restraintCapacity: positive(),
+    upliftCapacity: positive(),
     unitPrice: yup.number().typeError(NUMBER).optional().min(0, 'Zero or more'),
     currency: yup
       .string()

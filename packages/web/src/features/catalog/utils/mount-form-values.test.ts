@@ -58,4 +58,19 @@ describe('mount form values', () => {
     const changes = formValuesToChanges({ ...initial, dampingModel: 'hysteretic', damping: '0.2', series: '' }, initial, US);
     expect(changes).toEqual({ dampingRatio: null, lossFactor: 0.2, series: null });
   });
+
+  it('carries the restraint ratings in the user’s force unit, and clears one emptied box with null', () => {
+    const mount = makeMount({ restraintCapacityN: lbfToN(2000), upliftCapacityN: 4500 });
+    const us = mountToFormValues(mount, US);
+    expect(us).toMatchObject({ restraintCapacity: '2000' });
+    expect(mountToFormValues(mount, SI)).toMatchObject({ upliftCapacity: '4500' });
+    const input = formValuesToInput(
+      { ...us, supplierId: '1', mountType: 'restrained_spring', restraintCapacity: '1500', upliftCapacity: '' },
+      US,
+    );
+    expect(input.restraintCapacityN).toBe(lbfToN(1500));
+    expect(input).not.toHaveProperty('upliftCapacityN');
+    expect(formValuesToChanges({ ...us, upliftCapacity: '' }, us, US)).toEqual({ upliftCapacityN: null });
+    expect(formValuesToChanges({ ...us, restraintCapacity: '1800' }, us, US)).toEqual({ restraintCapacityN: lbfToN(1800) });
+  });
 });

@@ -30,6 +30,8 @@ export const EMPTY_MOUNT_FORM: MountFormValues = {
   tempMin: '',
   tempMax: '',
   height: '',
+  restraintCapacity: '',
+  upliftCapacity: '',
   unitPrice: '',
   currency: 'USD',
   leadTimeDays: '',
@@ -52,6 +54,8 @@ export function mountToFormValues(mount: Mount, units: Units): MountFormValues {
     tempMin: shown(units, 'temperature', mount.tempMinC),
     tempMax: shown(units, 'temperature', mount.tempMaxC),
     height: shown(units, 'deflection', mount.heightMm === null ? null : mount.heightMm / 1000),
+    restraintCapacity: shown(units, 'force', mount.restraintCapacityN),
+    upliftCapacity: shown(units, 'force', mount.upliftCapacityN),
     unitPrice: plain(mount.unitPrice),
     currency: mount.currency,
     leadTimeDays: plain(mount.leadTimeDays),
@@ -96,6 +100,8 @@ export function formValuesToInput(values: MountFormValues, units: Units): MountI
     ['tempMinC', si(units, 'temperature', values.tempMin)],
     ['tempMaxC', si(units, 'temperature', values.tempMax)],
     ['heightMm', mm(units, values.height)],
+    ['restraintCapacityN', si(units, 'force', values.restraintCapacity)],
+    ['upliftCapacityN', si(units, 'force', values.upliftCapacity)],
     ['unitPrice', num(values.unitPrice)],
     ['leadTimeDays', num(values.leadTimeDays)],
   ];
@@ -129,6 +135,8 @@ export function formValuesToChanges(values: MountFormValues, initial: MountFormV
   if (changed('tempMin')) changes.tempMinC = si(units, 'temperature', values.tempMin);
   if (changed('tempMax')) changes.tempMaxC = si(units, 'temperature', values.tempMax);
   if (changed('height')) changes.heightMm = mm(units, values.height);
+  if (changed('restraintCapacity')) changes.restraintCapacityN = si(units, 'force', values.restraintCapacity);
+  if (changed('upliftCapacity')) changes.upliftCapacityN = si(units, 'force', values.upliftCapacity);
   if (changed('unitPrice')) changes.unitPrice = num(values.unitPrice);
   if (changed('currency')) changes.currency = values.currency.trim().toUpperCase();
   if (changed('leadTimeDays')) changes.leadTimeDays = num(values.leadTimeDays);

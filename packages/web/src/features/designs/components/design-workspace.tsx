@@ -29,6 +29,7 @@ import { EquipmentPanel } from './equipment-panel';
 import { KeyFigures } from './key-figures';
 import { MountLayoutPanel } from './mount-layout-panel';
 import { OperatingPanel } from './operating-panel';
+import { RestraintPanel } from './restraint-panel';
 
 export const CONFLICT_MESSAGE = 'This design was changed by someone else; reload it';
 
@@ -53,7 +54,7 @@ export interface DesignSelectionContext {
   choosing: boolean;
 }
 
-export type DesignTab = 'equipment' | 'layout' | 'running' | 'requirements' | 'selection' | 'measured';
+export type DesignTab = 'equipment' | 'layout' | 'running' | 'requirements' | 'restraint' | 'selection' | 'measured';
 
 export interface DesignWorkspaceProps {
   design: Design;
@@ -320,6 +321,11 @@ function DesignEditor(props: EditorProps) {
           id="requirements"
           title={<TabTitle text="Requirements" problems={problems.has('criteria')} />}
           panel={<CriteriaPanel readOnly={readOnly} suppliers={supplierList} />}
+        />
+        <Tab
+          id="restraint"
+          title={<TabTitle text="Seismic restraint" problems={problems.has('restraint')} />}
+          panel={<RestraintPanel readOnly={readOnly} figures={figures} />}
         />
         <Tab id="selection" title={<TabTitle text="Mount selection" problems={false} />} panel={<>{selection}</>} />
         {renderMeasured ? (

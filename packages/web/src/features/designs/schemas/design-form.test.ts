@@ -66,6 +66,38 @@ describe('design form values', () => {
     });
   });
 
+  it('carries seismic restraint: off by default, on with the gap in the user’s length unit (1 in = 25.4 mm)', () => {
+    const values = toFormValues(demoInput(), US);
+    expect(values.restraint.enabled).toBe(false);
+    expect(toDesignInput(values, US)).not.toHaveProperty('restraint');
+    values.restraint = { ...values.restraint, enabled: true, sdsG: '1.2', importanceFactor: '1.5', zOverH: '0.5', snubberGap: '0.25' };
+    const input = toDesignInput(values, US)!;
+    expect(input.restraint).toEqual({ sdsG: 1.2, importanceFactor: 1.5, zOverH: 0.5, snubberGapMm: 6.35 });
+    expect(toFormValues(input, SI).restraint).toMatchObject({ enabled: true, snubberGap: '6.35', ap: '', rp: '' });
+    expect(toDesignInput(toFormValues(input, SI), SI)!.restraint).toEqual(input.restraint);
+    values.restraint.enabled = false;
+    expect(toDesignInput(values, US)).not.toHaveProperty('restraint');
+  });
+
+  it('checks the restraint figures only when the check is on, in words', () => {
+    const values = toFormValues(demoInput(), SI);
+    values.restraint = { ...values.restraint, sdsG: 'lots', zOverH: '3' };
+    expect(errorsOf(values)).toEqual({});
+    values.restraint.enabled = true;
+    expect(errorsOf(values)).toMatchObject({
+      'restraint.sdsG': 'S_DS must be a number',
+      'restraint.zOverH': 'z/h is from 0 (grade) to 1 (roof)',
+    });
+    values.restraint = { ...values.restraint, sdsG: '150', zOverH: '0', rp: '20', snubberGap: '-1' };
+    expect(errorsOf(values)).toEqual({
+      'restraint.sdsG': 'S_DS must be at most 4 g: give it in g, not in %',
+      'restraint.rp': 'R_p is from 1 to 12',
+      'restraint.snubberGap': 'The gap cannot be negative',
+    });
+    values.restraint.sdsG = '';
+    expect(errorsOf(values)['restraint.sdsG']).toBe('Enter S_DS, in g');
+  });
+
   it('formats numbers for the input boxes without float noise', () => {
     expect(numberText(0.1 + 0.2)).toBe('0.3');
     expect(numberText(undefined)).toBe('');

@@ -9,6 +9,7 @@ import {
   type MountPoint,
   type MountType,
   type OperatingConditions,
+  type RestraintInput,
 } from '@/types/design-api';
 
 /**
@@ -28,6 +29,8 @@ export const DESIGN_LIMITS = {
   maxIsolationPct: 99.9,
   maxUtilization: 1.5,
   ambientTempC: { min: -100, max: 400 },
+  /** Seismic restraint (the server's RestraintInputDto; ASCE 7-16 §13.3.1). */
+  restraint: { sdsG: { max: 4 }, ap: { min: 1, max: 2.5 }, rp: { min: 1, max: 12 }, gapMm: { max: 100 } },
 } as const;
 
 export interface ComponentValues {
@@ -78,12 +81,38 @@ export interface CriteriaValues {
   supplierIds: string[];
 }
 
+/** Seismic restraint as typed; `enabled` false leaves it out of the input. */
+export interface RestraintValues {
+  enabled: boolean;
+  sdsG: string;
+  /** '1' or '1.5'. */
+  importanceFactor: string;
+  zOverH: string;
+  /** Blank: the code's default for vibration-isolated components. */
+  ap: string;
+  rp: string;
+  /** Nominal gap to the restraints, in the user's length unit (mm or in); blank: not specified. */
+  snubberGap: string;
+}
+
 export interface DesignFormValues {
   components: ComponentValues[];
   mountPoints: MountPointValues[];
   operating: OperatingValues;
   criteria: CriteriaValues;
+  restraint: RestraintValues;
 }
+
+/** Restraint boxes of a design without restraint: off, with the usual starting values. */
+export const NO_RESTRAINT: RestraintValues = {
+  enabled: false,
+  sdsG: '',
+  importanceFactor: '1',
+  zOverH: '0',
+  ap: '',
+  rp: '',
+  snubberGap: '',
+};
 
 // ---- SI → text ----
 
@@ -141,6 +170,19 @@ export function toFormValues(input: DesignInput, units: Units): DesignFormValues
       mountTypes: [...(criteria.mountTypes ?? [])],
       supplierIds: (criteria.supplierIds ?? []).map(String),
     },
+    restraint: input.restraint ? restraintValues(input.restraint, units) : { ...NO_RESTRAINT },
+  };
+}
+
+function restraintValues(restraint: RestraintInput, units: Units): RestraintValues {
+  return {
+    enabled: true,
+    sdsG: numberText(restraint.sdsG),
+    importanceFactor: String(restraint.importanceFactor),
+    zOverH: numberText(restraint.zOverH),
+    ap: numberText(restraint.ap),
+    rp: numberText(restraint.rp),
+    snubberGap: restraint.snubberGapMm === undefined ? '' : numberText(units.toDisplay('deflection', restraint.snubberGapMm / 1000)),
   };
 }
 
@@ -270,14 +312,40 @@ export function parseCriteria(values: CriteriaValues, units: Units): Criteria | 
   return criteria;
 }
 
+/**
+ * Seismic restraint in SI (gap in mm, as the API takes it): undefined when it is off, null while
+ * a required figure is missing.
+ */
+export function parseRestraint(values: RestraintValues, units: Units): RestraintInput | undefined | null {
+  if (!values.enabled) return undefined;
+  const sdsG = parseNumber(values.sdsG);
+  const importanceFactor = parseNumber(values.importanceFactor);
+  const zOverH = parseNumber(values.zOverH);
+  if (sdsG === undefined || zOverH === undefined || (importanceFactor !== 1 && importanceFactor !== 1.5)) return null;
+  const restraint: RestraintInput = { sdsG, importanceFactor, zOverH };
+  for (const key of ['ap', 'rp'] as const) {
+    if (isBlank(values[key])) continue;
+    const value = parseNumber(values[key]);
+    if (value === undefined) return null;
+    restraint[key] = value;
+  }
+  if (!isBlank(values.snubberGap)) {
+    const gap = parseNumber(values.snubberGap);
+    if (gap === undefined) return null;
+    restraint.snubberGapMm = units.toSi('deflection', gap) * 1000;
+  }
+  return restraint;
+}
+
 /** The whole form in SI, or null while any part is incomplete. Validate with the schema first. */
 export function toDesignInput(values: DesignFormValues, units: Units): DesignInput | null {
   const components = parseComponents(values.components, units);
   const mountPoints = parseMountPoints(values.mountPoints, units);
   const operating = parseOperating(values.operating);
   const criteria = parseCriteria(values.criteria, units);
-  if (!components || !mountPoints || !operating || !criteria) return null;
-  return { components, mountPoints, operating, criteria };
+  const restraint = parseRestraint(values.restraint, units);
+  if (!components || !mountPoints || !operating || !criteria || restraint === null) return null;
+  return { components, mountPoints, operating, criteria, ...(restraint ? { restraint } : {}) };
 }
 
 // ---- validation (yup) ----
@@ -396,6 +464,45 @@ const criteriaSchema = yup.object({
   supplierIds: yup.array(yup.string().required()).required(),
 });
 
+/** Seismic restraint: checked only when it is on; the gap limit is stated in the user's unit. */
+function restraintSchema(units: Units) {
+  const R = DESIGN_LIMITS.restraint;
+  const gapMax = units.toDisplay('deflection', R.gapMm.max / 1000);
+  const gapUnit = units.label('deflection');
+  // Off: the boxes keep what was typed and are not checked.
+  const whenOn = (schema: yup.NumberSchema<number | undefined>, required: string | null) =>
+    yup.mixed().when('enabled', { is: true, then: () => (required ? schema.required(required) : schema), otherwise: () => yup.mixed() });
+  const number = (what: string) => yup.number().transform(blankToUndefined).typeError(`${what} must be a number`);
+  return yup.object({
+    enabled: yup.boolean().required(),
+    sdsG: whenOn(
+      number('S_DS')
+        .moreThan(0, 'S_DS must be more than 0 g')
+        .max(R.sdsG.max, `S_DS must be at most ${R.sdsG.max} g: give it in g, not in %`),
+      'Enter S_DS, in g',
+    ),
+    importanceFactor: yup.string().oneOf(['1', '1.5'], 'The importance factor I_p is 1.0 or 1.5').required(),
+    zOverH: whenOn(
+      number('z/h').min(0, 'z/h is from 0 (grade) to 1 (roof)').max(1, 'z/h is from 0 (grade) to 1 (roof)'),
+      'Enter z/h, from 0 to 1',
+    ),
+    ap: whenOn(
+      number('a_p').min(R.ap.min, `a_p is from ${R.ap.min} to ${R.ap.max}`).max(R.ap.max, `a_p is from ${R.ap.min} to ${R.ap.max}`),
+      null,
+    ),
+    rp: whenOn(
+      number('R_p').min(R.rp.min, `R_p is from ${R.rp.min} to ${R.rp.max}`).max(R.rp.max, `R_p is from ${R.rp.min} to ${R.rp.max}`),
+      null,
+    ),
+    snubberGap: whenOn(
+      number('The gap')
+        .min(0, 'The gap cannot be negative')
+        .max(gapMax, `The gap must be at most ${Number(gapMax.toPrecision(3))} ${gapUnit}`),
+      null,
+    ),
+  });
+}
+
 /** Temperature limits depend on the unit system, so the schema is built per user. */
 export function designFormSchema(units: Units) {
   const lowest = units.toDisplay('temperature', DESIGN_LIMITS.ambientTempC.min);
@@ -422,6 +529,7 @@ export function designFormSchema(units: Units) {
         .min(lowest, `The ambient temperature must be at least ${Math.round(lowest)} ${unit}`)
         .max(highest, `The ambient temperature must be at most ${Math.round(highest)} ${unit}`),
     }),
+    restraint: restraintSchema(units),
   });
 }
 
@@ -432,6 +540,7 @@ const SECTION_NAMES: Record<keyof DesignFormValues, string> = {
   mountPoints: 'Mount layout',
   operating: 'Running conditions',
   criteria: 'Requirements',
+  restraint: 'Seismic restraint',
 };
 
 /**

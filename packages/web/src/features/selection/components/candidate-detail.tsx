@@ -9,6 +9,7 @@ import type { Candidate } from '@/types/design-api';
 
 import { useCandidateDamping } from '../hooks/use-candidate-damping';
 import { CandidateCharts } from './candidate-charts';
+import { CandidateRestraintSection, type RestraintPlanLayout } from './candidate-restraint';
 import {
   formatDays,
   formatFrequency,
@@ -49,6 +50,8 @@ export interface CandidateDetailProps {
   chooseBlockedReason: string | null;
   choosing: boolean;
   onChoose: () => void;
+  /** Mount points and CG in plan (of the input the candidate was computed from), for the restraint plan. */
+  restraintLayout?: RestraintPlanLayout | null;
 }
 
 const SAME_MASS_TOLERANCE = 1e-9;
@@ -66,6 +69,7 @@ export function CandidateDetail({
   chooseBlockedReason,
   choosing,
   onChoose,
+  restraintLayout = null,
 }: CandidateDetailProps) {
   const units = useUnits();
   const damping = useCandidateDamping(candidate);
@@ -212,6 +216,8 @@ export function CandidateDetail({
           ? `The upper limit of the window is checked with the ${formatMargin(margin)} % weight margin, the lower limit without it.`
           : 'No weight margin is asked for.'}
       </p>
+
+      {candidate.restraint ? <CandidateRestraintSection restraint={candidate.restraint} layout={restraintLayout} /> : null}
 
       <h4 className="tc-subsection-title">Isolation at each disturbing frequency</h4>
       <HTMLTable compact striped className="tc-table" aria-label="Isolation per frequency">

@@ -12,6 +12,7 @@ import { useRunDesignSelection } from '../api/run-design-selection';
 import { candidateKey } from './candidate-format';
 import { CandidateComparison } from './candidate-comparison';
 import { CandidateDetail, type DisturbingFrequencyLine } from './candidate-detail';
+import type { RestraintPlanLayout } from './candidate-restraint';
 import { CandidatesTable, MAX_COMPARED, type CandidateSort, type RankedCandidate } from './candidates-table';
 
 /** How many candidates a run asks for: enough to see why plausible mounts were rejected. */
@@ -49,6 +50,16 @@ interface Run {
 }
 
 const DEFAULT_SORT: CandidateSort = { column: 'rank', direction: 'asc' };
+
+/** Mount points and CG in plan of a saved input, for the restraint plan (null when it cannot be computed). */
+function restraintLayoutOf(input: DesignInput): RestraintPlanLayout | null {
+  try {
+    const { cg } = massProperties(input.components);
+    return { points: input.mountPoints.map((p) => ({ label: p.label, x: p.x, y: p.y })), cg: { x: cg.x, y: cg.y } };
+  } catch {
+    return null;
+  }
+}
 
 /** Total mass of a saved input [kg], for the chosen candidate's reference. */
 function savedMassKg(input: DesignInput): number | null {
@@ -114,6 +125,7 @@ export const SelectionPanel = memo(function SelectionPanel({
   const compared = useMemo(() => compareKeys.map((key) => byKey.get(key)).filter((row) => row !== undefined), [compareKeys, byKey]);
   const chosenKey = chosen ? candidateKey(chosen) : null;
   const savedMass = useMemo(() => savedMassKg(savedInput), [savedInput]);
+  const restraintLayout = useMemo(() => restraintLayoutOf(savedInput), [savedInput]);
 
   const find = async () => {
     setRunError(null);
@@ -263,6 +275,7 @@ export const SelectionPanel = memo(function SelectionPanel({
               chooseBlockedReason={stale ? 'Find mounts again first: the input changed since this run.' : null}
               choosing={choosing}
               onChoose={() => void choose(detailCandidate)}
+              restraintLayout={restraintLayout}
             />
           ) : run ? (
             <p className="tc-muted tc-note">Select a candidate to see its loads, curves and modes.</p>

@@ -18,7 +18,7 @@ import { errorMessage, errorStatus } from '@/lib/api-errors';
 import { useUser } from '@/lib/auth';
 import { canDesign } from '@/lib/authorization';
 
-const TABS: readonly DesignTab[] = ['equipment', 'layout', 'running', 'requirements', 'selection', 'measured'];
+const TABS: readonly DesignTab[] = ['equipment', 'layout', 'running', 'requirements', 'restraint', 'selection', 'measured'];
 
 /**
  * The design workspace: the design's input (designs feature) with the mount selection

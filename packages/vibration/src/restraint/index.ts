@@ -1,0 +1,3 @@
+export * from './seismic-design-force.js';
+export * from './restraint-demand.js';
+export * from './governing-demand.js';
