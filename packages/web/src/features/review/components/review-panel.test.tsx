@@ -108,6 +108,13 @@ describe('Check and release panel', () => {
 
   it('saves unsaved edits before sending for check, so the checker sees them and nothing is lost', async () => {
     const { user, fake, server } = openDesign({ status: 'draft' });
+    // The save keeps the chosen mounts here, so the move follows it (the next test: the server
+    // clears them, as it does whenever the input changes).
+    fake.on('put', '/designs/:id', ({ body }) => {
+      const update = body as { input?: Design['input'] };
+      server.design = { ...server.design, input: update.input ?? server.design.input, version: server.design.version + 1 };
+      return { status: 200, data: server.design };
+    });
     const region = await panel();
     const mass = screen.getByLabelText('Mass of Pump');
     await user.clear(mass);
