@@ -84,7 +84,7 @@ describe('seismic restraint', () => {
     // Further down, mounts without restraint ratings fail and say why.
     await page.getByLabel('Sort by').selectOption('verdict');
     await page.getByRole('button', { name: 'Ascending' }).click();
-    await page.locator('.tc-cell-failing .tc-candidate-open').first().click();
+    await page.locator('.tc-results-row.is-failing .tc-candidate-open').first().click();
     await page
       .getByTestId('candidate-reasons')
       .getByText(/has no horizontal restraint rating/)
