@@ -205,7 +205,11 @@ describe('passage through modes below the running range (docs/engineering/whole-
       peak = Math.max(peak, Math.hypot(X.re * Math.cos(phi) - X.im * Math.sin(phi), Z.re * Math.cos(phi) - Z.im * Math.sin(phi)));
     }
     expect(Math.abs(p.motionM / peak - 1)).toBeLessThan(1e-8);
-    expect(Math.abs(p.motionM / Math.max(Math.hypot(X.re, X.im), Math.hypot(Z.re, Z.im)) - 1)).toBeLessThan(0.05); // nearly an ellipse with those semi-axes
+    // X and Z are nearly in opposite phase here, so the path is nearly a line: the peak lies between max(|X|, |Z|) and √(|X|² + |Z|²)
+    const [ax, az] = [Math.hypot(X.re, X.im), Math.hypot(Z.re, Z.im)];
+    expect(p.motionM).toBeGreaterThan(Math.max(ax, az));
+    expect(p.motionM).toBeLessThanOrEqual(Math.hypot(ax, az) * (1 + 1e-12));
+    expect(p.motionM).toBeCloseTo(8.0666e-6, 9);
     const direct = wholeMachineResponse(sys, { at: src.at, kind: 'rotating', axis: 'y', amplitudeN: F }, p.modeFrequencyHz);
     expect(p.motionM).toBeCloseTo(Math.max(...direct.mountPeakMotionM), 14);
   });
