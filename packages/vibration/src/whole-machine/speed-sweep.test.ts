@@ -156,6 +156,7 @@ describe('source frequency and amplitude (docs/engineering/whole-machine.md §6,
     expect(f).toBeCloseTo(63.33, 1);
     // at the top speed it is the familiar m_r·G·Ω_max
     expect(sourceAmplitudeN(UNBALANCE, 1800, 1800)).toBeCloseTo(120 * 6.3e-3 * ((2 * Math.PI * 1800) / 60), 9);
+    expect(sourceAmplitudeN(UNBALANCE, 1800, 1800)).toBeCloseTo(142.5, 1);
     expect(sourceFrequencyHz({ order: 2 }, 1500)).toBe(50);
     expect(sourceFrequencyHz({ order: 2, frequencyHz: 100 }, 1500)).toBe(100);
     expect(() => sourceAmplitudeN({ at: { x: 0, y: 0, z: 0 }, kind: 'directional', axis: 'z' }, 1000, 1000)).toThrow(/amplitudeN/);
