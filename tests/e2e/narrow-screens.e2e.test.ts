@@ -1,7 +1,8 @@
 import type { Browser, Locator, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { DEMO_ACCOUNTS } from '../../tools/harness/fixtures.mjs';
-import { launch, newPage, outsideRequests, screenshot, signIn } from './browser';
+import { join } from 'node:path';
+import { launch, newPage, outsideRequests, screenshot, SCREENSHOT_DIR, signIn } from './browser';
 
 // The app on a phone (390 px) and an upright tablet (768 px): the navigation collapses into a
 // menu button that opens the links in a drawer, and no page scrolls sideways (tables scroll
@@ -136,7 +137,7 @@ describe.each(WIDTHS)('at $width px ($name)', ({ width, height }) => {
     expect(await pageOverflow(page)).toBeLessThanOrEqual(0);
     expect(await table.evaluate((box) => box.scrollWidth > box.clientWidth)).toBe(true);
     await table.scrollIntoViewIfNeeded();
-    await screenshot(page, `narrow-${width}-05-candidates`);
+    await page.locator('.tc-candidates').screenshot({ path: join(SCREENSHOT_DIR, `narrow-${width}-05-candidates.png`) });
     await page.context().close();
   });
 
@@ -155,7 +156,7 @@ describe.each(WIDTHS)('at $width px ($name)', ({ width, height }) => {
 
     await goThroughMenu(page, 'Catalog');
     await page.getByRole('heading', { name: 'Catalog', level: 1 }).waitFor();
-    await settle(page);
+    await page.getByText(/^[\d,]+ mounts$/).waitFor();
     expect(await pageOverflow(page)).toBeLessThanOrEqual(0);
     await shot(page, `narrow-${width}-07-catalog`);
     await page.context().close();
