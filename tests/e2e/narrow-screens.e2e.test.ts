@@ -159,6 +159,19 @@ describe.each(WIDTHS)('at $width px ($name)', ({ width, height }) => {
     await page.getByText(/^[\d,]+ mounts$/).waitFor();
     expect(await pageOverflow(page)).toBeLessThanOrEqual(0);
     await shot(page, `narrow-${width}-07-catalog`);
+
+    // a mount's details open in a drawer that takes the screen (up to 560 px), not half of it
+    await page
+      .getByRole('region', { name: 'Catalog mounts' })
+      .getByRole('button', { name: /^[A-Z]{2}-/ })
+      .first()
+      .click();
+    const drawer = page.getByRole('dialog', { name: /^Mount / });
+    await drawer.getByRole('figure').first().waitFor();
+    const drawerWidth = await page.locator('.tc-mount-drawer').evaluate((el) => el.getBoundingClientRect().width);
+    expect(drawerWidth).toBeGreaterThanOrEqual(Math.min(width, 560) - 1);
+    await page.evaluate('window.scrollTo(0, 0)');
+    await screenshot(page, `narrow-${width}-08-mount-drawer`);
     await page.context().close();
   });
 });
