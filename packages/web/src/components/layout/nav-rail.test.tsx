@@ -1,4 +1,4 @@
-import { screen, within } from '@testing-library/react';
+import { screen, waitFor, within } from '@testing-library/react';
 
 import { ROLES, type Role } from '@/lib/authorization';
 import { renderApp } from '@/testing/render';
@@ -43,5 +43,38 @@ describe('navigation rail', () => {
     await user.click(within(nav).getByRole('link', { name: 'Purchasing' }));
     expect(await screen.findByRole('heading', { name: 'Purchasing', level: 1 })).toBeInTheDocument();
     expect(router.state.location.pathname).toBe('/purchasing');
+  });
+});
+
+// On narrow screens (app.css) the rail is hidden and the top bar's menu button opens the same links in a drawer.
+describe('the narrow-screen menu', () => {
+  it('opens the role’s links in a drawer, follows one and closes behind it', async () => {
+    const { user, router } = renderApp({ signedInAs: 'purchaser', path: '/' });
+    const button = await screen.findByRole('button', { name: 'Menu' });
+    expect(button).toHaveAttribute('aria-expanded', 'false');
+    expect(screen.getAllByRole('navigation', { name: 'Main' })).toHaveLength(1);
+
+    await user.click(button);
+    expect(button).toHaveAttribute('aria-expanded', 'true');
+    const [, menu] = screen.getAllByRole('navigation', { name: 'Main' });
+    expect(
+      within(menu!)
+        .getAllByRole('link')
+        .map((link) => link.textContent),
+    ).toEqual(EXPECTED_LINKS.purchaser);
+
+    await user.click(within(menu!).getByRole('link', { name: 'Purchasing' }));
+    expect(await screen.findByRole('heading', { name: 'Purchasing', level: 1 })).toBeInTheDocument();
+    expect(router.state.location.pathname).toBe('/purchasing');
+    await waitFor(() => expect(screen.getAllByRole('navigation', { name: 'Main' })).toHaveLength(1));
+    expect(button).toHaveAttribute('aria-expanded', 'false');
+  });
+
+  it('closes with Escape', async () => {
+    const { user } = renderApp({ signedInAs: 'viewer', path: '/' });
+    await user.click(await screen.findByRole('button', { name: 'Menu' }));
+    expect(screen.getAllByRole('navigation', { name: 'Main' })).toHaveLength(2);
+    await user.keyboard('{Escape}');
+    await waitFor(() => expect(screen.getAllByRole('navigation', { name: 'Main' })).toHaveLength(1));
   });
 });

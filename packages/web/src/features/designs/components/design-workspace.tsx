@@ -301,7 +301,14 @@ function DesignEditor(props: EditorProps) {
         </Callout>
       ) : null}
       <KeyFigures figures={figures} chosen={base.chosen} units={units} />
-      <Tabs id="design-sections" selectedTabId={tab} onChange={(id) => onTab(id as DesignTab)} size="large" className="tc-design-tabs">
+      <Tabs
+        id="design-sections"
+        selectedTabId={tab}
+        onChange={(id) => onTab(id as DesignTab)}
+        size="large"
+        animate={false}
+        className="tc-design-tabs"
+      >
         <Tab
           id="equipment"
           title={<TabTitle text="Equipment" problems={problems.has('components')} />}
