@@ -21,6 +21,7 @@ import {
   type ResilientMount,
 } from '../../packages/vibration/src/index.js';
 import { reportFigure } from './bench-result.js';
+import { medianRunMs as time } from './timing.js';
 
 const CANDIDATES = 100_000;
 const POINTS = [
@@ -37,22 +38,6 @@ const WEIGHT = MASS * 9.80665;
 const CG = { x: 0.06, y: 0.015 };
 const FREQS = [24.667, 49.333, 100];
 const NF = FREQS.length;
-
-function median(values: number[]): number {
-  const s = [...values].sort((a, b) => a - b);
-  return s[Math.floor(s.length / 2)];
-}
-
-function time(fn: () => void, runs: number, warmup: number): number {
-  for (let i = 0; i < warmup; i++) fn();
-  const t: number[] = [];
-  for (let i = 0; i < runs; i++) {
-    const t0 = performance.now();
-    fn();
-    t.push(performance.now() - t0);
-  }
-  return median(t);
-}
 
 // ---- candidate data (invented), allocated once -------------------------------------------
 let seed = 12345;

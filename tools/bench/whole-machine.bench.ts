@@ -24,6 +24,7 @@ import {
   crossingSpeeds,
 } from '../../packages/vibration/src/index.js';
 import { reportFigure } from './bench-result.js';
+import { medianRunMs as time } from './timing.js';
 
 const MIN_RPM = 900;
 const MAX_RPM = 1800;
@@ -45,21 +46,6 @@ const baseModes = rigidBodyModes({
   cg: model.body.cg,
   mounts: model.mounts,
 }).modes.map((m) => m.frequencyHz);
-
-function median(values: number[]): number {
-  const s = [...values].sort((a, b) => a - b);
-  return s[Math.floor(s.length / 2)];
-}
-function time(fn: () => void, runs: number, warmup: number): number {
-  for (let i = 0; i < warmup; i++) fn();
-  const t: number[] = [];
-  for (let i = 0; i < runs; i++) {
-    const t0 = performance.now();
-    fn();
-    t.push(performance.now() - t0);
-  }
-  return median(t);
-}
 
 let sink = 0;
 let solvesPerCandidate = 0;

@@ -10,7 +10,6 @@ import { requireNonNegative, requirePositive } from '../errors/validate.js';
 export function seriesStiffness(mountNPerM: number, supportNPerM: number): number {
   const km = requireNonNegative('mountNPerM', mountNPerM);
   if (supportNPerM === Infinity) return km;
-  if (km === 0) return requirePositive('supportNPerM', supportNPerM) * 0;
   const ks = requirePositive('supportNPerM', supportNPerM);
-  return (km * ks) / (km + ks);
+  return (km * ks) / (km + ks); // k_m = 0 gives 0: nothing carries load through the pair
 }
