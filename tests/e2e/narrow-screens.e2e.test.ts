@@ -91,6 +91,8 @@ describe.each(WIDTHS)('at $width px ($name)', ({ width, height }) => {
       expect(size.width).toBeGreaterThanOrEqual(14);
       expect(size.height).toBeGreaterThanOrEqual(14);
     }
+    // the drawer has slid in and rests against the left edge, nothing cut off
+    await page.waitForFunction(() => document.querySelector('.tc-menu-drawer')?.getBoundingClientRect().left === 0);
     if (email === DEMO_ACCOUNTS.admin) await screenshot(page, `narrow-${width}-01-menu`);
     await page.keyboard.press('Escape');
     await menu.waitFor({ state: 'hidden' });
