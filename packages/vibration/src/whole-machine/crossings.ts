@@ -1,4 +1,6 @@
 /** Crossing speeds of a source order with the undamped modes (docs/engineering/whole-machine.md §6). */
+import { requireFinite, requirePositive } from '../errors/validate.js';
+import { insideSkipBand, requireRange } from './speed-range.js';
 import { type CrossingInput, type ModeCrossing } from './types.js';
 
 /**
@@ -8,6 +10,15 @@ import { type CrossingInput, type ModeCrossing } from './types.js';
  * @returns the crossings
  */
 export function crossingSpeeds(input: CrossingInput): ModeCrossing[] {
-  void input;
-  throw new Error('not implemented yet');
+  const order = requirePositive('order', input.order);
+  const bands = requireRange(input.minRpm, input.maxRpm, input.skipBandsRpm);
+  const out: ModeCrossing[] = [];
+  input.modeFrequenciesHz.forEach((f, modeIndex) => {
+    requireFinite(`modeFrequenciesHz[${modeIndex}]`, f);
+    if (!(f > 0)) return;
+    const speedRpm = (60 * f) / order;
+    if (speedRpm < input.minRpm || speedRpm > input.maxRpm || insideSkipBand(speedRpm, bands)) return;
+    out.push({ modeIndex, modeFrequencyHz: f, order, speedRpm });
+  });
+  return out.sort((a, b) => a.speedRpm - b.speedRpm || a.modeIndex - b.modeIndex);
 }
