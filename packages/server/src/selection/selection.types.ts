@@ -73,6 +73,49 @@ export interface CandidateRestraint {
   passes: boolean;
 }
 
+/** A source order crossing a rigid-body mode inside the running range (docs/engineering/selection.md §15). */
+export interface CandidateCrossing {
+  /** The mode's motion, e.g. "pitch" or "roll + sway (mixed)". */
+  mode: string;
+  modeFrequencyHz: number;
+  /** The source's label. */
+  source: string;
+  /** Index of the source in the resolved list (internal; not in the answer). */
+  sourceIndex?: number;
+  order: number;
+  speedRpm: number;
+}
+
+/** The whole-machine response of one source at one speed, at the governing stiffness factor. */
+export interface WholeMachinePerFrequency {
+  source: string;
+  frequencyHz: number;
+  /** Null for a fixed-frequency source when the input gives no speed. */
+  speedRpm: number | null;
+  transmissibility: number;
+  /** The source's amplitude there, N (1 for the default vertical force: the forces are then per newton). */
+  amplitudeN: number;
+  /** Peak dynamic force through each mount, N. */
+  perPoint: { label: string; forceN: number }[];
+}
+
+/** The whole-machine verdict's figures (docs/engineering/selection.md §14–§16). */
+export interface CandidateWholeMachine {
+  worst: {
+    transmissibility: number;
+    efficiencyPct: number;
+    frequencyHz: number;
+    speedRpm: number | null;
+    /** The source's label. */
+    source: string;
+    /** The stiffness factor that governed (1 − tol, 1 or 1 + tol). */
+    stiffnessFactor: number;
+  };
+  /** The stiffness band applied, ± % (the criteria's, or the default of the mount type). */
+  stiffnessTolerancePct: number;
+  perFrequency: WholeMachinePerFrequency[];
+}
+
 /** Weighted score terms; they add up to `score` (see scoring.ts). */
 export interface ScoreTerms {
   isolation: number;
@@ -112,6 +155,11 @@ export interface Candidate {
   modes?: CandidateMode[];
   /** Seismic restraint figures, when the input asks for restraint. */
   restraint?: CandidateRestraint;
+  /** The whole-machine verdict's figures (absent when the model cannot be built: the inertia is unknown). */
+  wholeMachine?: CandidateWholeMachine;
+  /** Crossings of the source orders with the modes inside the running range, lowest speed first. */
+  crossings?: CandidateCrossing[];
+  /** Follows the whole-machine verdict (with the load, deflection, mode and restraint checks). */
   passes: boolean;
   /** Why it fails, in words a user understands (empty when it passes). */
   reasons: string[];

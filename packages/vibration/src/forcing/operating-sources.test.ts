@@ -55,11 +55,11 @@ describe('resolveOperatingSources (docs/engineering/forcing.md §7)', () => {
       CG,
     );
     expect(sources.map((s) => s.label)).toEqual([
-      'Vertical force at the CG, 1× shaft',
-      'Vertical force at the CG, 2× shaft',
-      'Vertical force at the CG, vane pass (6 vanes)',
-      'Vertical force at the CG, 2× line (50 Hz supply)',
-      'Vertical force at the CG, 37 Hz',
+      'Vertical force through the CG, 1× shaft',
+      'Vertical force through the CG, 2× shaft',
+      'Vertical force through the CG, vane pass (6 vanes)',
+      'Vertical force through the CG, 2× line (50 Hz supply)',
+      'Vertical force through the CG, 37 Hz',
     ]);
     for (const s of sources) expect(s).toMatchObject({ at: CG, axis: 'z', kind: 'directional', amplitudeN: 1, unitForce: true });
     expect(sources.map((s) => sourceFrequencyHz(s, 1480))).toEqual([1480 / 60, 2960 / 60, (6 * 1480) / 60, 100, 37]);
