@@ -54,9 +54,22 @@ type Candidate = {
 };
 
 type WholeMachine = {
-  worst: { transmissibility: number; efficiencyPct: number; frequencyHz: number; speedRpm: number | null; source: string; stiffnessFactor: number };
+  worst: {
+    transmissibility: number;
+    efficiencyPct: number;
+    frequencyHz: number;
+    speedRpm: number | null;
+    source: string;
+    stiffnessFactor: number;
+  };
   stiffnessTolerancePct: number;
-  perFrequency: { source: string; frequencyHz: number; speedRpm: number | null; transmissibility: number; perPoint: { label: string; forceN: number }[] }[];
+  perFrequency: {
+    source: string;
+    frequencyHz: number;
+    speedRpm: number | null;
+    transmissibility: number;
+    perPoint: { label: string; forceN: number }[];
+  }[];
 };
 
 describe('selection (e2e)', () => {
@@ -309,7 +322,9 @@ describe('selection (e2e)', () => {
     expect(surge.frequencyHz).toBeCloseTo(Math.sqrt(24000) / TWO_PI, 6);
     // a vertical force through the CG of a symmetric machine drives bounce only
     expect(c.passes).toBe(true);
-    expect(c.notes.some((n) => /^The (surge|sway) mode at 24\.66 Hz lies within ±20 % of the disturbing frequency 24\.67 Hz/.test(n))).toBe(true);
+    expect(c.notes.some((n) => /^The (surge|sway) mode at 24\.66 Hz lies within ±20 % of the disturbing frequency 24\.67 Hz/.test(n))).toBe(
+      true,
+    );
     // an unbalance turning in the horizontal plane at the CG drives surge and sway at 1480 rpm
     const { disturbingFrequenciesHz: _omit, ...rest } = request({ mountPoints: points, criteria });
     const driven = await select({
@@ -324,7 +339,9 @@ describe('selection (e2e)', () => {
     const d = find(driven.body.candidates, swayMount.id) as Candidate & { wholeMachine: WholeMachine };
     expect(d.passes).toBe(false);
     expect(d.wholeMachine.worst.transmissibility).toBeGreaterThan(1); // well damped: viscous rows damp as 2ζω/ω_v (selection.md §14)
-    expect(d.reasons[0]).toMatch(/^Whole machine, Rotor: at 1480 rpm \(24\.67 Hz\), stiffness 10 % (above|below) nominal the mounts amplify the force/);
+    expect(d.reasons[0]).toMatch(
+      /^Whole machine, Rotor: at 1480 rpm \(24\.67 Hz\), stiffness 10 % (above|below) nominal the mounts amplify the force/,
+    );
   });
 
   it('a CG outside the mount polygon fails every candidate with that reason (not a 500)', async () => {

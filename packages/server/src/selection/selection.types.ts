@@ -183,6 +183,31 @@ export interface SelectionResult {
   disturbingFrequenciesHz: number[];
 }
 
+/** `POST /api/selection/curves`: transmissibility against speed per source of one candidate (docs/engineering/selection.md §17). */
+export interface SelectionCurves {
+  candidate: { kind: 'uniform' | 'series'; mountId?: number; seriesId?: string; label: string; passes: boolean };
+  /** Running range, rpm (min = max at a fixed speed); null when only fixed frequencies force the machine. */
+  speedRangeRpm: { min: number; max: number } | null;
+  skipBandsRpm: { min: number; max: number }[];
+  /** The isolation requirement and the transmissibility it allows. */
+  requirement: { minIsolationPct: number; transmissibility: number };
+  stiffnessTolerancePct: number;
+  /** Modes at the nominal stiffness. */
+  modes: { frequencyHz: number; dominant: string; coupled: boolean }[];
+  crossings: CandidateCrossing[];
+  worst: CandidateWholeMachine['worst'] | null;
+  sources: {
+    label: string;
+    order: number | null;
+    fixedFrequencyHz: number | null;
+    speedRpm: number[];
+    frequencyHz: number[];
+    transmissibility: number[];
+    softEnd: number[] | null;
+    stiffEnd: number[] | null;
+  }[];
+}
+
 /** A disturbing frequency with where it comes from. */
 export interface LabelledFrequency {
   frequencyHz: number;

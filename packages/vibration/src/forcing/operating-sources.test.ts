@@ -36,7 +36,14 @@ describe('resolveOperatingSources (docs/engineering/forcing.md §7)', () => {
       speedRangeRpm: { min: 600, max: 1500 },
       lineFrequencyHz: 50,
       sources: [
-        { label: 'Magnetic', kind: 'force' as const, at: { x: -0.3, y: 0, z: 0.45 }, axis: 'z' as const, amplitudeN: 200, frequencyHz: 100 },
+        {
+          label: 'Magnetic',
+          kind: 'force' as const,
+          at: { x: -0.3, y: 0, z: 0.45 },
+          axis: 'z' as const,
+          amplitudeN: 200,
+          frequencyHz: 100,
+        },
         { label: 'Blade', kind: 'force' as const, at: { x: 0, y: 0, z: 1 }, axis: 'y' as const, amplitudeN: 50, order: 7 },
       ],
     };
@@ -66,9 +73,9 @@ describe('resolveOperatingSources (docs/engineering/forcing.md §7)', () => {
   });
 
   it('a source turning with the shaft needs a speed; nothing at all is refused', () => {
-    expect(() =>
-      resolveOperatingSources({ sources: [{ label: 'I', kind: 'unbalance', at: CG, axis: 'x', rotorMassKg: 1 }] }, CG),
-    ).toThrow(/operating.sources\[0\]: turns with the shaft/);
+    expect(() => resolveOperatingSources({ sources: [{ label: 'I', kind: 'unbalance', at: CG, axis: 'x', rotorMassKg: 1 }] }, CG)).toThrow(
+      /operating.sources\[0\]: turns with the shaft/,
+    );
     expect(() => resolveOperatingSources({ orders: [1] }, CG)).toThrow(/gives no source/);
   });
 

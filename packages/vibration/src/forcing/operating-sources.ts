@@ -149,9 +149,11 @@ export function resolveOperatingSources(operating: OperatingForcingInput, cg: Ve
     } else if (supplyTwice !== undefined) {
       sources.push(unit(`Vertical force through the CG, 2× line (${hz(supplyTwice / 2)} Hz supply)`, { frequencyHz: supplyTwice }));
     }
-    for (const f of operating.extraFrequenciesHz ?? []) sources.push(unit(`Vertical force through the CG, ${hz(f)} Hz`, { frequencyHz: f }));
+    for (const f of operating.extraFrequenciesHz ?? [])
+      sources.push(unit(`Vertical force through the CG, ${hz(f)} Hz`, { frequencyHz: f }));
   }
-  if (sources.length === 0) throw new VibrationInputError('operating', 'gives no source: set a speed, a line frequency or extra frequencies', 'empty');
+  if (sources.length === 0)
+    throw new VibrationInputError('operating', 'gives no source: set a speed, a line frequency or extra frequencies', 'empty');
   return { sources, speedRangeRpm: range, skipBandsRpm: (operating.skipBandsRpm ?? []).map((b) => ({ min: b.min, max: b.max })) };
 }
 
@@ -162,18 +164,16 @@ export function resolveOperatingSources(operating: OperatingForcingInput, cg: Ve
  * @param cg centre of gravity [m]
  */
 export function verticalSourcesAt(frequenciesHz: readonly number[], cg: Vec3): ResolvedOperating {
-  const sources = frequenciesHz.map(
-    (f, i): ResolvedSource => ({
-      label: `Vertical force through the CG, ${hz(requirePositive(`disturbingFrequenciesHz[${i}]`, f))} Hz`,
-      inputIndex: -1,
-      unitForce: true,
-      at: { ...cg },
-      axis: 'z',
-      kind: 'directional',
-      amplitudeN: 1,
-      frequencyHz: f,
-      followsOrder: null,
-    }),
-  );
+  const sources = frequenciesHz.map((f, i): ResolvedSource => ({
+    label: `Vertical force through the CG, ${hz(requirePositive(`disturbingFrequenciesHz[${i}]`, f))} Hz`,
+    inputIndex: -1,
+    unitForce: true,
+    at: { ...cg },
+    axis: 'z',
+    kind: 'directional',
+    amplitudeN: 1,
+    frequencyHz: f,
+    followsOrder: null,
+  }));
   return { sources, speedRangeRpm: null, skipBandsRpm: [] };
 }

@@ -62,7 +62,13 @@ export function describeCandidate(
   const wholeMachine: CandidateWholeMachine | undefined = whole
     ? { worst: { ...whole.worst }, stiffnessTolerancePct: whole.stiffnessTolerancePct, perFrequency: wholeMachineCheck.perFrequency(c) }
     : undefined;
-  const crossings = whole?.crossings.map(({ mode, modeFrequencyHz, source, order, speedRpm }) => ({ mode, modeFrequencyHz, source, order, speedRpm }));
+  const crossings = whole?.crossings.map(({ mode, modeFrequencyHz, source, order, speedRpm }) => ({
+    mode,
+    modeFrequencyHz,
+    source,
+    order,
+    speedRpm,
+  }));
   const wording: WordingContext = {
     problem,
     store,

@@ -178,7 +178,9 @@ function wholeMachineNotes({ store, c, wholeMachine: w, modes }: WordingContext)
 
 function bandWords(factor: number, tolerancePct: number): string {
   if (tolerancePct === 0 || factor === 1) return tolerancePct === 0 ? '' : ', nominal stiffness';
-  return factor < 1 ? `, stiffness ${formatNumber(tolerancePct, 1)} % below nominal` : `, stiffness ${formatNumber(tolerancePct, 1)} % above nominal`;
+  return factor < 1
+    ? `, stiffness ${formatNumber(tolerancePct, 1)} % below nominal`
+    : `, stiffness ${formatNumber(tolerancePct, 1)} % above nominal`;
 }
 
 function formatRpm(rpm: number): string {

@@ -29,7 +29,7 @@ import { evaluateSeries } from './evaluate-series.js';
 import { evaluateUniform } from './evaluate-uniform.js';
 import { ModeCheck } from './mode-check.js';
 import { RestraintCheck } from './restraint-check.js';
-import { WholeMachineCheck } from './whole-machine-check.js';
+import { WholeMachineCheck, type SourceCurves } from './whole-machine-check.js';
 import { candidateOrder, rankCandidates, scoreAll, scoreReferences, type FinalistCheck, type ScoreReferences } from './ranking.js';
 
 export class SelectionEvaluation {
@@ -89,6 +89,12 @@ export class SelectionEvaluation {
     for (const check of this.finalistChecks) check.check(c);
   }
 
+  /** The modes and crossings of candidate c (judging it if it was not). */
+  judged(c: number): { modes: ReturnType<ModeCheck['findingsOf']>; wholeMachine: ReturnType<WholeMachineCheck['findingsOf']> } {
+    this.checkFinalist(c);
+    return { modes: this.modeCheck.findingsOf(c), wholeMachine: this.wholeMachineCheck.findingsOf(c) };
+  }
+
   /** Makes sure the details of the mounts these candidates use are loaded (and their checks applied). */
   ensureDetails(candidates: readonly number[], loadDetails: DetailsLoader): Promise<void> {
     return this.store.ensureDetails(candidates, loadDetails);
@@ -105,7 +111,7 @@ export class SelectionEvaluation {
   }
 
   /** Transmissibility against speed per source of candidate c over its stiffness band (the chart). */
-  curves(c: number): ReturnType<WholeMachineCheck['curves']> {
+  curves(c: number): SourceCurves {
     return this.wholeMachineCheck.curves(c);
   }
 

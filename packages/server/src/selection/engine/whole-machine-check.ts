@@ -18,7 +18,9 @@ import {
   sourceAmplitudeN,
   sourceFrequencyHz,
   speedSweep,
+  sweepGrid,
   wholeMachineModes,
+  wholeMachineTransmissibility,
   wholeMachineResponse,
   type ResolvedSource,
   type WholeMachineMount,
@@ -51,6 +53,24 @@ const FALLBACK_TOLERANCE_PCT = 20;
 
 /** The shaft speed used for fixed-frequency sources when the input gives no speed (T does not depend on it). */
 const NO_SPEED_RPM = 60;
+
+/** Transmissibility against speed per source over the stiffness band (docs/engineering/selection.md §17). */
+export interface SourceCurves {
+  stiffnessTolerancePct: number;
+  sources: {
+    label: string;
+    /** The shaft order it follows, or null at a fixed frequency. */
+    order: number | null;
+    fixedFrequencyHz: number | null;
+    speedRpm: number[];
+    frequencyHz: number[];
+    /** At the nominal stiffness. */
+    transmissibility: number[];
+    /** At 1 − tol and 1 + tol (null without a band). */
+    softEnd: number[] | null;
+    stiffEnd: number[] | null;
+  }[];
+}
 
 export interface WholeMachineFindings {
   /** Null when the model could not be built (the bounce estimate decided). */
@@ -128,33 +148,39 @@ export class WholeMachineCheck implements FinalistCheck {
   }
 
   /**
-   * Transmissibility against speed of every source of candidate c, at each stiffness factor of its
-   * band (for the chart: `POST /api/selection/curves`).
+   * Transmissibility against speed of every source of candidate c (for the chart,
+   * `POST /api/selection/curves`): one grid per source (sweepGrid, ≤ 0.5 % steps, with the range
+   * ends, the skip-band edges and the crossings of every stiffness factor), T at the nominal
+   * stiffness and at both ends of the band on it.
    */
-  curves(c: number): {
-    stiffnessTolerancePct: number;
-    factors: number[];
-    sources: { source: ResolvedSource; byFactor: { speedRpm: number[]; frequencyHz: number[]; transmissibility: number[] }[] }[];
-  } {
+  curves(c: number): SourceCurves {
+    const { problem } = this;
     const tolerance = this.toleranceOf(this.store.pointsOf(c));
-    const factors = bandFactors(tolerance.pct);
-    const systems = factors.map((f) => this.system(c, f));
+    const [soft, nominal, stiff] =
+      tolerance.pct > 0 ? bandFactors(tolerance.pct).map((f) => this.system(c, f)) : [null, this.system(c), null];
+    const modeHz = [soft, nominal, stiff]
+      .filter((x): x is WholeMachineSystem => x !== null)
+      .map((x) => wholeMachineModes(x).modes.map((m) => m.frequencyHz));
     const { min, max } = this.range;
+    const skipBandsRpm = problem.forcing.skipBandsRpm;
+    const evaluate = (system: WholeMachineSystem | null, source: ResolvedSource, speeds: Float64Array) =>
+      system === null ? null : Array.from(speeds, (n) => wholeMachineTransmissibility(system, source, sourceFrequencyHz(source, n)));
     return {
       stiffnessTolerancePct: tolerance.pct,
-      factors,
-      sources: this.problem.forcing.sources.map((source) => ({
-        source,
-        byFactor: systems.map((system) => {
-          const sweep = speedSweep(system, { source, minRpm: min, maxRpm: max, skipBandsRpm: this.problem.forcing.skipBandsRpm, curve: true });
-          const curve = sweep.curve!;
-          return {
-            speedRpm: Array.from(curve.speedRpm),
-            frequencyHz: Array.from(curve.frequencyHz),
-            transmissibility: Array.from(curve.transmissibility),
-          };
-        }),
-      })),
+      sources: problem.forcing.sources.map((source) => {
+        const extra = source.frequencyHz !== undefined ? [] : modeHz.flat().map((f) => (60 * f) / (source.order ?? 1));
+        const speeds = sweepGrid(min, max, skipBandsRpm, extra);
+        return {
+          label: source.label,
+          order: source.frequencyHz === undefined ? (source.order ?? 1) : null,
+          fixedFrequencyHz: source.frequencyHz ?? null,
+          speedRpm: Array.from(speeds),
+          frequencyHz: Array.from(speeds, (n) => sourceFrequencyHz(source, n)),
+          transmissibility: evaluate(nominal, source, speeds)!,
+          softEnd: evaluate(soft, source, speeds),
+          stiffEnd: evaluate(stiff, source, speeds),
+        };
+      }),
     };
   }
 
@@ -197,7 +223,10 @@ export class WholeMachineCheck implements FinalistCheck {
     return out;
   }
 
-  private judge(points: readonly PointMount[], tolerance: { pct: number; fromCriteria: boolean }): NonNullable<WholeMachineFindings['result']> {
+  private judge(
+    points: readonly PointMount[],
+    tolerance: { pct: number; fromCriteria: boolean },
+  ): NonNullable<WholeMachineFindings['result']> {
     const { problem } = this;
     const { sources, skipBandsRpm } = problem.forcing;
     const { min, max } = this.range;
@@ -247,7 +276,13 @@ export class WholeMachineCheck implements FinalistCheck {
       }
     }
     crossings = crossings.sort((a, b) => a.speedRpm - b.speedRpm);
-    return { worst: worst!, worstSpeedBySource, crossings, stiffnessTolerancePct: tolerance.pct, toleranceFromCriteria: tolerance.fromCriteria };
+    return {
+      worst: worst!,
+      worstSpeedBySource,
+      crossings,
+      stiffnessTolerancePct: tolerance.pct,
+      toleranceFromCriteria: tolerance.fromCriteria,
+    };
   }
 
   /** The criteria's tolerance, or the widest default of the types at the points (the fallback when a type is unknown). */
