@@ -326,9 +326,8 @@ describe('selection (e2e)', () => {
       true,
     );
     // an unbalance turning in the horizontal plane at the CG drives surge and sway at 1480 rpm
-    const { disturbingFrequenciesHz: _omit, ...rest } = request({ mountPoints: points, criteria });
     const driven = await select({
-      ...rest,
+      ...request({ mountPoints: points, criteria, disturbingFrequenciesHz: undefined }),
       operating: {
         speedRpm: 1480,
         orders: [1],
