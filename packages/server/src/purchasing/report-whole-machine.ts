@@ -64,8 +64,13 @@ export function wholeMachineReportLines(
   }
   const passes = frozen?.passes ?? candidate?.passes ?? false;
   const at = worst.speedRpm === null ? hz(worst.frequencyHz) : `${rpm(worst.speedRpm)} (${hz(worst.frequencyHz)})`;
+  const off = Math.abs(worst.stiffnessFactor - 1) * 100;
   const end =
-    worst.stiffnessFactor === 1 ? 'nominal stiffness' : worst.stiffnessFactor < 1 ? 'soft end of the band' : 'stiff end of the band';
+    worst.stiffnessFactor === 1
+      ? 'nominal stiffness'
+      : Math.abs(off - tolerance) < 1e-9
+        ? `${worst.stiffnessFactor < 1 ? 'soft' : 'stiff'} end of the band`
+        : `stiffness ${num(off, 1)} % ${worst.stiffnessFactor < 1 ? 'below' : 'above'} nominal`;
   paragraphs.push(
     `Stiffness band: ±${num(tolerance, 1)} % on every mount stiffness; the verdict is the worst over the band, the running speeds ` +
       'outside the skip bands and the sources taken one at a time.',
