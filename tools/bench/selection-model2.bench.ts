@@ -11,9 +11,9 @@
  * (read once from the server's database file), no framework, plus the HTTP round trip of a
  * trivial route (GET /api/health, timed inside each bare iteration). Its arithmetic is the
  * server's: mass properties and loads, the per-row load, deflection and bounce-estimate figures
- * and score, the series levelling, then — in score order, until `limit` pass — the rigid-body
- * modes and the whole-machine sweeps of every source at the three stiffness factors with the
- * @tacet/vibration kernel (docs/engineering/selection.md §14–§16; the kernel's own bare-loop
+ * and score, the series levelling, then — in score order, until `limit` pass, and for the best
+ * `limit` failing ones — the rigid-body modes and one whole-machine sweep per source over the
+ * range stretched by the stiffness band, with the @tacet/vibration kernel (docs/engineering/selection.md §14–§16; the kernel's own bare-loop
  * comparison is tools/bench/whole-machine.bench.ts), and the response per source at the worst
  * point of each returned candidate. The machine and the catalog are invented.
  */
@@ -23,6 +23,7 @@ import { join } from 'node:path';
 import Database from 'better-sqlite3';
 import {
   createLevellingWorkspace,
+  crossingSpeeds,
   isInsideConvexHull,
   massProperties,
   mountLoads,
@@ -284,30 +285,32 @@ function bareSelection(rows: Rows): { judged: number; passing: number } {
     }));
     rigidBodyModes({ massKg: mass.massKg, inertia: mass.inertia, cg: mass.cg, mounts });
     const tol = TOLERANCE[rows.type[r]] ?? 20;
+    const lo = 1 - tol / 100;
+    const hi = 1 + tol / 100;
+    // one sweep per source over the stretched range covers the band (selection.md §15)
+    const system = prepareWholeMachine({ body: { massKg: mass.massKg, cg: mass.cg, inertia: mass.inertia }, mounts });
+    const modeHz = wholeMachineModes(system).modes.map((m) => m.frequencyHz);
     let worst = 0;
     let worstFactor = 1;
-    let worstSpeeds: number[] = [];
-    for (const factor of [1 - tol / 100, 1, 1 + tol / 100]) {
-      const system = prepareWholeMachine(
-        { body: { massKg: mass.massKg, cg: mass.cg, inertia: mass.inertia }, mounts },
-        { stiffnessFactor: factor },
-      );
-      const modeHz = wholeMachineModes(system).modes.map((m) => m.frequencyHz);
-      const speeds: number[] = [];
-      for (const source of forcing.sources) {
-        const sweep = speedSweep(system, {
-          source,
-          minRpm: min,
-          maxRpm: max,
-          skipBandsRpm: forcing.skipBandsRpm,
-          modeFrequenciesHz: modeHz,
-        });
-        speeds.push(sweep.worst.speedRpm);
-        if (sweep.worst.transmissibility > worst) {
-          worst = sweep.worst.transmissibility;
-          worstFactor = factor;
-          worstSpeeds = speeds;
-        }
+    const worstSpeeds: number[] = [];
+    for (const source of forcing.sources) {
+      const fixed = source.frequencyHz !== undefined;
+      const sweep = fixed
+        ? speedSweep(system, {
+            source: { at: source.at, kind: source.kind, axis: source.axis, order: 1, amplitudeN: 1 },
+            minRpm: (60 * source.frequencyHz!) / Math.sqrt(hi),
+            maxRpm: (60 * source.frequencyHz!) / Math.sqrt(lo),
+            modeFrequenciesHz: modeHz,
+          })
+        : speedSweep(system, { source, minRpm: min / Math.sqrt(hi), maxRpm: max / Math.sqrt(lo), modeFrequenciesHz: modeHz });
+      const factor = fixed
+        ? (source.frequencyHz! / sweep.worst.frequencyHz) ** 2
+        : Math.min(hi, Math.max(lo, 1, (min / sweep.worst.speedRpm) ** 2));
+      worstSpeeds.push(fixed ? min : sweep.worst.speedRpm * Math.sqrt(factor));
+      if (!fixed) crossingSpeeds({ modeFrequenciesHz: modeHz, order: source.order ?? 1, minRpm: min, maxRpm: max });
+      if (sweep.worst.transmissibility > worst) {
+        worst = sweep.worst.transmissibility;
+        worstFactor = factor;
       }
     }
     const found = { worst, factor: worstFactor, speeds: worstSpeeds };
