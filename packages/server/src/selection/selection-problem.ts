@@ -28,6 +28,13 @@ import type { RestraintInput } from './dto/restraint.dto.js';
 import { formatHz } from './selection-format.js';
 import type { LabelledFrequency } from './selection.types.js';
 
+/**
+ * The weight margin when the criteria give none, %: equipment weights from data sheets are
+ * commonly quoted to about ±10 % before the final equipment is known (common practice, no
+ * single source; docs/engineering/selection.md §17).
+ */
+export const DEFAULT_WEIGHT_MARGIN_PCT = 10;
+
 /** What a selection needs, as the API receives it (frequency labels are optional). */
 export interface SelectionInput {
   components: readonly Component[];
@@ -58,6 +65,13 @@ export interface SelectionProblem {
   frequenciesHz: Float64Array;
   frequencyLabels: (string | undefined)[];
   criteria: Criteria;
+  /**
+   * Compliance of the support under each point, 1/k_s [m/N] (0: rigid, no `supportStiffnessNPerMm`):
+   * in series with the mount vertically (docs/engineering/selection.md §15).
+   */
+  supportCompliance: Float64Array;
+  /** Some point stands on a flexible support. */
+  hasSupport: boolean;
   /** The allowance on the weight the overload checks use, % (the criteria's, or the default). */
   weightMarginPct: number;
   /** 1 + weightMarginPct/100: applied to loads in the overload checks (utilisation above the window, deflection). */
@@ -138,7 +152,8 @@ export function prepareProblem(input: SelectionInput): SelectionProblem {
     frequenciesHz[i] = f.frequencyHz;
   });
   const criteria = input.criteria;
-  const weightMarginPct = criteria.weightMarginPct ?? 0;
+  const weightMarginPct = criteria.weightMarginPct ?? DEFAULT_WEIGHT_MARGIN_PCT;
+  const supportCompliance = new Float64Array(input.mountPoints.map((p) => (p.supportStiffnessNPerMm ? 1 / (p.supportStiffnessNPerMm * 1000) : 0)));
   const transmissibilityTarget = transmissibilityFromEfficiency(criteria.minIsolationPct);
   return {
     points: input.mountPoints,
@@ -155,6 +170,8 @@ export function prepareProblem(input: SelectionInput): SelectionProblem {
     frequenciesHz,
     frequencyLabels: input.frequencies.map((f) => f.label),
     criteria,
+    supportCompliance,
+    hasSupport: supportCompliance.some((c) => c > 0),
     weightMarginPct,
     marginFactor: 1 + weightMarginPct / 100,
     transmissibilityTarget,

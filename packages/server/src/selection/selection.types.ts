@@ -10,7 +10,10 @@ export interface CandidatePoint {
   loadN: number;
   /** Load / rated load. */
   utilization: number;
+  /** The mount's own static deflection, mm. */
   staticDeflectionMm: number;
+  /** The deflection of the flexible support under the point, mm (only where `supportStiffnessNPerMm` is given). */
+  supportDeflectionMm?: number;
 }
 
 /** Isolation at one disturbing frequency (in the order of the frequencies). */
@@ -115,8 +118,14 @@ export interface Candidate {
   passes: boolean;
   /** Why it fails, in words a user understands (empty when it passes). */
   reasons: string[];
-  /** Assumptions and remarks that do not fail the candidate. */
+  /** Remarks and warnings that do not fail the candidate. */
   notes: string[];
+  /**
+   * Every value that did not come from the catalog or the input, with the value used (the
+   * unfavourable one for the check it feeds; docs/engineering/selection.md §14). Absent in
+   * candidates chosen before it was kept.
+   */
+  assumptions?: string[];
   score: number;
   scoreTerms: ScoreTerms;
 }

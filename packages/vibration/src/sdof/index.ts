@@ -18,3 +18,4 @@ export {
 export * from './natural-frequency.js';
 export * from './static-deflection.js';
 export * from './spring-surge.js';
+export * from './series-stiffness.js';

@@ -40,7 +40,10 @@ export const SELECTION_LIMITS = {
   frequencyHz: 1e5,
   speedRpm: 1e6,
   vaneCount: 200,
-  utilization: 1.5,
+  /** The highest utilisation window end: a mount is never loaded beyond its rating (docs/engineering/selection.md §17). */
+  utilization: 1,
+  /** Support stiffness under a mount point, N/mm. */
+  supportStiffnessNPerMm: 1e9,
   limit: { default: 20, max: 200 },
 } as const;
 
@@ -178,6 +181,18 @@ export class MountPointDto {
   @Min(-COORDINATE)
   @Max(COORDINATE)
   z: number;
+
+  @ApiPropertyOptional({
+    example: 5000,
+    description:
+      'vertical stiffness of the support under the point (floor, steel), N/mm, in series with the mount; absent: rigid. ' +
+      'Less than about 10× the mount stiffness gets a warning (rule of thumb)',
+  })
+  @IsOptional()
+  @IsFiniteNumber()
+  @IsPositive({ message: 'supportStiffnessNPerMm must be a stiffness above 0 N/mm (leave it out for a rigid support)' })
+  @Max(SELECTION_LIMITS.supportStiffnessNPerMm)
+  supportStiffnessNPerMm?: number;
 }
 
 export class SpeedRangeDto {
@@ -255,10 +270,12 @@ export class CriteriaDto {
   @Max(SELECTION_LIMITS.utilization)
   minUtilization: number;
 
-  @ApiProperty({ example: 1.0, description: `highest load / rated load at any point (≤ ${SELECTION_LIMITS.utilization})` })
+  @ApiProperty({ example: 1.0, description: `highest load / rated load at any point (≤ ${SELECTION_LIMITS.utilization}: never above the rating)` })
   @IsFiniteNumber()
   @IsPositive()
-  @Max(SELECTION_LIMITS.utilization)
+  @Max(SELECTION_LIMITS.utilization, {
+    message: `maxUtilization must be at most ${SELECTION_LIMITS.utilization}: a mount may not be loaded beyond its rated load (use weightMarginPct for uncertain weights)`,
+  })
   @IsAbove('minUtilization')
   maxUtilization: number;
 
@@ -284,7 +301,10 @@ export class CriteriaDto {
   @IsPositive({ each: true })
   supplierIds?: number[];
 
-  @ApiPropertyOptional({ example: 10, description: 'allowance on the weight for overload checks, % (default 0)' })
+  @ApiPropertyOptional({
+    example: 10,
+    description: 'allowance on the weight, %: the overload checks add it, the light case of springs takes it off (default 10)',
+  })
   @IsOptional()
   @IsFiniteNumber()
   @Min(0)

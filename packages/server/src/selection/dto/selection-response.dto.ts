@@ -16,7 +16,9 @@ export class CandidatePointDto {
   @ApiProperty() partNumber: string;
   @ApiProperty({ description: 'N' }) loadN: number;
   @ApiProperty({ description: 'load / rated load' }) utilization: number;
-  @ApiProperty() staticDeflectionMm: number;
+  @ApiProperty({ description: "the mount's own static deflection, mm" }) staticDeflectionMm: number;
+  @ApiPropertyOptional({ description: 'deflection of the flexible support under the point, mm (where supportStiffnessNPerMm is given)' })
+  supportDeflectionMm?: number;
 }
 
 export class CandidateIsolationDto {
@@ -81,7 +83,14 @@ export class CandidateDto {
   restraint?: CandidateRestraintDto;
   @ApiProperty() passes: boolean;
   @ApiProperty({ type: [String] }) reasons: string[];
-  @ApiProperty({ type: [String], description: 'assumptions and remarks that do not fail the candidate' }) notes: string[];
+  @ApiProperty({ type: [String], description: 'remarks and warnings that do not fail the candidate' }) notes: string[];
+  @ApiPropertyOptional({
+    type: [String],
+    description:
+      'every value that did not come from the catalog or the input and the value used, the unfavourable one for the check it feeds ' +
+      '(absent in candidates chosen before it was kept)',
+  })
+  assumptions?: string[];
   @ApiProperty() score: number;
   @ApiProperty({ type: ScoreTermsDto }) scoreTerms: ScoreTermsDto;
 }

@@ -7,10 +7,12 @@
  * Where the checks run:
  * - per mount (row), when the row is stored: supplier (rowChecks); when its details are known:
  *   temperature and type (detailChecks). A candidate inherits the row bits of every mount it uses;
- *   row bits live in `CandidateStore.rowFail` (a Uint8Array: row checks use the low 8 bits);
+ *   row bits live in `CandidateStore.rowFail`; the lateral stability of springs is a row check too
+ *   (spring-checks.ts);
  * - for the machine, the same for every candidate (machineChecks): CG outside the mount polygon;
  * - per candidate, in the evaluation loops (evaluate-uniform.ts, evaluate-series.ts): utilisation
- *   window, static deflection against the mount's travel;
+ *   window, static deflection against the mount's travel (assumed when not given, assumptions.ts),
+ *   and for springs the reserve travel and the light case (spring-checks.ts);
  * - for every candidate at once (evaluate-isolation.ts): isolation at every disturbing frequency;
  * - for the best candidates only, as finalist checks (ranking.ts `FinalistCheck`): the rigid-body
  *   modes (mode-check.ts);
@@ -44,10 +46,21 @@ export const FAIL = {
   supplier: 128,
   /** Seismic restraint: a point's demand over its mount's rating, or no rating (restraint-check.ts). */
   restraint: 256,
+  /** A coil spring laterally unstable: k_h/k_v below 0.8, or no k_h to show it (spring-checks.ts). */
+  springStability: 512,
+  /** A coil spring without 50 % reserve travel beyond its static deflection (spring-checks.ts). */
+  reserveTravel: 1024,
+  /** A coil spring below the minimum utilisation in the light case (weight less the margin; spring-checks.ts). */
+  lightLoad: 2048,
 } as const;
 
 /** The row checks that need a mount's details (DETAIL_COLUMNS); a candidate takes them once the details are loaded. */
 export const DETAIL_FAILS = FAIL.temperature | FAIL.type;
+
+/** The weight less the margin, as a factor on the loads: the light case of the springs' minimum-load check. */
+export function lightFactorOf(problem: SelectionProblem): number {
+  return Math.max(0, 1 - problem.weightMarginPct / 100);
+}
 
 /** Checks of the machine on its mount points, failed by every candidate alike: the CG inside the polygon. */
 export function machineChecks(problem: SelectionProblem): number {

@@ -11,7 +11,7 @@ import type { CandidateStore } from './candidate-store.js';
 import type { ModeCheck } from './mode-check.js';
 import type { RestraintCheck } from './restraint-check.js';
 import { fillScoreInputs, newScoreInputs, type ScoreReferences } from './ranking.js';
-import { notesFor, reasonsFor, type WordingContext } from './reasons.js';
+import { assumptionsFor, notesFor, reasonsFor, type WordingContext } from './reasons.js';
 
 export interface DescribeSources {
   store: CandidateStore;
@@ -39,6 +39,7 @@ export function describeCandidate(
       loadN: m.loadN,
       utilization: m.loadN / m.ratedLoadN,
       staticDeflectionMm: (m.loadN / m.verticalStiffnessNPerM) * 1000,
+      ...(problem.supportCompliance[i] > 0 ? { supportDeflectionMm: m.loadN * problem.supportCompliance[i] * 1000 } : {}),
     };
   });
   const isolation = Array.from({ length: nf }, (_, j) => {
@@ -88,6 +89,7 @@ export function describeCandidate(
     passes: store.fail[c] === 0,
     reasons: reasonsFor(wording),
     notes: notesFor(wording),
+    assumptions: assumptionsFor(wording),
     score,
     scoreTerms: terms,
   };

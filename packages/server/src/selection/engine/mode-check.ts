@@ -2,13 +2,16 @@
  * The rigid-body mode check, a finalist check (run for the best candidates only): the six coupled
  * rigid-body modes of the machine on the candidate's mounts (`rigidBodyModes`, with the mounts'
  * dynamic stiffnesses); a mode within ±MODE_SEPARATION of a disturbing frequency, or a direction
- * without stiffness, fails the candidate (docs/engineering/selection.md §9). Keeps, per candidate
+ * without stiffness, fails the candidate (docs/engineering/selection.md §9). A mount without a
+ * horizontal stiffness is checked at both ends of HORIZONTAL_RATIO_WHEN_MISSING (assumptions.ts,
+ * §14); a flexible support is in series with the mount vertically (§15). Keeps, per candidate
  * judged, the modes and the conflict found (reasons.ts words them).
  */
 import { isVibrationInputError, rigidBodyModes, type ResilientMount } from '@tacet/vibration';
 import type { SelectionProblem } from '../selection-problem.js';
 import type { CandidateMode } from '../selection.types.js';
 import type { CandidateStore } from './candidate-store.js';
+import { HORIZONTAL_RATIO_WHEN_MISSING } from './assumptions.js';
 import { FAIL } from './checks.js';
 import type { FinalistCheck } from './ranking.js';
 
@@ -16,7 +19,16 @@ import type { FinalistCheck } from './ranking.js';
 export const MODE_SEPARATION = 0.2;
 
 /** Why the modes fail a candidate: a direction without stiffness, or a mode near a disturbing frequency. */
-export type ModeConflict = { kind: 'mechanism' } | { kind: 'near'; mode: CandidateMode; frequencyHz: number; label: string | undefined };
+export type ModeConflict =
+  | { kind: 'mechanism' }
+  | {
+      kind: 'near';
+      mode: CandidateMode;
+      frequencyHz: number;
+      label: string | undefined;
+      /** Set when the conflict appears with the low assumed horizontal stiffness (not the modes shown). */
+      assumedHorizontalRatio?: number;
+    };
 
 export interface ModeFindings {
   /** Null when the modes could not be computed (see `ModeCheck.unavailable`). */
@@ -45,22 +57,32 @@ export class ModeCheck implements FinalistCheck {
     const { problem } = this;
     let findings: ModeFindings = { modes: null, conflict: null };
     if (!this.inertiaUnusable) {
-      const mounts: ResilientMount[] = this.store.pointsOf(c).map((m, i) => {
-        const p = problem.points[i];
-        const vertical = m.verticalStiffnessNPerM * m.dynamicStiffnessRatio;
-        const horizontal =
-          (Number.isNaN(m.horizontalStiffnessNPerM) ? m.verticalStiffnessNPerM : m.horizontalStiffnessNPerM) * m.dynamicStiffnessRatio;
-        return { position: { x: p.x, y: p.y, z: p.z }, stiffness: { x: horizontal, y: horizontal, z: vertical } };
-      });
+      const points = this.store.pointsOf(c);
+      const mountsAt = (missingRatio: number): ResilientMount[] =>
+        points.map((m, i) => {
+          const p = problem.points[i];
+          const kd = m.verticalStiffnessNPerM * m.dynamicStiffnessRatio;
+          const vertical = 1 / (1 / kd + problem.supportCompliance[i]);
+          const kh = Number.isNaN(m.horizontalStiffnessNPerM) ? missingRatio * m.verticalStiffnessNPerM : m.horizontalStiffnessNPerM;
+          const horizontal = kh * m.dynamicStiffnessRatio;
+          return { position: { x: p.x, y: p.y, z: p.z }, stiffness: { x: horizontal, y: horizontal, z: vertical } };
+        });
+      const solve = (mounts: ResilientMount[]) => rigidBodyModes({ massKg: problem.massKg, inertia: problem.inertia, cg: problem.cg, mounts });
       try {
-        const result = rigidBodyModes({ massKg: problem.massKg, inertia: problem.inertia, cg: problem.cg, mounts });
+        const result = solve(mountsAt(HORIZONTAL_RATIO_WHEN_MISSING.high));
         const modes = result.modes.map((m) => ({
           frequencyHz: m.frequencyHz,
           dominant: m.dominant,
           coupled: m.coupled,
           energyFractions: { ...m.energyFractions },
         }));
-        findings = { modes, conflict: this.conflict(result.modes) };
+        let conflict = this.conflict(result.modes);
+        if (!conflict && points.some((m) => Number.isNaN(m.horizontalStiffnessNPerM))) {
+          const low = this.conflict(solve(mountsAt(HORIZONTAL_RATIO_WHEN_MISSING.low)).modes);
+          if (low?.kind === 'near') conflict = { ...low, assumedHorizontalRatio: HORIZONTAL_RATIO_WHEN_MISSING.low };
+          else if (low) conflict = low;
+        }
+        findings = { modes, conflict };
       } catch (error) {
         if (!isVibrationInputError(error)) throw error;
         this.inertiaUnusable = true;

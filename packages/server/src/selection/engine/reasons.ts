@@ -13,7 +13,9 @@ import type { SelectionProblem } from '../selection-problem.js';
 import type { CandidatePoint, CandidateRestraint, RestraintPoint } from '../selection.types.js';
 import type { CandidateStore, PointMount } from './candidate-store.js';
 import { FAIL } from './checks.js';
+import { catalogAssumptionsFor } from './assumptions.js';
 import { MODE_SEPARATION, type ModeConflict, type ModeFindings } from './mode-check.js';
+import { SPRING_MIN_HORIZONTAL_RATIO, SPRING_RESERVE } from './spring-checks.js';
 
 /** What the wording reads about one candidate. */
 export interface WordingContext {
@@ -41,6 +43,9 @@ export const REASONS: readonly (readonly [bit: number, words: Words])[] = [
   [FAIL.isolation, isolation],
   [FAIL.utilization, utilization],
   [FAIL.deflection, deflection],
+  [FAIL.reserveTravel, reserveTravel],
+  [FAIL.lightLoad, lightLoad],
+  [FAIL.springStability, springStability],
   [FAIL.temperature, temperature],
   [FAIL.modes, modes],
   [FAIL.restraint, restraint],
@@ -61,9 +66,7 @@ export function notesFor(x: WordingContext): string[] {
   const { store, c, problem } = x;
   const notes: string[] = [];
   const rows = store.rowsOf(c);
-  if (x.modes?.modes && rows.some((r) => store.hasDetails[r] && Number.isNaN(store.kh[r]))) {
-    notes.push('The catalog gives no horizontal stiffness: the rigid-body modes take it equal to the vertical stiffness.');
-  }
+  notes.push(...supportNotes(x));
   if (x.modes && !x.modes.modes && x.modesUnavailable) {
     notes.push(
       'Rigid-body modes not computed: the inertia of the machine is unknown or degenerate (give the components box dimensions or their inertia).',
@@ -76,7 +79,7 @@ export function notesFor(x: WordingContext): string[] {
       }
     }
   }
-  if (x.restraint && !store.isUniform(c) && rows.some((r) => store.hasDetails[r] && Number.isNaN(store.kh[r]))) {
+  if (x.restraint && !store.isUniform(c) && rows.some((r) => Number.isNaN(store.kh[r]))) {
     notes.push(
       'Seismic restraint: where the catalog gives no horizontal stiffness, the shares of the horizontal force take it equal to the vertical stiffness.',
     );
@@ -84,6 +87,53 @@ export function notesFor(x: WordingContext): string[] {
   if (!store.isUniform(c) && store.levelErrorM[c] > 0) {
     notes.push(
       `Sizes picked per point for a level skid; the remaining level error of ${formatMm(store.levelErrorM[c] * 1000)} is trimmed with shims or levelling bolts.`,
+    );
+  }
+  return notes;
+}
+
+/**
+ * Every value that did not come from the catalog or the input, with the value used (assumptions.ts,
+ * docs/engineering/selection.md §14): the catalog's gaps, a machine without inertia.
+ */
+export function assumptionsFor(x: WordingContext): string[] {
+  const out = catalogAssumptionsFor(x.store, x.c);
+  const pointMasses = x.problem.components.filter((k) => (!k.shape || k.shape === 'point') && !k.ownInertia).map((k) => k.name);
+  if (pointMasses.length > 0) {
+    out.push(
+      `Taken as point masses (no box or inertia given): ${pointMasses.join(', ')}. Their own inertia is left out, so the ` +
+        'rocking modes come out higher than they are.',
+    );
+  }
+  if (x.modesUnavailable || (x.modes && !x.modes.modes)) {
+    out.push(
+      'The machine has no usable inertia (point masses, or all on one line): its rigid-body modes were not checked; ' +
+        'only the vertical bounce is judged. Give the components box dimensions or their inertia.',
+    );
+  }
+  if (x.store.rowsOf(x.c).some((r) => x.store.isSpring[r])) {
+    out.push('Coil surge not checked: the catalog gives no coil data (wire and coil diameters, active coils) for its springs.');
+  }
+  return out;
+}
+
+/** Support less than SUPPORT_STIFFNESS_FACTOR × as stiff as the mount on it: a warning (rule of thumb, §15). */
+export const SUPPORT_STIFFNESS_FACTOR = 10;
+
+function supportNotes({ problem, points }: WordingContext): string[] {
+  if (!problem.hasSupport) return [];
+  const weak = problem.points.filter((p, i) => {
+    const kd = points[i].verticalStiffnessNPerM * points[i].dynamicStiffnessRatio;
+    return p.supportStiffnessNPerMm !== undefined && p.supportStiffnessNPerMm * 1000 < SUPPORT_STIFFNESS_FACTOR * kd;
+  });
+  const notes = [
+    'The support under the mounts is flexible: its stiffness is taken in series with each mount in the natural frequency, ' +
+      'the level and the modes; the floor itself may still have resonances of its own that this does not show.',
+  ];
+  if (weak.length > 0) {
+    notes.push(
+      `Warning: the support at ${weak.map((p) => `point ${p.label}`).join(', ')} is less than ${SUPPORT_STIFFNESS_FACTOR}× as stiff as the mount on it ` +
+        `(a rule of thumb, no published source): the isolation depends on the support as much as on the mounts; have the structure checked.`,
     );
   }
   return notes;
@@ -152,6 +202,48 @@ function deflection({ problem, points, perPoint }: WordingContext): string[] {
   return reasons;
 }
 
+function reserveTravel({ problem, points, perPoint }: WordingContext): string[] {
+  const reasons: string[] = [];
+  perPoint.forEach((p, i) => {
+    const m = points[i];
+    const staticMm = p.staticDeflectionMm * problem.marginFactor;
+    const maxMm = m.maxDeflectionM * 1000;
+    // beyond the travel itself the deflection reason says it already
+    if (staticMm * (1 + SPRING_RESERVE) > maxMm && staticMm <= maxMm) {
+      reasons.push(
+        `Spring ${p.partNumber} at point ${p.label}: ${formatMm(Math.max(0, maxMm - staticMm))} of travel left beyond the static ` +
+          `deflection of ${formatMm(staticMm)}${marginNote(problem)}; at least ${SPRING_RESERVE * 100} % of it (${formatMm(staticMm * SPRING_RESERVE)}) ` +
+          'is kept in reserve (common practice) so the spring does not go solid.',
+      );
+    }
+  });
+  return reasons;
+}
+
+function lightLoad({ problem, store, points, perPoint }: WordingContext): string[] {
+  const light = 1 - problem.weightMarginPct / 100;
+  const low = perPoint.filter((p, i) => store.isSpring[points[i].row] && p.utilization * light < problem.criteria.minUtilization);
+  if (low.length === 0) return [];
+  return [
+    `In the light case (weight less the ${formatNumber(problem.weightMarginPct, 1)} % margin) the springs are below the minimum ` +
+      `${formatPct(problem.criteria.minUtilization)} of the rated load at ${low.map((p) => `point ${p.label} (${formatPct(p.utilization * light)})`).join(', ')}: ` +
+      'an under-loaded spring is stiffer than it should be for its load, and the isolation is worse.',
+  ];
+}
+
+function springStability({ store, c }: WordingContext): string[] {
+  return store
+    .rowsOf(c)
+    .filter((r) => store.rowFail[r] & FAIL.springStability)
+    .map((r) =>
+      Number.isNaN(store.kh[r])
+        ? `Lateral stability of ${store.partNumberOf(r)} cannot be shown: the catalog gives no horizontal stiffness ` +
+          `(a coil spring needs at least ${formatNumber(SPRING_MIN_HORIZONTAL_RATIO, 1)}× its vertical stiffness sideways).`
+        : `${store.partNumberOf(r)} is laterally unstable: its horizontal stiffness is ${formatNumber(store.kh[r] / store.kv[r], 2)}× ` +
+          `the vertical, below the ${formatNumber(SPRING_MIN_HORIZONTAL_RATIO, 1)}× a coil spring needs (project-specification rule).`,
+    );
+}
+
 function temperature({ problem, store, c }: WordingContext): string[] {
   return store
     .rowsOf(c)
@@ -171,9 +263,13 @@ function modeConflict(conflict: ModeConflict): string {
   if (conflict.kind === 'mechanism') {
     return 'The mounts leave the machine free to move in one direction (a rigid-body mode has no stiffness).';
   }
-  const { mode, frequencyHz, label } = conflict;
+  const { mode, frequencyHz, label, assumedHorizontalRatio } = conflict;
+  const assumed =
+    assumedHorizontalRatio === undefined
+      ? ''
+      : ` (with the horizontal stiffness the catalog does not give taken as ${formatNumber(assumedHorizontalRatio, 1)}× the vertical)`;
   return (
-    `The ${describeModeMotion(mode.energyFractions).name} mode at ${formatHz(mode.frequencyHz)} lies within ` +
+    `The ${describeModeMotion(mode.energyFractions).name} mode at ${formatHz(mode.frequencyHz)}${assumed} lies within ` +
     `±${Math.round(MODE_SEPARATION * 100)} % of the disturbing frequency ${formatHz(frequencyHz)}${labelSuffix(label)}: ` +
     'the machine would rock or sway strongly there.'
   );
