@@ -153,7 +153,9 @@ export function prepareProblem(input: SelectionInput): SelectionProblem {
   });
   const criteria = input.criteria;
   const weightMarginPct = criteria.weightMarginPct ?? DEFAULT_WEIGHT_MARGIN_PCT;
-  const supportCompliance = new Float64Array(input.mountPoints.map((p) => (p.supportStiffnessNPerMm ? 1 / (p.supportStiffnessNPerMm * 1000) : 0)));
+  const supportCompliance = new Float64Array(
+    input.mountPoints.map((p) => (p.supportStiffnessNPerMm ? 1 / (p.supportStiffnessNPerMm * 1000) : 0)),
+  );
   const transmissibilityTarget = transmissibilityFromEfficiency(criteria.minIsolationPct);
   return {
     points: input.mountPoints,

@@ -270,7 +270,10 @@ export class CriteriaDto {
   @Max(SELECTION_LIMITS.utilization)
   minUtilization: number;
 
-  @ApiProperty({ example: 1.0, description: `highest load / rated load at any point (≤ ${SELECTION_LIMITS.utilization}: never above the rating)` })
+  @ApiProperty({
+    example: 1.0,
+    description: `highest load / rated load at any point (≤ ${SELECTION_LIMITS.utilization}: never above the rating)`,
+  })
   @IsFiniteNumber()
   @IsPositive()
   @Max(SELECTION_LIMITS.utilization, {

@@ -90,7 +90,9 @@ export function catalogAssumptionsFor(store: CandidateStore, c: number): string[
       out.push(
         `${part}: the catalog gives no maximum deflection; the deflection at the rated load (${formatNumber(mm, 1)} mm) is taken ` +
           'as the travel, the least a mount rated for that load must allow' +
-          (SPRING_TYPES.has(store.mountType[r] ?? '') ? `, and the reserve travel (${SPRING_RESERVE * 100} % of the static deflection) is checked against it.` : '.'),
+          (SPRING_TYPES.has(store.mountType[r] ?? '')
+            ? `, and the reserve travel (${SPRING_RESERVE * 100} % of the static deflection) is checked against it.`
+            : '.'),
       );
     }
   }

@@ -15,7 +15,8 @@ export interface CatalogRow {
   ratedLoadN: number;
   verticalStiffnessNPerM: number;
   horizontalStiffnessNPerM: number | null;
-  dynamicStiffnessRatio: number;
+  /** Null: the catalog gives none (assumptions.ts). */
+  dynamicStiffnessRatio: number | null;
   dampingRatio: number | null;
   lossFactor: number | null;
   maxDeflectionMm: number | null;
@@ -58,12 +59,7 @@ export const CATALOG_COLUMNS = [
  * Fields read for a few mounts only; a tuple may carry them after CATALOG_COLUMNS (a choice
  * evaluated outside the prefilter does, so that its temperature and type are checked).
  */
-export const DETAIL_COLUMNS = [
-  'partNumber',
-  'mountType',
-  'tempMinC',
-  'tempMaxC',
-] as const satisfies readonly (keyof CatalogRow)[];
+export const DETAIL_COLUMNS = ['partNumber', 'mountType', 'tempMinC', 'tempMaxC'] as const satisfies readonly (keyof CatalogRow)[];
 
 /** The detail fields of one mount. */
 export type MountDetails = Pick<CatalogRow, (typeof DETAIL_COLUMNS)[number]>;

@@ -67,7 +67,8 @@ export class ModeCheck implements FinalistCheck {
           const horizontal = kh * m.dynamicStiffnessRatio;
           return { position: { x: p.x, y: p.y, z: p.z }, stiffness: { x: horizontal, y: horizontal, z: vertical } };
         });
-      const solve = (mounts: ResilientMount[]) => rigidBodyModes({ massKg: problem.massKg, inertia: problem.inertia, cg: problem.cg, mounts });
+      const solve = (mounts: ResilientMount[]) =>
+        rigidBodyModes({ massKg: problem.massKg, inertia: problem.inertia, cg: problem.cg, mounts });
       try {
         const result = solve(mountsAt(HORIZONTAL_RATIO_WHEN_MISSING.high));
         const modes = result.modes.map((m) => ({
