@@ -6,10 +6,12 @@ import type { CandidateMode, LabelledFrequency, MountSnapshot } from '../selecti
 import type { Verification } from '../verifications/verification.entity.js';
 import { bomTotals } from './bom-export.js';
 import { restraintReportLines } from './report-restraint.js';
+import { verdictReportLines } from './report-verdict.js';
+import { DEFAULT_WEIGHT_MARGIN_PCT } from '../selection/selection-problem.js';
 
 /** The caution every report carries (PRODUCT.md, "Cautions the product shows"). */
 export const REPORT_CAUTION =
-  'The model assumes a rigid machine on linear mounts over a rigid support. Results are for preliminary sizing: ' +
+  'The model assumes a rigid machine on linear mounts over a rigid support (or a support of the stiffness given, as a spring). Results are for preliminary sizing: ' +
   'seismic and wind restraint, snubbers, flexible pipe and cable connections, flexible floors and guarding follow ' +
   'local codes and need review by a qualified, licensed engineer.';
 
@@ -145,6 +147,10 @@ export function designReportPdf(design: Design, options: ReportOptions): Promise
     body(
       `Load utilisation between ${fmt(criteria.minUtilization * 100, 0)} % and ${fmt(criteria.maxUtilization * 100, 0)} % of the rated load`,
     );
+    const margin = criteria.weightMarginPct;
+    body(
+      `Weight margin ${fmt(margin ?? DEFAULT_WEIGHT_MARGIN_PCT, 0)} %${margin === undefined ? ' (the default for weights not yet final)' : ''}`,
+    );
     if (criteria.ambientTempC !== undefined) body(`Ambient temperature ${fmt(criteria.ambientTempC, 0)} °C`);
     if (criteria.mountTypes?.length) body(`Mount types: ${criteria.mountTypes.map((t) => t.replace(/_/g, ' ')).join(', ')}`);
   }
@@ -186,10 +192,9 @@ export function designReportPdf(design: Design, options: ReportOptions): Promise
     const damping = mounts.length ? dampingOf(mounts[0]) : undefined;
     heading('Transmissibility');
     transmissibilityChart(doc, candidate.verticalNaturalFrequencyHz, damping, options.disturbingFrequencies, criteria?.minIsolationPct);
-    if (candidate.reasons.length) {
-      heading('Checks not met');
-      for (const reason of candidate.reasons) body(`• ${reason}`);
-    }
+    const verdict = verdictReportLines(candidate);
+    heading(verdict.heading);
+    for (const paragraph of verdict.paragraphs) body(paragraph);
   }
   if (design.input.restraint) {
     const section = restraintReportLines(design.input.restraint, candidate?.restraint);
