@@ -721,8 +721,10 @@ export interface components {
       restraint?: components["schemas"]["CandidateRestraintDto"];
       passes: boolean;
       reasons: string[];
-      /** @description assumptions and remarks that do not fail the candidate */
+      /** @description remarks and warnings that do not fail the candidate */
       notes: string[];
+      /** @description every value that did not come from the catalog or the input and the value used, the unfavourable one for the check it feeds (absent in candidates chosen before it was kept) */
+      assumptions?: string[];
       score: number;
       scoreTerms: components["schemas"]["ScoreTermsDto"];
     };
@@ -751,7 +753,10 @@ export interface components {
       loadN: number;
       /** @description load / rated load */
       utilization: number;
+      /** @description the mount's own static deflection, mm */
       staticDeflectionMm: number;
+      /** @description deflection of the flexible support under the point, mm (where supportStiffnessNPerMm is given) */
+      supportDeflectionMm?: number;
     };
     CandidateRestraintDto: {
       /** @example ASCE 7-16 */
@@ -977,7 +982,7 @@ export interface components {
        */
       minUtilization: number;
       /**
-       * @description highest load / rated load at any point (≤ 1.5)
+       * @description highest load / rated load at any point (≤ 1: never above the rating)
        * @example 1
        */
       maxUtilization: number;
@@ -989,7 +994,7 @@ export interface components {
       mountTypes?: components["schemas"]["MountType"][];
       supplierIds?: number[];
       /**
-       * @description allowance on the weight for overload checks, % (default 0)
+       * @description allowance on the weight, %: the overload checks add it, the light case of springs takes it off (default 10)
        * @example 10
        */
       weightMarginPct?: number;
@@ -1367,6 +1372,11 @@ export interface components {
        * @example 0
        */
       z: number;
+      /**
+       * @description vertical stiffness of the support under the point (floor, steel), N/mm, in series with the mount; absent: rigid. Less than about 10× the mount stiffness gets a warning (rule of thumb)
+       * @example 5000
+       */
+      supportStiffnessNPerMm?: number;
     };
     MountSupplierDto: {
       /** @example 3 */
