@@ -36,6 +36,7 @@ describe('selection: support, assumptions, springs, margins (e2e)', () => {
   let fullId: number;
   let noHorizontalId: number;
   let springId: number;
+  let noRatioId: number;
 
   const select = (body: object) => t.http().post('/api/selection').set('Authorization', `Bearer ${engineer}`).send(body);
   const request = (overrides: object = {}, supplierIds = [rubber.id]) => ({
@@ -61,6 +62,7 @@ describe('selection: support, assumptions, springs, margins (e2e)', () => {
     fullId = (await createMount(t, manager, rubber.id, { ...elastomer, partNumber: 'FULL-1' })).id;
     noHorizontalId = (await createMount(t, manager, rubber.id, { ...elastomer, partNumber: 'NOKH-1', horizontalStiffnessNPerM: undefined }))
       .id;
+    noRatioId = (await createMount(t, manager, rubber.id, { ...elastomer, partNumber: 'NOND-1', dynamicStiffnessRatio: undefined })).id;
     springs = await createSupplier(t, manager);
     springId = (await createMount(t, manager, springs.id, { partNumber: 'SPR-1', horizontalStiffnessNPerM: 0.79e5 })).id;
   });
@@ -92,6 +94,19 @@ describe('selection: support, assumptions, springs, margins (e2e)', () => {
     ]);
     const order = candidates.map((c) => c.mountId);
     expect(order.indexOf(fullId)).toBeLessThan(order.indexOf(noHorizontalId));
+  });
+
+  it('CV-54: a mount stored without a dynamic ratio is computed with 2.0 (elastomer) and says so; with 1.0 given it is not', async () => {
+    const response = await select(request());
+    const missing = candidate(response.body, noRatioId);
+    const given = candidate(response.body, fullId); // same mount, ratio 1.0 given
+    expect(missing.verticalNaturalFrequencyHz).toBeCloseTo(Math.sqrt((2 * 4 * 1e5) / 1000) / TWO_PI, 9);
+    expect(given.verticalNaturalFrequencyHz).toBeCloseTo(Math.sqrt((4 * 1e5) / 1000) / TWO_PI, 9);
+    expect(missing.assumptions).toEqual([
+      expect.stringMatching(/^NOND-1: the catalog gives no dynamic-to-static stiffness ratio; 2 is assumed/),
+    ]);
+    const stored = await t.http().get(`/api/mounts/${noRatioId}`).set('Authorization', `Bearer ${engineer}`);
+    expect(stored.body.dynamicStiffnessRatio).toBeNull();
   });
 
   it('CV-51: an open spring with k_h/k_v = 0.79 fails lateral stability, with the reason', async () => {

@@ -305,7 +305,7 @@ function mountLine(m: MountSnapshot): string {
     `${m.supplier.name} ${m.partNumber} (${m.mountType.replace(/_/g, ' ')}${m.series ? `, series ${m.series}` : ''}): ` +
     `rated load ${fmt(m.ratedLoadN, 0)} N, vertical stiffness ${fmt(m.verticalStiffnessNPerM / 1000, 1)} N/mm` +
     `${m.horizontalStiffnessNPerM === null ? '' : `, horizontal ${fmt(m.horizontalStiffnessNPerM / 1000, 1)} N/mm`}` +
-    `, dynamic-to-static ratio ${m.dynamicStiffnessRatio}, ${damping}` +
+    `, dynamic-to-static ratio ${m.dynamicStiffnessRatio ?? 'not given'}, ${damping}` +
     `${m.maxDeflectionMm === null ? '' : `, max deflection ${fmt(m.maxDeflectionMm, 1)} mm`}` +
     `${m.tempMinC === null || m.tempMaxC === null ? '' : `, ${fmt(m.tempMinC, 0)}…${fmt(m.tempMaxC, 0)} °C`}`
   );

@@ -246,7 +246,7 @@ export class SelectionCatalogReader {
       ratedLoadN: Number(m.ratedLoadN),
       verticalStiffnessNPerM: Number(m.verticalStiffnessNPerM),
       horizontalStiffnessNPerM: num(m.horizontalStiffnessNPerM),
-      dynamicStiffnessRatio: Number(m.dynamicStiffnessRatio),
+      dynamicStiffnessRatio: num(m.dynamicStiffnessRatio),
       dampingModel: dampingModelOf(m),
       dampingRatio: num(m.dampingRatio),
       lossFactor: num(m.lossFactor),

@@ -174,7 +174,8 @@ export interface MountSnapshot {
   ratedLoadN: number;
   verticalStiffnessNPerM: number;
   horizontalStiffnessNPerM: number | null;
-  dynamicStiffnessRatio: number;
+  /** Null: the catalog gives none. */
+  dynamicStiffnessRatio: number | null;
   dampingModel: 'viscous' | 'hysteretic';
   dampingRatio: number | null;
   lossFactor: number | null;

@@ -866,11 +866,10 @@ export interface components {
        */
       horizontalStiffnessNPerM?: number | null;
       /**
-       * @description Dynamic-to-static stiffness ratio (default 1.0)
-       * @default 1
+       * @description Dynamic-to-static stiffness ratio; leave it out when the supplier gives none (the selection then assumes the unfavourable value of the type and says so)
        * @example 1
        */
-      dynamicStiffnessRatio?: number;
+      dynamicStiffnessRatio?: number | null;
       /**
        * @description Viscous damping ratio ζ, 0 < ζ < 1 (give this or lossFactor)
        * @example 0.008
@@ -1140,7 +1139,7 @@ export interface components {
       /** @description N/m */
       verticalStiffnessNPerM: number;
       horizontalStiffnessNPerM: number | null;
-      dynamicStiffnessRatio: number;
+      dynamicStiffnessRatio: number | null;
       dampingModel: components["schemas"]["DampingModel"];
       dampingRatio: number | null;
       lossFactor: number | null;
@@ -1310,11 +1309,8 @@ export interface components {
       verticalStiffnessNPerM: number;
       /** @description Horizontal static stiffness, N/m */
       horizontalStiffnessNPerM: number | null;
-      /**
-       * @description Dynamic-to-static stiffness ratio
-       * @example 1
-       */
-      dynamicStiffnessRatio: number;
+      /** @description Dynamic-to-static stiffness ratio (null: the supplier gives none) */
+      dynamicStiffnessRatio: number | null;
       /** @description viscous ↔ dampingRatio, hysteretic ↔ lossFactor */
       dampingModel: components["schemas"]["DampingModel"];
       /** @description Viscous damping ratio ζ (viscous model only) */
@@ -1958,11 +1954,10 @@ export interface components {
        */
       horizontalStiffnessNPerM?: number | null;
       /**
-       * @description Dynamic-to-static stiffness ratio (default 1.0)
-       * @default 1
+       * @description Dynamic-to-static stiffness ratio; leave it out when the supplier gives none (the selection then assumes the unfavourable value of the type and says so)
        * @example 1
        */
-      dynamicStiffnessRatio?: number;
+      dynamicStiffnessRatio?: number | null;
       /**
        * @description Viscous damping ratio ζ, 0 < ζ < 1 (give this or lossFactor)
        * @example 0.008
