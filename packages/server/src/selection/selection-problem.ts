@@ -84,6 +84,22 @@ export interface SelectionProblem {
   cgInside: boolean;
   /** Seismic restraint to check; undefined: not checked. */
   restraint: RestraintInput | undefined;
+  /**
+   * The second mass case, when some component gives `altMassKg` (docs/engineering/selection.md §18):
+   * its mass properties and equal-stiffness loads; the verdict covers both cases.
+   */
+  alt: AltMassCase | undefined;
+}
+
+/** The machine in its second mass case (components with `altMassKg` take it, the others keep their mass). */
+export interface AltMassCase {
+  components: AssemblyComponent[];
+  massKg: number;
+  weightN: number;
+  cg: Vec3;
+  inertia: InertiaTensor;
+  equalLoadsN: Float64Array;
+  cgInside: boolean;
 }
 
 /** What the SQL prefilter reads: only rows that could serve at least one point. */
@@ -180,6 +196,24 @@ export function prepareProblem(input: SelectionInput): SelectionProblem {
     isolationDbTarget: isolationDb(transmissibilityTarget),
     cgInside: isInsideConvexHull(mass.cg, input.mountPoints),
     restraint: input.restraint ? checkedRestraint(input.restraint, mass.weightN) : undefined,
+    alt: altMassCase(input),
+  };
+}
+
+/** The second mass case of the input, or undefined when no component gives `altMassKg`. */
+function altMassCase(input: SelectionInput): AltMassCase | undefined {
+  if (!input.components.some((c) => c.altMassKg !== undefined && c.altMassKg !== null)) return undefined;
+  const components = input.components.map((c) => toAssemblyComponent({ ...c, massKg: c.altMassKg ?? c.massKg }));
+  const mass = massProperties(components);
+  const loads = mountLoads({ points: input.mountPoints, stiffnessNPerM: 1, weightN: mass.weightN, cg: mass.cg });
+  return {
+    components,
+    massKg: mass.massKg,
+    weightN: mass.weightN,
+    cg: mass.cg,
+    inertia: mass.inertia,
+    equalLoadsN: new Float64Array(loads.loadsN),
+    cgInside: isInsideConvexHull(mass.cg, input.mountPoints),
   };
 }
 

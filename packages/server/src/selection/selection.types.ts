@@ -76,6 +76,17 @@ export interface CandidateRestraint {
   passes: boolean;
 }
 
+/** The candidate in the second mass case (components' `altMassKg`; docs/engineering/selection.md §18). */
+export interface CandidateAltMassCase {
+  massKg: number;
+  cg: Vec3;
+  /** Bounce estimate with the second mass, Hz. */
+  verticalNaturalFrequencyHz: number;
+  perPoint: { label: string; loadN: number; utilization: number; staticDeflectionMm: number }[];
+  isolation: { frequencyHz: number; transmissibility: number; efficiencyPct: number }[];
+  passes: boolean;
+}
+
 /** Weighted score terms; they add up to `score` (see scoring.ts). */
 export interface ScoreTerms {
   isolation: number;
@@ -115,6 +126,8 @@ export interface Candidate {
   modes?: CandidateMode[];
   /** Seismic restraint figures, when the input asks for restraint. */
   restraint?: CandidateRestraint;
+  /** The second mass case, when a component gives `altMassKg`: its figures (the verdict covers it). */
+  altMassCase?: CandidateAltMassCase;
   passes: boolean;
   /** Why it fails, in words a user understands (empty when it passes). */
   reasons: string[];

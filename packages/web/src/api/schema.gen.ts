@@ -652,6 +652,19 @@ export interface paths {
 export type webhooks = Record<string, never>;
 export interface components {
   schemas: {
+    AltCaseIsolationDto: {
+      frequencyHz: number;
+      transmissibility: number;
+      efficiencyPct: number;
+    };
+    AltCasePointDto: {
+      label: string;
+      /** @description N */
+      loadN: number;
+      /** @description load / rated load */
+      utilization: number;
+      staticDeflectionMm: number;
+    };
     ApiErrorDto: {
       /** @example 400 */
       statusCode: number;
@@ -694,6 +707,17 @@ export interface components {
        */
       lz: number;
     };
+    CandidateAltMassCaseDto: {
+      /** @description kg */
+      massKg: number;
+      cg: components["schemas"]["Vec3Dto"];
+      /** @description bounce estimate with the second mass, Hz */
+      verticalNaturalFrequencyHz: number;
+      perPoint: components["schemas"]["AltCasePointDto"][];
+      isolation: components["schemas"]["AltCaseIsolationDto"][];
+      /** @description the second mass case meets every check */
+      passes: boolean;
+    };
     CandidateDto: {
       kind: components["schemas"]["CandidateKind"];
       mountId?: number;
@@ -719,6 +743,8 @@ export interface components {
       modes?: components["schemas"]["CandidateModeDto"][];
       /** @description seismic restraint figures, when the input asks for restraint */
       restraint?: components["schemas"]["CandidateRestraintDto"];
+      /** @description the second mass case (components[].altMassKg), when given; the verdict covers it */
+      altMassCase?: components["schemas"]["CandidateAltMassCaseDto"];
       passes: boolean;
       reasons: string[];
       /** @description remarks and warnings that do not fail the candidate */
@@ -818,6 +844,11 @@ export interface components {
       massKg: number;
       /** @description centre of gravity, m */
       cg: components["schemas"]["Vec3Dto"];
+      /**
+       * @description a second operating mass of the component, kg (e.g. drained, or without its liquid); the verdict covers both mass cases, with the CG of the assembly moving accordingly (the component keeps its own CG and shape)
+       * @example 240
+       */
+      altMassKg?: number;
       /** @description uniform box dimensions for its own inertia, m */
       box?: components["schemas"]["BoxDto"];
       /** @description own inertia about its CG, kg·m² (wins over box) */

@@ -144,6 +144,18 @@ export class ComponentDto {
   @Type(() => Vec3Dto)
   cg: Vec3Dto;
 
+  @ApiPropertyOptional({
+    example: 240,
+    description:
+      'a second operating mass of the component, kg (e.g. drained, or without its liquid); the verdict covers both mass cases, ' +
+      'with the CG of the assembly moving accordingly (the component keeps its own CG and shape)',
+  })
+  @IsOptional()
+  @IsFiniteNumber()
+  @IsPositive({ message: 'altMassKg must be a mass above 0 kg (leave it out when the component has one mass)' })
+  @Max(SELECTION_LIMITS.massKg)
+  altMassKg?: number;
+
   @ApiPropertyOptional({ type: BoxDto, description: 'uniform box dimensions for its own inertia, m' })
   @IsOptional()
   @ValidateNested()

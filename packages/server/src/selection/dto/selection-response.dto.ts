@@ -48,6 +48,28 @@ export class CandidateModeDto {
   energyFractions?: ModeEnergyFractionsDto;
 }
 
+export class AltCasePointDto {
+  @ApiProperty() label: string;
+  @ApiProperty({ description: 'N' }) loadN: number;
+  @ApiProperty({ description: 'load / rated load' }) utilization: number;
+  @ApiProperty() staticDeflectionMm: number;
+}
+
+export class AltCaseIsolationDto {
+  @ApiProperty() frequencyHz: number;
+  @ApiProperty() transmissibility: number;
+  @ApiProperty() efficiencyPct: number;
+}
+
+export class CandidateAltMassCaseDto {
+  @ApiProperty({ description: 'kg' }) massKg: number;
+  @ApiProperty({ type: Vec3Dto }) cg: Vec3Dto;
+  @ApiProperty({ description: 'bounce estimate with the second mass, Hz' }) verticalNaturalFrequencyHz: number;
+  @ApiProperty({ type: [AltCasePointDto] }) perPoint: AltCasePointDto[];
+  @ApiProperty({ type: [AltCaseIsolationDto] }) isolation: AltCaseIsolationDto[];
+  @ApiProperty({ description: 'the second mass case meets every check' }) passes: boolean;
+}
+
 export class ScoreTermsDto {
   @ApiProperty() isolation: number;
   @ApiProperty() utilization: number;
@@ -81,6 +103,11 @@ export class CandidateDto {
   modes?: CandidateModeDto[];
   @ApiPropertyOptional({ type: CandidateRestraintDto, description: 'seismic restraint figures, when the input asks for restraint' })
   restraint?: CandidateRestraintDto;
+  @ApiPropertyOptional({
+    type: CandidateAltMassCaseDto,
+    description: 'the second mass case (components[].altMassKg), when given; the verdict covers it',
+  })
+  altMassCase?: CandidateAltMassCaseDto;
   @ApiProperty() passes: boolean;
   @ApiProperty({ type: [String] }) reasons: string[];
   @ApiProperty({ type: [String], description: 'remarks and warnings that do not fail the candidate' }) notes: string[];

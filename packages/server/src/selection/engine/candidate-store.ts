@@ -113,6 +113,10 @@ export class CandidateStore {
   readonly hysteretic: Uint8Array;
   /** Transmissibility at each disturbing frequency (c·nf + j). */
   readonly transmissibility: Float64Array;
+  /** Bounce estimate of the second mass case, Hz (NaN without one: mass-case.ts). */
+  readonly fnAltHz: Float64Array;
+  /** Transmissibility of the second mass case at each disturbing frequency (c·nf + j; empty without one). */
+  readonly transmissibilityAlt: Float64Array;
   /** Transmissibility at resonance (r = 1). */
   readonly resonance: Float64Array;
   readonly meanUtilization: Float64Array;
@@ -200,6 +204,8 @@ export class CandidateStore {
     this.hysteretic = new Uint8Array(C);
     this.transmissibility = new Float64Array(C * problem.frequenciesHz.length);
     this.resonance = new Float64Array(C);
+    this.fnAltHz = new Float64Array(C).fill(Number.NaN);
+    this.transmissibilityAlt = new Float64Array(problem.alt ? C * problem.frequenciesHz.length : 0);
     this.meanUtilization = new Float64Array(C);
     this.levelErrorM = new Float64Array(C);
     this.meanDeflectionM = new Float64Array(C);

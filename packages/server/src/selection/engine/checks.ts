@@ -52,6 +52,11 @@ export const FAIL = {
   reserveTravel: 1024,
   /** A coil spring below the minimum utilisation in the light case (weight less the margin; spring-checks.ts). */
   lightLoad: 2048,
+  /**
+   * The second mass case (components' `altMassKg`) fails a load check (window, travel, reserve,
+   * light case), the CG, the isolation or the modes (mass-case.ts; selection.md §18).
+   */
+  massCase: 4096,
 } as const;
 
 /** The row checks that need a mount's details (DETAIL_COLUMNS); a candidate takes them once the details are loaded. */

@@ -6,7 +6,9 @@
 import { isolationDb, isolationEfficiencyPct } from '@tacet/vibration';
 import { scoreCandidate } from '../scoring.js';
 import type { SelectionProblem } from '../selection-problem.js';
-import type { Candidate, CandidatePoint, ScoreTerms } from '../selection.types.js';
+import type { Candidate, CandidateAltMassCase, CandidatePoint, ScoreTerms } from '../selection.types.js';
+import { FAIL } from './checks.js';
+import { altLoadsOf, seriesAltBuffers } from './mass-case.js';
 import type { CandidateStore } from './candidate-store.js';
 import type { ModeCheck } from './mode-check.js';
 import type { RestraintCheck } from './restraint-check.js';
@@ -55,6 +57,7 @@ export function describeCandidate(
   const s = newScoreInputs(refs);
   fillScoreInputs(store, refs, c, s);
   const score = scoreCandidate(s, terms);
+  const altMassCase = altCaseOf(store, problem, c);
   const modes = modeCheck.findingsOf(c);
   const restraint = restraintCheck.figuresOf(c);
   const wording: WordingContext = {
@@ -67,6 +70,7 @@ export function describeCandidate(
     modes,
     modesUnavailable: modeCheck.unavailable,
     restraint,
+    altMassCase,
   };
   const price = store.price[c];
   const lead = store.lead[c];
@@ -86,6 +90,7 @@ export function describeCandidate(
     maxLeadTimeDays: Number.isFinite(lead) ? lead : null,
     ...(modes?.modes ? { modes: modes.modes } : {}),
     ...(restraint ? { restraint } : {}),
+    ...(altMassCase ? { altMassCase } : {}),
     passes: store.fail[c] === 0,
     reasons: reasonsFor(wording),
     notes: notesFor(wording),
@@ -100,4 +105,31 @@ function seriesLabel(store: CandidateStore, points: readonly { row: number; part
   const counts = new Map<string, number>();
   for (const { partNumber } of points) counts.set(partNumber, (counts.get(partNumber) ?? 0) + 1);
   return `Series ${store.series[points[0].row]}: ${[...counts].map(([part, count]) => `${part} ×${count}`).join(', ')}`;
+}
+
+/** The figures of the second mass case (undefined without one). */
+function altCaseOf(store: CandidateStore, problem: SelectionProblem, c: number): CandidateAltMassCase | undefined {
+  const alt = problem.alt;
+  if (!alt) return undefined;
+  const nf = problem.frequenciesHz.length;
+  const loads = store.isUniform(c) ? alt.equalLoadsN : altLoadsOf(store, problem, c, seriesAltBuffers(problem));
+  return {
+    massKg: alt.massKg,
+    cg: { ...alt.cg },
+    verticalNaturalFrequencyHz: store.fnAltHz[c],
+    perPoint: problem.points.map((p, i) => {
+      const r = store.rowOf(c, i);
+      return {
+        label: p.label,
+        loadN: loads[i],
+        utilization: loads[i] / store.rated[r],
+        staticDeflectionMm: (loads[i] / store.kv[r]) * 1000,
+      };
+    }),
+    isolation: Array.from({ length: nf }, (_, j) => {
+      const t = store.transmissibilityAlt[c * nf + j];
+      return { frequencyHz: problem.frequenciesHz[j], transmissibility: t, efficiencyPct: isolationEfficiencyPct(t) };
+    }),
+    passes: (store.fail[c] & FAIL.massCase) === 0,
+  };
 }

@@ -19,6 +19,12 @@ export function evaluateIsolation(store: CandidateStore, problem: SelectionProbl
   transmissibilityBatch(new Float64Array(C).fill(1), damping, hysteretic, [1], store.resonance);
 
   const target = problem.transmissibilityTarget;
+  // the second mass case (mass-case.ts, selection.md §18): its own bounce estimate, same target
+  const alt = problem.alt ? store.transmissibilityAlt : null;
+  if (alt) {
+    const fnAlt = store.fnAltHz.map((f, c) => (skip[c] || !(f > 0) ? 1 : f));
+    transmissibilityBatch(fnAlt, damping, hysteretic, problem.frequenciesHz, alt);
+  }
   for (let c = 0; c < C; c++) {
     if (skip[c]) continue;
     let worst = 0;
@@ -28,5 +34,8 @@ export function evaluateIsolation(store: CandidateStore, problem: SelectionProbl
     }
     if (worst > target) fail[c] |= FAIL.isolation;
     minIsolationDb[c] = isolationDb(worst);
+    if (alt) {
+      for (let j = 0; j < nf; j++) if (alt[c * nf + j] > target) fail[c] |= FAIL.massCase;
+    }
   }
 }

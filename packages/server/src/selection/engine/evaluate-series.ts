@@ -12,6 +12,7 @@ import { PREFERRED_UTILIZATION } from '../scoring.js';
 import type { SelectionProblem } from '../selection-problem.js';
 import type { CandidateStore } from './candidate-store.js';
 import { FAIL, lightFactorOf, machineChecks } from './checks.js';
+import { checkSeriesAlt, seriesAltBuffers } from './mass-case.js';
 
 /**
  * Evaluates every series group; `everySeries` keeps the series that would be dropped (a choice
@@ -31,6 +32,7 @@ export function evaluateSeries(store: CandidateStore, problem: SelectionProblem,
   const failLight = FAIL.lightLoad;
   const light = lightFactorOf(problem);
   const { supportCompliance, hasSupport } = problem;
+  const altBuffers = problem.alt ? seriesAltBuffers(problem) : undefined;
   const { isSpring, springLimitM, rowAssumed } = store;
   const spread = problem.maxLoadN - problem.minLoadN;
   const R = store.rowCount;
@@ -126,6 +128,7 @@ export function evaluateSeries(store: CandidateStore, problem: SelectionProblem,
       continue;
     }
     store.fail[c] = fail;
+    if (altBuffers) checkSeriesAlt(store, problem, c, altBuffers);
     store.assumed[c] = assumed;
     store.meanUtilization[c] = sumU / n;
     store.levelErrorM[c] = hasSupport ? hi - lo : workspace.levelErrorM;

@@ -11,6 +11,7 @@ import { naturalFrequencyHz } from '@tacet/vibration';
 import type { SelectionProblem } from '../selection-problem.js';
 import type { CandidateStore } from './candidate-store.js';
 import { FAIL, lightFactorOf, machineChecks } from './checks.js';
+import { checkUniformAlt } from './mass-case.js';
 
 export function evaluateUniform(store: CandidateStore, problem: SelectionProblem): void {
   const { minUtilization, maxUtilization } = problem.criteria;
@@ -27,6 +28,7 @@ export function evaluateUniform(store: CandidateStore, problem: SelectionProblem
   const light = lightFactorOf(problem);
   const spread = problem.maxLoadN - problem.minLoadN;
   const { supportCompliance, hasSupport } = problem;
+  const hasAlt = problem.alt !== undefined;
   const { kv, rated, maxDeflectionM, rowFail, nd, rowDamping, rowHysteretic, unitPrice, leadDays, currencyIndex, id } = store;
   const { isSpring, springLimitM, rowAssumed, assumed } = store;
   const { fail, meanUtilization, levelErrorM, meanDeflectionM, fnHz, damping, hysteretic, price, lead, candidateCurrency, tieKey } = store;
@@ -48,6 +50,7 @@ export function evaluateUniform(store: CandidateStore, problem: SelectionProblem
       if (spring && u * light < minUtilization) f |= failLight;
     }
     fail[r] = f;
+    if (hasAlt) checkUniformAlt(store, problem, r);
     assumed[r] = rowAssumed[r];
     meanUtilization[r] = sumU / n;
     const kd = nd[r] * k;

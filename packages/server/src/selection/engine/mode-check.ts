@@ -34,6 +34,8 @@ export interface ModeFindings {
   /** Null when the modes could not be computed (see `ModeCheck.unavailable`). */
   modes: CandidateMode[] | null;
   conflict: ModeConflict | null;
+  /** A conflict of the modes in the second mass case (selection.md §18; sets FAIL.massCase). */
+  altConflict?: ModeConflict | null;
 }
 
 export class ModeCheck implements FinalistCheck {
@@ -67,8 +69,10 @@ export class ModeCheck implements FinalistCheck {
           const horizontal = kh * m.dynamicStiffnessRatio;
           return { position: { x: p.x, y: p.y, z: p.z }, stiffness: { x: horizontal, y: horizontal, z: vertical } };
         });
-      const solve = (mounts: ResilientMount[]) =>
-        rigidBodyModes({ massKg: problem.massKg, inertia: problem.inertia, cg: problem.cg, mounts });
+      type Body = Pick<SelectionProblem, 'massKg' | 'inertia' | 'cg'>;
+      const solve = (mounts: ResilientMount[], body: Body = problem) =>
+        rigidBodyModes({ massKg: body.massKg, inertia: body.inertia, cg: body.cg, mounts });
+      const missingKh = points.some((m) => Number.isNaN(m.horizontalStiffnessNPerM));
       try {
         const result = solve(mountsAt(HORIZONTAL_RATIO_WHEN_MISSING.high));
         const modes = result.modes.map((m) => ({
@@ -78,18 +82,24 @@ export class ModeCheck implements FinalistCheck {
           energyFractions: { ...m.energyFractions },
         }));
         let conflict = this.conflict(result.modes);
-        if (!conflict && points.some((m) => Number.isNaN(m.horizontalStiffnessNPerM))) {
+        if (!conflict && missingKh) {
           const low = this.conflict(solve(mountsAt(HORIZONTAL_RATIO_WHEN_MISSING.low)).modes);
           if (low?.kind === 'near') conflict = { ...low, assumedHorizontalRatio: HORIZONTAL_RATIO_WHEN_MISSING.low };
           else if (low) conflict = low;
         }
         findings = { modes, conflict };
+        if (problem.alt) {
+          let altConflict = this.conflict(solve(mountsAt(HORIZONTAL_RATIO_WHEN_MISSING.high), problem.alt).modes);
+          if (!altConflict && missingKh) altConflict = this.conflict(solve(mountsAt(HORIZONTAL_RATIO_WHEN_MISSING.low), problem.alt).modes);
+          findings.altConflict = altConflict;
+        }
       } catch (error) {
         if (!isVibrationInputError(error)) throw error;
         this.inertiaUnusable = true;
       }
     }
     if (findings.conflict) this.store.fail[c] |= FAIL.modes;
+    if (findings.altConflict) this.store.fail[c] |= FAIL.massCase;
     this.findings.set(c, findings);
   }
 

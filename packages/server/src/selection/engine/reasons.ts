@@ -10,7 +10,7 @@
 import { describeModeMotion, isolationEfficiencyPct } from '@tacet/vibration';
 import { formatHz, formatMm, formatNumber, formatPct, formatPctValue } from '../selection-format.js';
 import type { SelectionProblem } from '../selection-problem.js';
-import type { CandidatePoint, CandidateRestraint, RestraintPoint } from '../selection.types.js';
+import type { CandidateAltMassCase, CandidatePoint, CandidateRestraint, RestraintPoint } from '../selection.types.js';
 import type { CandidateStore, PointMount } from './candidate-store.js';
 import { FAIL } from './checks.js';
 import { catalogAssumptionsFor } from './assumptions.js';
@@ -33,6 +33,8 @@ export interface WordingContext {
   modesUnavailable: boolean;
   /** The seismic restraint figures (undefined when the input asks for no restraint). */
   restraint: CandidateRestraint | undefined;
+  /** The figures of the second mass case (undefined without one). */
+  altMassCase?: CandidateAltMassCase;
 }
 
 type Words = (x: WordingContext) => string[];
@@ -49,6 +51,7 @@ export const REASONS: readonly (readonly [bit: number, words: Words])[] = [
   [FAIL.temperature, temperature],
   [FAIL.modes, modes],
   [FAIL.restraint, restraint],
+  [FAIL.massCase, massCase],
   [FAIL.type, mountType],
   [FAIL.supplier, supplier],
 ];
@@ -242,6 +245,44 @@ function springStability({ store, c }: WordingContext): string[] {
         : `${store.partNumberOf(r)} is laterally unstable: its horizontal stiffness is ${formatNumber(store.kh[r] / store.kv[r], 2)}× ` +
           `the vertical, below the ${formatNumber(SPRING_MIN_HORIZONTAL_RATIO, 1)}× a coil spring needs (project-specification rule).`,
     );
+}
+
+/** What fails in the second mass case (selection.md §18). */
+function massCase({ problem, store, points, altMassCase: alt, modes: found }: WordingContext): string[] {
+  if (!alt || !problem.alt) return [];
+  const head = `In the second mass case (${formatNumber(alt.massKg, 0)} kg, CG x ${formatNumber(alt.cg.x, 3)} m, y ${formatNumber(alt.cg.y, 3)} m)`;
+  const reasons: string[] = [];
+  if (!problem.alt.cgInside)
+    reasons.push(`${head} the centre of gravity lies outside the polygon of the mount points: the machine would tip.`);
+  const { minUtilization, maxUtilization } = problem.criteria;
+  const light = 1 - problem.weightMarginPct / 100;
+  const bad = alt.perPoint.filter((p, i) => {
+    const m = points[i];
+    const u = p.utilization;
+    const d = (p.staticDeflectionMm / 1000) * problem.marginFactor;
+    return (
+      u * problem.marginFactor > maxUtilization ||
+      u < minUtilization ||
+      (store.isSpring[m.row] === 1 && u * light < minUtilization) ||
+      d > m.maxDeflectionM ||
+      d > store.springLimitM[m.row]
+    );
+  });
+  if (bad.length > 0) {
+    reasons.push(
+      `${head} the loads leave the allowed ${formatPct(minUtilization)}–${formatPct(maxUtilization)} of the rated load, the light case of ` +
+        `the springs or their travel at ${bad.map((p) => `point ${p.label} (${formatPct(p.utilization)}, ${formatMm(p.staticDeflectionMm)})`).join(', ')}.`,
+    );
+  }
+  const worst = alt.isolation.reduce((w, row) => (row.transmissibility > w.transmissibility ? row : w), alt.isolation[0]);
+  if (worst && worst.transmissibility > problem.transmissibilityTarget) {
+    reasons.push(
+      `${head} the natural frequency rises to ${formatHz(alt.verticalNaturalFrequencyHz)}: isolation at ${formatHz(worst.frequencyHz)} is ` +
+        `${formatPctValue(worst.efficiencyPct)}, below the ${formatNumber(problem.criteria.minIsolationPct, 1)} % target.`,
+    );
+  }
+  if (found?.altConflict) reasons.push(`${head}: ${modeConflict(found.altConflict)}`);
+  return reasons;
 }
 
 function temperature({ problem, store, c }: WordingContext): string[] {
