@@ -56,7 +56,7 @@ describe('second mass case (selection.md §18)', () => {
     { name: 'Liquid', massKg: 400, altMassKg: 40, cg: { x: 0.4, y: 0, z: 0.4 }, box: { lx: 0.5, ly: 0.5, lz: 0.4 } },
   ];
 
-  it('[CF] mass, CG and loads of the drained case; fn rises by √(1000/640) = 1.25 to 3.979 Hz and the isolation at 12 Hz fails there only', () => {
+  it('CV-55 [CF]: mass, CG and loads of the drained case; fn rises by √(1000/640) = 1.25 to 3.979 Hz and the isolation at 12 Hz fails there only', () => {
     const c = judged({ components: drained });
     const alt = c.altMassCase!;
     expect(alt.massKg).toBeCloseTo(640, 12);

@@ -6,7 +6,7 @@ import { SelectionEvaluation } from './selection-evaluation.js';
 /**
  * Honest under uncertainty (docs/engineering/selection.md §14–§17): assumed catalog values, the
  * springs' checks, the flexible support and the load margins, each against a hand calculation
- * (check values: docs/engineering/check-values.md CV-50 … CV-54). For every missing field: the
+ * (check values: docs/engineering/check-values.md CV-50 … CV-55). For every missing field: the
  * assumption is listed and the figure it feeds moves in the unfavourable direction.
  */
 const CORNERS = [
