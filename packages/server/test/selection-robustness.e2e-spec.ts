@@ -119,7 +119,32 @@ describe('selection: support, assumptions, springs, margins (e2e)', () => {
     expect(c.assumptions).toContainEqual(expect.stringMatching(/^Coil surge not checked/));
   });
 
+  it('a second mass case (altMassKg): its figures are returned and the verdict covers it', async () => {
+    const components = [
+      { name: 'Machine', massKg: 600, cg: { x: 0, y: 0, z: 0.3 }, box: { lx: 1.6, ly: 0.9, lz: 0.6 } },
+      { name: 'Liquid', massKg: 400, altMassKg: 40, cg: { x: 0.4, y: 0, z: 0.4 }, box: { lx: 0.5, ly: 0.5, lz: 0.4 } },
+    ];
+    const response = await select(
+      request({
+        components,
+        disturbingFrequenciesHz: [12],
+        criteria: { minIsolationPct: 90, minUtilization: 0.3, maxUtilization: 1, supplierIds: [rubber.id] },
+      }),
+    );
+    expect(response.status).toBe(200);
+    const c = candidate(response.body, fullId) as Candidate & {
+      altMassCase: { massKg: number; verticalNaturalFrequencyHz: number; passes: boolean };
+    };
+    // CV-55: 640 kg drained, fn 3.9789 Hz, isolation at 12 Hz 87.6 % < 90 %
+    expect(c.altMassCase.massKg).toBeCloseTo(640, 9);
+    expect(c.altMassCase.verticalNaturalFrequencyHz).toBeCloseTo(Math.sqrt((4 * 1e5) / 640) / TWO_PI, 9);
+    expect(c.altMassCase.passes).toBe(false);
+    expect(c.passes).toBe(false);
+    expect(c.reasons).toContainEqual(expect.stringMatching(/^In the second mass case \(640 kg/));
+  });
+
   it.each([
+    ['a second mass of zero', { components: [{ ...MACHINE[0], altMassKg: 0 }] }, 'components.0.altMassKg', /above 0 kg/],
     [
       'a utilisation window above the rating',
       { criteria: { minIsolationPct: 90, minUtilization: 0.5, maxUtilization: 1.2 } },
