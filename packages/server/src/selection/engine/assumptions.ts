@@ -53,16 +53,6 @@ export function unfavourableDynamicRatio(mountType: string): number {
   return UNFAVOURABLE_DYNAMIC_RATIO[mountType as MountType] ?? UNFAVOURABLE_DYNAMIC_RATIO_ANY;
 }
 
-/** Number of distinct assumptions behind candidate c (its rows' ASSUMED bits, counted once per row). */
-export function assumptionCount(store: CandidateStore, c: number): number {
-  let count = 0;
-  for (const r of store.rowsOf(c)) {
-    const a = store.rowAssumed[r];
-    count += (a & 1) + ((a >> 1) & 1) + ((a >> 2) & 1);
-  }
-  return count;
-}
-
 /** The assumptions of candidate c about its catalog data, in words (one line per row and field). */
 export function catalogAssumptionsFor(store: CandidateStore, c: number): string[] {
   const out: string[] = [];
