@@ -180,7 +180,7 @@ describe('catalog (e2e)', () => {
         supplier: { id: supplierId, name: 'Api Example Supplier' },
         partNumber: 'AX-1',
         mountType: 'housed_spring',
-        dynamicStiffnessRatio: 1,
+        dynamicStiffnessRatio: null, // not given: none stored (docs/engineering/selection.md §14)
         dampingModel: 'viscous',
         dampingRatio: 0.03,
         lossFactor: null,

@@ -288,7 +288,10 @@ function mountProblems(mount: Record<string, unknown>, cells: Record<string, str
   positive('restraintCapacityN', false);
   positive('upliftCapacityN', false);
   const ratio = number('dynamicStiffnessRatio');
-  if (!(ratio !== null && ratio >= 1 && ratio <= 5)) problems.push(`dynamicStiffnessRatio = ${ratio}`);
+  // optional: an empty cell stores none (FORMAT.md)
+  if (ratio === null ? (cells.dynamic_stiffness_ratio ?? '').trim() !== '' : !(ratio >= 1 && ratio <= 5)) {
+    problems.push(`dynamicStiffnessRatio = ${ratio}`);
+  }
   const zeta = number('dampingRatio');
   const eta = number('lossFactor');
   if ((zeta === null) === (eta === null)) problems.push(`dampingRatio ${zeta} / lossFactor ${eta}: exactly one`);

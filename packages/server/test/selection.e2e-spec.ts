@@ -181,7 +181,7 @@ describe('selection (e2e)', () => {
       expect(mode.energyFractions[mode.dominant]).toBe(Math.max(...Object.values(mode.energyFractions)));
     }
     expect(bounce.energyFractions.bounce).toBeCloseTo(1, 9);
-    expect(c.weightMarginPct).toBe(0);
+    expect(c.weightMarginPct).toBe(10); // the default (docs/engineering/selection.md §17)
     expect(Object.values(c.scoreTerms).reduce((a, b) => a + b, 0)).toBeCloseTo(c.score, 12);
   });
 

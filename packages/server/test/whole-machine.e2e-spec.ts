@@ -128,6 +128,7 @@ describe('whole-machine verdict (e2e)', () => {
     for (let i = 0; i < 10; i++) {
       shaky.push(
         await createMount(t, manager, sideways.id, {
+          mountType: 'elastomer_mount', // not a coil spring: the springs' lateral-stability rule would fail these rows
           partNumber: `WM-SHAKY-${i}`,
           verticalStiffnessNPerM: 1e4,
           horizontalStiffnessNPerM: 1.5e5 + i * 2e3,
@@ -137,6 +138,7 @@ describe('whole-machine verdict (e2e)', () => {
       );
     }
     quiet = await createMount(t, manager, sideways.id, {
+      mountType: 'elastomer_mount',
       partNumber: 'WM-QUIET',
       verticalStiffnessNPerM: 1.209e5,
       horizontalStiffnessNPerM: 1e4,
@@ -285,7 +287,7 @@ describe('whole-machine verdict (e2e)', () => {
     expect(first.isolation[0].transmissibility).toBeGreaterThan(1);
     expect(first.wholeMachine!.worst.efficiencyPct).toBeGreaterThan(90);
     expect(first.notes[0]).toMatch(
-      /^Whole machine: worst isolation [\d.]+ %, Shaker at 240 rpm, 4 Hz \(stiffness 10 % above nominal\); the isolation per frequency above is the bounce estimate\.$/,
+      /^Whole machine: worst isolation [\d.]+ %, Shaker at 240 rpm, 4 Hz \(stiffness 15 % above nominal\); the isolation per frequency above is the bounce estimate\.$/,
     );
     // the ten rows the estimate ranks higher were judged by the whole machine first and fail on their surge
     const failing = candidates.filter((c) => !c.passes);

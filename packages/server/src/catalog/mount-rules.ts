@@ -36,7 +36,6 @@ export const MOUNT_LIMITS = {
   /** Whole days, inclusive. */
   leadTimeDays: { min: 0, max: 730 },
   defaultCurrency: 'USD',
-  defaultDynamicStiffnessRatio: 1,
 } as const;
 
 /** Three-letter ISO 4217 code (stored upper-case). */

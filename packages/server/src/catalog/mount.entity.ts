@@ -67,8 +67,9 @@ export class Mount {
   @Column({ type: 'double precision', nullable: true })
   horizontalStiffnessNPerM: number | null;
 
-  @Column({ type: 'double precision', default: 1 })
-  dynamicStiffnessRatio: number;
+  /** Null: the supplier gives none (the selection assumes one and says so). */
+  @Column({ type: 'double precision', nullable: true })
+  dynamicStiffnessRatio: number | null;
 
   @Column({ type: 'double precision', nullable: true })
   dampingRatio: number | null;

@@ -120,7 +120,7 @@ export class MountsService {
       ratedLoadN: dto.ratedLoadN,
       verticalStiffnessNPerM: dto.verticalStiffnessNPerM,
       horizontalStiffnessNPerM: dto.horizontalStiffnessNPerM ?? null,
-      dynamicStiffnessRatio: dto.dynamicStiffnessRatio ?? MOUNT_LIMITS.defaultDynamicStiffnessRatio,
+      dynamicStiffnessRatio: dto.dynamicStiffnessRatio ?? null,
       dampingRatio: dto.dampingRatio ?? null,
       lossFactor: dto.lossFactor ?? null,
       maxDeflectionMm: dto.maxDeflectionMm ?? null,

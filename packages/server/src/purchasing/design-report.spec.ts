@@ -62,7 +62,10 @@ describe('designReportPdf', () => {
       perPoint: [],
       isolation: [],
       modes: [],
-      reasons: [],
+      passes: false,
+      reasons: ['Lateral stability of IS-100 cannot be shown: the catalog gives no horizontal stiffness.'],
+      notes: ['Sizes picked per point for a level skid.'],
+      assumptions: ['IS-100: the catalog gives no horizontal stiffness; the modes are checked with 0.2x and 1x the vertical.'],
     };
     const withSnapshot = {
       ...design('released'),
@@ -93,6 +96,13 @@ describe('designReportPdf', () => {
       'IS-100',
       'damping ratio 0.01',
       'Transmissibility T (log)',
+      'Weight margin 10 % (the default for weights not yet final)',
+      // the verdict, reasons, notes and assumptions of the chosen candidate (docs/engineering/selection.md §14)
+      'Verdict: the chosen mounts do NOT meet one check of the selection:',
+      'Lateral stability of IS-100 cannot be shown',
+      'Sizes picked per point for a level skid.',
+      'Assumptions (values not given by the catalog or the input',
+      'IS-100: the catalog gives no horizontal stiffness',
     ];
     expect(wanted.filter((text) => !pdfHasText(pdf, text))).toEqual([]);
   }, 20000);

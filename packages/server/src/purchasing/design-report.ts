@@ -7,10 +7,12 @@ import type { Verification } from '../verifications/verification.entity.js';
 import { bomTotals } from './bom-export.js';
 import { restraintReportLines } from './report-restraint.js';
 import { speedChart, wholeMachineReportLines } from './report-whole-machine.js';
+import { verdictReportLines } from './report-verdict.js';
+import { DEFAULT_WEIGHT_MARGIN_PCT } from '../selection/selection-problem.js';
 
 /** The caution every report carries (PRODUCT.md, "Cautions the product shows"). */
 export const REPORT_CAUTION =
-  'The model assumes a rigid machine on linear mounts over a rigid support. Results are for preliminary sizing: ' +
+  'The model assumes a rigid machine on linear mounts over a rigid support (or a support of the stiffness given, as a spring). Results are for preliminary sizing: ' +
   'seismic and wind restraint, snubbers, flexible pipe and cable connections, flexible floors and guarding follow ' +
   'local codes and need review by a qualified, licensed engineer.';
 
@@ -151,6 +153,10 @@ export function designReportPdf(design: Design, options: ReportOptions): Promise
     body(
       `Load utilisation between ${fmt(criteria.minUtilization * 100, 0)} % and ${fmt(criteria.maxUtilization * 100, 0)} % of the rated load`,
     );
+    const margin = criteria.weightMarginPct;
+    body(
+      `Weight margin ${fmt(margin ?? DEFAULT_WEIGHT_MARGIN_PCT, 0)} %${margin === undefined ? ' (the default for weights not yet final)' : ''}`,
+    );
     if (criteria.ambientTempC !== undefined) body(`Ambient temperature ${fmt(criteria.ambientTempC, 0)} °C`);
     if (criteria.mountTypes?.length) body(`Mount types: ${criteria.mountTypes.map((t) => t.replace(/_/g, ' ')).join(', ')}`);
   }
@@ -196,10 +202,9 @@ export function designReportPdf(design: Design, options: ReportOptions): Promise
     const damping = mounts.length ? dampingOf(mounts[0]) : undefined;
     heading('Transmissibility (bounce estimate)');
     transmissibilityChart(doc, candidate.verticalNaturalFrequencyHz, damping, options.disturbingFrequencies, criteria?.minIsolationPct);
-    if (candidate.reasons.length) {
-      heading('Checks not met');
-      for (const reason of candidate.reasons) body(`• ${reason}`);
-    }
+    const verdict = verdictReportLines(candidate);
+    heading(verdict.heading);
+    for (const paragraph of verdict.paragraphs) body(paragraph);
   }
   if (design.input.restraint) {
     const section = restraintReportLines(design.input.restraint, candidate?.restraint);
@@ -310,7 +315,7 @@ function mountLine(m: MountSnapshot): string {
     `${m.supplier.name} ${m.partNumber} (${m.mountType.replace(/_/g, ' ')}${m.series ? `, series ${m.series}` : ''}): ` +
     `rated load ${fmt(m.ratedLoadN, 0)} N, vertical stiffness ${fmt(m.verticalStiffnessNPerM / 1000, 1)} N/mm` +
     `${m.horizontalStiffnessNPerM === null ? '' : `, horizontal ${fmt(m.horizontalStiffnessNPerM / 1000, 1)} N/mm`}` +
-    `, dynamic-to-static ratio ${m.dynamicStiffnessRatio}, ${damping}` +
+    `, dynamic-to-static ratio ${m.dynamicStiffnessRatio ?? 'not given'}, ${damping}` +
     `${m.maxDeflectionMm === null ? '' : `, max deflection ${fmt(m.maxDeflectionMm, 1)} mm`}` +
     `${m.tempMinC === null || m.tempMaxC === null ? '' : `, ${fmt(m.tempMinC, 0)}…${fmt(m.tempMaxC, 0)} °C`}`
   );

@@ -100,6 +100,15 @@ describe('inputChanges (what changed between two submissions)', () => {
       expect.objectContaining({ field: 'support.spanM', label: 'support: span', quantity: 'position', after: 6 }),
     ]);
   });
+
+  it('reads a support stiffness in N/mm as a stiffness in N/m, not a deflection', () => {
+    const after = clone();
+    after.mountPoints[0] = { ...after.mountPoints[0], supportStiffnessNPerMm: 5000 } as (typeof after.mountPoints)[0];
+    const changes = inputChanges({ input: base, chosen: null }, { input: after, chosen: null }, context);
+    expect(changes).toEqual([
+      expect.objectContaining({ field: 'mountPoints[A].supportStiffnessNPerMm', quantity: 'stiffness', before: null, after: 5e6 }),
+    ]);
+  });
 });
 
 describe('formatInputChange (in the reader’s units)', () => {

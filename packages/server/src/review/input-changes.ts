@@ -145,6 +145,7 @@ const SUFFIXES: { suffix: RegExp; quantity: ChangeQuantity; scale?: (value: numb
   { suffix: /TempC$|C$/, quantity: 'temperature' },
   { suffix: /Pct$/, quantity: 'percent' },
   { suffix: /NPerM$/, quantity: 'stiffness' },
+  { suffix: /NPerMm$/, quantity: 'stiffness', scale: (nPerMm) => nPerMm * 1000 },
   { suffix: /Mm$/, quantity: 'deflection', scale: (mm) => mm / 1000 },
   { suffix: /N$/, quantity: 'force' },
   { suffix: /M$/, quantity: 'position' },

@@ -63,8 +63,7 @@ const column = (name: string): string => `"m"."${name}"`;
  * revision (CatalogRevisionService) and read again when another write — from this process or
  * any other on the same database — moved it. Reads go through a prepared statement: on SQLite
  * a better-sqlite3 statement in raw mode on TypeORM's own connection; on PostgreSQL the same
- * SQL through `DataSource.query`. Details (part number, type, horizontal stiffness,
- * temperature range) and supplier names are read afterwards for the few mounts whose modes are
+ * SQL through `DataSource.query`. Details (part number, type, temperature range) and supplier names are read afterwards for the few mounts whose modes are
  * computed or that are shown.
  */
 @Injectable()
@@ -221,7 +220,6 @@ export class SelectionCatalogReader {
         Number(id),
         {
           ...details,
-          horizontalStiffnessNPerM: num(details.horizontalStiffnessNPerM),
           tempMinC: num(details.tempMinC),
           tempMaxC: num(details.tempMaxC),
         },
@@ -248,7 +246,7 @@ export class SelectionCatalogReader {
       ratedLoadN: Number(m.ratedLoadN),
       verticalStiffnessNPerM: Number(m.verticalStiffnessNPerM),
       horizontalStiffnessNPerM: num(m.horizontalStiffnessNPerM),
-      dynamicStiffnessRatio: Number(m.dynamicStiffnessRatio),
+      dynamicStiffnessRatio: num(m.dynamicStiffnessRatio),
       dampingModel: dampingModelOf(m),
       dampingRatio: num(m.dampingRatio),
       lossFactor: num(m.lossFactor),

@@ -31,6 +31,13 @@ import type { RestraintInput } from './dto/restraint.dto.js';
 import { formatHz } from './selection-format.js';
 import type { LabelledFrequency } from './selection.types.js';
 
+/**
+ * The weight margin when the criteria give none, %: equipment weights from data sheets are
+ * commonly quoted to about ±10 % before the final equipment is known (common practice, no
+ * single source; docs/engineering/selection.md §17).
+ */
+export const DEFAULT_WEIGHT_MARGIN_PCT = 10;
+
 /** What a selection needs, as the API receives it (frequency labels are optional). */
 export interface SelectionInput {
   components: readonly Component[];
@@ -65,6 +72,13 @@ export interface SelectionProblem {
   /** The sources of the whole-machine verdict and the speeds they run over (docs/engineering/forcing.md §7). */
   forcing: ResolvedOperating;
   criteria: Criteria;
+  /**
+   * Compliance of the support under each point, 1/k_s [m/N] (0: rigid, no `supportStiffnessNPerMm`):
+   * in series with the mount vertically (docs/engineering/selection.md §15).
+   */
+  supportCompliance: Float64Array;
+  /** Some point stands on a flexible support. */
+  hasSupport: boolean;
   /** The allowance on the weight the overload checks use, % (the criteria's, or the default). */
   weightMarginPct: number;
   /** 1 + weightMarginPct/100: applied to loads in the overload checks (utilisation above the window, deflection). */
@@ -77,6 +91,22 @@ export interface SelectionProblem {
   cgInside: boolean;
   /** Seismic restraint to check; undefined: not checked. */
   restraint: RestraintInput | undefined;
+  /**
+   * The second mass case, when some component gives `altMassKg` (docs/engineering/selection.md §18):
+   * its mass properties and equal-stiffness loads; the verdict covers both cases.
+   */
+  alt: AltMassCase | undefined;
+}
+
+/** The machine in its second mass case (components with `altMassKg` take it, the others keep their mass). */
+export interface AltMassCase {
+  components: AssemblyComponent[];
+  massKg: number;
+  weightN: number;
+  cg: Vec3;
+  inertia: InertiaTensor;
+  equalLoadsN: Float64Array;
+  cgInside: boolean;
 }
 
 /** What the SQL prefilter reads: only rows that could serve at least one point. */
@@ -145,7 +175,10 @@ export function prepareProblem(input: SelectionInput): SelectionProblem {
     frequenciesHz[i] = f.frequencyHz;
   });
   const criteria = input.criteria;
-  const weightMarginPct = criteria.weightMarginPct ?? 0;
+  const weightMarginPct = criteria.weightMarginPct ?? DEFAULT_WEIGHT_MARGIN_PCT;
+  const supportCompliance = new Float64Array(
+    input.mountPoints.map((p) => (p.supportStiffnessNPerMm ? 1 / (p.supportStiffnessNPerMm * 1000) : 0)),
+  );
   const transmissibilityTarget = transmissibilityFromEfficiency(criteria.minIsolationPct);
   return {
     points: input.mountPoints,
@@ -163,12 +196,32 @@ export function prepareProblem(input: SelectionInput): SelectionProblem {
     frequencyLabels: input.frequencies.map((f) => f.label),
     forcing: input.operating ? resolveOperatingSources(input.operating, mass.cg) : verticalSourcesAt(Array.from(frequenciesHz), mass.cg),
     criteria,
+    supportCompliance,
+    hasSupport: supportCompliance.some((c) => c > 0),
     weightMarginPct,
     marginFactor: 1 + weightMarginPct / 100,
     transmissibilityTarget,
     isolationDbTarget: isolationDb(transmissibilityTarget),
     cgInside: isInsideConvexHull(mass.cg, input.mountPoints),
     restraint: input.restraint ? checkedRestraint(input.restraint, mass.weightN) : undefined,
+    alt: altMassCase(input),
+  };
+}
+
+/** The second mass case of the input, or undefined when no component gives `altMassKg`. */
+function altMassCase(input: SelectionInput): AltMassCase | undefined {
+  if (!input.components.some((c) => c.altMassKg !== undefined && c.altMassKg !== null)) return undefined;
+  const components = input.components.map((c) => toAssemblyComponent({ ...c, massKg: c.altMassKg ?? c.massKg }));
+  const mass = massProperties(components);
+  const loads = mountLoads({ points: input.mountPoints, stiffnessNPerM: 1, weightN: mass.weightN, cg: mass.cg });
+  return {
+    components,
+    massKg: mass.massKg,
+    weightN: mass.weightN,
+    cg: mass.cg,
+    inertia: mass.inertia,
+    equalLoadsN: new Float64Array(loads.loadsN),
+    cgInside: isInsideConvexHull(mass.cg, input.mountPoints),
   };
 }
 

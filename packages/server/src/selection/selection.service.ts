@@ -1,4 +1,4 @@
-import { BadRequestException, Injectable } from '@nestjs/common';
+import { BadRequestException, Injectable, UnprocessableEntityException } from '@nestjs/common';
 import {
   SELECTION_LIMITS,
   type Component,
@@ -129,6 +129,13 @@ export class SelectionService {
     const { evaluation, c } = await this.evaluationOf(problem, choice, { mountId: 'mountId', seriesId: 'seriesId' });
     const names = await this.catalog.supplierNames([evaluation.supplierOf(c)]);
     const candidate = evaluation.describe(c, names);
+    if (!candidate.wholeMachine) {
+      // the model cannot be built (selection.md §19): there is no whole-machine curve to draw
+      throw new UnprocessableEntityException(
+        'The speed curves need the whole-machine model, and the machine has no usable inertia (point masses, or all on one line): ' +
+          'give the components box dimensions or their inertia.',
+      );
+    }
     const curves = evaluation.curves(c);
     return {
       candidate: {

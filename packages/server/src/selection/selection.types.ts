@@ -10,7 +10,10 @@ export interface CandidatePoint {
   loadN: number;
   /** Load / rated load. */
   utilization: number;
+  /** The mount's own static deflection, mm. */
   staticDeflectionMm: number;
+  /** The deflection of the flexible support under the point, mm (only where `supportStiffnessNPerMm` is given). */
+  supportDeflectionMm?: number;
 }
 
 /** Isolation at one disturbing frequency (in the order of the frequencies). */
@@ -116,6 +119,20 @@ export interface CandidateWholeMachine {
   perFrequency: WholeMachinePerFrequency[];
 }
 
+/** The candidate in the second mass case (components' `altMassKg`; docs/engineering/selection.md §18). */
+export interface CandidateAltMassCase {
+  massKg: number;
+  cg: Vec3;
+  /** Bounce estimate with the second mass, Hz. */
+  verticalNaturalFrequencyHz: number;
+  perPoint: { label: string; loadN: number; utilization: number; staticDeflectionMm: number }[];
+  /** Bounce estimate of the isolation at the disturbing frequencies with the second mass. */
+  isolation: { frequencyHz: number; transmissibility: number; efficiencyPct: number }[];
+  /** The whole-machine verdict's worst point with the second mass (absent when the model cannot be built). */
+  wholeMachineWorst?: CandidateWholeMachine['worst'];
+  passes: boolean;
+}
+
 /** Weighted score terms; they add up to `score` (see scoring.ts). */
 export interface ScoreTerms {
   isolation: number;
@@ -159,12 +176,20 @@ export interface Candidate {
   wholeMachine?: CandidateWholeMachine;
   /** Crossings of the source orders with the modes inside the running range, lowest speed first. */
   crossings?: CandidateCrossing[];
-  /** Follows the whole-machine verdict (with the load, deflection, mode and restraint checks). */
+  /** The second mass case, when a component gives `altMassKg`: its figures (the verdict covers it). */
+  altMassCase?: CandidateAltMassCase;
+  /** Follows the whole-machine verdict in both mass cases (with the load, deflection, mode and restraint checks). */
   passes: boolean;
   /** Why it fails, in words a user understands (empty when it passes). */
   reasons: string[];
-  /** Assumptions and remarks that do not fail the candidate. */
+  /** Remarks and warnings that do not fail the candidate. */
   notes: string[];
+  /**
+   * Every value that did not come from the catalog or the input, with the value used (the
+   * unfavourable one for the check it feeds; docs/engineering/selection.md §14). Absent in
+   * candidates chosen before it was kept.
+   */
+  assumptions?: string[];
   score: number;
   scoreTerms: ScoreTerms;
 }
@@ -238,7 +263,8 @@ export interface MountSnapshot {
   ratedLoadN: number;
   verticalStiffnessNPerM: number;
   horizontalStiffnessNPerM: number | null;
-  dynamicStiffnessRatio: number;
+  /** Null: the catalog gives none. */
+  dynamicStiffnessRatio: number | null;
   dampingModel: 'viscous' | 'hysteretic';
   dampingRatio: number | null;
   lossFactor: number | null;

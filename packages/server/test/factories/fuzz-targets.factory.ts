@@ -51,11 +51,11 @@ const OWN_USER = { email: 'fuzz-own@example.test', password: 'fuzz own password 
 
 const designInput = (supplierId: number) => ({
   components: [
-    { name: 'Pump', massKg: 420, cg: { x: 0.3, y: 0, z: 0.35 }, box: { lx: 0.8, ly: 0.5, lz: 0.6 } },
+    { name: 'Pump', massKg: 420, altMassKg: 390, cg: { x: 0.3, y: 0, z: 0.35 }, box: { lx: 0.8, ly: 0.5, lz: 0.6 } },
     { name: 'Motor', massKg: 380, cg: { x: -0.4, y: 0.02, z: 0.4 }, inertia: { ixx: 12, iyy: 30, izz: 28, ixy: 0, ixz: 0, iyz: 0 } },
   ],
   mountPoints: [
-    { label: 'A', x: 0.8, y: 0.45, z: 0 },
+    { label: 'A', x: 0.8, y: 0.45, z: 0, supportStiffnessNPerMm: 20000 },
     { label: 'B', x: 0.8, y: -0.45, z: 0 },
     { label: 'C', x: -0.8, y: 0.45, z: 0 },
     { label: 'D', x: -0.8, y: -0.45, z: 0 },

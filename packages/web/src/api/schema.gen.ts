@@ -668,6 +668,19 @@ export interface paths {
 export type webhooks = Record<string, never>;
 export interface components {
   schemas: {
+    AltCaseIsolationDto: {
+      frequencyHz: number;
+      transmissibility: number;
+      efficiencyPct: number;
+    };
+    AltCasePointDto: {
+      label: string;
+      /** @description N */
+      loadN: number;
+      /** @description load / rated load */
+      utilization: number;
+      staticDeflectionMm: number;
+    };
     ApiErrorDto: {
       /** @example 400 */
       statusCode: number;
@@ -751,8 +764,10 @@ export interface components {
       /** @description follows the whole-machine verdict, with the load, deflection, mode and restraint checks */
       passes: boolean;
       reasons: string[];
-      /** @description assumptions and remarks that do not fail the candidate */
+      /** @description remarks and warnings that do not fail the candidate */
       notes: string[];
+      /** @description every value that did not come from the catalog or the input and the value used, the unfavourable one for the check it feeds (absent in candidates chosen before it was kept) */
+      assumptions?: string[];
       score: number;
       scoreTerms: components["schemas"]["ScoreTermsDto"];
     };
@@ -781,7 +796,10 @@ export interface components {
       loadN: number;
       /** @description load / rated load */
       utilization: number;
+      /** @description the mount's own static deflection, mm */
       staticDeflectionMm: number;
+      /** @description deflection of the flexible support under the point, mm (where supportStiffnessNPerMm is given) */
+      supportDeflectionMm?: number;
     };
     CandidateRestraintDto: {
       /** @example ASCE 7-16 */
@@ -850,6 +868,11 @@ export interface components {
       massKg: number;
       /** @description centre of gravity, m */
       cg: components["schemas"]["Vec3Dto"];
+      /**
+       * @description a second operating mass of the component, kg (e.g. drained, or without its liquid); the verdict covers both mass cases, with the CG of the assembly moving accordingly (the component keeps its own CG and shape)
+       * @example 240
+       */
+      altMassKg?: number;
       /** @description uniform box dimensions for its own inertia, m */
       box?: components["schemas"]["BoxDto"];
       /** @description own inertia about its CG, kg·m² (wins over box) */
@@ -898,11 +921,10 @@ export interface components {
        */
       horizontalStiffnessNPerM?: number | null;
       /**
-       * @description Dynamic-to-static stiffness ratio (default 1.0)
-       * @default 1
+       * @description Dynamic-to-static stiffness ratio; leave it out when the supplier gives none (the selection then assumes the unfavourable value of the type and says so)
        * @example 1
        */
-      dynamicStiffnessRatio?: number;
+      dynamicStiffnessRatio?: number | null;
       /**
        * @description Viscous damping ratio ζ, 0 < ζ < 1 (give this or lossFactor)
        * @example 0.008
@@ -1014,7 +1036,7 @@ export interface components {
        */
       minUtilization: number;
       /**
-       * @description highest load / rated load at any point (≤ 1.5)
+       * @description highest load / rated load at any point (≤ 1: never above the rating)
        * @example 1
        */
       maxUtilization: number;
@@ -1026,7 +1048,7 @@ export interface components {
       mountTypes?: components["schemas"]["MountType"][];
       supplierIds?: number[];
       /**
-       * @description allowance on the weight for overload checks, % (default 0)
+       * @description allowance on the weight, %: the overload checks add it, the light case of springs takes it off (default 10)
        * @example 10
        */
       weightMarginPct?: number;
@@ -1194,7 +1216,7 @@ export interface components {
       /** @description N/m */
       verticalStiffnessNPerM: number;
       horizontalStiffnessNPerM: number | null;
-      dynamicStiffnessRatio: number;
+      dynamicStiffnessRatio: number | null;
       dampingModel: components["schemas"]["DampingModel"];
       dampingRatio: number | null;
       lossFactor: number | null;
@@ -1364,11 +1386,8 @@ export interface components {
       verticalStiffnessNPerM: number;
       /** @description Horizontal static stiffness, N/m */
       horizontalStiffnessNPerM: number | null;
-      /**
-       * @description Dynamic-to-static stiffness ratio
-       * @example 1
-       */
-      dynamicStiffnessRatio: number;
+      /** @description Dynamic-to-static stiffness ratio (null: the supplier gives none) */
+      dynamicStiffnessRatio: number | null;
       /** @description viscous ↔ dampingRatio, hysteretic ↔ lossFactor */
       dampingModel: components["schemas"]["DampingModel"];
       /** @description Viscous damping ratio ζ (viscous model only) */
@@ -1426,6 +1445,11 @@ export interface components {
        * @example 0
        */
       z: number;
+      /**
+       * @description vertical stiffness of the support under the point (floor, steel), N/mm, in series with the mount; absent: rigid. Less than about 10× the mount stiffness gets a warning (rule of thumb)
+       * @example 5000
+       */
+      supportStiffnessNPerMm?: number;
     };
     MountSupplierDto: {
       /** @example 3 */
@@ -2167,11 +2191,10 @@ export interface components {
        */
       horizontalStiffnessNPerM?: number | null;
       /**
-       * @description Dynamic-to-static stiffness ratio (default 1.0)
-       * @default 1
+       * @description Dynamic-to-static stiffness ratio; leave it out when the supplier gives none (the selection then assumes the unfavourable value of the type and says so)
        * @example 1
        */
-      dynamicStiffnessRatio?: number;
+      dynamicStiffnessRatio?: number | null;
       /**
        * @description Viscous damping ratio ζ, 0 < ζ < 1 (give this or lossFactor)
        * @example 0.008

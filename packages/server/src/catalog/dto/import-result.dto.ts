@@ -44,8 +44,8 @@ export class ImportPreviewRowDto implements ImportPreviewRow {
   @nullableNumber()
   horizontalStiffnessNPerM: number | null;
 
-  @ApiProperty()
-  dynamicStiffnessRatio: number;
+  @nullableNumber()
+  dynamicStiffnessRatio: number | null;
 
   @ApiProperty({ enum: DAMPING_MODELS, enumName: 'DampingModel' })
   dampingModel: DampingModel;

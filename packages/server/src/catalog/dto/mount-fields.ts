@@ -117,15 +117,15 @@ export const MOUNT_FIELDS = {
   dynamicStiffnessRatio: {
     api: {
       type: Number,
-      description: 'Dynamic-to-static stiffness ratio (default 1.0)',
+      description:
+        'Dynamic-to-static stiffness ratio; leave it out when the supplier gives none (the selection then assumes the unfavourable value of the type and says so)',
       example: 1,
       minimum: MOUNT_LIMITS.dynamicStiffnessRatio.min,
       maximum: MOUNT_LIMITS.dynamicStiffnessRatio.max,
-      default: MOUNT_LIMITS.defaultDynamicStiffnessRatio,
     },
     rules: () => [finite(), Min(MOUNT_LIMITS.dynamicStiffnessRatio.min), Max(MOUNT_LIMITS.dynamicStiffnessRatio.max)],
     required: false,
-    nullable: false,
+    nullable: true,
   },
   dampingRatio: {
     api: { type: Number, description: 'Viscous damping ratio ζ, 0 < ζ < 1 (give this or lossFactor)', example: 0.008 },

@@ -38,8 +38,8 @@ export class MountDto {
   @nullableNumber('Horizontal static stiffness, N/m')
   horizontalStiffnessNPerM: number | null;
 
-  @ApiProperty({ description: 'Dynamic-to-static stiffness ratio', example: 1 })
-  dynamicStiffnessRatio: number;
+  @nullableNumber('Dynamic-to-static stiffness ratio (null: the supplier gives none)')
+  dynamicStiffnessRatio: number | null;
 
   @ApiProperty({ enum: DAMPING_MODELS, enumName: 'DampingModel', description: 'viscous ↔ dampingRatio, hysteretic ↔ lossFactor' })
   dampingModel: DampingModel;

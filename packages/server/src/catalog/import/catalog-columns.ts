@@ -16,7 +16,7 @@ export interface MountValues {
   ratedLoadN: number;
   verticalStiffnessNPerM: number;
   horizontalStiffnessNPerM: number | null;
-  dynamicStiffnessRatio: number;
+  dynamicStiffnessRatio: number | null;
   dampingRatio: number | null;
   lossFactor: number | null;
   maxDeflectionMm: number | null;

@@ -111,11 +111,11 @@ describe('validateRow', () => {
     expect(values?.upliftCapacityN).toBe(0.5 * 4.4482216152605);
   });
 
-  it('applies the defaults: dynamic stiffness ratio 1.0, currency USD, optional fields null', () => {
+  it('applies the defaults: currency USD, optional fields (the dynamic stiffness ratio among them) null', () => {
     const minimal = headerOf(['supplier', 'part_number', 'mount_type', 'rated_load_n', 'vertical_stiffness_n_per_mm', 'loss_factor']);
     expect(validateRow(['S', 'P', 'elastomer_pad', '300', '150', '0.2'], minimal).values).toMatchObject({
       series: null,
-      dynamicStiffnessRatio: 1,
+      dynamicStiffnessRatio: null, // not 1.0: the selection assumes one and says so (docs/engineering/selection.md §14)
       currency: 'USD',
       dampingRatio: null,
       lossFactor: 0.2,

@@ -142,7 +142,7 @@ export function validateRow(fields: readonly string[], header: HeaderMap): RowRe
       ratedLoadN: numberOf('ratedLoadN') as number,
       verticalStiffnessNPerM: numberOf('verticalStiffnessNPerM') as number,
       horizontalStiffnessNPerM: numberOf('horizontalStiffnessNPerM'),
-      dynamicStiffnessRatio: numberOf('dynamicStiffnessRatio') ?? MOUNT_LIMITS.defaultDynamicStiffnessRatio,
+      dynamicStiffnessRatio: numberOf('dynamicStiffnessRatio'),
       dampingRatio: numberOf('dampingRatio'),
       lossFactor: numberOf('lossFactor'),
       maxDeflectionMm: numberOf('maxDeflectionMm'),

@@ -8,6 +8,7 @@ import { CreateDesignVerification1765100000000 } from './1765100000000-create-de
 import { HandOffs1765152000000 } from './1765152000000-hand-offs.js';
 import { CreateDesignSelection1765200000000 } from './1765200000000-create-design-selection.js';
 import { MountRestraintRatings1765300000000 } from './1765300000000-mount-restraint-ratings.js';
+import { MountDynamicRatioOptional1765400000000 } from './1765400000000-mount-dynamic-ratio-optional.js';
 
 /** Every migration, oldest first. A new migration is imported and appended here. */
 export const MIGRATIONS = [
@@ -21,4 +22,5 @@ export const MIGRATIONS = [
   HandOffs1765152000000,
   CreateDesignSelection1765200000000,
   MountRestraintRatings1765300000000,
+  MountDynamicRatioOptional1765400000000,
 ];

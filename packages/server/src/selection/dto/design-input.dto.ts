@@ -9,6 +9,7 @@ import {
   IsIn,
   IsInt,
   IsNotEmpty,
+  IsObject,
   IsOptional,
   IsPositive,
   IsString,
@@ -41,7 +42,10 @@ export const SELECTION_LIMITS = {
   frequencyHz: 1e5,
   speedRpm: 1e6,
   vaneCount: 200,
-  utilization: 1.5,
+  /** The highest utilisation window end: a mount is never loaded beyond its rating (docs/engineering/selection.md §17). */
+  utilization: 1,
+  /** Support stiffness under a mount point, N/mm. */
+  supportStiffnessNPerMm: 1e9,
   /** Operating sources of the whole-machine model (docs/engineering/whole-machine.md). */
   sources: 12,
   skipBands: 10,
@@ -148,6 +152,18 @@ export class ComponentDto {
   @Type(() => Vec3Dto)
   cg: Vec3Dto;
 
+  @ApiPropertyOptional({
+    example: 240,
+    description:
+      'a second operating mass of the component, kg (e.g. drained, or without its liquid); the verdict covers both mass cases, ' +
+      'with the CG of the assembly moving accordingly (the component keeps its own CG and shape)',
+  })
+  @IsOptional()
+  @IsFiniteNumber()
+  @IsPositive({ message: 'altMassKg must be a mass above 0 kg (leave it out when the component has one mass)' })
+  @Max(SELECTION_LIMITS.massKg)
+  altMassKg?: number;
+
   @ApiPropertyOptional({ type: BoxDto, description: 'uniform box dimensions for its own inertia, m' })
   @IsOptional()
   @ValidateNested()
@@ -185,6 +201,18 @@ export class MountPointDto {
   @Min(-COORDINATE)
   @Max(COORDINATE)
   z: number;
+
+  @ApiPropertyOptional({
+    example: 5000,
+    description:
+      'vertical stiffness of the support under the point (floor, steel), N/mm, in series with the mount; absent: rigid. ' +
+      'Less than about 10× the mount stiffness gets a warning (rule of thumb)',
+  })
+  @IsOptional()
+  @IsFiniteNumber()
+  @IsPositive({ message: 'supportStiffnessNPerMm must be a stiffness above 0 N/mm (leave it out for a rigid support)' })
+  @Max(SELECTION_LIMITS.supportStiffnessNPerMm)
+  supportStiffnessNPerMm?: number;
 }
 
 export class SpeedRangeDto {
@@ -257,6 +285,7 @@ export class OperatingConditionsDto {
   @IsArray({ message: 'The sources must be a list' })
   @ArrayMaxSize(SELECTION_LIMITS.sources, { message: `At most ${SELECTION_LIMITS.sources} sources` })
   @ArrayUnique((source: OperatingSourceDto) => source?.label, { message: 'Each source needs its own label' })
+  @IsObject({ each: true, message: 'Each source must be given by its fields (label, kind, where it acts, direction)' })
   @ValidateNested({ each: true })
   @Type(() => OperatingSourceDto)
   sources?: OperatingSourceDto[];
@@ -265,6 +294,7 @@ export class OperatingConditionsDto {
   @IsOptional()
   @IsArray({ message: 'The skip bands must be a list' })
   @ArrayMaxSize(SELECTION_LIMITS.skipBands, { message: `At most ${SELECTION_LIMITS.skipBands} skip bands` })
+  @IsObject({ each: true, message: 'Each skip band must be given by its lowest and highest speed' })
   @ValidateNested({ each: true })
   @Type(() => SkipBandDto)
   skipBandsRpm?: SkipBandDto[];
@@ -295,10 +325,15 @@ export class CriteriaDto {
   @Max(SELECTION_LIMITS.utilization)
   minUtilization: number;
 
-  @ApiProperty({ example: 1.0, description: `highest load / rated load at any point (≤ ${SELECTION_LIMITS.utilization})` })
+  @ApiProperty({
+    example: 1.0,
+    description: `highest load / rated load at any point (≤ ${SELECTION_LIMITS.utilization}: never above the rating)`,
+  })
   @IsFiniteNumber()
   @IsPositive()
-  @Max(SELECTION_LIMITS.utilization)
+  @Max(SELECTION_LIMITS.utilization, {
+    message: `maxUtilization must be at most ${SELECTION_LIMITS.utilization}: a mount may not be loaded beyond its rated load (use weightMarginPct for uncertain weights)`,
+  })
   @IsAbove('minUtilization')
   maxUtilization: number;
 
@@ -324,7 +359,10 @@ export class CriteriaDto {
   @IsPositive({ each: true })
   supplierIds?: number[];
 
-  @ApiPropertyOptional({ example: 10, description: 'allowance on the weight for overload checks, % (default 0)' })
+  @ApiPropertyOptional({
+    example: 10,
+    description: 'allowance on the weight, %: the overload checks add it, the light case of springs takes it off (default 10)',
+  })
   @IsOptional()
   @IsFiniteNumber()
   @Min(0)

@@ -16,7 +16,9 @@ export class CandidatePointDto {
   @ApiProperty() partNumber: string;
   @ApiProperty({ description: 'N' }) loadN: number;
   @ApiProperty({ description: 'load / rated load' }) utilization: number;
-  @ApiProperty() staticDeflectionMm: number;
+  @ApiProperty({ description: "the mount's own static deflection, mm" }) staticDeflectionMm: number;
+  @ApiPropertyOptional({ description: 'deflection of the flexible support under the point, mm (where supportStiffnessNPerMm is given)' })
+  supportDeflectionMm?: number;
 }
 
 export class CandidateIsolationDto {
@@ -44,6 +46,19 @@ export class CandidateModeDto {
     description: 'share of the kinetic energy per coordinate, summing to 1 (absent in candidates chosen before it was kept)',
   })
   energyFractions?: ModeEnergyFractionsDto;
+}
+
+export class AltCasePointDto {
+  @ApiProperty() label: string;
+  @ApiProperty({ description: 'N' }) loadN: number;
+  @ApiProperty({ description: 'load / rated load' }) utilization: number;
+  @ApiProperty() staticDeflectionMm: number;
+}
+
+export class AltCaseIsolationDto {
+  @ApiProperty() frequencyHz: number;
+  @ApiProperty() transmissibility: number;
+  @ApiProperty() efficiencyPct: number;
 }
 
 export class ScoreTermsDto {
@@ -76,6 +91,21 @@ export class WholeMachineFrequencyDto {
   @ApiProperty() transmissibility: number;
   @ApiProperty({ description: "the source's amplitude there, N (1 for the default vertical force)" }) amplitudeN: number;
   @ApiProperty({ type: [PointForceDto], description: 'in the order of mountPoints' }) perPoint: PointForceDto[];
+}
+
+export class CandidateAltMassCaseDto {
+  @ApiProperty({ description: 'kg' }) massKg: number;
+  @ApiProperty({ type: Vec3Dto }) cg: Vec3Dto;
+  @ApiProperty({ description: 'bounce estimate with the second mass, Hz' }) verticalNaturalFrequencyHz: number;
+  @ApiProperty({ type: [AltCasePointDto] }) perPoint: AltCasePointDto[];
+  @ApiProperty({ type: [AltCaseIsolationDto], description: 'bounce estimate at the disturbing frequencies with the second mass' })
+  isolation: AltCaseIsolationDto[];
+  @ApiPropertyOptional({
+    type: WholeMachineWorstDto,
+    description: 'the whole-machine worst point with the second mass (absent when the inertia is unknown)',
+  })
+  wholeMachineWorst?: WholeMachineWorstDto;
+  @ApiProperty({ description: 'the second mass case meets every check' }) passes: boolean;
 }
 
 export class CandidateWholeMachineDto {
@@ -135,9 +165,22 @@ export class CandidateDto {
     description: 'crossings of the source orders with the modes inside the running range',
   })
   crossings?: CandidateCrossingDto[];
-  @ApiProperty({ description: 'follows the whole-machine verdict, with the load, deflection, mode and restraint checks' }) passes: boolean;
+  @ApiPropertyOptional({
+    type: CandidateAltMassCaseDto,
+    description: 'the second mass case (components[].altMassKg), when given; the verdict covers it',
+  })
+  altMassCase?: CandidateAltMassCaseDto;
+  @ApiProperty({ description: 'follows the whole-machine verdict (both mass cases), with the load, deflection, mode and restraint checks' })
+  passes: boolean;
   @ApiProperty({ type: [String] }) reasons: string[];
-  @ApiProperty({ type: [String], description: 'assumptions and remarks that do not fail the candidate' }) notes: string[];
+  @ApiProperty({ type: [String], description: 'remarks and warnings that do not fail the candidate' }) notes: string[];
+  @ApiPropertyOptional({
+    type: [String],
+    description:
+      'every value that did not come from the catalog or the input and the value used, the unfavourable one for the check it feeds ' +
+      '(absent in candidates chosen before it was kept)',
+  })
+  assumptions?: string[];
   @ApiProperty() score: number;
   @ApiProperty({ type: ScoreTermsDto }) scoreTerms: ScoreTermsDto;
 }

@@ -12,7 +12,9 @@
  * The evaluation files fill the candidate arrays; `pointsOf` is the one small view of a
  * candidate's mounts for the code that runs on a few candidates only (finalist checks, wording).
  */
+import { ASSUMED, unfavourableDynamicRatio } from './assumptions.js';
 import { allowedSuppliersOf, DETAIL_FAILS, detailChecks, rowChecks } from './checks.js';
+import { springDeflectionLimitM, springRowChecks, SPRING_TYPES } from './spring-checks.js';
 import { CATALOG_COLUMN_INDEX as COL, DETAIL_COLUMNS, DETAILS_AT, num, type CatalogTuple, type DetailsLoader } from './catalog-tuple.js';
 import type { SelectionProblem } from '../selection-problem.js';
 
@@ -31,11 +33,12 @@ export interface PointMount {
   verticalStiffnessNPerM: number;
   /** Static horizontal stiffness, N/m (NaN when the catalog gives none or the details are not loaded). */
   horizontalStiffnessNPerM: number;
-  /** Dynamic-to-static stiffness ratio (1 when the catalog gives none). */
+  /** Dynamic-to-static stiffness ratio (assumptions.ts when the catalog gives none). */
   dynamicStiffnessRatio: number;
   /** Loss factor η when `hysteretic`, else viscous damping ratio ζ (0 when the catalog gives none). */
   damping: number;
   hysteretic: boolean;
+  /** Maximum deflection, m (the deflection at the rated load when the catalog gives none: assumptions.ts). */
   maxDeflectionM: number;
   tempMinC: number;
   tempMaxC: number;
@@ -55,10 +58,16 @@ export class CandidateStore {
   readonly rated: Float64Array;
   /** Static vertical stiffness, N/m. */
   readonly kv: Float64Array;
-  /** Static horizontal stiffness, N/m (NaN: not given, or details not loaded). */
+  /** Static horizontal stiffness, N/m (NaN: not given). */
   readonly kh: Float64Array;
-  /** Dynamic-to-static stiffness ratio. */
+  /** Dynamic-to-static stiffness ratio (the unfavourable one of the type when not given: assumptions.ts). */
   readonly nd: Float64Array;
+  /** What the catalog did not give and the engine assumed (bits of ASSUMED, assumptions.ts). */
+  readonly rowAssumed: Uint8Array;
+  /** 1 for the coil springs the spring checks apply to (spring-checks.ts). */
+  readonly isSpring: Uint8Array;
+  /** Highest static deflection a spring may take with its reserve travel, m (Infinity for other types). */
+  readonly springLimitM: Float64Array;
   /** Loss factor η for hysteretic rows, damping ratio ζ for viscous rows. */
   readonly rowDamping: Float64Array;
   readonly rowHysteretic: Uint8Array;
@@ -69,8 +78,8 @@ export class CandidateStore {
   readonly leadDays: Float64Array;
   /** Index into `currencies`. */
   readonly currencyIndex: Int32Array;
-  /** Row checks failed (checks.ts: supplier, temperature, type). */
-  readonly rowFail: Uint8Array;
+  /** Row checks failed (checks.ts: supplier, temperature, type, spring stability). */
+  readonly rowFail: Uint16Array;
   readonly series: (string | null)[];
   // details (DETAIL_COLUMNS), known for the rows in `hasDetails`
   readonly hasDetails: Uint8Array;
@@ -96,12 +105,18 @@ export class CandidateStore {
   readonly skip: Uint8Array;
   /** Fail mask (checks.ts). */
   readonly fail: Uint16Array;
+  /** ASSUMED bits of its mounts, or-ed (assumptions.ts): ranks it below an otherwise equal candidate with full data. */
+  readonly assumed: Uint8Array;
   /** Uncoupled vertical natural frequency √(Σ n_d·k / m)/2π, Hz. */
   readonly fnHz: Float64Array;
   readonly damping: Float64Array;
   readonly hysteretic: Uint8Array;
   /** Transmissibility at each disturbing frequency (c·nf + j). */
   readonly transmissibility: Float64Array;
+  /** Bounce estimate of the second mass case, Hz (NaN without one: mass-case.ts). */
+  readonly fnAltHz: Float64Array;
+  /** Transmissibility of the second mass case at each disturbing frequency (c·nf + j; empty without one). */
+  readonly transmissibilityAlt: Float64Array;
   /** Transmissibility at resonance (r = 1). */
   readonly resonance: Float64Array;
   readonly meanUtilization: Float64Array;
@@ -132,6 +147,9 @@ export class CandidateStore {
     this.kv = new Float64Array(R);
     this.kh = new Float64Array(R);
     this.nd = new Float64Array(R);
+    this.rowAssumed = new Uint8Array(R);
+    this.isSpring = new Uint8Array(R);
+    this.springLimitM = new Float64Array(R);
     this.rowDamping = new Float64Array(R);
     this.rowHysteretic = new Uint8Array(R);
     this.maxDeflectionM = new Float64Array(R);
@@ -140,7 +158,7 @@ export class CandidateStore {
     this.unitPrice = new Float64Array(R);
     this.leadDays = new Float64Array(R);
     this.currencyIndex = new Int32Array(R);
-    this.rowFail = new Uint8Array(R);
+    this.rowFail = new Uint16Array(R);
     this.series = new Array<string | null>(R);
     this.hasDetails = new Uint8Array(R);
     this.partNumber = new Array<string>(R);
@@ -180,11 +198,14 @@ export class CandidateStore {
     this.candidateCount = C;
     this.skip = new Uint8Array(C);
     this.fail = new Uint16Array(C);
+    this.assumed = new Uint8Array(C);
     this.fnHz = new Float64Array(C);
     this.damping = new Float64Array(C);
     this.hysteretic = new Uint8Array(C);
     this.transmissibility = new Float64Array(C * problem.frequenciesHz.length);
     this.resonance = new Float64Array(C);
+    this.fnAltHz = new Float64Array(C).fill(Number.NaN);
+    this.transmissibilityAlt = new Float64Array(problem.alt ? C * problem.frequenciesHz.length : 0);
     this.meanUtilization = new Float64Array(C);
     this.levelErrorM = new Float64Array(C);
     this.meanDeflectionM = new Float64Array(C);
@@ -212,13 +233,33 @@ export class CandidateStore {
       const supplier = Number(row[COL.supplierId]);
       supplierId[r] = supplier;
       rated[r] = Number(row[COL.ratedLoadN]);
-      kv[r] = Number(row[COL.verticalStiffnessNPerM]);
-      nd[r] = num(row[COL.dynamicStiffnessRatio]) || 1;
+      const k = Number(row[COL.verticalStiffnessNPerM]);
+      kv[r] = k;
+      const type = String(row[COL.mountType]);
+      this.mountType[r] = type;
+      const kh = num(row[COL.horizontalStiffnessNPerM]);
+      this.kh[r] = kh;
+      // missing figures: the unfavourable value, and the row says so (assumptions.ts)
+      let assumed = kh > 0 ? 0 : ASSUMED.horizontalStiffness;
+      const ratio = num(row[COL.dynamicStiffnessRatio]);
+      if (ratio > 0) nd[r] = ratio;
+      else {
+        nd[r] = unfavourableDynamicRatio(type);
+        assumed |= ASSUMED.dynamicRatio;
+      }
       const loss = num(row[COL.lossFactor]);
       const hysteretic = loss === loss; // not NaN
       rowHysteretic[r] = hysteretic ? 1 : 0;
       rowDamping[r] = hysteretic ? loss : num(row[COL.dampingRatio]) || 0;
-      maxDeflectionM[r] = num(row[COL.maxDeflectionMm]) / 1000;
+      const travel = num(row[COL.maxDeflectionMm]) / 1000;
+      if (travel > 0) maxDeflectionM[r] = travel;
+      else {
+        maxDeflectionM[r] = rated[r] / k;
+        assumed |= ASSUMED.travel;
+      }
+      this.rowAssumed[r] = assumed;
+      this.isSpring[r] = SPRING_TYPES.has(type) ? 1 : 0;
+      this.springLimitM[r] = springDeflectionLimitM(type, maxDeflectionM[r]);
       unitPrice[r] = num(row[COL.unitPrice]);
       leadDays[r] = num(row[COL.leadTimeDays]);
       const code = (row[COL.currency] as string | null) ?? 'USD';
@@ -233,7 +274,7 @@ export class CandidateStore {
         lastCurrency = index;
       }
       currencyIndex[r] = lastCurrency;
-      rowFail[r] = rowChecks(allowedSuppliers, supplier);
+      rowFail[r] = rowChecks(allowedSuppliers, supplier) | springRowChecks(type, k, kh);
       if (row.length > DETAILS_AT) this.setDetails(r, row);
       const series = row[COL.series] as string | null;
       seriesOf[r] = series;
@@ -263,9 +304,8 @@ export class CandidateStore {
   private setDetails(r: number, values: readonly unknown[], at: number = DETAILS_AT): void {
     this.partNumber[r] = String(values[at]);
     this.mountType[r] = String(values[at + 1]);
-    this.kh[r] = num(values[at + 2]);
-    this.tempMin[r] = num(values[at + 3]);
-    this.tempMax[r] = num(values[at + 4]);
+    this.tempMin[r] = num(values[at + 2]);
+    this.tempMax[r] = num(values[at + 3]);
     this.hasDetails[r] = 1;
     this.rowFail[r] |= detailChecks(this.problem.criteria, this.mountType[r], this.tempMin[r], this.tempMax[r]);
   }

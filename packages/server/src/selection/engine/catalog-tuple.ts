@@ -15,7 +15,8 @@ export interface CatalogRow {
   ratedLoadN: number;
   verticalStiffnessNPerM: number;
   horizontalStiffnessNPerM: number | null;
-  dynamicStiffnessRatio: number;
+  /** Null: the catalog gives none (assumptions.ts). */
+  dynamicStiffnessRatio: number | null;
   dampingRatio: number | null;
   lossFactor: number | null;
   maxDeflectionMm: number | null;
@@ -31,7 +32,8 @@ export interface CatalogRow {
 
 /**
  * The columns the prefilter reads per mount, in this order (rows arrive as arrays: no object
- * per row). Only what ranking needs: the other fields of a mount (DETAIL_COLUMNS) are read
+ * per row). What ranking and the row checks need (the type and the horizontal stiffness decide
+ * the assumptions and the springs' stability, assumptions.ts, spring-checks.ts): the other fields of a mount (DETAIL_COLUMNS) are read
  * afterwards, for the few candidates whose modes are computed or that are shown.
  */
 export const CATALOG_COLUMNS = [
@@ -49,19 +51,15 @@ export const CATALOG_COLUMNS = [
   'leadTimeDays',
   'restraintCapacityN',
   'upliftCapacityN',
+  'mountType',
+  'horizontalStiffnessNPerM',
 ] as const satisfies readonly (keyof CatalogRow)[];
 
 /**
  * Fields read for a few mounts only; a tuple may carry them after CATALOG_COLUMNS (a choice
  * evaluated outside the prefilter does, so that its temperature and type are checked).
  */
-export const DETAIL_COLUMNS = [
-  'partNumber',
-  'mountType',
-  'horizontalStiffnessNPerM',
-  'tempMinC',
-  'tempMaxC',
-] as const satisfies readonly (keyof CatalogRow)[];
+export const DETAIL_COLUMNS = ['partNumber', 'mountType', 'tempMinC', 'tempMaxC'] as const satisfies readonly (keyof CatalogRow)[];
 
 /** The detail fields of one mount. */
 export type MountDetails = Pick<CatalogRow, (typeof DETAIL_COLUMNS)[number]>;
@@ -88,6 +86,8 @@ export const CATALOG_COLUMN_INDEX = {
   leadTimeDays: 11,
   restraintCapacityN: 12,
   upliftCapacityN: 13,
+  mountType: 14,
+  horizontalStiffnessNPerM: 15,
 } as const satisfies { [K in (typeof CATALOG_COLUMNS)[number]]: number };
 
 /** Position of the first DETAIL_COLUMNS value in a tuple that carries them. */

@@ -7,12 +7,14 @@
  * Where the checks run:
  * - per mount (row), when the row is stored: supplier (rowChecks); when its details are known:
  *   temperature and type (detailChecks). A candidate inherits the row bits of every mount it uses;
- *   row bits live in `CandidateStore.rowFail` (a Uint8Array: row checks use the low 8 bits);
+ *   row bits live in `CandidateStore.rowFail`; the lateral stability of springs is a row check too
+ *   (spring-checks.ts);
  * - for the machine, the same for every candidate (machineChecks): CG outside the mount polygon;
  * - per candidate, in the evaluation loops (evaluate-uniform.ts, evaluate-series.ts): utilisation
- *   window, static deflection against the mount's travel;
+ *   window, static deflection against the mount's travel (assumed when not given, assumptions.ts),
+ *   and for springs the reserve travel and the light case (spring-checks.ts);
  * - for every candidate at once (evaluate-isolation.ts): the bounce estimate at every disturbing
- *   frequency, which only orders the candidates (it fails none);
+ *   frequency, in both mass cases, which only orders the candidates (it fails none);
  * - for the best candidates only, as finalist checks (ranking.ts `FinalistCheck`): the rigid-body
  *   modes (mode-check.ts: a mechanism) and the whole-machine verdict (whole-machine-check.ts);
  * - seismic restraint, when the input asks for it (restraint-check.ts): every candidate screened
@@ -50,13 +52,30 @@ export const FAIL = {
   restraint: 256,
   /**
    * Worst whole-machine transmissibility over the running range and the stiffness band above the
-   * target (whole-machine-check.ts). 8192: the bits between are taken by the robustness checks.
+   * target (whole-machine-check.ts).
    */
   wholeMachine: 8192,
+  /** A coil spring laterally unstable: k_h/k_v below 0.8, or no k_h to show it (spring-checks.ts). */
+  springStability: 512,
+  /** A coil spring without 50 % reserve travel beyond its static deflection (spring-checks.ts). */
+  reserveTravel: 1024,
+  /** A coil spring below the minimum utilisation in the light case (weight less the margin; spring-checks.ts). */
+  lightLoad: 2048,
+  /**
+   * The second mass case (components' `altMassKg`) fails a load check (window, travel, reserve,
+   * light case) or the CG (mass-case.ts), or the whole-machine verdict with that mass (the bounce
+   * estimate where the model cannot be built; whole-machine-check.ts); selection.md §18.
+   */
+  massCase: 4096,
 } as const;
 
 /** The row checks that need a mount's details (DETAIL_COLUMNS); a candidate takes them once the details are loaded. */
 export const DETAIL_FAILS = FAIL.temperature | FAIL.type;
+
+/** The weight less the margin, as a factor on the loads: the light case of the springs' minimum-load check. */
+export function lightFactorOf(problem: SelectionProblem): number {
+  return Math.max(0, 1 - problem.weightMarginPct / 100);
+}
 
 /** Checks of the machine on its mount points, failed by every candidate alike: the CG inside the polygon. */
 export function machineChecks(problem: SelectionProblem): number {

@@ -1,18 +1,20 @@
 /**
  * One candidate as the API shows it (`Candidate`): its points, isolation per frequency, score
- * terms, modes, verdict, reasons and notes, from the store and the findings of the checks. Runs
+ * terms, modes, whole-machine figures, second mass case, verdict, reasons and notes, from the store and the findings of the checks. Runs
  * only for the candidates returned; unrounded figures.
  */
 import { isolationDb, isolationEfficiencyPct } from '@tacet/vibration';
 import { scoreCandidate } from '../scoring.js';
 import type { SelectionProblem } from '../selection-problem.js';
-import type { Candidate, CandidatePoint, CandidateWholeMachine, ScoreTerms } from '../selection.types.js';
+import type { Candidate, CandidateAltMassCase, CandidatePoint, CandidateWholeMachine, ScoreTerms } from '../selection.types.js';
+import { FAIL } from './checks.js';
+import { altLoadsOf, seriesAltBuffers } from './mass-case.js';
 import type { CandidateStore } from './candidate-store.js';
 import type { ModeCheck } from './mode-check.js';
 import type { RestraintCheck } from './restraint-check.js';
 import type { WholeMachineCheck } from './whole-machine-check.js';
 import { fillScoreInputs, newScoreInputs, type ScoreReferences } from './ranking.js';
-import { notesFor, reasonsFor, type WordingContext } from './reasons.js';
+import { assumptionsFor, notesFor, reasonsFor, type WordingContext } from './reasons.js';
 
 export interface DescribeSources {
   store: CandidateStore;
@@ -41,6 +43,7 @@ export function describeCandidate(
       loadN: m.loadN,
       utilization: m.loadN / m.ratedLoadN,
       staticDeflectionMm: (m.loadN / m.verticalStiffnessNPerM) * 1000,
+      ...(problem.supportCompliance[i] > 0 ? { supportDeflectionMm: m.loadN * problem.supportCompliance[i] * 1000 } : {}),
     };
   });
   const isolation = Array.from({ length: nf }, (_, j) => {
@@ -58,7 +61,9 @@ export function describeCandidate(
   const score = scoreCandidate(s, terms);
   const modes = modeCheck.findingsOf(c);
   const restraint = restraintCheck.figuresOf(c);
-  const whole = wholeMachineCheck.findingsOf(c)?.result ?? null;
+  const found = wholeMachineCheck.findingsOf(c);
+  const whole = found?.result ?? null;
+  const altMassCase = altCaseOf(store, problem, c, found?.alt?.worst);
   const wholeMachine: CandidateWholeMachine | undefined = whole
     ? { worst: { ...whole.worst }, stiffnessTolerancePct: whole.stiffnessTolerancePct, perFrequency: wholeMachineCheck.perFrequency(c) }
     : undefined;
@@ -80,6 +85,7 @@ export function describeCandidate(
     modesUnavailable: modeCheck.unavailable,
     restraint,
     wholeMachine: whole,
+    altMassCase,
   };
   const price = store.price[c];
   const lead = store.lead[c];
@@ -100,9 +106,11 @@ export function describeCandidate(
     ...(modes?.modes ? { modes: modes.modes } : {}),
     ...(restraint ? { restraint } : {}),
     ...(wholeMachine ? { wholeMachine, crossings } : {}),
+    ...(altMassCase ? { altMassCase } : {}),
     passes: store.fail[c] === 0,
     reasons: reasonsFor(wording),
     notes: notesFor(wording),
+    assumptions: assumptionsFor(wording),
     score,
     scoreTerms: terms,
   };
@@ -113,4 +121,37 @@ function seriesLabel(store: CandidateStore, points: readonly { row: number; part
   const counts = new Map<string, number>();
   for (const { partNumber } of points) counts.set(partNumber, (counts.get(partNumber) ?? 0) + 1);
   return `Series ${store.series[points[0].row]}: ${[...counts].map(([part, count]) => `${part} ×${count}`).join(', ')}`;
+}
+
+/** The figures of the second mass case (undefined without one). */
+function altCaseOf(
+  store: CandidateStore,
+  problem: SelectionProblem,
+  c: number,
+  wholeMachineWorst: CandidateWholeMachine['worst'] | undefined,
+): CandidateAltMassCase | undefined {
+  const alt = problem.alt;
+  if (!alt) return undefined;
+  const nf = problem.frequenciesHz.length;
+  const loads = store.isUniform(c) ? alt.equalLoadsN : altLoadsOf(store, problem, c, seriesAltBuffers(problem));
+  return {
+    massKg: alt.massKg,
+    cg: { ...alt.cg },
+    verticalNaturalFrequencyHz: store.fnAltHz[c],
+    perPoint: problem.points.map((p, i) => {
+      const r = store.rowOf(c, i);
+      return {
+        label: p.label,
+        loadN: loads[i],
+        utilization: loads[i] / store.rated[r],
+        staticDeflectionMm: (loads[i] / store.kv[r]) * 1000,
+      };
+    }),
+    isolation: Array.from({ length: nf }, (_, j) => {
+      const t = store.transmissibilityAlt[c * nf + j];
+      return { frequencyHz: problem.frequenciesHz[j], transmissibility: t, efficiencyPct: isolationEfficiencyPct(t) };
+    }),
+    ...(wholeMachineWorst ? { wholeMachineWorst: { ...wholeMachineWorst } } : {}),
+    passes: (store.fail[c] & FAIL.massCase) === 0,
+  };
 }

@@ -1,9 +1,10 @@
 /**
  * Isolation of every candidate at once, uniform and series alike: the transmissibility at each
  * disturbing frequency through `transmissibilityBatch` (hysteretic for loss-factor rows, viscous
- * for damping-ratio rows), the resonance amplification T(r = 1), the isolation check against the
- * target, and the isolation at the worst frequency in dB (for the score): docs/engineering/selection.md
- * §9, §10.
+ * for damping-ratio rows), the same with the second mass when there is one, the resonance
+ * amplification T(r = 1), and the isolation at the worst frequency in dB (for the score). The
+ * estimate fails no candidate: the whole-machine verdict judges (whole-machine-check.ts), or falls
+ * back to these figures: docs/engineering/selection.md §9, §10, §18, §21.
  */
 import { isolationDb, transmissibilityBatch } from '@tacet/vibration';
 import type { SelectionProblem } from '../selection-problem.js';
@@ -17,6 +18,12 @@ export function evaluateIsolation(store: CandidateStore, problem: SelectionProbl
   // Resonance amplification T(r = 1) through the same kernel: fn = 1 Hz evaluated at f = 1 Hz.
   transmissibilityBatch(new Float64Array(C).fill(1), damping, hysteretic, [1], store.resonance);
 
+  // the second mass case (mass-case.ts, selection.md §18): its own bounce estimate
+  const alt = problem.alt ? store.transmissibilityAlt : null;
+  if (alt) {
+    const fnAlt = store.fnAltHz.map((f, c) => (skip[c] || !(f > 0) ? 1 : f));
+    transmissibilityBatch(fnAlt, damping, hysteretic, problem.frequenciesHz, alt);
+  }
   for (let c = 0; c < C; c++) {
     if (skip[c]) continue;
     let worst = 0;

@@ -11,7 +11,8 @@ import { createLevellingWorkspace, naturalFrequencyHz, selectSizesForLevellingIn
 import { PREFERRED_UTILIZATION } from '../scoring.js';
 import type { SelectionProblem } from '../selection-problem.js';
 import type { CandidateStore } from './candidate-store.js';
-import { FAIL, machineChecks } from './checks.js';
+import { FAIL, lightFactorOf, machineChecks } from './checks.js';
+import { checkSeriesAlt, seriesAltBuffers } from './mass-case.js';
 
 /**
  * Evaluates every series group; `everySeries` keeps the series that would be dropped (a choice
@@ -27,6 +28,12 @@ export function evaluateSeries(store: CandidateStore, problem: SelectionProblem,
   // the bits as locals: read per point, an imported object's field costs a load each time
   const failUtilization = FAIL.utilization;
   const failDeflection = FAIL.deflection;
+  const failReserve = FAIL.reserveTravel;
+  const failLight = FAIL.lightLoad;
+  const light = lightFactorOf(problem);
+  const { supportCompliance, hasSupport } = problem;
+  const altBuffers = problem.alt ? seriesAltBuffers(problem) : undefined;
+  const { isSpring, springLimitM, rowAssumed } = store;
   const spread = problem.maxLoadN - problem.minLoadN;
   const R = store.rowCount;
   const G = store.groupCount;
@@ -76,6 +83,9 @@ export function evaluateSeries(store: CandidateStore, problem: SelectionProblem,
     let sumK = 0;
     let sumKDamping = 0;
     let sumDefl = 0;
+    let assumed = 0;
+    let lo = Number.POSITIVE_INFINITY;
+    let hi = Number.NEGATIVE_INFINITY;
     let price = 0;
     let lead = 0;
     const currency = currencyIndex[first];
@@ -88,13 +98,20 @@ export function evaluateSeries(store: CandidateStore, problem: SelectionProblem,
       const u = f / rated[r];
       sumU += u;
       if (u * margin > maxUtilization || u < minUtilization) fail |= failUtilization;
+      if (isSpring[r] === 1 && u * light < minUtilization) fail |= failLight;
       const d = workspace.deflectionsM[i];
-      sumDefl += d;
       if (d * margin > maxDeflectionM[r]) fail |= failDeflection;
+      if (d * margin > springLimitM[r]) fail |= failReserve;
       fail |= rowFail[r];
+      assumed |= rowAssumed[r];
       const k = kv[r];
       sumK += k;
-      sumKd += nd[r] * k;
+      // the support under the point in series with the mount (§15); c = 0 on a rigid floor
+      const total = hasSupport ? d + f * supportCompliance[i] : d;
+      sumDefl += total;
+      if (total < lo) lo = total;
+      if (total > hi) hi = total;
+      sumKd += hasSupport ? 1 / (1 / (nd[r] * k) + supportCompliance[i]) : nd[r] * k;
       sumKDamping += k * rowDamping[r];
       price += unitPrice[r];
       if (currencyIndex[r] !== currency) price = Number.NaN;
@@ -111,8 +128,10 @@ export function evaluateSeries(store: CandidateStore, problem: SelectionProblem,
       continue;
     }
     store.fail[c] = fail;
+    if (altBuffers) checkSeriesAlt(store, problem, c, altBuffers);
+    store.assumed[c] = assumed;
     store.meanUtilization[c] = sumU / n;
-    store.levelErrorM[c] = workspace.levelErrorM;
+    store.levelErrorM[c] = hasSupport ? hi - lo : workspace.levelErrorM;
     store.meanDeflectionM[c] = sumDefl / n;
     store.fnHz[c] = naturalFrequencyHz(sumKd, massKg);
     // One series shares one damping figure in practice; sizes that differ are averaged by stiffness.

@@ -3,26 +3,40 @@
  * rigid-body modes of the machine on the candidate's mounts (`rigidBodyModes`, with the mounts'
  * dynamic stiffnesses); a direction without stiffness fails the candidate, a mode within
  * ±MODE_SEPARATION of a disturbing frequency is noted (the whole-machine verdict judges it:
- * docs/engineering/selection.md §9, §19). Keeps, per candidate
+ * docs/engineering/selection.md §9, §19). A mount without a horizontal stiffness is looked at both
+ * ends of HORIZONTAL_RATIO_WHEN_MISSING (assumptions.ts, §14); a flexible support is in series with
+ * the mount vertically (§15); the second mass case gets its own modes (§18). Keeps, per candidate
  * judged, the modes and the conflict found (reasons.ts words them).
  */
 import { isVibrationInputError, rigidBodyModes, type ResilientMount } from '@tacet/vibration';
 import type { SelectionProblem } from '../selection-problem.js';
 import type { CandidateMode } from '../selection.types.js';
 import type { CandidateStore } from './candidate-store.js';
+import { HORIZONTAL_RATIO_WHEN_MISSING } from './assumptions.js';
 import { FAIL } from './checks.js';
 import type { FinalistCheck } from './ranking.js';
 
-/** A rigid-body mode this close to a disturbing frequency fails the candidate (common practice: ±20 %). */
+/** A rigid-body mode this close to a disturbing frequency is named in a note (common practice: ±20 %). */
 export const MODE_SEPARATION = 0.2;
 
-/** Why the modes fail a candidate: a direction without stiffness, or a mode near a disturbing frequency. */
-export type ModeConflict = { kind: 'mechanism' } | { kind: 'near'; mode: CandidateMode; frequencyHz: number; label: string | undefined };
+/** What the modes show: a direction without stiffness (fails), or a mode near a disturbing frequency (a note). */
+export type ModeConflict =
+  | { kind: 'mechanism' }
+  | {
+      kind: 'near';
+      mode: CandidateMode;
+      frequencyHz: number;
+      label: string | undefined;
+      /** Set when the conflict appears with the low assumed horizontal stiffness (not the modes shown). */
+      assumedHorizontalRatio?: number;
+    };
 
 export interface ModeFindings {
   /** Null when the modes could not be computed (see `ModeCheck.unavailable`). */
   modes: CandidateMode[] | null;
   conflict: ModeConflict | null;
+  /** A mode near a disturbing frequency in the second mass case (selection.md §18; a note). */
+  altConflict?: ModeConflict | null;
 }
 
 export class ModeCheck implements FinalistCheck {
@@ -40,28 +54,46 @@ export class ModeCheck implements FinalistCheck {
     return this.inertiaUnusable;
   }
 
-  /** The modes of candidate c, computed once; sets FAIL.modes on a conflict. */
+  /** The modes of candidate c, computed once; sets FAIL.modes on a mechanism. */
   check(c: number): void {
     if (this.findings.has(c)) return;
     const { problem } = this;
     let findings: ModeFindings = { modes: null, conflict: null };
     if (!this.inertiaUnusable) {
-      const mounts: ResilientMount[] = this.store.pointsOf(c).map((m, i) => {
-        const p = problem.points[i];
-        const vertical = m.verticalStiffnessNPerM * m.dynamicStiffnessRatio;
-        const horizontal =
-          (Number.isNaN(m.horizontalStiffnessNPerM) ? m.verticalStiffnessNPerM : m.horizontalStiffnessNPerM) * m.dynamicStiffnessRatio;
-        return { position: { x: p.x, y: p.y, z: p.z }, stiffness: { x: horizontal, y: horizontal, z: vertical } };
-      });
+      const points = this.store.pointsOf(c);
+      const mountsAt = (missingRatio: number): ResilientMount[] =>
+        points.map((m, i) => {
+          const p = problem.points[i];
+          const kd = m.verticalStiffnessNPerM * m.dynamicStiffnessRatio;
+          const vertical = 1 / (1 / kd + problem.supportCompliance[i]);
+          const kh = Number.isNaN(m.horizontalStiffnessNPerM) ? missingRatio * m.verticalStiffnessNPerM : m.horizontalStiffnessNPerM;
+          const horizontal = kh * m.dynamicStiffnessRatio;
+          return { position: { x: p.x, y: p.y, z: p.z }, stiffness: { x: horizontal, y: horizontal, z: vertical } };
+        });
+      type Body = Pick<SelectionProblem, 'massKg' | 'inertia' | 'cg'>;
+      const solve = (mounts: ResilientMount[], body: Body = problem) =>
+        rigidBodyModes({ massKg: body.massKg, inertia: body.inertia, cg: body.cg, mounts });
+      const missingKh = points.some((m) => Number.isNaN(m.horizontalStiffnessNPerM));
       try {
-        const result = rigidBodyModes({ massKg: problem.massKg, inertia: problem.inertia, cg: problem.cg, mounts });
+        const result = solve(mountsAt(HORIZONTAL_RATIO_WHEN_MISSING.high));
         const modes = result.modes.map((m) => ({
           frequencyHz: m.frequencyHz,
           dominant: m.dominant,
           coupled: m.coupled,
           energyFractions: { ...m.energyFractions },
         }));
-        findings = { modes, conflict: this.conflict(result.modes) };
+        let conflict = this.conflict(result.modes);
+        if (!conflict && missingKh) {
+          const low = this.conflict(solve(mountsAt(HORIZONTAL_RATIO_WHEN_MISSING.low)).modes);
+          if (low?.kind === 'near') conflict = { ...low, assumedHorizontalRatio: HORIZONTAL_RATIO_WHEN_MISSING.low };
+          else if (low) conflict = low;
+        }
+        findings = { modes, conflict };
+        if (problem.alt) {
+          let altConflict = this.conflict(solve(mountsAt(HORIZONTAL_RATIO_WHEN_MISSING.high), problem.alt).modes);
+          if (!altConflict && missingKh) altConflict = this.conflict(solve(mountsAt(HORIZONTAL_RATIO_WHEN_MISSING.low), problem.alt).modes);
+          findings.altConflict = altConflict;
+        }
       } catch (error) {
         if (!isVibrationInputError(error)) throw error;
         this.inertiaUnusable = true;

@@ -103,13 +103,21 @@ export function scoreAll(store: CandidateStore, refs: ScoreReferences): void {
   }
 }
 
-/** `better(a, b)`: a ranks above b — higher score, then lower resonance amplification, then a stable key. */
+/**
+ * `better(a, b)`: a ranks above b — higher score, then fewer assumed catalog values (assumptions.ts:
+ * full data wins over an otherwise equal candidate), then lower resonance amplification, then a
+ * stable key.
+ */
 export function candidateOrder(store: CandidateStore): (a: number, b: number) => boolean {
-  const { score, resonance, tieKey } = store;
+  const { score, resonance, tieKey, assumed } = store;
+  const count = (bits: number) => (bits & 1) + ((bits >> 1) & 1) + ((bits >> 2) & 1);
   return (a, b) => {
     const sa = score[a];
     const sb = score[b];
     if (sa !== sb) return sa > sb;
+    const na = count(assumed[a]);
+    const nb = count(assumed[b]);
+    if (na !== nb) return na < nb;
     const ra = resonance[a];
     const rb = resonance[b];
     if (ra !== rb) return ra < rb;

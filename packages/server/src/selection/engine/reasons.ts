@@ -10,11 +10,13 @@
 import { describeModeMotion, isolationEfficiencyPct } from '@tacet/vibration';
 import { formatHz, formatMm, formatNumber, formatPct, formatPctValue } from '../selection-format.js';
 import type { SelectionProblem } from '../selection-problem.js';
-import type { CandidatePoint, CandidateRestraint, RestraintPoint } from '../selection.types.js';
+import type { CandidateAltMassCase, CandidatePoint, CandidateRestraint, RestraintPoint } from '../selection.types.js';
 import type { CandidateStore, PointMount } from './candidate-store.js';
 import { FAIL } from './checks.js';
+import { catalogAssumptionsFor } from './assumptions.js';
 import { MODE_SEPARATION, type ModeConflict, type ModeFindings } from './mode-check.js';
 import type { WholeMachineFindings } from './whole-machine-check.js';
+import { SPRING_MIN_HORIZONTAL_RATIO, SPRING_RESERVE } from './spring-checks.js';
 
 /** What the wording reads about one candidate. */
 export interface WordingContext {
@@ -34,6 +36,8 @@ export interface WordingContext {
   restraint: CandidateRestraint | undefined;
   /** The whole-machine verdict's findings (null when the model could not be built or the candidate was not judged). */
   wholeMachine: NonNullable<WholeMachineFindings['result']> | null;
+  /** The figures of the second mass case (undefined without one). */
+  altMassCase?: CandidateAltMassCase;
 }
 
 type Words = (x: WordingContext) => string[];
@@ -45,9 +49,13 @@ export const REASONS: readonly (readonly [bit: number, words: Words])[] = [
   [FAIL.isolation, isolation],
   [FAIL.utilization, utilization],
   [FAIL.deflection, deflection],
+  [FAIL.reserveTravel, reserveTravel],
+  [FAIL.lightLoad, lightLoad],
+  [FAIL.springStability, springStability],
   [FAIL.temperature, temperature],
   [FAIL.modes, modes],
   [FAIL.restraint, restraint],
+  [FAIL.massCase, massCase],
   [FAIL.type, mountType],
   [FAIL.supplier, supplier],
 ];
@@ -67,9 +75,10 @@ export function notesFor(x: WordingContext): string[] {
   const rows = store.rowsOf(c);
   notes.push(...wholeMachineNotes(x));
   if (x.modes?.conflict?.kind === 'near') notes.push(`${modeConflict(x.modes.conflict)} The whole-machine verdict judges it.`);
-  if (x.modes?.modes && rows.some((r) => store.hasDetails[r] && Number.isNaN(store.kh[r]))) {
-    notes.push('The catalog gives no horizontal stiffness: the rigid-body modes take it equal to the vertical stiffness.');
+  if (x.modes?.altConflict?.kind === 'near') {
+    notes.push(`In the second mass case: ${modeConflict(x.modes.altConflict)} The whole-machine verdict judges it.`);
   }
+  notes.push(...supportNotes(x));
   if (x.modes && !x.modes.modes && x.modesUnavailable) {
     notes.push(
       'Rigid-body modes not computed: the inertia of the machine is unknown or degenerate (give the components box dimensions or their inertia).',
@@ -82,7 +91,7 @@ export function notesFor(x: WordingContext): string[] {
       }
     }
   }
-  if (x.restraint && !store.isUniform(c) && rows.some((r) => store.hasDetails[r] && Number.isNaN(store.kh[r]))) {
+  if (x.restraint && !store.isUniform(c) && rows.some((r) => Number.isNaN(store.kh[r]))) {
     notes.push(
       'Seismic restraint: where the catalog gives no horizontal stiffness, the shares of the horizontal force take it equal to the vertical stiffness.',
     );
@@ -90,6 +99,53 @@ export function notesFor(x: WordingContext): string[] {
   if (!store.isUniform(c) && store.levelErrorM[c] > 0) {
     notes.push(
       `Sizes picked per point for a level skid; the remaining level error of ${formatMm(store.levelErrorM[c] * 1000)} is trimmed with shims or levelling bolts.`,
+    );
+  }
+  return notes;
+}
+
+/**
+ * Every value that did not come from the catalog or the input, with the value used (assumptions.ts,
+ * docs/engineering/selection.md §14): the catalog's gaps, a machine without inertia.
+ */
+export function assumptionsFor(x: WordingContext): string[] {
+  const out = catalogAssumptionsFor(x.store, x.c);
+  const pointMasses = x.problem.components.filter((k) => (!k.shape || k.shape === 'point') && !k.ownInertia).map((k) => k.name);
+  if (pointMasses.length > 0) {
+    out.push(
+      `Taken as point masses (no box or inertia given): ${pointMasses.join(', ')}. Their own inertia is left out, so the ` +
+        'rocking modes come out higher than they are.',
+    );
+  }
+  if (x.modesUnavailable || (x.modes && !x.modes.modes)) {
+    out.push(
+      'The machine has no usable inertia (point masses, or all on one line): its rigid-body modes were not checked; ' +
+        'only the vertical bounce is judged. Give the components box dimensions or their inertia.',
+    );
+  }
+  if (x.store.rowsOf(x.c).some((r) => x.store.isSpring[r])) {
+    out.push('Coil surge not checked: the catalog gives no coil data (wire and coil diameters, active coils) for its springs.');
+  }
+  return out;
+}
+
+/** Support less than SUPPORT_STIFFNESS_FACTOR × as stiff as the mount on it: a warning (rule of thumb, §15). */
+export const SUPPORT_STIFFNESS_FACTOR = 10;
+
+function supportNotes({ problem, points }: WordingContext): string[] {
+  if (!problem.hasSupport) return [];
+  const weak = problem.points.filter((p, i) => {
+    const kd = points[i].verticalStiffnessNPerM * points[i].dynamicStiffnessRatio;
+    return p.supportStiffnessNPerMm !== undefined && p.supportStiffnessNPerMm * 1000 < SUPPORT_STIFFNESS_FACTOR * kd;
+  });
+  const notes = [
+    'The support under the mounts is flexible: its stiffness is taken in series with each mount in the natural frequency, ' +
+      'the level and the modes; the floor itself may still have resonances of its own that this does not show.',
+  ];
+  if (weak.length > 0) {
+    notes.push(
+      `Warning: the support at ${weak.map((p) => `point ${p.label}`).join(', ')} is less than ${SUPPORT_STIFFNESS_FACTOR}× as stiff as the mount on it ` +
+        `(a rule of thumb, no published source): the isolation depends on the support as much as on the mounts; have the structure checked.`,
     );
   }
   return notes;
@@ -131,7 +187,7 @@ function wholeMachine({ problem, wholeMachine: w }: WordingContext): string[] {
   if (!w) return [];
   const { worst } = w;
   const at = worst.speedRpm === null ? formatHz(worst.frequencyHz) : `${formatRpm(worst.speedRpm)}, ${formatHz(worst.frequencyHz)}`;
-  const band = bandWords(worst.stiffnessFactor, w.stiffnessTolerancePct);
+  const band = bandWords(worst.stiffnessFactor, w.stiffnessTolerancePct) + assumedRatioWords(w.assumedHorizontalRatio);
   const required = `${formatNumber(problem.criteria.minIsolationPct, 1)} %`;
   const reasons = [
     worst.transmissibility > 1
@@ -166,7 +222,8 @@ function wholeMachineNotes({ store, c, wholeMachine: w, modes }: WordingContext)
     const at = worst.speedRpm === null ? formatHz(worst.frequencyHz) : `${formatRpm(worst.speedRpm)}, ${formatHz(worst.frequencyHz)}`;
     notes.push(
       `Whole machine: worst isolation ${formatPctValue(worst.efficiencyPct)}, ${worst.source} at ${at}` +
-        `${bandWords(worst.stiffnessFactor, w.stiffnessTolerancePct)}; the isolation per frequency above is the bounce estimate.`,
+        `${bandWords(worst.stiffnessFactor, w.stiffnessTolerancePct)}${assumedRatioWords(w.assumedHorizontalRatio)}; ` +
+        'the isolation per frequency above is the bounce estimate.',
     );
     for (const x of w.crossings) notes.push(`${crossingWords(x)} Its response stays within the requirement.`);
   }
@@ -174,6 +231,11 @@ function wholeMachineNotes({ store, c, wholeMachine: w, modes }: WordingContext)
     notes.push(`Stiffness band ±${formatNumber(w.stiffnessTolerancePct, 1)} % (the usual tolerance of this mount type).`);
   }
   return notes;
+}
+
+/** Which end of the assumed horizontal ratio governed, when the catalog gives none (selection.md §14). */
+function assumedRatioWords(ratio: number | null): string {
+  return ratio === null ? '' : ` (the horizontal stiffness the catalog does not give taken as ${formatNumber(ratio, 1)}× the vertical)`;
 }
 
 function bandWords(factor: number, tolerancePct: number): string {
@@ -219,6 +281,99 @@ function deflection({ problem, points, perPoint }: WordingContext): string[] {
   return reasons;
 }
 
+function reserveTravel({ problem, points, perPoint }: WordingContext): string[] {
+  const reasons: string[] = [];
+  perPoint.forEach((p, i) => {
+    const m = points[i];
+    const staticMm = p.staticDeflectionMm * problem.marginFactor;
+    const maxMm = m.maxDeflectionM * 1000;
+    // beyond the travel itself the deflection reason says it already
+    if (staticMm * (1 + SPRING_RESERVE) > maxMm && staticMm <= maxMm) {
+      reasons.push(
+        `Spring ${p.partNumber} at point ${p.label}: ${formatMm(Math.max(0, maxMm - staticMm))} of travel left beyond the static ` +
+          `deflection of ${formatMm(staticMm)}${marginNote(problem)}; at least ${SPRING_RESERVE * 100} % of it (${formatMm(staticMm * SPRING_RESERVE)}) ` +
+          'is kept in reserve (common practice) so the spring does not go solid.',
+      );
+    }
+  });
+  return reasons;
+}
+
+function lightLoad({ problem, store, points, perPoint }: WordingContext): string[] {
+  const light = 1 - problem.weightMarginPct / 100;
+  const low = perPoint.filter((p, i) => store.isSpring[points[i].row] && p.utilization * light < problem.criteria.minUtilization);
+  if (low.length === 0) return [];
+  return [
+    `In the light case (weight less the ${formatNumber(problem.weightMarginPct, 1)} % margin) the springs are below the minimum ` +
+      `${formatPct(problem.criteria.minUtilization)} of the rated load at ${low.map((p) => `point ${p.label} (${formatPct(p.utilization * light)})`).join(', ')}: ` +
+      'an under-loaded spring is stiffer than it should be for its load, and the isolation is worse.',
+  ];
+}
+
+function springStability({ store, c }: WordingContext): string[] {
+  return store
+    .rowsOf(c)
+    .filter((r) => store.rowFail[r] & FAIL.springStability)
+    .map((r) =>
+      Number.isNaN(store.kh[r])
+        ? `Lateral stability of ${store.partNumberOf(r)} cannot be shown: the catalog gives no horizontal stiffness ` +
+          `(a coil spring needs at least ${formatNumber(SPRING_MIN_HORIZONTAL_RATIO, 1)}× its vertical stiffness sideways).`
+        : `${store.partNumberOf(r)} is laterally unstable: its horizontal stiffness is ${formatNumber(store.kh[r] / store.kv[r], 2)}× ` +
+          `the vertical, below the ${formatNumber(SPRING_MIN_HORIZONTAL_RATIO, 1)}× a coil spring needs (project-specification rule).`,
+    );
+}
+
+/** What fails in the second mass case (selection.md §18). */
+function massCase({ problem, store, points, altMassCase: alt, wholeMachine: w }: WordingContext): string[] {
+  if (!alt || !problem.alt) return [];
+  const head = `In the second mass case (${formatNumber(alt.massKg, 0)} kg, CG x ${formatNumber(alt.cg.x, 3)} m, y ${formatNumber(alt.cg.y, 3)} m)`;
+  const reasons: string[] = [];
+  if (!problem.alt.cgInside)
+    reasons.push(`${head} the centre of gravity lies outside the polygon of the mount points: the machine would tip.`);
+  const { minUtilization, maxUtilization } = problem.criteria;
+  const light = 1 - problem.weightMarginPct / 100;
+  const bad = alt.perPoint.filter((p, i) => {
+    const m = points[i];
+    const u = p.utilization;
+    const d = (p.staticDeflectionMm / 1000) * problem.marginFactor;
+    return (
+      u * problem.marginFactor > maxUtilization ||
+      u < minUtilization ||
+      (store.isSpring[m.row] === 1 && u * light < minUtilization) ||
+      d > m.maxDeflectionM ||
+      d > store.springLimitM[m.row]
+    );
+  });
+  if (bad.length > 0) {
+    reasons.push(
+      `${head} the loads leave the allowed ${formatPct(minUtilization)}–${formatPct(maxUtilization)} of the rated load, the light case of ` +
+        `the springs or their travel at ${bad.map((p) => `point ${p.label} (${formatPct(p.utilization)}, ${formatMm(p.staticDeflectionMm)})`).join(', ')}.`,
+    );
+  }
+  const required = `${formatNumber(problem.criteria.minIsolationPct, 1)} %`;
+  const whole = alt.wholeMachineWorst;
+  if (whole && whole.transmissibility > problem.transmissibilityTarget) {
+    const at = whole.speedRpm === null ? formatHz(whole.frequencyHz) : `${formatRpm(whole.speedRpm)}, ${formatHz(whole.frequencyHz)}`;
+    const band = bandWords(whole.stiffnessFactor, w?.stiffnessTolerancePct ?? 0);
+    reasons.push(
+      whole.transmissibility > 1
+        ? `${head}, whole machine, ${whole.source}: at ${at}${band} the mounts amplify the force (transmissibility ` +
+            `${formatNumber(whole.transmissibility, 2)}) instead of isolating it; ${required} isolation is required.`
+        : `${head}, whole machine, ${whole.source}: isolation ${formatPctValue(whole.efficiencyPct)} at ${at}${band}, below the ${required} required.`,
+    );
+  } else if (!whole) {
+    // the model could not be built: the bounce estimate decides (selection.md §9)
+    const worst = alt.isolation.reduce((x, row) => (row.transmissibility > x.transmissibility ? row : x), alt.isolation[0]);
+    if (worst && worst.transmissibility > problem.transmissibilityTarget) {
+      reasons.push(
+        `${head} the natural frequency rises to ${formatHz(alt.verticalNaturalFrequencyHz)}: isolation at ${formatHz(worst.frequencyHz)} is ` +
+          `${formatPctValue(worst.efficiencyPct)}, below the ${required} target.`,
+      );
+    }
+  }
+  return reasons;
+}
+
 function temperature({ problem, store, c }: WordingContext): string[] {
   return store
     .rowsOf(c)
@@ -238,9 +393,13 @@ function modeConflict(conflict: ModeConflict): string {
   if (conflict.kind === 'mechanism') {
     return 'The mounts leave the machine free to move in one direction (a rigid-body mode has no stiffness).';
   }
-  const { mode, frequencyHz, label } = conflict;
+  const { mode, frequencyHz, label, assumedHorizontalRatio } = conflict;
+  const assumed =
+    assumedHorizontalRatio === undefined
+      ? ''
+      : ` (with the horizontal stiffness the catalog does not give taken as ${formatNumber(assumedHorizontalRatio, 1)}× the vertical)`;
   return (
-    `The ${describeModeMotion(mode.energyFractions).name} mode at ${formatHz(mode.frequencyHz)} lies within ` +
+    `The ${describeModeMotion(mode.energyFractions).name} mode at ${formatHz(mode.frequencyHz)}${assumed} lies within ` +
     `±${Math.round(MODE_SEPARATION * 100)} % of the disturbing frequency ${formatHz(frequencyHz)}${labelSuffix(label)}: ` +
     'the machine would rock or sway strongly there.'
   );

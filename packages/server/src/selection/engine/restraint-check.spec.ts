@@ -37,7 +37,7 @@ function row(fields: Partial<CatalogRow>): CatalogRow {
     dynamicStiffnessRatio: 1,
     dampingRatio: 0.05,
     lossFactor: null,
-    maxDeflectionMm: null,
+    maxDeflectionMm: 50,
     tempMinC: null,
     tempMaxC: null,
     unitPrice: 50,

@@ -37,7 +37,7 @@ function row(fields: Partial<CatalogRow>): CatalogRow {
     dynamicStiffnessRatio: 1,
     dampingRatio: 0.05,
     lossFactor: null,
-    maxDeflectionMm: null,
+    maxDeflectionMm: 50,
     tempMinC: null,
     tempMaxC: null,
     unitPrice: 50,
@@ -116,7 +116,7 @@ describe('SelectionEvaluation', () => {
     expect(all[1].scoreTerms.price).toBeCloseTo(0.15 * (200 / 240), 15);
     const overloaded = all.find((c) => c.mountId === rows[3].id)!;
     expect(overloaded.reasons).toEqual([
-      'Load outside the allowed 50 %–100 % of the rated load at point A (123 %), point B (123 %), point C (123 %), point D (123 %).',
+      'Load outside the allowed 50 %–100 % of the rated load with the 10 % weight margin at point A (135 %), point B (135 %), point C (135 %), point D (135 %).',
     ]);
   });
 
@@ -159,31 +159,31 @@ describe('SelectionEvaluation', () => {
     const evaluation = evaluate(p, [mount]);
     const c = evaluation.describe(0, names);
     expect(c.passes).toBe(false);
+    // the default 10 % weight margin (selection.md §17): 24.5 mm × 1.1 = 27 mm
     expect(c.reasons).toEqual([
-      'Static deflection at point A (24.5 mm) exceeds the 20 mm the mount HOT-1 allows.',
-      'Static deflection at point B (24.5 mm) exceeds the 20 mm the mount HOT-1 allows.',
-      'Static deflection at point C (24.5 mm) exceeds the 20 mm the mount HOT-1 allows.',
-      'Static deflection at point D (24.5 mm) exceeds the 20 mm the mount HOT-1 allows.',
+      'Static deflection at point A (27 mm with the 10 % weight margin) exceeds the 20 mm the mount HOT-1 allows.',
+      'Static deflection at point B (27 mm with the 10 % weight margin) exceeds the 20 mm the mount HOT-1 allows.',
+      'Static deflection at point C (27 mm with the 10 % weight margin) exceeds the 20 mm the mount HOT-1 allows.',
+      'Static deflection at point D (27 mm with the 10 % weight margin) exceeds the 20 mm the mount HOT-1 allows.',
       'The ambient temperature 90 °C is outside the range of HOT-1 (-20 °C to 70 °C).',
       'Mount type open_spring is not among the allowed types.',
       'Invented Springs is not among the allowed suppliers.',
     ]);
   });
 
-  it('notes assumptions: horizontal stiffness taken equal to vertical; no modes without inertia', () => {
-    const noHorizontal = row({ horizontalStiffnessNPerM: null });
-    const withBox = evaluate(problem(), [noHorizontal]);
-    withBox.checkFinalist(0);
-    expect(withBox.describe(0, names).notes).toContain(
-      'The catalog gives no horizontal stiffness: the rigid-body modes take it equal to the vertical stiffness.',
-    );
-    const pointMass = evaluate(problem({ components: [{ name: 'M', massKg: 1000, cg: { x: 0, y: 0, z: 0.3 } }] }), [noHorizontal]);
+  it('a machine of one point mass: no modes, and the candidate says so among its assumptions (selection.md §14)', () => {
+    const pointMass = evaluate(problem({ components: [{ name: 'M', massKg: 1000, cg: { x: 0, y: 0, z: 0.3 } }] }), [row({})]);
     pointMass.checkFinalist(0);
     const c = pointMass.describe(0, names);
     expect(c.modes).toBeUndefined();
     expect(c.passes).toBe(true);
     expect(c.notes.some((n) => /^Rigid-body modes not computed/.test(n))).toBe(true);
     expect(c.notes.some((n) => /^Whole-machine verdict not computed/.test(n))).toBe(true);
+    expect(c.assumptions).toContain(
+      'The machine has no usable inertia (point masses, or all on one line): its rigid-body modes were not checked; ' +
+        'only the vertical bounce is judged. Give the components box dimensions or their inertia.',
+    );
+    expect(c.assumptions?.[0]).toMatch(/^Taken as point masses \(no box or inertia given\): M\./);
   });
 });
 
@@ -195,7 +195,7 @@ describe('SelectionEvaluation with rows as the prefilter reads them (no details)
     const byId = new Map<number, MountDetails>(
       [cool, hot, unused].map((r) => [
         r.id,
-        { partNumber: r.partNumber, mountType: r.mountType, horizontalStiffnessNPerM: null, tempMinC: r.tempMinC, tempMaxC: r.tempMaxC },
+        { partNumber: r.partNumber, mountType: r.mountType, tempMinC: r.tempMinC, tempMaxC: r.tempMaxC },
       ]),
     );
     const asked: number[][] = [];
@@ -215,9 +215,6 @@ describe('SelectionEvaluation with rows as the prefilter reads them (no details)
       ['COOL-1', false],
     ]);
     expect(ranked[1].reasons).toEqual(['The ambient temperature 60 °C is outside the range of COOL-1 (-10 °C to 40 °C).']);
-    expect(ranked[0].notes).toContain(
-      'The catalog gives no horizontal stiffness: the rigid-body modes take it equal to the vertical stiffness.',
-    );
     expect(asked.flat()).not.toContain(unused.id);
   });
 });

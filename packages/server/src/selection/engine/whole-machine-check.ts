@@ -7,6 +7,11 @@
  * modes (reasons.ts words them); the forces per mount point are computed only for the candidates
  * shown (`describe`).
  *
+ * The mounts enter with the catalog's figures or the assumed ones (assumptions.ts): a flexible
+ * support in series vertically (§15), and a missing horizontal stiffness at both ends of
+ * HORIZONTAL_RATIO_WHEN_MISSING, the worse governing (§14). With a second mass case (§18) the
+ * machine is judged again with that mass, CG and inertia; failing there sets FAIL.massCase.
+ *
  * When the model cannot be built (the machine's inertia unknown or degenerate) the verdict falls
  * back to the bounce estimate at the disturbing frequencies, and a note says so.
  */
@@ -30,6 +35,7 @@ import {
 import type { MountType } from '../../catalog/mount-rules.js';
 import type { SelectionProblem } from '../selection-problem.js';
 import type { CandidateCrossing, CandidateWholeMachine, WholeMachinePerFrequency } from '../selection.types.js';
+import { HORIZONTAL_RATIO_WHEN_MISSING } from './assumptions.js';
 import type { CandidateStore, PointMount } from './candidate-store.js';
 import { FAIL } from './checks.js';
 import type { FinalistCheck } from './ranking.js';
@@ -73,16 +79,25 @@ export interface SourceCurves {
   }[];
 }
 
+/** The machine whose response is judged: the operating case, or the second mass case. */
+type Body = Pick<SelectionProblem, 'massKg' | 'cg' | 'inertia'>;
+
+export interface WholeMachineResult {
+  worst: CandidateWholeMachine['worst'];
+  /** The governing stiffness factor's worst point per source (speed, rpm). */
+  worstSpeedBySource: number[];
+  crossings: CandidateCrossing[];
+  stiffnessTolerancePct: number;
+  toleranceFromCriteria: boolean;
+  /** The assumed horizontal/vertical ratio that governed, for mounts without a horizontal stiffness (null: all given). */
+  assumedHorizontalRatio: number | null;
+}
+
 export interface WholeMachineFindings {
   /** Null when the model could not be built (the bounce estimate decided). */
-  result: {
-    worst: CandidateWholeMachine['worst'];
-    /** The governing stiffness factor's worst point per source (speed, rpm). */
-    worstSpeedBySource: number[];
-    crossings: CandidateCrossing[];
-    stiffnessTolerancePct: number;
-    toleranceFromCriteria: boolean;
-  } | null;
+  result: WholeMachineResult | null;
+  /** The second mass case (undefined without one; null when the model could not be built). */
+  alt?: WholeMachineResult | null;
 }
 
 export class WholeMachineCheck implements FinalistCheck {
@@ -98,24 +113,50 @@ export class WholeMachineCheck implements FinalistCheck {
     return this.problem.forcing.speedRangeRpm ?? { min: NO_SPEED_RPM, max: NO_SPEED_RPM };
   }
 
-  /** Judges candidate c once: sets FAIL.wholeMachine (or FAIL.isolation by the estimate when the model cannot be built). */
+  /**
+   * Judges candidate c once: sets FAIL.wholeMachine (or FAIL.isolation by the estimate when the
+   * model cannot be built), and FAIL.massCase when the second mass case fails the same way.
+   */
   check(c: number): void {
     if (this.findings.has(c)) return;
     const { problem, store } = this;
     const points = store.pointsOf(c);
     const tolerance = this.toleranceOf(points);
-    let findings: WholeMachineFindings = { result: null };
-    try {
-      findings = { result: this.judge(points, tolerance) };
-    } catch (error) {
-      if (!isVibrationInputError(error)) throw error;
-    }
+    const target = problem.transmissibilityTarget;
+    const findings: WholeMachineFindings = { result: this.judgeOrNull(points, tolerance, problem) };
     if (findings.result) {
-      if (!(findings.result.worst.transmissibility <= problem.transmissibilityTarget)) store.fail[c] |= FAIL.wholeMachine;
-    } else if (this.estimateFails(c)) {
+      if (!(findings.result.worst.transmissibility <= target)) store.fail[c] |= FAIL.wholeMachine;
+    } else if (this.estimateFails(c, store.transmissibility)) {
       store.fail[c] |= FAIL.isolation;
     }
+    if (problem.alt) {
+      findings.alt = this.judgeOrNull(points, tolerance, problem.alt);
+      const fails = findings.alt ? !(findings.alt.worst.transmissibility <= target) : this.estimateFails(c, store.transmissibilityAlt);
+      if (fails) store.fail[c] |= FAIL.massCase;
+    }
     this.findings.set(c, findings);
+  }
+
+  /**
+   * The verdict's figures for one mass case: with every horizontal stiffness given, one judgement;
+   * with one missing, a judgement at each end of the assumed ratio, the worse kept. Null when the
+   * model cannot be built.
+   */
+  private judgeOrNull(points: readonly PointMount[], tolerance: { pct: number; fromCriteria: boolean }, body: Body) {
+    const missing = points.some((m) => Number.isNaN(m.horizontalStiffnessNPerM));
+    const ratios = missing ? [HORIZONTAL_RATIO_WHEN_MISSING.high, HORIZONTAL_RATIO_WHEN_MISSING.low] : [HORIZONTAL_RATIO_WHEN_MISSING.high];
+    try {
+      let worst: WholeMachineResult | null = null;
+      for (const ratio of ratios) {
+        const result = this.judge(points, tolerance, body, ratio);
+        result.assumedHorizontalRatio = missing ? ratio : null;
+        if (!worst || !(result.worst.transmissibility <= worst.worst.transmissibility)) worst = result;
+      }
+      return worst;
+    } catch (error) {
+      if (!isVibrationInputError(error)) throw error;
+      return null;
+    }
   }
 
   /** What the check found for c (undefined when c was not judged). */
@@ -123,13 +164,18 @@ export class WholeMachineCheck implements FinalistCheck {
     return this.findings.get(c);
   }
 
-  /** The model of the machine on candidate c's mounts (dynamic stiffnesses; a missing horizontal stiffness taken equal to the vertical). */
-  modelMounts(points: readonly PointMount[]): WholeMachineMount[] {
+  /**
+   * The model of the machine on candidate c's mounts: dynamic stiffnesses, the support in series
+   * vertically (selection.md §15), a missing horizontal stiffness taken as `missingRatio` × the
+   * vertical (§14).
+   */
+  modelMounts(points: readonly PointMount[], missingRatio: number = HORIZONTAL_RATIO_WHEN_MISSING.high): WholeMachineMount[] {
     return points.map((m, i) => {
       const p = this.problem.points[i];
-      const vertical = m.verticalStiffnessNPerM * m.dynamicStiffnessRatio;
+      const vertical = 1 / (1 / (m.verticalStiffnessNPerM * m.dynamicStiffnessRatio) + this.problem.supportCompliance[i]);
       const horizontal =
-        (Number.isNaN(m.horizontalStiffnessNPerM) ? m.verticalStiffnessNPerM : m.horizontalStiffnessNPerM) * m.dynamicStiffnessRatio;
+        (Number.isNaN(m.horizontalStiffnessNPerM) ? missingRatio * m.verticalStiffnessNPerM : m.horizontalStiffnessNPerM) *
+        m.dynamicStiffnessRatio;
       return {
         label: p.label,
         position: { x: p.x, y: p.y, z: p.z },
@@ -139,11 +185,14 @@ export class WholeMachineCheck implements FinalistCheck {
     });
   }
 
-  /** The machine on candidate c's mounts at a stiffness factor. */
-  system(c: number, stiffnessFactor = 1): WholeMachineSystem {
+  /** The machine (operating case) on candidate c's mounts at a stiffness factor and an assumed horizontal ratio. */
+  system(c: number, stiffnessFactor = 1, missingRatio: number = HORIZONTAL_RATIO_WHEN_MISSING.high): WholeMachineSystem {
     const { problem } = this;
     return prepareWholeMachine(
-      { body: { massKg: problem.massKg, cg: problem.cg, inertia: problem.inertia }, mounts: this.modelMounts(this.store.pointsOf(c)) },
+      {
+        body: { massKg: problem.massKg, cg: problem.cg, inertia: problem.inertia },
+        mounts: this.modelMounts(this.store.pointsOf(c), missingRatio),
+      },
       { stiffnessFactor },
     );
   }
@@ -157,8 +206,10 @@ export class WholeMachineCheck implements FinalistCheck {
   curves(c: number): SourceCurves {
     const { problem } = this;
     const tolerance = this.toleranceOf(this.store.pointsOf(c));
+    this.check(c);
+    const ratio = this.findings.get(c)?.result?.assumedHorizontalRatio ?? HORIZONTAL_RATIO_WHEN_MISSING.high;
     const [soft, nominal, stiff] =
-      tolerance.pct > 0 ? bandFactors(tolerance.pct).map((f) => this.system(c, f)) : [null, this.system(c), null];
+      tolerance.pct > 0 ? bandFactors(tolerance.pct).map((f) => this.system(c, f, ratio)) : [null, this.system(c, 1, ratio), null];
     const modeHz = [soft, nominal, stiff]
       .filter((x): x is WholeMachineSystem => x !== null)
       .map((x) => wholeMachineModes(x).modes.map((m) => m.frequencyHz));
@@ -194,7 +245,7 @@ export class WholeMachineCheck implements FinalistCheck {
     const result = this.findings.get(c)?.result;
     if (!result) return [];
     const { problem } = this;
-    const system = this.system(c, result.worst.stiffnessFactor);
+    const system = this.system(c, result.worst.stiffnessFactor, result.assumedHorizontalRatio ?? HORIZONTAL_RATIO_WHEN_MISSING.high);
     const { min, max } = this.range;
     const fixedSpeed = problem.forcing.speedRangeRpm === null;
     const out: WholeMachinePerFrequency[] = [];
@@ -235,14 +286,16 @@ export class WholeMachineCheck implements FinalistCheck {
   private judge(
     points: readonly PointMount[],
     tolerance: { pct: number; fromCriteria: boolean },
-  ): NonNullable<WholeMachineFindings['result']> {
+    body: Body,
+    missingRatio: number,
+  ): WholeMachineResult {
     const { problem } = this;
     const { sources, skipBandsRpm } = problem.forcing;
     const { min, max } = this.range;
     const fixedSpeed = problem.forcing.speedRangeRpm === null;
     const system = prepareWholeMachine({
-      body: { massKg: problem.massKg, cg: problem.cg, inertia: problem.inertia },
-      mounts: this.modelMounts(points),
+      body: { massKg: body.massKg, cg: body.cg, inertia: body.inertia },
+      mounts: this.modelMounts(points, missingRatio),
     });
     const modes = wholeMachineModes(system).modes;
     const modeFrequenciesHz = modes.map((m) => m.frequencyHz);
@@ -315,6 +368,7 @@ export class WholeMachineCheck implements FinalistCheck {
       crossings,
       stiffnessTolerancePct: tolerance.pct,
       toleranceFromCriteria: tolerance.fromCriteria,
+      assumedHorizontalRatio: null,
     };
   }
 
@@ -330,10 +384,10 @@ export class WholeMachineCheck implements FinalistCheck {
     return { pct, fromCriteria: false };
   }
 
-  /** The bounce estimate above the target at a disturbing frequency (the fallback verdict). */
-  private estimateFails(c: number): boolean {
+  /** The bounce estimate (of either mass case) above the target at a disturbing frequency: the fallback verdict. */
+  private estimateFails(c: number, transmissibility: Float64Array): boolean {
     const nf = this.problem.frequenciesHz.length;
-    for (let j = 0; j < nf; j++) if (this.store.transmissibility[c * nf + j] > this.problem.transmissibilityTarget) return true;
+    for (let j = 0; j < nf; j++) if (transmissibility[c * nf + j] > this.problem.transmissibilityTarget) return true;
     return false;
   }
 }

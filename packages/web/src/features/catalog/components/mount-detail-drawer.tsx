@@ -89,7 +89,14 @@ function MountDetails({ mount }: { mount: Mount }) {
           <Fact label="Rated load" value={displayQuantity(units, 'force', mount.ratedLoadN)} />
           <Fact label="Vertical stiffness" value={displayQuantity(units, 'stiffness', mount.verticalStiffnessNPerM)} />
           <Fact label="Horizontal stiffness" value={displayQuantity(units, 'stiffness', mount.horizontalStiffnessNPerM)} />
-          <Fact label="Dynamic stiffness ratio" value={formatNumber(mount.dynamicStiffnessRatio)} />
+          <Fact
+            label="Dynamic stiffness ratio"
+            value={
+              mount.dynamicStiffnessRatio === null
+                ? 'not given (the selection assumes one and says so)'
+                : formatNumber(mount.dynamicStiffnessRatio)
+            }
+          />
           <Fact
             label="Damping"
             value={dampingText(mount)}

@@ -163,7 +163,7 @@ export function MountFormDialog({ isOpen, mount, suppliers, onClose, onSaved }: 
                   name="dynamicStiffnessRatio"
                   id="mount-dynamic-ratio"
                   label="Dynamic stiffness ratio"
-                  helperText="1 for steel springs, more for elastomers"
+                  helperText="Optional; 1 for steel springs, more for elastomers. Left empty, the selection assumes one on the unfavourable side and says so"
                 />
               </div>
               <FormGroup className="tc-form-wide">

@@ -86,7 +86,7 @@ export function mountFormSchema(units: Units) {
     dynamicStiffnessRatio: yup
       .number()
       .typeError(NUMBER)
-      .required('Enter the dynamic stiffness ratio (1 for steel springs)')
+      .optional()
       .min(MOUNT_FORM_LIMITS.dynamicStiffnessRatio.min, 'Between 1 and 5')
       .max(MOUNT_FORM_LIMITS.dynamicStiffnessRatio.max, 'Between 1 and 5'),
     dampingModel: yup.mixed<DampingModel>().oneOf(['viscous', 'hysteretic']).required(),

@@ -23,7 +23,7 @@ export const EMPTY_MOUNT_FORM: MountFormValues = {
   ratedLoad: '',
   verticalStiffness: '',
   horizontalStiffness: '',
-  dynamicStiffnessRatio: '1',
+  dynamicStiffnessRatio: '',
   dampingModel: 'viscous',
   damping: '',
   maxDeflection: '',
@@ -87,7 +87,6 @@ export function formValuesToInput(values: MountFormValues, units: Units): MountI
     mountType: values.mountType as MountInput['mountType'],
     ratedLoadN: si(units, 'force', values.ratedLoad) as number,
     verticalStiffnessNPerM: si(units, 'stiffness', values.verticalStiffness) as number,
-    dynamicStiffnessRatio: num(values.dynamicStiffnessRatio) ?? 1,
     currency: values.currency.trim().toUpperCase(),
   };
   if (viscous) input.dampingRatio = damping;
@@ -96,6 +95,7 @@ export function formValuesToInput(values: MountFormValues, units: Units): MountI
   if (series) input.series = series;
   const optional: Array<[keyof MountInput, number | null]> = [
     ['horizontalStiffnessNPerM', si(units, 'stiffness', values.horizontalStiffness)],
+    ['dynamicStiffnessRatio', num(values.dynamicStiffnessRatio)],
     ['maxDeflectionMm', mm(units, values.maxDeflection)],
     ['tempMinC', si(units, 'temperature', values.tempMin)],
     ['tempMaxC', si(units, 'temperature', values.tempMax)],
@@ -125,7 +125,7 @@ export function formValuesToChanges(values: MountFormValues, initial: MountFormV
   if (changed('ratedLoad')) changes.ratedLoadN = si(units, 'force', values.ratedLoad) as number;
   if (changed('verticalStiffness')) changes.verticalStiffnessNPerM = si(units, 'stiffness', values.verticalStiffness) as number;
   if (changed('horizontalStiffness')) changes.horizontalStiffnessNPerM = si(units, 'stiffness', values.horizontalStiffness);
-  if (changed('dynamicStiffnessRatio')) changes.dynamicStiffnessRatio = num(values.dynamicStiffnessRatio) ?? 1;
+  if (changed('dynamicStiffnessRatio')) changes.dynamicStiffnessRatio = num(values.dynamicStiffnessRatio);
   if (changed('dampingModel') || changed('damping')) {
     const damping = num(values.damping);
     changes.dampingRatio = values.dampingModel === 'viscous' ? damping : null;

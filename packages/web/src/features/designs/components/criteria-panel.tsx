@@ -105,8 +105,8 @@ export function CriteriaPanel({ readOnly, suppliers }: CriteriaPanelProps) {
           label="Weight margin"
           unit="%"
           readOnly={readOnly}
-          placeholder="0"
-          helperText="Allowance on the weight for the overload check, e.g. 10 % for uncertain data."
+          placeholder="10"
+          helperText="Allowance for an uncertain weight: added in the overload checks, taken off for the springs' light case. Empty: 10 %."
         />
       </div>
       <div>

@@ -27,7 +27,8 @@ export const DESIGN_LIMITS = {
   vaneCount: 200,
   extraFrequencies: 20,
   maxIsolationPct: 99.9,
-  maxUtilization: 1.5,
+  /** A mount is never loaded beyond its rating (the server refuses more). */
+  maxUtilization: 1,
   ambientTempC: { min: -100, max: 400 },
   /** Seismic restraint (the server's RestraintInputDto; ASCE 7-16 §13.3.1). */
   restraint: { sdsG: { max: 4 }, ap: { min: 1, max: 2.5 }, rp: { min: 1, max: 12 }, gapMm: { max: 100 } },
@@ -452,7 +453,7 @@ const criteriaSchema = yup.object({
     .max(DESIGN_LIMITS.maxUtilization, `At most ${DESIGN_LIMITS.maxUtilization}`),
   maxUtilization: requiredNumber('the highest utilisation')
     .positive('The highest utilisation must be more than 0')
-    .max(DESIGN_LIMITS.maxUtilization, `At most ${DESIGN_LIMITS.maxUtilization}`)
+    .max(DESIGN_LIMITS.maxUtilization, `At most ${DESIGN_LIMITS.maxUtilization}: a mount is never loaded beyond its rating`)
     .when('minUtilization', ([min], s) =>
       typeof min === 'number' ? s.moreThan(min, 'The highest utilisation must be above the lowest') : s,
     ),
