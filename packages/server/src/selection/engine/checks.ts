@@ -14,7 +14,8 @@
  * - for every candidate at once (evaluate-isolation.ts): the bounce estimate at every disturbing
  *   frequency, which only orders the candidates (it fails none);
  * - for the best candidates only, as finalist checks (ranking.ts `FinalistCheck`): the rigid-body
- *   modes (mode-check.ts: a mechanism) and the whole-machine verdict (whole-machine-check.ts);
+ *   modes (mode-check.ts: a mechanism), the whole-machine verdict (whole-machine-check.ts) and the
+ *   start-up passage through the modes below the running range (passage-check.ts);
  * - seismic restraint, when the input asks for it (restraint-check.ts): every candidate screened
  *   before scoring (no rating, or a uniform candidate's demand over its ratings), then the exact
  *   figures of the best ones as a finalist check.
@@ -50,6 +51,12 @@ export const FAIL = {
   restraint: 256,
   /** Worst whole-machine transmissibility over the running range and the stiffness band above the target (whole-machine-check.ts). */
   wholeMachine: 512,
+  /**
+   * Start-up and coast-down: the steady motion at the mounts passing a mode below the running range
+   * above the largest motion allowed (passage-check.ts; docs/engineering/start-up-passage.md §1). A
+   * high bit, clear of the bits other checks take next.
+   */
+  passage: 16384,
 } as const;
 
 /** The row checks that need a mount's details (DETAIL_COLUMNS); a candidate takes them once the details are loaded. */

@@ -9,6 +9,7 @@ import type { SelectionProblem } from '../selection-problem.js';
 import type { Candidate, CandidatePoint, CandidateWholeMachine, ScoreTerms } from '../selection.types.js';
 import type { CandidateStore } from './candidate-store.js';
 import type { ModeCheck } from './mode-check.js';
+import { passageFigures, type PassageCheck } from './passage-check.js';
 import type { RestraintCheck } from './restraint-check.js';
 import type { WholeMachineCheck } from './whole-machine-check.js';
 import { fillScoreInputs, newScoreInputs, type ScoreReferences } from './ranking.js';
@@ -21,10 +22,11 @@ export interface DescribeSources {
   modeCheck: ModeCheck;
   restraintCheck: RestraintCheck;
   wholeMachineCheck: WholeMachineCheck;
+  passageCheck: PassageCheck;
 }
 
 export function describeCandidate(
-  { store, problem, refs, modeCheck, restraintCheck, wholeMachineCheck }: DescribeSources,
+  { store, problem, refs, modeCheck, restraintCheck, wholeMachineCheck, passageCheck }: DescribeSources,
   c: number,
   supplierNames: ReadonlyMap<number, string>,
 ): Candidate {
@@ -69,6 +71,7 @@ export function describeCandidate(
     order,
     speedRpm,
   }));
+  const passage = passageCheck.findingsOf(c);
   const wording: WordingContext = {
     problem,
     store,
@@ -80,6 +83,7 @@ export function describeCandidate(
     modesUnavailable: modeCheck.unavailable,
     restraint,
     wholeMachine: whole,
+    passage,
   };
   const price = store.price[c];
   const lead = store.lead[c];
@@ -100,6 +104,7 @@ export function describeCandidate(
     ...(modes?.modes ? { modes: modes.modes } : {}),
     ...(restraint ? { restraint } : {}),
     ...(wholeMachine ? { wholeMachine, crossings } : {}),
+    ...(passage ? { passage: passageFigures(passage), passageLimitMm: passage.limitMm } : {}),
     passes: store.fail[c] === 0,
     reasons: reasonsFor(wording),
     notes: notesFor(wording),

@@ -14,6 +14,7 @@ import type { CandidatePoint, CandidateRestraint, RestraintPoint } from '../sele
 import type { CandidateStore, PointMount } from './candidate-store.js';
 import { FAIL } from './checks.js';
 import { MODE_SEPARATION, type ModeConflict, type ModeFindings } from './mode-check.js';
+import { passageNotes, passageReasons, type PassageFindings } from './passage-check.js';
 import type { WholeMachineFindings } from './whole-machine-check.js';
 
 /** What the wording reads about one candidate. */
@@ -34,6 +35,8 @@ export interface WordingContext {
   restraint: CandidateRestraint | undefined;
   /** The whole-machine verdict's findings (null when the model could not be built or the candidate was not judged). */
   wholeMachine: NonNullable<WholeMachineFindings['result']> | null;
+  /** What the start-up passage check found (undefined when the candidate was not judged or the model could not be built). */
+  passage?: PassageFindings;
 }
 
 type Words = (x: WordingContext) => string[];
@@ -42,6 +45,7 @@ type Words = (x: WordingContext) => string[];
 export const REASONS: readonly (readonly [bit: number, words: Words])[] = [
   [FAIL.cgOutside, cgOutside],
   [FAIL.wholeMachine, wholeMachine],
+  [FAIL.passage, (x) => passageReasons(x.passage)],
   [FAIL.isolation, isolation],
   [FAIL.utilization, utilization],
   [FAIL.deflection, deflection],
@@ -66,6 +70,7 @@ export function notesFor(x: WordingContext): string[] {
   const notes: string[] = [];
   const rows = store.rowsOf(c);
   notes.push(...wholeMachineNotes(x));
+  notes.push(...passageNotes(x.passage));
   if (x.modes?.conflict?.kind === 'near') notes.push(`${modeConflict(x.modes.conflict)} The whole-machine verdict judges it.`);
   if (x.modes?.modes && rows.some((r) => store.hasDetails[r] && Number.isNaN(store.kh[r]))) {
     notes.push('The catalog gives no horizontal stiffness: the rigid-body modes take it equal to the vertical stiffness.');
