@@ -1,9 +1,14 @@
 import { massProperties, prepareWholeMachine, transmissibilityBatch, wholeMachineTransmissibility } from '@tacet/vibration';
+import { DataSource } from 'typeorm';
+import { Design } from '../src/designs/design.entity.js';
+import { PurchasingService } from '../src/purchasing/purchasing.service.js';
 import { createMount, createSupplier, type CreatedMount, type CreatedSupplier } from './factories/selection-catalog.factory.js';
+import { releaseDesign } from './factories/review.factory.js';
 import { createTestApp, type TestApp } from './utils/create-test-app.js';
+import { pdfHasText } from './utils/pdf-text.js';
 
 /**
- * The whole-machine verdict of POST /api/selection (docs/engineering/selection.md §14–§17) on the two
+ * The whole-machine verdict of POST /api/selection (docs/engineering/selection.md §19–§22) on the two
  * cases of the issue, the stiffness band, the crossings in the reasons, the guarantee that the bounce
  * estimate excludes nothing, and POST /api/selection/curves. Catalog rows are invented.
  *
@@ -170,7 +175,7 @@ describe('whole-machine verdict (e2e)', () => {
     for (const x of crossings) {
       expect(x.source).toBe('Impeller');
       expect(x.order).toBe(1);
-      // n = 60·f/o exactly (selection.md §15)
+      // n = 60·f/o exactly (selection.md §20)
       expect(x.speedRpm).toBeCloseTo(60 * x.modeFrequencyHz, 9);
       expect(x.speedRpm).toBeGreaterThanOrEqual(780);
       expect(x.speedRpm).toBeLessThanOrEqual(1800);
@@ -338,6 +343,57 @@ describe('whole-machine verdict (e2e)', () => {
     const worst = Math.max(...curve.transmissibility, ...curve.softEnd, ...curve.stiffEnd);
     expect(worst).toBeLessThanOrEqual(body.worst.transmissibility * (1 + 1e-9));
     expect(worst).toBeGreaterThan(body.worst.transmissibility * 0.99);
+  });
+
+  it('a released design freezes the sources, the worst point, the crossings and the verdict, and its report prints them', async () => {
+    const auth = { Authorization: `Bearer ${engineer}` };
+    const project = await t
+      .http()
+      .post('/api/projects')
+      .set(auth)
+      .send({ name: `Whole machine ${process.pid}` });
+    expect(project.status).toBe(201);
+    const input = {
+      components: TALL,
+      mountPoints: TALL_POINTS,
+      operating: { ...TALL_OPERATING, skipBandsRpm: [{ min: 1000, max: 1100 }] },
+      criteria: { minIsolationPct: 80, minUtilization: 0.5, maxUtilization: 1.0, supplierIds: [rubber.id] },
+    };
+    const created = await t.http().post(`/api/projects/${project.body.id}/designs`).set(auth).send({ name: 'Tall pump on a drive', input });
+    expect(created.status).toBe(201);
+    const chosen = await t.http().put(`/api/designs/${created.body.id}`).set(auth).send({ version: 1, chosenMountId: tallMount.id });
+    expect(chosen.status).toBe(200);
+    expect(chosen.body.chosen.passes).toBe(false);
+    expect(chosen.body.chosen.crossings.length).toBeGreaterThanOrEqual(2);
+    await releaseDesign(t, created.body.id, engineer, await t.login('checker@tacet.test', 'tacet-demo'));
+
+    const design = await t.app
+      .get(DataSource)
+      .getRepository(Design)
+      .findOneOrFail({
+        where: { id: created.body.id },
+        relations: { project: true, author: true, checker: true },
+      });
+    const frozen = design.snapshot!.wholeMachine!;
+    expect(design.snapshot!.operating).toEqual(input.operating);
+    expect(frozen.worst).toEqual(chosen.body.chosen.wholeMachine.worst);
+    expect(frozen.crossings).toEqual(chosen.body.chosen.crossings);
+    expect(frozen.passes).toBe(false);
+    expect(frozen.reasons).toEqual(chosen.body.chosen.reasons);
+    expect(frozen.skipBandsRpm).toEqual([{ min: 1000, max: 1100 }]);
+    expect(frozen.curves[0].label).toBe('Impeller');
+    expect(frozen.curves[0].speedRpm.length).toBeGreaterThan(100);
+
+    const pdf = await t.app.get(PurchasingService).reportOf(design, false);
+    const wanted = [
+      'Whole machine over the running range',
+      'Source Impeller: unbalance of a 40.0 kg rotor balanced to G6.3',
+      'Skip bands of the drive: 1000 rpm',
+      'Verdict: does not meet the requirements',
+      `Crossing: the ${frozen.crossings[0].mode} mode`,
+      'Whole-machine transmissibility T (log) against shaft speed',
+    ];
+    expect(wanted.filter((text) => !pdfHasText(pdf, text))).toEqual([]);
   });
 
   it('the curves route refuses a candidate that is not in the catalog, and neither or both of a mount and a series', async () => {
