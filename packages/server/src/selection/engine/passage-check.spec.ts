@@ -144,7 +144,7 @@ describe('start-up passage (docs/engineering/start-up-passage.md)', () => {
     expect(noUnbalance.notes).toContain(
       'Start-up and coast-down: nothing to check (no unbalance source is given; the passage through the modes follows unbalance only).',
     );
-    const noSpeed = judge({ sources: [force] });
+    const noSpeed = judge({ orders: [], sources: [force] });
     expect(noSpeed.passage).toEqual([]);
     expect(noSpeed.notes.some((n) => n.startsWith('Start-up and coast-down: nothing to check (no shaft speed'))).toBe(true);
     // a running range below every mode passes none

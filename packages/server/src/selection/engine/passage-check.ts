@@ -10,7 +10,7 @@
  * stiffness: the motion at a crossing does not depend on the stiffness factor (§2). Without the
  * model (inertia unknown) there are no findings and the candidate shows no passage.
  */
-import { describeModeMotion, resonancePassage, wholeMachineModes } from '@tacet/vibration';
+import { describeModeMotion, isVibrationInputError, resonancePassage, wholeMachineModes } from '@tacet/vibration';
 import { formatHz, formatNumber } from '../selection-format.js';
 import type { SelectionProblem } from '../selection-problem.js';
 import type { CandidatePassage } from '../selection.types.js';
@@ -66,7 +66,14 @@ export class PassageCheck implements FinalistCheck {
     if (this.findings.has(c)) return;
     this.wholeMachine.check(c);
     if (!this.wholeMachine.findingsOf(c)?.result) return;
-    const findings = this.passageOf(c);
+    let findings: PassageFindings;
+    try {
+      findings = this.passageOf(c);
+    } catch (error) {
+      // a model the verdict could sweep but the modes cannot resolve (a degenerate inertia): no passage, as without the model
+      if (!isVibrationInputError(error)) throw error;
+      return;
+    }
     if (findings.crossings.some((x) => !(x.motionMm <= findings.limitMm))) this.store.fail[c] |= FAIL.passage;
     this.findings.set(c, findings);
   }
