@@ -5,7 +5,7 @@
  * doing the same arithmetic on the same rows. Run from the repository root after building:
  *
  *   npm run build -w @tacet/vibration && npm run build -w @tacet/server
- *   npx tsx tools/bench/selection-model2.bench.ts       (--rows N, --requests N, --keep)
+ *   npx tsx tools/bench/selection-model2.bench.ts       (--rows N, --requests N, --min-isolation PCT, --keep)
  *
  * The bare loop is the floor PRODUCT.md describes: the rows already in memory in typed arrays
  * (read once from the server's database file), no framework, plus the HTTP round trip of a
@@ -88,7 +88,8 @@ const OPERATING = {
     },
   ],
 };
-const CRITERIA = { minIsolationPct: 85, minUtilization: 0.5, maxUtilization: 1.0 };
+/** `--min-isolation 99.5` shows the cost when few or no candidates pass (every one is then judged, selection.md §21). */
+const CRITERIA = { minIsolationPct: arg('min-isolation', 85), minUtilization: 0.5, maxUtilization: 1.0 };
 /** docs/engineering/selection.md §20 (common practice). */
 const TOLERANCE: Record<string, number> = {
   elastomer_pad: 20,
