@@ -17,6 +17,7 @@ import {
   type WholeMachineModel,
   hystereticDamping,
   prepareWholeMachine,
+  resonancePassage,
   sourceAmplitudeN,
   sourceFrequencyHz,
   speedSweep,
@@ -122,6 +123,8 @@ function forceVector(s: SpeedSource, amplitude: number): C[] {
 interface Reference {
   mountForces: C[][];
   mountPeaks: number[];
+  /** Peak motion of each mount point over a cycle [m] (start-up passage, docs/engineering/start-up-passage.md §1). */
+  motionPeaks: number[];
   transmissibility: number;
 }
 
@@ -154,8 +157,16 @@ function referenceResponse(s: SpeedSource, f: number, amplitude: number): Refere
   const q = math.lusolve(A, load) as math.Matrix;
   const mountForces: C[][] = [];
   const mountPeaks: number[] = [];
+  const motionPeaks: number[] = [];
   for (const mt of MOUNTS) {
     const u = math.multiply(math.matrix(kinematics(arm(mt.p))), q) as math.Matrix;
+    const uk = [0, 1, 2].map((k) => u.get([k, 0]) as C);
+    motionPeaks.push(
+      peakByPhaseSearch(
+        uk.map((v) => v.re),
+        uk.map((v) => v.im),
+      ),
+    );
     const fm = [0, 1, 2].map((k) => math.multiply(math.multiply(dampingFactor(mt, w), mt.k[k]), u.get([k, 0])) as C);
     mountForces.push(fm);
     mountPeaks.push(
@@ -165,7 +176,7 @@ function referenceResponse(s: SpeedSource, f: number, amplitude: number): Refere
       ),
     );
   }
-  return { mountForces, mountPeaks, transmissibility: mountPeaks.reduce((a, b) => a + b, 0) / amplitude };
+  return { mountForces, mountPeaks, motionPeaks, transmissibility: mountPeaks.reduce((a, b) => a + b, 0) / amplitude };
 }
 
 describe('whole-machine response vs an independent 6-DOF model solved with mathjs (asymmetric machine, three sources)', () => {
@@ -200,6 +211,17 @@ describe('whole-machine response vs an independent 6-DOF model solved with mathj
       }
     });
   }
+
+  it('CV-42: start-up passage — the motion at the mounts at each mode the unbalance crosses below 700 rpm agrees within 1e-6', () => {
+    const source = SOURCES[0].source;
+    const passage = resonancePassage(sys, { sources: [source], minRpm: 700, maxRpm: MAX_RPM });
+    expect(passage.length).toBeGreaterThanOrEqual(3);
+    for (const p of passage) {
+      expect(p.speedRpm).toBeLessThan(700);
+      const ref = referenceResponse(source, p.modeFrequencyHz, sourceAmplitudeN(source, p.speedRpm, MAX_RPM));
+      expect(Math.abs(p.motionM / Math.max(...ref.motionPeaks) - 1)).toBeLessThan(1e-6);
+    }
+  });
 
   it('the case is a real test: asymmetric coupling spreads a vertical force into horizontal mount forces, and a mode lies in the range', () => {
     const ref = referenceResponse(SOURCES[2].source, 100, 160);

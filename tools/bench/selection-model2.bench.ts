@@ -15,7 +15,8 @@
  * `limit` failing ones — the rigid-body modes and one whole-machine sweep per source over the
  * range stretched by the stiffness band, with the @tacet/vibration kernel (docs/engineering/selection.md §19–§21; the kernel's own bare-loop
  * comparison is tools/bench/whole-machine.bench.ts), and the response per source at the worst
- * point of each returned candidate. The machine and the catalog are invented.
+ * point of each returned candidate, and the start-up passage through the modes below the range
+ * (docs/engineering/start-up-passage.md §1). The machine and the catalog are invented.
  */
 import { mkdtempSync, readFileSync, rmSync, statSync } from 'node:fs';
 import { tmpdir } from 'node:os';
@@ -30,6 +31,7 @@ import {
   prepareMountLayout,
   prepareWholeMachine,
   resolveOperatingSources,
+  resonancePassage,
   rigidBodyModes,
   selectSizesForLevellingInto,
   sourceAmplitudeN,
@@ -272,6 +274,7 @@ function bareSelection(rows: Rows): { judged: number; passing: number } {
   // judge in score order until LIMIT pass: modes, then the sweeps over the band
   candidates.sort((a, b) => score[b] - score[a]);
   const { min, max } = forcing.speedRangeRpm!;
+  const unbalance = forcing.sources.filter((s) => s.unbalance !== undefined && s.frequencyHz === undefined);
   const judgedCache = new Map<number, { worst: number; factor: number; speeds: number[] }>();
   const judge = (r: number) => {
     const kz = rows.kv[r] * rows.nd[r];
@@ -314,6 +317,8 @@ function bareSelection(rows: Rows): { judged: number; passing: number } {
         worstFactor = factor;
       }
     }
+    // start-up passage through the modes below the running range (docs/engineering/start-up-passage.md §1)
+    resonancePassage(system, { sources: unbalance, minRpm: min, maxRpm: max, modeFrequenciesHz: modeHz });
     const found = { worst, factor: worstFactor, speeds: worstSpeeds };
     judgedCache.set(r, found);
     return found;

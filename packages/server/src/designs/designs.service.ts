@@ -202,6 +202,7 @@ export class DesignsService {
                 speedRangeRpm: problem.forcing.speedRangeRpm,
                 skipBandsRpm: problem.forcing.skipBandsRpm,
                 requirementTransmissibility: problem.transmissibilityTarget,
+                ...(candidate.passage ? { passage: candidate.passage, passageLimitMm: candidate.passageLimitMm } : {}),
               },
             }
           : {}),

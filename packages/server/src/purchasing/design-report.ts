@@ -5,6 +5,7 @@ import type { Design } from '../designs/design.entity.js';
 import type { CandidateMode, LabelledFrequency, MountSnapshot } from '../selection/selection.types.js';
 import type { Verification } from '../verifications/verification.entity.js';
 import { bomTotals } from './bom-export.js';
+import { passageReportLines } from './report-passage.js';
 import { restraintReportLines } from './report-restraint.js';
 import { speedChart, wholeMachineReportLines } from './report-whole-machine.js';
 import { verdictReportLines } from './report-verdict.js';
@@ -150,6 +151,8 @@ export function designReportPdf(design: Design, options: ReportOptions): Promise
     heading('Criteria');
     body(`Minimum isolation ${fmt(criteria.minIsolationPct, 1)} % of the whole machine over the running range`);
     if (criteria.stiffnessTolerancePct !== undefined) body(`Stiffness tolerance ±${fmt(criteria.stiffnessTolerancePct, 1)} %`);
+    if (criteria.maxResonantMotionMm !== undefined)
+      body(`Largest motion passing a mode on start-up ${fmt(criteria.maxResonantMotionMm, 1)} mm`);
     body(
       `Load utilisation between ${fmt(criteria.minUtilization * 100, 0)} % and ${fmt(criteria.maxUtilization * 100, 0)} % of the rated load`,
     );
@@ -194,6 +197,7 @@ export function designReportPdf(design: Design, options: ReportOptions): Promise
     heading(whole.heading);
     for (const paragraph of whole.paragraphs) body(paragraph);
     if (snapshot?.wholeMachine) speedChart(doc, snapshot.wholeMachine);
+    for (const line of passageReportLines(snapshot?.wholeMachine, candidate)) body(line);
     const mounts = snapshot?.mounts ?? [];
     if (mounts.length) {
       heading('Chosen mounts — catalog data as frozen');

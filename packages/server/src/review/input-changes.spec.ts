@@ -69,7 +69,7 @@ describe('inputChanges (what changed between two submissions)', () => {
         skipBandsRpm: [{ min: 1000, max: 1100 }],
         sources: [{ ...impeller, rotorMassKg: 35, at: { x: 0.3, y: 0, z: 0.55 } }],
       },
-      criteria: { ...base.criteria, stiffnessTolerancePct: 15 },
+      criteria: { ...base.criteria, stiffnessTolerancePct: 15, maxResonantMotionMm: 4 },
     };
     const changes = inputChanges({ input: before, chosen: null }, { input: after, chosen: null }, context);
     const byField = Object.fromEntries(changes.map((c) => [c.field, c]));
@@ -83,6 +83,12 @@ describe('inputChanges (what changed between two submissions)', () => {
     expect(byField['operating.skipBandsRpm']).toMatchObject({ label: 'Skip bands', beforeText: null, afterText: '1000–1100 rpm' });
     expect(byField['operating.motorPoles']).toMatchObject({ label: 'Motor poles', after: 4 });
     expect(byField['criteria.stiffnessTolerancePct']).toMatchObject({ label: 'Stiffness tolerance', quantity: 'percent', after: 15 });
+    // in metres, like every length the units layer converts (4 mm)
+    expect(byField['criteria.maxResonantMotionMm']).toMatchObject({
+      label: 'Largest motion on start-up',
+      quantity: 'deflection',
+      after: 0.004,
+    });
     for (const change of changes) expect(change.label).not.toMatch(/[a-z][A-Z]|_/);
   });
 

@@ -112,6 +112,7 @@ const RULES: Record<string, LeafRule> = {
   'criteria.maxUtilization': { label: 'Highest load utilisation', quantity: 'percent', scale: (u) => u * 100 },
   'criteria.ambientTempC': { label: 'Ambient temperature', quantity: 'temperature' },
   'criteria.weightMarginPct': { label: 'Weight margin', quantity: 'percent' },
+  'criteria.maxResonantMotionMm': { label: 'Largest motion on start-up', quantity: 'deflection', scale: (mm) => mm / 1000 },
   'criteria.mountTypes': {
     label: 'Mount types allowed',
     quantity: null,

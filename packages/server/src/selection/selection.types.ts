@@ -89,6 +89,17 @@ export interface CandidateCrossing {
   speedRpm: number;
 }
 
+/** A rigid-body mode passed through below the running range on start-up and coast-down (docs/engineering/start-up-passage.md §1). */
+export interface CandidatePassage {
+  /** The mode's motion, named as the crossings name it. */
+  mode: string;
+  modeFrequencyHz: number;
+  /** n = 60·f/order of the unbalance that crosses it, below the lowest running speed, rpm. */
+  speedRpm: number;
+  /** Steady peak motion at the mounts there: the largest over the mounts and the unbalance sources at that speed, mm. */
+  motionMm: number;
+}
+
 /** The whole-machine response of one source at one speed, at the governing stiffness factor. */
 export interface WholeMachinePerFrequency {
   source: string;
@@ -178,7 +189,11 @@ export interface Candidate {
   crossings?: CandidateCrossing[];
   /** The second mass case, when a component gives `altMassKg`: its figures (the verdict covers it). */
   altMassCase?: CandidateAltMassCase;
-  /** Follows the whole-machine verdict in both mass cases (with the load, deflection, mode and restraint checks). */
+  /** Modes passed through below the running range on start-up, lowest speed first (with the whole-machine verdict; [] when nothing is passed). */
+  passage?: CandidatePassage[];
+  /** The largest motion the passage is checked against, mm (the criteria's or the default). */
+  passageLimitMm?: number;
+  /** Follows the whole-machine verdict in both mass cases (with the load, deflection, mode, passage and restraint checks). */
   passes: boolean;
   /** Why it fails, in words a user understands (empty when it passes). */
   reasons: string[];
@@ -307,5 +322,8 @@ export interface DesignSnapshot {
     speedRangeRpm: { min: number; max: number } | null;
     skipBandsRpm: { min: number; max: number }[];
     requirementTransmissibility: number;
+    /** The start-up passage and its limit, mm (absent in snapshots taken before it existed). */
+    passage?: CandidatePassage[];
+    passageLimitMm?: number;
   };
 }

@@ -761,6 +761,10 @@ export interface components {
       wholeMachine?: components["schemas"]["CandidateWholeMachineDto"];
       /** @description crossings of the source orders with the modes inside the running range */
       crossings?: components["schemas"]["CandidateCrossingDto"][];
+      /** @description start-up and coast-down: each rigid-body mode an unbalance source crosses below the lowest running speed, lowest speed first ([] when nothing is passed or there is no unbalance; absent without the whole-machine verdict) */
+      passage?: components["schemas"]["CandidatePassageDto"][];
+      /** @description the largest motion the passage is checked against, mm (the criteria’s maxResonantMotionMm or the default) */
+      passageLimitMm?: number;
       /** @description follows the whole-machine verdict, with the load, deflection, mode and restraint checks */
       passes: boolean;
       reasons: string[];
@@ -787,6 +791,15 @@ export interface components {
       coupled: boolean;
       /** @description share of the kinetic energy per coordinate, summing to 1 (absent in candidates chosen before it was kept) */
       energyFractions?: components["schemas"]["ModeEnergyFractionsDto"];
+    };
+    CandidatePassageDto: {
+      /** @description the mode by its motion, as the crossings name it */
+      mode: string;
+      modeFrequencyHz: number;
+      /** @description n = 60·f/order of the unbalance that crosses the mode, below the lowest running speed, rpm */
+      speedRpm: number;
+      /** @description steady peak motion at the mounts there, mm: the largest over the mounts and the unbalance sources at that speed */
+      motionMm: number;
     };
     CandidatePointDto: {
       label: string;
@@ -1057,6 +1070,11 @@ export interface components {
        * @example 15
        */
       stiffnessTolerancePct?: number;
+      /**
+       * @description largest steady peak motion at the mounts when start-up or coast-down passes a rigid-body mode below the running range, mm (default 6 mm, or the gap to the restraints when smaller; docs/engineering/start-up-passage.md §3)
+       * @example 6
+       */
+      maxResonantMotionMm?: number;
     };
     CurvesCandidateDto: {
       kind: components["schemas"]["CandidateKind"];

@@ -379,6 +379,18 @@ export class CriteriaDto {
   @Min(0, { message: 'The stiffness tolerance cannot be negative' })
   @Max(50, { message: 'The stiffness tolerance is at most 50 %' })
   stiffnessTolerancePct?: number;
+
+  @ApiPropertyOptional({
+    example: 6,
+    description:
+      'largest steady peak motion at the mounts when start-up or coast-down passes a rigid-body mode below the running range, mm ' +
+      '(default 6 mm, or the gap to the restraints when smaller; docs/engineering/start-up-passage.md §3)',
+  })
+  @IsOptional()
+  @IsFiniteNumber({ message: 'The largest motion on start-up must be a number of millimetres' })
+  @IsPositive({ message: 'The largest motion on start-up must be more than 0 mm' })
+  @Max(1000, { message: 'The largest motion on start-up must be at most 1000 mm' })
+  maxResonantMotionMm?: number;
 }
 
 const uniqueLabel = (point: MountPointDto) => point?.label;

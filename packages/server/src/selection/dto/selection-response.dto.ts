@@ -127,6 +127,17 @@ export class CandidateCrossingDto {
   @ApiProperty() speedRpm: number;
 }
 
+export class CandidatePassageDto {
+  @ApiProperty({ description: 'the mode by its motion, as the crossings name it' }) mode: string;
+  @ApiProperty() modeFrequencyHz: number;
+  @ApiProperty({ description: 'n = 60·f/order of the unbalance that crosses the mode, below the lowest running speed, rpm' })
+  speedRpm: number;
+  @ApiProperty({
+    description: 'steady peak motion at the mounts there, mm: the largest over the mounts and the unbalance sources at that speed',
+  })
+  motionMm: number;
+}
+
 export class CandidateDto {
   @ApiProperty({ enum: ['uniform', 'series'], enumName: 'CandidateKind' }) kind: 'uniform' | 'series';
   @ApiPropertyOptional() mountId?: number;
@@ -170,6 +181,17 @@ export class CandidateDto {
     description: 'the second mass case (components[].altMassKg), when given; the verdict covers it',
   })
   altMassCase?: CandidateAltMassCaseDto;
+  @ApiPropertyOptional({
+    type: [CandidatePassageDto],
+    description:
+      'start-up and coast-down: each rigid-body mode an unbalance source crosses below the lowest running speed, lowest speed first ' +
+      '([] when nothing is passed or there is no unbalance; absent without the whole-machine verdict)',
+  })
+  passage?: CandidatePassageDto[];
+  @ApiPropertyOptional({
+    description: 'the largest motion the passage is checked against, mm (the criteria’s maxResonantMotionMm or the default)',
+  })
+  passageLimitMm?: number;
   @ApiProperty({ description: 'follows the whole-machine verdict (both mass cases), with the load, deflection, mode and restraint checks' })
   passes: boolean;
   @ApiProperty({ type: [String] }) reasons: string[];

@@ -16,7 +16,8 @@
  * - for every candidate at once (evaluate-isolation.ts): the bounce estimate at every disturbing
  *   frequency, in both mass cases, which only orders the candidates (it fails none);
  * - for the best candidates only, as finalist checks (ranking.ts `FinalistCheck`): the rigid-body
- *   modes (mode-check.ts: a mechanism) and the whole-machine verdict (whole-machine-check.ts);
+ *   modes (mode-check.ts: a mechanism), the whole-machine verdict (whole-machine-check.ts) and the
+ *   start-up passage through the modes below the running range (passage-check.ts);
  * - seismic restraint, when the input asks for it (restraint-check.ts): every candidate screened
  *   before scoring (no rating, or a uniform candidate's demand over its ratings), then the exact
  *   figures of the best ones as a finalist check.
@@ -67,6 +68,11 @@ export const FAIL = {
    * estimate where the model cannot be built; whole-machine-check.ts); selection.md §18.
    */
   massCase: 4096,
+  /**
+   * Start-up and coast-down: the steady motion at the mounts passing a mode below the running range
+   * above the largest motion allowed (passage-check.ts; docs/engineering/start-up-passage.md §1).
+   */
+  passage: 16384,
 } as const;
 
 /** The row checks that need a mount's details (DETAIL_COLUMNS); a candidate takes them once the details are loaded. */

@@ -11,6 +11,7 @@ import { FAIL } from './checks.js';
 import { altLoadsOf, seriesAltBuffers } from './mass-case.js';
 import type { CandidateStore } from './candidate-store.js';
 import type { ModeCheck } from './mode-check.js';
+import { passageFigures, type PassageCheck } from './passage-check.js';
 import type { RestraintCheck } from './restraint-check.js';
 import type { WholeMachineCheck } from './whole-machine-check.js';
 import { fillScoreInputs, newScoreInputs, type ScoreReferences } from './ranking.js';
@@ -23,10 +24,11 @@ export interface DescribeSources {
   modeCheck: ModeCheck;
   restraintCheck: RestraintCheck;
   wholeMachineCheck: WholeMachineCheck;
+  passageCheck: PassageCheck;
 }
 
 export function describeCandidate(
-  { store, problem, refs, modeCheck, restraintCheck, wholeMachineCheck }: DescribeSources,
+  { store, problem, refs, modeCheck, restraintCheck, wholeMachineCheck, passageCheck }: DescribeSources,
   c: number,
   supplierNames: ReadonlyMap<number, string>,
 ): Candidate {
@@ -74,6 +76,7 @@ export function describeCandidate(
     order,
     speedRpm,
   }));
+  const passage = passageCheck.findingsOf(c);
   const wording: WordingContext = {
     problem,
     store,
@@ -86,6 +89,7 @@ export function describeCandidate(
     restraint,
     wholeMachine: whole,
     altMassCase,
+    passage,
   };
   const price = store.price[c];
   const lead = store.lead[c];
@@ -107,6 +111,7 @@ export function describeCandidate(
     ...(restraint ? { restraint } : {}),
     ...(wholeMachine ? { wholeMachine, crossings } : {}),
     ...(altMassCase ? { altMassCase } : {}),
+    ...(passage ? { passage: passageFigures(passage), passageLimitMm: passage.limitMm } : {}),
     passes: store.fail[c] === 0,
     reasons: reasonsFor(wording),
     notes: notesFor(wording),

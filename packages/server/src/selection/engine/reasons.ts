@@ -15,6 +15,7 @@ import type { CandidateStore, PointMount } from './candidate-store.js';
 import { FAIL } from './checks.js';
 import { catalogAssumptionsFor } from './assumptions.js';
 import { MODE_SEPARATION, type ModeConflict, type ModeFindings } from './mode-check.js';
+import { passageNotes, passageReasons, type PassageFindings } from './passage-check.js';
 import type { WholeMachineFindings } from './whole-machine-check.js';
 import { SPRING_MIN_HORIZONTAL_RATIO, SPRING_RESERVE } from './spring-checks.js';
 
@@ -38,6 +39,8 @@ export interface WordingContext {
   wholeMachine: NonNullable<WholeMachineFindings['result']> | null;
   /** The figures of the second mass case (undefined without one). */
   altMassCase?: CandidateAltMassCase;
+  /** What the start-up passage check found (undefined when the candidate was not judged or the model could not be built). */
+  passage?: PassageFindings;
 }
 
 type Words = (x: WordingContext) => string[];
@@ -46,6 +49,7 @@ type Words = (x: WordingContext) => string[];
 export const REASONS: readonly (readonly [bit: number, words: Words])[] = [
   [FAIL.cgOutside, cgOutside],
   [FAIL.wholeMachine, wholeMachine],
+  [FAIL.passage, (x) => passageReasons(x.passage)],
   [FAIL.isolation, isolation],
   [FAIL.utilization, utilization],
   [FAIL.deflection, deflection],
@@ -74,6 +78,7 @@ export function notesFor(x: WordingContext): string[] {
   const notes: string[] = [];
   const rows = store.rowsOf(c);
   notes.push(...wholeMachineNotes(x));
+  notes.push(...passageNotes(x.passage));
   if (x.modes?.conflict?.kind === 'near') notes.push(`${modeConflict(x.modes.conflict)} The whole-machine verdict judges it.`);
   if (x.modes?.altConflict?.kind === 'near') {
     notes.push(`In the second mass case: ${modeConflict(x.modes.altConflict)} The whole-machine verdict judges it.`);

@@ -14,6 +14,7 @@
  *   5. mode-check.ts           finalist check: the six coupled rigid-body modes
  *      restraint-check.ts      finalist check: the restraint figures with each size's stiffness
  *      whole-machine-check.ts  finalist check: the whole-machine verdict over the running range and the stiffness band
+ *      passage-check.ts        finalist check: start-up and coast-down through the modes below the running range
  *   6. describe-candidate.ts   a candidate as the API shows it, with reasons.ts for the words
  *
  * checks.ts lists the checks (fail bits); catalog-tuple.ts the columns the engine reads. The
@@ -28,6 +29,7 @@ import { evaluateIsolation } from './evaluate-isolation.js';
 import { evaluateSeries } from './evaluate-series.js';
 import { evaluateUniform } from './evaluate-uniform.js';
 import { ModeCheck } from './mode-check.js';
+import { PassageCheck } from './passage-check.js';
 import { RestraintCheck } from './restraint-check.js';
 import { WholeMachineCheck, type SourceCurves } from './whole-machine-check.js';
 import { candidateOrder, rankCandidates, scoreAll, scoreReferences, type FinalistCheck, type ScoreReferences } from './ranking.js';
@@ -44,6 +46,7 @@ export class SelectionEvaluation {
   private readonly modeCheck: ModeCheck;
   private readonly restraintCheck: RestraintCheck;
   private readonly wholeMachineCheck: WholeMachineCheck;
+  private readonly passageCheck: PassageCheck;
   /** The checks run for the best candidates only, in this order (ranking.ts `FinalistCheck`). */
   private readonly finalistChecks: readonly FinalistCheck[];
   private readonly better: (a: number, b: number) => boolean;
@@ -67,7 +70,8 @@ export class SelectionEvaluation {
     this.better = candidateOrder(store);
     this.modeCheck = new ModeCheck(store, problem);
     this.wholeMachineCheck = new WholeMachineCheck(store, problem);
-    this.finalistChecks = [this.restraintCheck, this.modeCheck, this.wholeMachineCheck];
+    this.passageCheck = new PassageCheck(store, problem, this.wholeMachineCheck);
+    this.finalistChecks = [this.restraintCheck, this.modeCheck, this.wholeMachineCheck, this.passageCheck];
   }
 
   /**
@@ -143,6 +147,7 @@ export class SelectionEvaluation {
         modeCheck: this.modeCheck,
         restraintCheck: this.restraintCheck,
         wholeMachineCheck: this.wholeMachineCheck,
+        passageCheck: this.passageCheck,
       },
       c,
       supplierNames,
