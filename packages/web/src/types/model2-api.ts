@@ -1,0 +1,115 @@
+/**
+ * The whole-machine additions to the design input and the selection result ("Model 2" in the
+ * product spec), as the web reads and sends them. SI units (m, kg, N, Hz; speeds in rpm).
+ *
+ * Written from the spec while the server's DTOs are being built; once `schema.gen.ts` carries
+ * them, these become aliases of the generated types (`npm run api-types`). Every field is
+ * optional on the result side so that a server without the whole-machine model still reads.
+ */
+import type { Vec3 } from './design-api';
+
+export const SOURCE_KINDS = ['unbalance', 'force'] as const;
+export type SourceKind = (typeof SOURCE_KINDS)[number];
+export const SOURCE_AXES = ['x', 'y', 'z'] as const;
+export type SourceAxis = (typeof SOURCE_AXES)[number];
+
+/**
+ * One disturbing source: a rotating unbalance (rotor mass and balance grade, normal to `axis`) or
+ * a harmonic force (amplitude along `axis`), at an order of the shaft speed or a fixed frequency.
+ */
+export interface OperatingSource {
+  label: string;
+  kind: SourceKind;
+  /** Where it acts [m], in the design's axes. */
+  at: Vec3;
+  /** Shaft axis of an unbalance; the line of action of a force. */
+  axis: SourceAxis;
+  /** Multiple of the shaft speed (default 1). */
+  order?: number;
+  rotorMassKg?: number;
+  /** Balance grade G [mm/s] (ISO 21940-11); default 6.3. */
+  balanceGradeMmPerS?: number;
+  amplitudeN?: number;
+  /** A fixed frequency instead of an order [Hz] (e.g. twice the supply frequency). */
+  frequencyHz?: number;
+}
+
+/** A speed band the drive skips [rpm]. */
+export interface SkipBand {
+  min: number;
+  max: number;
+}
+
+/** What the whole-machine model adds to the operating conditions. */
+export interface Model2Operating {
+  sources?: OperatingSource[];
+  skipBandsRpm?: SkipBand[];
+  /** Motor poles: the magnetic force follows the drive (2·poles·n/120). */
+  motorPoles?: number;
+}
+
+export interface WholeMachinePoint {
+  /** The source's label (or the default vertical force's name). */
+  source: string;
+  frequencyHz: number;
+  speedRpm?: number;
+  transmissibility: number;
+  /** Peak force per mount [N] for the source's amplitude (per unit force for the default source). */
+  perPoint: { label: string; forceN: number }[];
+}
+
+export interface WholeMachineWorst {
+  transmissibility: number;
+  efficiencyPct: number;
+  frequencyHz: number;
+  speedRpm?: number;
+  source: string;
+  /** The end of the stiffness band that governed (e.g. 1.15 = stiff end). */
+  stiffnessFactor?: number;
+}
+
+export interface WholeMachine {
+  worst: WholeMachineWorst;
+  perFrequency: WholeMachinePoint[];
+}
+
+/** A speed where an order of a source meets a rigid-body mode. */
+export interface Crossing {
+  /** Mode number (1-based, as in the modes table). */
+  mode: number;
+  modeFrequencyHz: number;
+  source: string;
+  order: number;
+  speedRpm: number;
+}
+
+/** Start-up and coast-down: steady motion at a mode below the running range. */
+export interface PassagePoint {
+  mode: number;
+  modeFrequencyHz: number;
+  speedRpm: number;
+  motionMm: number;
+}
+
+/** What the whole-machine model adds to a candidate. */
+export interface Model2Candidate {
+  wholeMachine?: WholeMachine;
+  crossings?: Crossing[];
+  passage?: PassagePoint[];
+  assumptions?: string[];
+}
+
+/** Whole-machine additions to the criteria. */
+export interface Model2Criteria {
+  stiffnessTolerancePct?: number;
+  maxResonantMotionMm?: number;
+}
+
+/**
+ * One source's transmissibility against speed over the running range, when the server sends
+ * the curve: T at the nominal stiffness and, with a stiffness band, at its two ends.
+ */
+export interface SpeedCurve {
+  source: string;
+  points: { speedRpm: number; transmissibility: number; low?: number; high?: number }[];
+}
