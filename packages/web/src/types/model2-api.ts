@@ -75,8 +75,8 @@ export interface WholeMachine {
 
 /** A speed where an order of a source meets a rigid-body mode. */
 export interface Crossing {
-  /** Mode number (1-based, as in the modes table). */
-  mode: number;
+  /** The mode: its number in the modes table (1-based) or its name. */
+  mode: number | string;
   modeFrequencyHz: number;
   source: string;
   order: number;
@@ -85,7 +85,8 @@ export interface Crossing {
 
 /** Start-up and coast-down: steady motion at a mode below the running range. */
 export interface PassagePoint {
-  mode: number;
+  /** The mode: its number in the modes table (1-based) or its name. */
+  mode: number | string;
   modeFrequencyHz: number;
   speedRpm: number;
   motionMm: number;
