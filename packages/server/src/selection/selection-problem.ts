@@ -205,20 +205,31 @@ export function prefilterBounds(problem: SelectionProblem): PrefilterBounds {
 
 /**
  * The disturbing frequencies of a design's operating conditions (lowest first), with labels:
- * shaft orders, vane pass and 2× line from @tacet/vibration, plus the extra frequencies.
+ * shaft orders (with the sources' orders), vane pass and twice the supply frequency (following the
+ * speed with motor poles on a drive) from @tacet/vibration, plus the extra frequencies and the
+ * sources' fixed frequencies. These feed the quick figures (the bounce estimate); the verdict
+ * sweeps the sources over the running range (engine/whole-machine-check.ts).
  * @throws VibrationInputError with `operating.`-prefixed field paths
  */
 export function designFrequencies(operating: OperatingConditions): LabelledFrequency[] {
+  checkOperating(operating);
+  const sources = operating.sources ?? [];
   let list: LabelledFrequency[];
   try {
     const hasSource = operating.speedRpm !== undefined || operating.speedRangeRpm !== undefined || operating.lineFrequencyHz !== undefined;
+    const orders = [...operating.orders];
+    for (const source of sources) {
+      const order = source.order ?? 1;
+      if (source.frequencyHz === undefined && !orders.includes(order)) orders.push(order);
+    }
     list = hasSource
       ? disturbingFrequencies({
           speedRpm: operating.speedRpm,
           speedRangeRpm: operating.speedRangeRpm ? { ...operating.speedRangeRpm } : undefined,
-          orders: operating.orders,
+          orders,
           vaneCount: operating.vaneCount,
           lineFrequencyHz: operating.lineFrequencyHz,
+          motorPoles: operating.speedRangeRpm ? operating.motorPoles : undefined,
         }).map(({ frequencyHz, label }) => ({ frequencyHz, label }))
       : [];
   } catch (error) {
@@ -230,6 +241,11 @@ export function designFrequencies(operating: OperatingConditions): LabelledFrequ
     throw error;
   }
   for (const hz of operating.extraFrequenciesHz ?? []) list.push({ frequencyHz: hz, label: `extra ${formatHz(hz)}` });
+  for (const source of sources) {
+    const hz = source.frequencyHz;
+    if (hz !== undefined && !list.some((f) => f.frequencyHz === hz))
+      list.push({ frequencyHz: hz, label: `${source.label} ${formatHz(hz)}` });
+  }
   if (list.length === 0) {
     throw new VibrationInputError(
       'operating',
@@ -241,4 +257,32 @@ export function designFrequencies(operating: OperatingConditions): LabelledFrequ
     throw new VibrationInputError('operating', `gives ${list.length} disturbing frequencies; at most ${SELECTION_LIMITS.frequencies}`);
   }
   return list.sort((a, b) => a.frequencyHz - b.frequencyHz);
+}
+
+/**
+ * What the DTO cannot see field by field: a source turning with the shaft needs a speed, skip
+ * bands need a speed range and must leave some of it to run at.
+ * @throws VibrationInputError with `operating.`-prefixed field paths
+ */
+export function checkOperating(operating: OperatingConditions): void {
+  const hasSpeed = operating.speedRpm !== undefined || operating.speedRangeRpm !== undefined;
+  (operating.sources ?? []).forEach((source, i) => {
+    if (!hasSpeed && source.frequencyHz === undefined) {
+      const what = source.kind === 'unbalance' ? 'an unbalance turns with the shaft' : 'a force at an order of the shaft speed';
+      throw new VibrationInputError(`operating.sources.${i}`, `${what}: give the speed or the speed range`, 'empty');
+    }
+  });
+  const bands = operating.skipBandsRpm ?? [];
+  if (bands.length === 0) return;
+  const range = operating.speedRangeRpm;
+  if (!range) throw new VibrationInputError('operating.skipBandsRpm', 'skip bands need a speed range (a drive)', 'empty');
+  const sorted = [...bands].sort((a, b) => a.min - b.min);
+  let covered = range.min;
+  for (const band of sorted) {
+    if (band.min > covered) break;
+    covered = Math.max(covered, band.max);
+  }
+  if (covered >= range.max) {
+    throw new VibrationInputError('operating.skipBandsRpm', 'the skip bands leave no running speed in the speed range', 'empty');
+  }
 }

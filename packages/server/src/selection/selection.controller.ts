@@ -19,6 +19,6 @@ export class SelectionController {
   @ApiOkResponse({ type: SelectionResponseDto, description: 'Ranked candidates, passing first, each with its reasons' })
   @ApiBadRequestResponse({ description: 'Input the calculation cannot use, with the field named' })
   select(@Body() dto: SelectionRequestDto): Promise<SelectionResult> {
-    return this.selection.select({ ...dto, frequencies: dto.disturbingFrequenciesHz.map((frequencyHz) => ({ frequencyHz })) });
+    return this.selection.selectStateless(dto);
   }
 }

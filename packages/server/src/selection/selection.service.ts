@@ -1,5 +1,12 @@
 import { BadRequestException, Injectable } from '@nestjs/common';
-import { SELECTION_LIMITS, type Component, type Criteria, type DesignInput, type MountPoint } from './dto/design-input.dto.js';
+import {
+  SELECTION_LIMITS,
+  type Component,
+  type Criteria,
+  type DesignInput,
+  type MountPoint,
+  type OperatingConditions,
+} from './dto/design-input.dto.js';
 import type { RestraintInput } from './dto/restraint.dto.js';
 import { SelectionCatalogReader } from './selection-catalog.reader.js';
 import type { DetailsLoader } from './engine/catalog-tuple.js';
@@ -11,6 +18,8 @@ export interface SelectionRequest {
   components: readonly Component[];
   mountPoints: readonly MountPoint[];
   frequencies: readonly { frequencyHz: number; label?: string }[];
+  /** The operating conditions the frequencies came from (sources, speed range, skip bands); absent: the frequencies alone. */
+  operating?: OperatingConditions;
   criteria: Criteria;
   restraint?: RestraintInput;
   limit?: number;
@@ -55,6 +64,18 @@ export class SelectionService {
       pointLoadsN: Array.from(problem.equalLoadsN),
       disturbingFrequenciesHz: Array.from(problem.frequenciesHz),
     };
+  }
+
+  /**
+   * The stateless selection: `operating` (as in a design, field paths `operating.…`) or the bare
+   * disturbing frequencies (a vertical force through the CG at each).
+   */
+  selectStateless(body: Omit<SelectionRequest, 'frequencies'> & { disturbingFrequenciesHz?: readonly number[] }): Promise<SelectionResult> {
+    const { disturbingFrequenciesHz, ...rest } = body;
+    const frequencies = body.operating
+      ? withInputErrors(() => designFrequencies(body.operating as OperatingConditions))
+      : (disturbingFrequenciesHz ?? []).map((frequencyHz) => ({ frequencyHz }));
+    return this.select({ ...rest, frequencies });
   }
 
   /** The disturbing frequencies of a design's operating conditions (400 naming `input.operating…` when there are none). */

@@ -993,6 +993,11 @@ export interface components {
        * @example 10
        */
       weightMarginPct?: number;
+      /**
+       * @description stiffness tolerance of the catalog figures, ± %; the verdict is the worst over the band (default by mount type, docs/engineering/whole-machine.md §7)
+       * @example 15
+       */
+      stiffnessTolerancePct?: number;
     };
     /** @enum {string} */
     DampingModel: "viscous" | "hysteretic";
@@ -1444,6 +1449,52 @@ export interface components {
        * @example []
        */
       extraFrequenciesHz?: number[];
+      /** @description where the forces act (whole-machine model); absent or empty: a vertical force through the CG at every disturbing frequency */
+      sources?: components["schemas"]["OperatingSourceDto"][];
+      /** @description speed bands the drive skips, rpm (with a speed range only) */
+      skipBandsRpm?: components["schemas"]["SkipBandDto"][];
+      /**
+       * @description motor poles on a drive: the motor's magnetic force follows the speed (2·poles·n/120 Hz) instead of twice the supply frequency
+       * @example 4
+       */
+      motorPoles?: number;
+    };
+    OperatingSourceDto: {
+      /** @example Impeller */
+      label: string;
+      /** @description unbalance: m_r·e·ω² rotating in the plane normal to the axis; force: a harmonic force along the axis */
+      kind: components["schemas"]["SourceKind"];
+      /** @description where the force acts, m (same axes as the components) */
+      at: components["schemas"]["SourcePointDto"];
+      /** @description shaft axis of an unbalance; direction of a force */
+      axis: components["schemas"]["SourceAxis"];
+      /**
+       * @description multiple of the shaft speed the source turns or acts at
+       * @default 1
+       * @example 1
+       */
+      order?: number;
+      /**
+       * @description kg, the rotor of an unbalance (required for an unbalance)
+       * @example 45
+       */
+      rotorMassKg?: number;
+      /**
+       * @description mm/s, balance grade G = e·Ω (ISO 21940-11); unbalance only
+       * @default 6.3
+       * @example 6.3
+       */
+      balanceGradeMmPerS?: number;
+      /**
+       * @description N, peak amplitude of a force (required for a force)
+       * @example 800
+       */
+      amplitudeN?: number;
+      /**
+       * @description Hz, a force at a fixed frequency (e.g. twice the supply) instead of an order
+       * @example 100
+       */
+      frequencyHz?: number;
     };
     OutboxAttachmentDto: {
       /** @example bom.csv */
@@ -1775,14 +1826,16 @@ export interface components {
       components: components["schemas"]["ComponentDto"][];
       mountPoints: components["schemas"]["MountPointDto"][];
       /**
-       * @description Hz, each > 0
+       * @description Hz, each > 0: a vertical force through the CG at each (give this or operating)
        * @example [
        *       24.67,
        *       49.33,
        *       100
        *     ]
        */
-      disturbingFrequenciesHz: number[];
+      disturbingFrequenciesHz?: number[];
+      /** @description the machine's operating conditions, as in a design (sources, speed range, skip bands); instead of disturbingFrequenciesHz */
+      operating?: components["schemas"]["OperatingConditionsDto"];
       criteria: components["schemas"]["CriteriaDto"];
       /** @description seismic restraint (ASCE 7-16 §13.3.1); absent: not checked */
       restraint?: components["schemas"]["RestraintInputDto"];
@@ -1811,6 +1864,45 @@ export interface components {
       unitSystem: components["schemas"]["UnitSystem"];
       /** @description Signed in with a temporary password an admin set: a new one must be chosen first */
       mustChangePassword: boolean;
+    };
+    SkipBandDto: {
+      /**
+       * @description rpm
+       * @example 1100
+       */
+      min: number;
+      /**
+       * @description rpm
+       * @example 1180
+       */
+      max: number;
+    };
+    /**
+     * @description shaft axis of an unbalance; direction of a force
+     * @enum {string}
+     */
+    SourceAxis: "x" | "y" | "z";
+    /**
+     * @description unbalance: m_r·e·ω² rotating in the plane normal to the axis; force: a harmonic force along the axis
+     * @enum {string}
+     */
+    SourceKind: "unbalance" | "force";
+    SourcePointDto: {
+      /**
+       * @description m, along the skid
+       * @example 0.65
+       */
+      x: number;
+      /**
+       * @description m, lateral
+       * @example 0
+       */
+      y: number;
+      /**
+       * @description m, up
+       * @example 0.5
+       */
+      z: number;
     };
     SpeedRangeDto: {
       /**
@@ -3865,6 +3957,8 @@ export const rfqStatusValues: ReadonlyArray<FlattenedDeepRequired<components>["s
 export const rigidBodyModeValues: ReadonlyArray<FlattenedDeepRequired<components>["schemas"]["RigidBodyMode"]> = ["surge", "sway", "bounce", "roll", "pitch", "yaw"];
 export const roleValues: ReadonlyArray<FlattenedDeepRequired<components>["schemas"]["Role"]> = ["admin", "catalog_manager", "engineer", "purchaser", "viewer"];
 export const seismicForceLimitValues: ReadonlyArray<FlattenedDeepRequired<components>["schemas"]["SeismicForceLimit"]> = ["formula", "minimum", "maximum"];
+export const sourceAxisValues: ReadonlyArray<FlattenedDeepRequired<components>["schemas"]["SourceAxis"]> = ["x", "y", "z"];
+export const sourceKindValues: ReadonlyArray<FlattenedDeepRequired<components>["schemas"]["SourceKind"]> = ["unbalance", "force"];
 export const transitionTargetValues: ReadonlyArray<FlattenedDeepRequired<components>["schemas"]["TransitionTarget"]> = ["in_review", "draft", "released"];
 export const unitSystemValues: ReadonlyArray<FlattenedDeepRequired<components>["schemas"]["UnitSystem"]> = ["SI", "US"];
 export const verificationKindValues: ReadonlyArray<FlattenedDeepRequired<components>["schemas"]["VerificationKind"]> = ["frf", "impact"];

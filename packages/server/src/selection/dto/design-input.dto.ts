@@ -19,7 +19,8 @@ import {
 } from 'class-validator';
 import { MOUNT_TYPES, type MountType } from '../../catalog/mount-rules.js';
 import { RestraintInputDto } from './restraint.dto.js';
-import { IsAbove, IsFiniteNumber, NotTogetherWith } from './validators.js';
+import { OperatingSourceDto, SkipBandDto } from './operating-source.dto.js';
+import { IsAbove, IsEven, IsFiniteNumber, NotTogetherWith } from './validators.js';
 
 /**
  * The engineering input of a selection and of a saved design (SI: kg, m, Hz, °C). These DTOs
@@ -41,6 +42,12 @@ export const SELECTION_LIMITS = {
   speedRpm: 1e6,
   vaneCount: 200,
   utilization: 1.5,
+  /** Operating sources of the whole-machine model (docs/engineering/whole-machine.md). */
+  sources: 12,
+  skipBands: 10,
+  /** Forces and rotor masses: N, kg. */
+  amplitudeN: 1e8,
+  motorPoles: 64,
   limit: { default: 20, max: 200 },
 } as const;
 
@@ -240,6 +247,39 @@ export class OperatingConditionsDto {
   @IsPositive({ each: true })
   @Max(SELECTION_LIMITS.frequencyHz, { each: true })
   extraFrequenciesHz?: number[];
+
+  @ApiPropertyOptional({
+    type: [OperatingSourceDto],
+    description:
+      'where the forces act (whole-machine model); absent or empty: a vertical force through the CG at every disturbing frequency',
+  })
+  @IsOptional()
+  @IsArray({ message: 'The sources must be a list' })
+  @ArrayMaxSize(SELECTION_LIMITS.sources, { message: `At most ${SELECTION_LIMITS.sources} sources` })
+  @ArrayUnique((source: OperatingSourceDto) => source?.label, { message: 'Each source needs its own label' })
+  @ValidateNested({ each: true })
+  @Type(() => OperatingSourceDto)
+  sources?: OperatingSourceDto[];
+
+  @ApiPropertyOptional({ type: [SkipBandDto], description: 'speed bands the drive skips, rpm (with a speed range only)' })
+  @IsOptional()
+  @IsArray({ message: 'The skip bands must be a list' })
+  @ArrayMaxSize(SELECTION_LIMITS.skipBands, { message: `At most ${SELECTION_LIMITS.skipBands} skip bands` })
+  @ValidateNested({ each: true })
+  @Type(() => SkipBandDto)
+  skipBandsRpm?: SkipBandDto[];
+
+  @ApiPropertyOptional({
+    example: 4,
+    description:
+      "motor poles on a drive: the motor's magnetic force follows the speed (2·poles·n/120 Hz) instead of twice the supply frequency",
+  })
+  @IsOptional()
+  @IsInt({ message: 'The number of motor poles must be a whole number' })
+  @Min(2, { message: 'A motor has at least 2 poles' })
+  @Max(SELECTION_LIMITS.motorPoles, { message: `At most ${SELECTION_LIMITS.motorPoles} motor poles` })
+  @IsEven({ message: 'The number of motor poles must be even' })
+  motorPoles?: number;
 }
 
 export class CriteriaDto {
@@ -290,6 +330,17 @@ export class CriteriaDto {
   @Min(0)
   @Max(100)
   weightMarginPct?: number;
+
+  @ApiPropertyOptional({
+    example: 15,
+    description:
+      'stiffness tolerance of the catalog figures, ± %; the verdict is the worst over the band (default by mount type, docs/engineering/whole-machine.md §7)',
+  })
+  @IsOptional()
+  @IsFiniteNumber({ message: 'The stiffness tolerance must be a number' })
+  @Min(0, { message: 'The stiffness tolerance cannot be negative' })
+  @Max(50, { message: 'The stiffness tolerance is at most 50 %' })
+  stiffnessTolerancePct?: number;
 }
 
 const uniqueLabel = (point: MountPointDto) => point?.label;
@@ -337,4 +388,6 @@ export type Component = Omit<ComponentDto, never>;
 export type MountPoint = Omit<MountPointDto, never>;
 export type Criteria = Omit<CriteriaDto, never>;
 export type OperatingConditions = Omit<OperatingConditionsDto, never>;
+export type OperatingSource = Omit<OperatingSourceDto, never>;
+export type SkipBand = Omit<SkipBandDto, never>;
 export type DesignInput = Omit<DesignInputDto, never>;

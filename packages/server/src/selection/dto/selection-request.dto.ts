@@ -10,12 +10,13 @@ import {
   IsOptional,
   IsPositive,
   Max,
+  ValidateIf,
   Min,
   ValidateNested,
 } from 'class-validator';
-import { ComponentDto, CriteriaDto, MountPointDto, SELECTION_LIMITS } from './design-input.dto.js';
+import { ComponentDto, CriteriaDto, MountPointDto, OperatingConditionsDto, SELECTION_LIMITS } from './design-input.dto.js';
 import { RestraintInputDto } from './restraint.dto.js';
-import { IsFiniteNumber } from './validators.js';
+import { IsFiniteNumber, NotTogetherWith } from './validators.js';
 
 /** `limit`: passing candidates returned (and up to as many failing ones). */
 export class SelectionLimitDto {
@@ -46,14 +47,31 @@ export class SelectionRequestDto extends SelectionLimitDto {
   @Type(() => MountPointDto)
   mountPoints: MountPointDto[];
 
-  @ApiProperty({ type: [Number], example: [24.67, 49.33, 100], description: 'Hz, each > 0' })
+  @ApiPropertyOptional({
+    type: [Number],
+    example: [24.67, 49.33, 100],
+    description: 'Hz, each > 0: a vertical force through the CG at each (give this or operating)',
+  })
+  @ValidateIf((body: SelectionRequestDto) => body.operating === undefined || body.disturbingFrequenciesHz !== undefined)
+  @IsDefined({ message: 'Give the operating conditions or the disturbing frequencies' })
+  @NotTogetherWith('operating', { message: 'Give either the operating conditions or the disturbing frequencies, not both' })
   @IsArray()
   @ArrayMinSize(1)
   @ArrayMaxSize(SELECTION_LIMITS.frequencies)
   @IsFiniteNumber({ each: true })
   @IsPositive({ each: true })
   @Max(SELECTION_LIMITS.frequencyHz, { each: true })
-  disturbingFrequenciesHz: number[];
+  disturbingFrequenciesHz?: number[];
+
+  @ApiPropertyOptional({
+    type: OperatingConditionsDto,
+    description:
+      "the machine's operating conditions, as in a design (sources, speed range, skip bands); instead of disturbingFrequenciesHz",
+  })
+  @IsOptional()
+  @ValidateNested()
+  @Type(() => OperatingConditionsDto)
+  operating?: OperatingConditionsDto;
 
   @ApiProperty({ type: CriteriaDto })
   @IsDefined()

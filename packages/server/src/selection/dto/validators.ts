@@ -45,3 +45,34 @@ export function NotTogetherWith(property: string, options?: ValidationOptions) {
       },
     });
 }
+
+/** A whole number divisible by 2 (skipped when not a number; its own checks report that). */
+export function IsEven(options?: ValidationOptions) {
+  return (object: object, propertyName: string) =>
+    registerDecorator({
+      name: 'isEven',
+      target: object.constructor,
+      propertyName,
+      options: { message: `${propertyName} must be even`, ...options },
+      validator: {
+        validate: (value: unknown) => typeof value !== 'number' || value % 2 === 0,
+      },
+    });
+}
+
+/** The value may only be given when another property of the same object has one of `values`. */
+export function OnlyWhen(property: string, values: readonly unknown[], options: ValidationOptions) {
+  return (object: object, propertyName: string) =>
+    registerDecorator({
+      name: 'onlyWhen',
+      target: object.constructor,
+      propertyName,
+      constraints: [property, values],
+      options,
+      validator: {
+        validate(value: unknown, args: ValidationArguments) {
+          return value === undefined || value === null || values.includes((args.object as Record<string, unknown>)[property]);
+        },
+      },
+    });
+}
