@@ -2,43 +2,27 @@
  * The whole-machine additions to the design input and the selection result ("Model 2" in the
  * product spec), as the web reads and sends them. SI units (m, kg, N, Hz; speeds in rpm).
  *
- * Written from the spec while the server's DTOs are being built; once `schema.gen.ts` carries
- * them, these become aliases of the generated types (`npm run api-types`). Every field is
- * optional on the result side so that a server without the whole-machine model still reads.
+ * The input side aliases the generated types; the result side is written from the spec while
+ * the server's response DTOs are being built, and becomes aliases of the generated types once
+ * `schema.gen.ts` carries them (`npm run api-types`). Every result field is optional so that a
+ * result stored before the whole-machine model still reads.
  */
-import type { Vec3 } from './design-api';
+import { sourceAxisValues, sourceKindValues, type ApiSchemas } from '@/api/schema';
 
-export const SOURCE_KINDS = ['unbalance', 'force'] as const;
-export type SourceKind = (typeof SOURCE_KINDS)[number];
-export const SOURCE_AXES = ['x', 'y', 'z'] as const;
-export type SourceAxis = (typeof SOURCE_AXES)[number];
+export const SOURCE_KINDS = sourceKindValues;
+export type SourceKind = ApiSchemas['SourceKind'];
+export const SOURCE_AXES = sourceAxisValues;
+export type SourceAxis = ApiSchemas['SourceAxis'];
 
 /**
  * One disturbing source: a rotating unbalance (rotor mass and balance grade, normal to `axis`) or
  * a harmonic force (amplitude along `axis`), at an order of the shaft speed or a fixed frequency.
+ * Position in m; balance grade G in mm/s (ISO 21940-11, default 6.3).
  */
-export interface OperatingSource {
-  label: string;
-  kind: SourceKind;
-  /** Where it acts [m], in the design's axes. */
-  at: Vec3;
-  /** Shaft axis of an unbalance; the line of action of a force. */
-  axis: SourceAxis;
-  /** Multiple of the shaft speed (default 1). */
-  order?: number;
-  rotorMassKg?: number;
-  /** Balance grade G [mm/s] (ISO 21940-11); default 6.3. */
-  balanceGradeMmPerS?: number;
-  amplitudeN?: number;
-  /** A fixed frequency instead of an order [Hz] (e.g. twice the supply frequency). */
-  frequencyHz?: number;
-}
+export type OperatingSource = ApiSchemas['OperatingSourceDto'];
 
 /** A speed band the drive skips [rpm]. */
-export interface SkipBand {
-  min: number;
-  max: number;
-}
+export type SkipBand = ApiSchemas['SkipBandDto'];
 
 /** What the whole-machine model adds to the operating conditions. */
 export interface Model2Operating {

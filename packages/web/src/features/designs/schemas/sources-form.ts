@@ -19,12 +19,12 @@ import {
  */
 export const SOURCE_LIMITS = {
   sources: 12,
-  skipBands: 8,
+  skipBands: 10,
   labelLength: 40,
   maxOrder: 100,
   /** Balance grades of ISO 21940-11 run from G 0.4 to G 4000 mm/s. */
   balanceGrade: { min: 0.4, max: 4000 },
-  motorPoles: { min: 2, max: 48 },
+  motorPoles: { min: 2, max: 64 },
 } as const;
 
 /** The usual grade for pump impellers, fans and motor rotors (ISO 21940-11, common practice). */
