@@ -3,7 +3,7 @@ import { memo, useMemo } from 'react';
 import type { Units } from '@/lib/units';
 import type { MountPoint } from '@/types/design-api';
 
-import { SourceArrowDef, SourceMark, type DrawnSource } from './source-marks';
+import { SourceArrowDef, SourceLegend, SourceMark, type DrawnSource } from './source-marks';
 
 const WIDTH = 560;
 const HEIGHT = 380;
@@ -142,6 +142,7 @@ export const PlanView = memo(function PlanView({ points, loadsN, cg, flagged, so
           <SourceMark
             key={`${source.label}-${index}`}
             source={source}
+            number={index + 1}
             cx={px(source.at.x)}
             cy={py(source.at.y)}
             arrowId="tc-plan-source-arrow"
@@ -166,6 +167,7 @@ export const PlanView = memo(function PlanView({ points, loadsN, cg, flagged, so
           {units.format('position', frame.maxY - frame.minY)}
         </text>
       </svg>
+      <SourceLegend sources={sources ?? []} />
       <figcaption className="tc-visually-hidden">Plan view to scale. Frame outline drawn around the mount points with a margin.</figcaption>
     </figure>
   );

@@ -3,7 +3,7 @@ import { memo, useMemo } from 'react';
 import type { Units } from '@/lib/units';
 import type { DesignComponent, MountPoint, Vec3 } from '@/types/design-api';
 
-import { SourceArrowDef, SourceMark, type DrawnSource } from './source-marks';
+import { SourceArrowDef, SourceLegend, SourceMark, type DrawnSource } from './source-marks';
 
 const WIDTH = 560;
 const HEIGHT = 300;
@@ -112,6 +112,7 @@ export const SideElevation = memo(function SideElevation({ points, cg, component
           <SourceMark
             key={`${source.label}-${index}`}
             source={source}
+            number={index + 1}
             cx={px(source.at.x)}
             cy={py(source.at.z)}
             arrowId="tc-side-source-arrow"
@@ -163,6 +164,7 @@ export const SideElevation = memo(function SideElevation({ points, cg, component
           </text>
         </g>
       </svg>
+      <SourceLegend sources={sources ?? []} />
     </figure>
   );
 });

@@ -18,8 +18,11 @@ export function SourceMark({
   screenAxes,
   labelLeft,
   arrowId,
+  number,
 }: {
   source: DrawnSource;
+  /** The source's number in the legend (1-based). */
+  number: number;
   cx: number;
   cy: number;
   screenAxes: Record<SourceAxis, { dx: number; dy: number } | null>;
@@ -44,8 +47,9 @@ export function SourceMark({
         <circle cx={cx} cy={cy} r={HALF + 5} className="tc-drawing-source-ring" />
       ) : null}
       <path d={`M ${cx} ${cy - HALF} L ${cx + HALF} ${cy} L ${cx} ${cy + HALF} L ${cx - HALF} ${cy} Z`} />
-      <text x={cx + (labelLeft ? -12 : 12)} y={cy + 16} textAnchor={labelLeft ? 'end' : 'start'} className="tc-drawing-source-label">
-        {source.label}
+      <text x={cx + (labelLeft ? -10 : 10)} y={cy - 8} textAnchor={labelLeft ? 'end' : 'start'} className="tc-drawing-source-label">
+        {number}
+        <title>{source.label}</title>
       </text>
     </g>
   );
@@ -57,5 +61,19 @@ export function SourceArrowDef({ id }: { id: string }) {
     <marker id={id} viewBox="0 0 10 10" refX="9" refY="5" markerWidth="6" markerHeight="6" orient="auto-start-reverse">
       <path d="M 0 0 L 10 5 L 0 10 z" className="tc-drawing-source-arrowhead" />
     </marker>
+  );
+}
+
+/** The sources' names under a drawing, numbered as on it. */
+export function SourceLegend({ sources }: { sources: readonly DrawnSource[] }) {
+  if (sources.length === 0) return null;
+  return (
+    <ol className="tc-source-legend" aria-label="Sources on the drawing">
+      {sources.map((source, index) => (
+        <li key={`${source.label}-${index}`}>
+          {source.label} ({source.kind === 'unbalance' ? `unbalance, shaft along ${source.axis}` : `force along ${source.axis}`})
+        </li>
+      ))}
+    </ol>
   );
 }

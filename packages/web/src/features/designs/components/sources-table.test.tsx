@@ -110,8 +110,7 @@ describe('Sources table — units', () => {
     await goToRunning(user);
     const table = screen.getByRole('table', { name: 'Sources' });
     expect(within(table).getByText('Acts at (in)')).toBeInTheDocument();
-    expect(within(table).getByText('Force (lbf)')).toBeInTheDocument();
-    expect(within(table).getByText('Rotor (lb)')).toBeInTheDocument();
+    expect(within(table).getByText('Rotor (lb) or force (lbf)')).toBeInTheDocument();
     expect(within(table).getByLabelText('x of Coupling')).toHaveValue('10');
     expect(within(table).getByLabelText('z of Coupling')).toHaveValue('1');
     expect(within(table).getByLabelText('Force of Coupling')).toHaveValue('100');

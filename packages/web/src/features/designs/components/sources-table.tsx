@@ -23,11 +23,13 @@ function CellSelect({
   label,
   options,
   readOnly,
+  narrow = false,
 }: {
   name: string;
   label: string;
   options: { value: string; label: string }[];
   readOnly: boolean;
+  narrow?: boolean;
 }) {
   const [field] = useField<string>(name);
   return (
@@ -40,7 +42,7 @@ function CellSelect({
       options={options}
       disabled={readOnly}
       minimal
-      className="tc-cell-select"
+      className={narrow ? 'tc-cell-select tc-cell-select--axis' : 'tc-cell-select'}
     />
   );
 }
@@ -124,10 +126,7 @@ export function SourcesTable({ readOnly, components }: SourcesTableProps) {
                       Fixed (Hz)
                     </th>
                     <th scope="colgroup" colSpan={2} className="tc-group-head">
-                      Unbalance
-                    </th>
-                    <th scope="col" rowSpan={2} className="tc-number">
-                      Force ({units.label('force')})
+                      Size
                     </th>
                     {readOnly ? null : (
                       <th scope="col" rowSpan={2}>
@@ -139,8 +138,8 @@ export function SourcesTable({ readOnly, components }: SourcesTableProps) {
                     <th scope="col">x</th>
                     <th scope="col">y</th>
                     <th scope="col">z</th>
-                    <th scope="col" className="tc-number">
-                      Rotor ({units.label('mass')})
+                    <th scope="col" className="tc-number tc-wrap-head" title="Rotor mass of an unbalance; amplitude of a force">
+                      Rotor ({units.label('mass')}) or force ({units.label('force')})
                     </th>
                     <th scope="col" className="tc-number">
                       Grade G (mm/s)
@@ -166,7 +165,7 @@ export function SourcesTable({ readOnly, components }: SourcesTableProps) {
                           </td>
                         ))}
                         <td>
-                          <CellSelect name={field('axis')} label={`Axis of ${name}`} options={AXIS_OPTIONS} readOnly={readOnly} />
+                          <CellSelect name={field('axis')} label={`Axis of ${name}`} options={AXIS_OPTIONS} readOnly={readOnly} narrow />
                         </td>
                         <td>
                           <CellInput name={field('order')} label={`Order of ${name}`} readOnly={readOnly} numeric placeholder="1" />
@@ -188,7 +187,7 @@ export function SourcesTable({ readOnly, components }: SourcesTableProps) {
                           {unbalance ? (
                             <CellInput name={field('rotorMass')} label={`Rotor mass of ${name}`} readOnly={readOnly} numeric />
                           ) : (
-                            <NotUsed />
+                            <CellInput name={field('amplitude')} label={`Force of ${name}`} readOnly={readOnly} numeric />
                           )}
                         </td>
                         <td>
@@ -196,13 +195,6 @@ export function SourcesTable({ readOnly, components }: SourcesTableProps) {
                             <CellInput name={field('balanceGrade')} label={`Balance grade of ${name}`} readOnly={readOnly} numeric />
                           ) : (
                             <NotUsed />
-                          )}
-                        </td>
-                        <td>
-                          {unbalance ? (
-                            <NotUsed />
-                          ) : (
-                            <CellInput name={field('amplitude')} label={`Force of ${name}`} readOnly={readOnly} numeric />
                           )}
                         </td>
                         {readOnly ? null : (

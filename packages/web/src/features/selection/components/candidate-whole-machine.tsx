@@ -82,6 +82,8 @@ export function CandidateWholeMachine({ candidate, context, targetTransmissibili
                 key={chart.source}
                 className="tc-chart"
                 data-testid="speed-chart"
+                data-band={chart.band ? 'drawn' : 'none'}
+                data-crossings={chart.crossings.length}
                 aria-label={`Transmissibility against speed, ${chart.source}`}
               >
                 <h5 className="tc-chart-title">{chart.source}</h5>
