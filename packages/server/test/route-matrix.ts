@@ -115,6 +115,7 @@ export const ROUTE_MATRIX: readonly RouteRule[] = [
 
   // selection (stateless)
   { method: 'POST', path: '/api/selection', access: ['engineer', 'admin'] },
+  { method: 'POST', path: '/api/selection/curves', access: ['engineer', 'admin'] },
 ];
 
 /**

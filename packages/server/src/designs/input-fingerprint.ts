@@ -6,7 +6,7 @@ import type { DesignInput } from '../selection/dto/design-input.dto.js';
  * checks change meaning (a new model, new checks), so that a design does not show a result the
  * current model would not give: the stored one then no longer matches and is not returned.
  */
-export const SELECTION_MODEL_VERSION = 'selection-1';
+export const SELECTION_MODEL_VERSION = 'selection-2-whole-machine';
 
 /** JSON with the keys of every object sorted, so that equal values give equal text whatever the key order. */
 export function canonicalJson(value: unknown): string {

@@ -7,12 +7,15 @@ import {
   massProperties,
   mountLoads,
   prepareMountLayout,
+  resolveOperatingSources,
+  verticalSourcesAt,
   seismicDesignForce,
   transmissibilityFromEfficiency,
   VibrationInputError,
   type AssemblyComponent,
   type InertiaTensor,
   type MountLayout,
+  type ResolvedOperating,
 } from '@tacet/vibration';
 import type { FieldError } from '../common/filters/all-exceptions.filter.js';
 import type { MountType } from '../catalog/mount-rules.js';
@@ -33,6 +36,8 @@ export interface SelectionInput {
   components: readonly Component[];
   mountPoints: readonly MountPoint[];
   frequencies: readonly { frequencyHz: number; label?: string }[];
+  /** The operating conditions (sources, speeds, skip bands); absent: a vertical force through the CG at each frequency. */
+  operating?: OperatingConditions;
   criteria: Criteria;
   /** Seismic restraint to check (docs/engineering/seismic-restraint.md); absent: not checked. */
   restraint?: RestraintInput;
@@ -57,6 +62,8 @@ export interface SelectionProblem {
   maxLoadN: number;
   frequenciesHz: Float64Array;
   frequencyLabels: (string | undefined)[];
+  /** The sources of the whole-machine verdict and the speeds they run over (docs/engineering/forcing.md §7). */
+  forcing: ResolvedOperating;
   criteria: Criteria;
   /** The allowance on the weight the overload checks use, % (the criteria's, or the default). */
   weightMarginPct: number;
@@ -154,6 +161,7 @@ export function prepareProblem(input: SelectionInput): SelectionProblem {
     maxLoadN: Math.max(...loads.loadsN),
     frequenciesHz,
     frequencyLabels: input.frequencies.map((f) => f.label),
+    forcing: input.operating ? resolveOperatingSources(input.operating, mass.cg) : verticalSourcesAt(Array.from(frequenciesHz), mass.cg),
     criteria,
     weightMarginPct,
     marginFactor: 1 + weightMarginPct / 100,

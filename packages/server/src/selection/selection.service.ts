@@ -12,7 +12,7 @@ import { SelectionCatalogReader } from './selection-catalog.reader.js';
 import type { DetailsLoader } from './engine/catalog-tuple.js';
 import { SelectionEvaluation } from './engine/selection-evaluation.js';
 import { designFrequencies, prefilterBounds, prepareProblem, withInputErrors, type SelectionProblem } from './selection-problem.js';
-import type { Candidate, LabelledFrequency, SelectionResult } from './selection.types.js';
+import type { Candidate, LabelledFrequency, SelectionCurves, SelectionResult } from './selection.types.js';
 
 export interface SelectionRequest {
   components: readonly Component[];
@@ -104,12 +104,59 @@ export class SelectionService {
   async evaluateChoice(input: DesignInput, choice: CandidateChoice): Promise<ChosenCandidate> {
     const frequencies = this.frequenciesOf(input);
     const problem = withInputErrors(() => prepareProblem({ ...input, frequencies }), 'input');
+    const { evaluation, c } = await this.evaluationOf(problem, choice);
+    const names = await this.catalog.supplierNames([evaluation.supplierOf(c)]);
+    return { candidate: evaluation.describe(c, names), problem, frequencies };
+  }
+
+  /**
+   * Transmissibility against speed of each source for one candidate of a stateless request, at
+   * the nominal stiffness and both ends of its band, with the speeds, skip bands, requirement,
+   * modes and crossings the chart draws (docs/engineering/selection.md §17).
+   */
+  async curves(
+    body: Omit<SelectionRequest, 'frequencies'> & { disturbingFrequenciesHz?: readonly number[] },
+    choice: CandidateChoice,
+  ): Promise<SelectionCurves> {
+    const frequencies = body.operating
+      ? withInputErrors(() => designFrequencies(body.operating as OperatingConditions))
+      : (body.disturbingFrequenciesHz ?? []).map((frequencyHz) => ({ frequencyHz }));
+    const problem = withInputErrors(() => prepareProblem({ ...body, frequencies }));
+    const { evaluation, c } = await this.evaluationOf(problem, choice, { mountId: 'mountId', seriesId: 'seriesId' });
+    const names = await this.catalog.supplierNames([evaluation.supplierOf(c)]);
+    const candidate = evaluation.describe(c, names);
+    const curves = evaluation.curves(c);
+    return {
+      candidate: {
+        kind: candidate.kind,
+        mountId: candidate.mountId,
+        seriesId: candidate.seriesId,
+        label: candidate.label,
+        passes: candidate.passes,
+      },
+      speedRangeRpm: problem.forcing.speedRangeRpm,
+      skipBandsRpm: problem.forcing.skipBandsRpm,
+      requirement: { minIsolationPct: problem.criteria.minIsolationPct, transmissibility: problem.transmissibilityTarget },
+      stiffnessTolerancePct: curves.stiffnessTolerancePct,
+      modes: (candidate.modes ?? []).map((m) => ({ frequencyHz: m.frequencyHz, dominant: m.dominant, coupled: m.coupled })),
+      crossings: candidate.crossings ?? [],
+      worst: candidate.wholeMachine?.worst ?? null,
+      sources: curves.sources,
+    };
+  }
+
+  /** The evaluation holding the chosen candidate, judged by every finalist check (400 naming the field when it is not in the catalog). */
+  private async evaluationOf(
+    problem: SelectionProblem,
+    choice: CandidateChoice,
+    fields = { mountId: 'chosenMountId', seriesId: 'chosenSeriesId' },
+  ): Promise<{ evaluation: SelectionEvaluation; c: number }> {
     let evaluation = new SelectionEvaluation(problem, await this.catalog.prefiltered(prefilterBounds(problem)));
     let c = 'mountId' in choice ? evaluation.findUniform(choice.mountId) : evaluation.findSeries(choice.seriesId);
     if (c < 0) {
-      const rows = await this.catalog.rowsOf('mountId' in choice ? choice : parseSeriesId(choice.seriesId));
+      const rows = await this.catalog.rowsOf('mountId' in choice ? choice : parseSeriesId(choice.seriesId, fields.seriesId));
       if (rows.length === 0) {
-        const field = 'mountId' in choice ? 'chosenMountId' : 'chosenSeriesId';
+        const field = 'mountId' in choice ? fields.mountId : fields.seriesId;
         const what = 'mountId' in choice ? `Mount ${choice.mountId}` : `Series ${choice.seriesId}`;
         throw new BadRequestException({
           message: 'Validation failed',
@@ -121,8 +168,7 @@ export class SelectionService {
     }
     await evaluation.ensureDetails([c], this.loadDetails);
     evaluation.checkFinalist(c);
-    const names = await this.catalog.supplierNames([evaluation.supplierOf(c)]);
-    return { candidate: evaluation.describe(c, names), problem, frequencies };
+    return { evaluation, c };
   }
 
   /** Part number, type, horizontal stiffness and temperature range, read for the few mounts that need them. */
@@ -130,12 +176,12 @@ export class SelectionService {
 }
 
 /** `${supplierId}:${series}` → its parts (400 when malformed). */
-export function parseSeriesId(seriesId: string): { supplierId: number; series: string } {
+export function parseSeriesId(seriesId: string, field = 'chosenSeriesId'): { supplierId: number; series: string } {
   const match = /^(\d+):(.+)$/.exec(seriesId);
   if (!match) {
     throw new BadRequestException({
       message: 'Validation failed',
-      errors: [{ field: 'chosenSeriesId', message: 'chosenSeriesId must look like "<supplierId>:<series>"' }],
+      errors: [{ field, message: `${field} must look like "<supplierId>:<series>"` }],
     });
   }
   return { supplierId: Number(match[1]), series: match[2] };

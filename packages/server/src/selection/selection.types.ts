@@ -73,6 +73,49 @@ export interface CandidateRestraint {
   passes: boolean;
 }
 
+/** A source order crossing a rigid-body mode inside the running range (docs/engineering/selection.md §15). */
+export interface CandidateCrossing {
+  /** The mode's motion, e.g. "pitch" or "roll + sway (mixed)". */
+  mode: string;
+  modeFrequencyHz: number;
+  /** The source's label. */
+  source: string;
+  /** Index of the source in the resolved list (internal; not in the answer). */
+  sourceIndex?: number;
+  order: number;
+  speedRpm: number;
+}
+
+/** The whole-machine response of one source at one speed, at the governing stiffness factor. */
+export interface WholeMachinePerFrequency {
+  source: string;
+  frequencyHz: number;
+  /** Null for a fixed-frequency source when the input gives no speed. */
+  speedRpm: number | null;
+  transmissibility: number;
+  /** The source's amplitude there, N (1 for the default vertical force: the forces are then per newton). */
+  amplitudeN: number;
+  /** Peak dynamic force through each mount, N. */
+  perPoint: { label: string; forceN: number }[];
+}
+
+/** The whole-machine verdict's figures (docs/engineering/selection.md §14–§16). */
+export interface CandidateWholeMachine {
+  worst: {
+    transmissibility: number;
+    efficiencyPct: number;
+    frequencyHz: number;
+    speedRpm: number | null;
+    /** The source's label. */
+    source: string;
+    /** The stiffness factor that governed (1 − tol, 1 or 1 + tol). */
+    stiffnessFactor: number;
+  };
+  /** The stiffness band applied, ± % (the criteria's, or the default of the mount type). */
+  stiffnessTolerancePct: number;
+  perFrequency: WholeMachinePerFrequency[];
+}
+
 /** Weighted score terms; they add up to `score` (see scoring.ts). */
 export interface ScoreTerms {
   isolation: number;
@@ -112,6 +155,11 @@ export interface Candidate {
   modes?: CandidateMode[];
   /** Seismic restraint figures, when the input asks for restraint. */
   restraint?: CandidateRestraint;
+  /** The whole-machine verdict's figures (absent when the model cannot be built: the inertia is unknown). */
+  wholeMachine?: CandidateWholeMachine;
+  /** Crossings of the source orders with the modes inside the running range, lowest speed first. */
+  crossings?: CandidateCrossing[];
+  /** Follows the whole-machine verdict (with the load, deflection, mode and restraint checks). */
   passes: boolean;
   /** Why it fails, in words a user understands (empty when it passes). */
   reasons: string[];
@@ -133,6 +181,31 @@ export interface SelectionResult {
   /** Loads with equal stiffness at every point (the first guess), N. */
   pointLoadsN: number[];
   disturbingFrequenciesHz: number[];
+}
+
+/** `POST /api/selection/curves`: transmissibility against speed per source of one candidate (docs/engineering/selection.md §17). */
+export interface SelectionCurves {
+  candidate: { kind: 'uniform' | 'series'; mountId?: number; seriesId?: string; label: string; passes: boolean };
+  /** Running range, rpm (min = max at a fixed speed); null when only fixed frequencies force the machine. */
+  speedRangeRpm: { min: number; max: number } | null;
+  skipBandsRpm: { min: number; max: number }[];
+  /** The isolation requirement and the transmissibility it allows. */
+  requirement: { minIsolationPct: number; transmissibility: number };
+  stiffnessTolerancePct: number;
+  /** Modes at the nominal stiffness. */
+  modes: { frequencyHz: number; dominant: string; coupled: boolean }[];
+  crossings: CandidateCrossing[];
+  worst: CandidateWholeMachine['worst'] | null;
+  sources: {
+    label: string;
+    order: number | null;
+    fixedFrequencyHz: number | null;
+    speedRpm: number[];
+    frequencyHz: number[];
+    transmissibility: number[];
+    softEnd: number[] | null;
+    stiffEnd: number[] | null;
+  }[];
 }
 
 /** A disturbing frequency with where it comes from. */

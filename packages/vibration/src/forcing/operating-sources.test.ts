@@ -36,7 +36,14 @@ describe('resolveOperatingSources (docs/engineering/forcing.md §7)', () => {
       speedRangeRpm: { min: 600, max: 1500 },
       lineFrequencyHz: 50,
       sources: [
-        { label: 'Magnetic', kind: 'force' as const, at: { x: -0.3, y: 0, z: 0.45 }, axis: 'z' as const, amplitudeN: 200, frequencyHz: 100 },
+        {
+          label: 'Magnetic',
+          kind: 'force' as const,
+          at: { x: -0.3, y: 0, z: 0.45 },
+          axis: 'z' as const,
+          amplitudeN: 200,
+          frequencyHz: 100,
+        },
         { label: 'Blade', kind: 'force' as const, at: { x: 0, y: 0, z: 1 }, axis: 'y' as const, amplitudeN: 50, order: 7 },
       ],
     };
@@ -55,20 +62,20 @@ describe('resolveOperatingSources (docs/engineering/forcing.md §7)', () => {
       CG,
     );
     expect(sources.map((s) => s.label)).toEqual([
-      'Vertical force at the CG, 1× shaft',
-      'Vertical force at the CG, 2× shaft',
-      'Vertical force at the CG, vane pass (6 vanes)',
-      'Vertical force at the CG, 2× line (50 Hz supply)',
-      'Vertical force at the CG, 37 Hz',
+      'Vertical force through the CG, 1× shaft',
+      'Vertical force through the CG, 2× shaft',
+      'Vertical force through the CG, vane pass (6 vanes)',
+      'Vertical force through the CG, 2× line (50 Hz supply)',
+      'Vertical force through the CG, 37 Hz',
     ]);
     for (const s of sources) expect(s).toMatchObject({ at: CG, axis: 'z', kind: 'directional', amplitudeN: 1, unitForce: true });
     expect(sources.map((s) => sourceFrequencyHz(s, 1480))).toEqual([1480 / 60, 2960 / 60, (6 * 1480) / 60, 100, 37]);
   });
 
   it('a source turning with the shaft needs a speed; nothing at all is refused', () => {
-    expect(() =>
-      resolveOperatingSources({ sources: [{ label: 'I', kind: 'unbalance', at: CG, axis: 'x', rotorMassKg: 1 }] }, CG),
-    ).toThrow(/operating.sources\[0\]: turns with the shaft/);
+    expect(() => resolveOperatingSources({ sources: [{ label: 'I', kind: 'unbalance', at: CG, axis: 'x', rotorMassKg: 1 }] }, CG)).toThrow(
+      /operating.sources\[0\]: turns with the shaft/,
+    );
     expect(() => resolveOperatingSources({ orders: [1] }, CG)).toThrow(/gives no source/);
   });
 

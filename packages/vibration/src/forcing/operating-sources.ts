@@ -139,19 +139,21 @@ export function resolveOperatingSources(operating: OperatingForcingInput, cg: Ve
       followsOrder: 'order' in spec ? spec.order : null,
     });
     if (range !== null) {
-      for (const o of operating.orders ?? []) sources.push(unit(`Vertical force at the CG, ${ordinal(o)} shaft`, { order: o }));
+      for (const o of operating.orders ?? []) sources.push(unit(`Vertical force through the CG, ${ordinal(o)} shaft`, { order: o }));
       if (operating.vaneCount !== undefined) {
-        sources.push(unit(`Vertical force at the CG, vane pass (${operating.vaneCount} vanes)`, { order: operating.vaneCount }));
+        sources.push(unit(`Vertical force through the CG, vane pass (${operating.vaneCount} vanes)`, { order: operating.vaneCount }));
       }
     }
     if (onDrive) {
-      sources.push(unit(`Vertical force at the CG, 2× drive output (${poles}-pole motor)`, { order: poles }));
+      sources.push(unit(`Vertical force through the CG, 2× drive output (${poles}-pole motor)`, { order: poles }));
     } else if (supplyTwice !== undefined) {
-      sources.push(unit(`Vertical force at the CG, 2× line (${hz(supplyTwice / 2)} Hz supply)`, { frequencyHz: supplyTwice }));
+      sources.push(unit(`Vertical force through the CG, 2× line (${hz(supplyTwice / 2)} Hz supply)`, { frequencyHz: supplyTwice }));
     }
-    for (const f of operating.extraFrequenciesHz ?? []) sources.push(unit(`Vertical force at the CG, ${hz(f)} Hz`, { frequencyHz: f }));
+    for (const f of operating.extraFrequenciesHz ?? [])
+      sources.push(unit(`Vertical force through the CG, ${hz(f)} Hz`, { frequencyHz: f }));
   }
-  if (sources.length === 0) throw new VibrationInputError('operating', 'gives no source: set a speed, a line frequency or extra frequencies', 'empty');
+  if (sources.length === 0)
+    throw new VibrationInputError('operating', 'gives no source: set a speed, a line frequency or extra frequencies', 'empty');
   return { sources, speedRangeRpm: range, skipBandsRpm: (operating.skipBandsRpm ?? []).map((b) => ({ min: b.min, max: b.max })) };
 }
 
@@ -162,18 +164,16 @@ export function resolveOperatingSources(operating: OperatingForcingInput, cg: Ve
  * @param cg centre of gravity [m]
  */
 export function verticalSourcesAt(frequenciesHz: readonly number[], cg: Vec3): ResolvedOperating {
-  const sources = frequenciesHz.map(
-    (f, i): ResolvedSource => ({
-      label: `Vertical force at the CG, ${hz(requirePositive(`disturbingFrequenciesHz[${i}]`, f))} Hz`,
-      inputIndex: -1,
-      unitForce: true,
-      at: { ...cg },
-      axis: 'z',
-      kind: 'directional',
-      amplitudeN: 1,
-      frequencyHz: f,
-      followsOrder: null,
-    }),
-  );
+  const sources = frequenciesHz.map((f, i): ResolvedSource => ({
+    label: `Vertical force through the CG, ${hz(requirePositive(`disturbingFrequenciesHz[${i}]`, f))} Hz`,
+    inputIndex: -1,
+    unitForce: true,
+    at: { ...cg },
+    axis: 'z',
+    kind: 'directional',
+    amplitudeN: 1,
+    frequencyHz: f,
+    followsOrder: null,
+  }));
   return { sources, speedRangeRpm: null, skipBandsRpm: [] };
 }

@@ -1,4 +1,4 @@
-/** Flexible support in series with a mount (docs/engineering/whole-machine.md §8). */
+/** Flexible support in series with a mount (docs/engineering/whole-machine.md §9). */
 import { requireNonNegative, requirePositive } from '../errors/validate.js';
 
 /**

@@ -8,7 +8,7 @@ import { type Axis, type Vec3 } from '../geometry/vector.js';
 import { type PrincipalStiffness } from '../modes/mount-stiffness.js';
 import { type Damping } from '../sdof/damping.js';
 
-/** The supported rigid body. */
+/** The supported rigid body (`massProperties(components)` gives one). */
 export interface WholeMachineBody {
   /** m [kg], > 0. */
   massKg: number;
@@ -153,7 +153,9 @@ export interface SpeedSweepInput {
   skipBandsRpm?: readonly SpeedBand[];
   /**
    * Undamped mode frequencies [Hz] whose crossings join the grid; default: the system's own
-   * modes (`wholeMachineModes`).
+   * modes (`wholeMachineModes`, one eigen-solve per system, cached). A caller that has the modes
+   * at stiffness factor 1 may pass f_j·√φ for a system prepared with factor φ (K → φK scales every
+   * ω² by φ) and save the eigen-solve.
    */
   modeFrequenciesHz?: readonly number[];
   /** Largest grid step as a share of speed [%], > 0, default 0.5. */

@@ -9,6 +9,7 @@ import {
   IsInt,
   IsOptional,
   IsPositive,
+  IsString,
   Max,
   ValidateIf,
   Min,
@@ -84,4 +85,20 @@ export class SelectionRequestDto extends SelectionLimitDto {
   @ValidateNested()
   @Type(() => RestraintInputDto)
   restraint?: RestraintInputDto;
+}
+
+/** Body of `POST /api/selection/curves`: a selection request and the candidate to draw. */
+export class SelectionCurvesRequestDto extends SelectionRequestDto {
+  @ApiPropertyOptional({ example: 12, description: 'the uniform candidate of this mount (give this or seriesId)' })
+  @ValidateIf((body: SelectionCurvesRequestDto) => body.seriesId === undefined || body.mountId !== undefined)
+  @IsDefined({ message: 'Say which candidate to draw: a mount or a series' })
+  @NotTogetherWith('seriesId', { message: 'Give either a mount or a series, not both' })
+  @IsInt({ message: 'The mount must be given by its number' })
+  @IsPositive({ message: 'The mount must be given by its number' })
+  mountId?: number;
+
+  @ApiPropertyOptional({ example: '3:LV', description: 'the series candidate `${supplierId}:${series}`' })
+  @IsOptional()
+  @IsString({ message: 'The series must look like "<supplier number>:<series>"' })
+  seriesId?: string;
 }

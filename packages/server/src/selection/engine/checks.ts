@@ -11,9 +11,10 @@
  * - for the machine, the same for every candidate (machineChecks): CG outside the mount polygon;
  * - per candidate, in the evaluation loops (evaluate-uniform.ts, evaluate-series.ts): utilisation
  *   window, static deflection against the mount's travel;
- * - for every candidate at once (evaluate-isolation.ts): isolation at every disturbing frequency;
+ * - for every candidate at once (evaluate-isolation.ts): the bounce estimate at every disturbing
+ *   frequency, which only orders the candidates (it fails none);
  * - for the best candidates only, as finalist checks (ranking.ts `FinalistCheck`): the rigid-body
- *   modes (mode-check.ts);
+ *   modes (mode-check.ts: a mechanism) and the whole-machine verdict (whole-machine-check.ts);
  * - seismic restraint, when the input asks for it (restraint-check.ts): every candidate screened
  *   before scoring (no rating, or a uniform candidate's demand over its ratings), then the exact
  *   figures of the best ones as a finalist check.
@@ -28,7 +29,10 @@ import type { SelectionProblem } from '../selection-problem.js';
 export const FAIL = {
   /** The centre of gravity lies outside the polygon of the mount points (the machine would tip). */
   cgOutside: 1,
-  /** Transmissibility above the target at a disturbing frequency. */
+  /**
+   * Bounce estimate above the target at a disturbing frequency: the verdict only where the
+   * whole-machine model cannot be built (whole-machine-check.ts); otherwise the estimate only orders.
+   */
   isolation: 2,
   /** Load / rated load outside the allowed window at a point (with the weight margin), or a point lifting off. */
   utilization: 4,
@@ -44,6 +48,8 @@ export const FAIL = {
   supplier: 128,
   /** Seismic restraint: a point's demand over its mount's rating, or no rating (restraint-check.ts). */
   restraint: 256,
+  /** Worst whole-machine transmissibility over the running range and the stiffness band above the target (whole-machine-check.ts). */
+  wholeMachine: 512,
 } as const;
 
 /** The row checks that need a mount's details (DETAIL_COLUMNS); a candidate takes them once the details are loaded. */

@@ -6,10 +6,11 @@
 import { isolationDb, isolationEfficiencyPct } from '@tacet/vibration';
 import { scoreCandidate } from '../scoring.js';
 import type { SelectionProblem } from '../selection-problem.js';
-import type { Candidate, CandidatePoint, ScoreTerms } from '../selection.types.js';
+import type { Candidate, CandidatePoint, CandidateWholeMachine, ScoreTerms } from '../selection.types.js';
 import type { CandidateStore } from './candidate-store.js';
 import type { ModeCheck } from './mode-check.js';
 import type { RestraintCheck } from './restraint-check.js';
+import type { WholeMachineCheck } from './whole-machine-check.js';
 import { fillScoreInputs, newScoreInputs, type ScoreReferences } from './ranking.js';
 import { notesFor, reasonsFor, type WordingContext } from './reasons.js';
 
@@ -19,10 +20,11 @@ export interface DescribeSources {
   refs: ScoreReferences;
   modeCheck: ModeCheck;
   restraintCheck: RestraintCheck;
+  wholeMachineCheck: WholeMachineCheck;
 }
 
 export function describeCandidate(
-  { store, problem, refs, modeCheck, restraintCheck }: DescribeSources,
+  { store, problem, refs, modeCheck, restraintCheck, wholeMachineCheck }: DescribeSources,
   c: number,
   supplierNames: ReadonlyMap<number, string>,
 ): Candidate {
@@ -56,6 +58,17 @@ export function describeCandidate(
   const score = scoreCandidate(s, terms);
   const modes = modeCheck.findingsOf(c);
   const restraint = restraintCheck.figuresOf(c);
+  const whole = wholeMachineCheck.findingsOf(c)?.result ?? null;
+  const wholeMachine: CandidateWholeMachine | undefined = whole
+    ? { worst: { ...whole.worst }, stiffnessTolerancePct: whole.stiffnessTolerancePct, perFrequency: wholeMachineCheck.perFrequency(c) }
+    : undefined;
+  const crossings = whole?.crossings.map(({ mode, modeFrequencyHz, source, order, speedRpm }) => ({
+    mode,
+    modeFrequencyHz,
+    source,
+    order,
+    speedRpm,
+  }));
   const wording: WordingContext = {
     problem,
     store,
@@ -66,6 +79,7 @@ export function describeCandidate(
     modes,
     modesUnavailable: modeCheck.unavailable,
     restraint,
+    wholeMachine: whole,
   };
   const price = store.price[c];
   const lead = store.lead[c];
@@ -85,6 +99,7 @@ export function describeCandidate(
     maxLeadTimeDays: Number.isFinite(lead) ? lead : null,
     ...(modes?.modes ? { modes: modes.modes } : {}),
     ...(restraint ? { restraint } : {}),
+    ...(wholeMachine ? { wholeMachine, crossings } : {}),
     passes: store.fail[c] === 0,
     reasons: reasonsFor(wording),
     notes: notesFor(wording),

@@ -8,17 +8,15 @@
 import { isolationDb, transmissibilityBatch } from '@tacet/vibration';
 import type { SelectionProblem } from '../selection-problem.js';
 import type { CandidateStore } from './candidate-store.js';
-import { FAIL } from './checks.js';
 
 export function evaluateIsolation(store: CandidateStore, problem: SelectionProblem): void {
   const C = store.candidateCount;
   const nf = problem.frequenciesHz.length;
-  const { fnHz, damping, hysteretic, transmissibility, skip, fail, minIsolationDb } = store;
+  const { fnHz, damping, hysteretic, transmissibility, skip, minIsolationDb } = store;
   transmissibilityBatch(fnHz, damping, hysteretic, problem.frequenciesHz, transmissibility);
   // Resonance amplification T(r = 1) through the same kernel: fn = 1 Hz evaluated at f = 1 Hz.
   transmissibilityBatch(new Float64Array(C).fill(1), damping, hysteretic, [1], store.resonance);
 
-  const target = problem.transmissibilityTarget;
   for (let c = 0; c < C; c++) {
     if (skip[c]) continue;
     let worst = 0;
@@ -26,7 +24,6 @@ export function evaluateIsolation(store: CandidateStore, problem: SelectionProbl
       const t = transmissibility[c * nf + j];
       if (t > worst) worst = t;
     }
-    if (worst > target) fail[c] |= FAIL.isolation;
     minIsolationDb[c] = isolationDb(worst);
   }
 }

@@ -1,8 +1,9 @@
 /**
  * The rigid-body mode check, a finalist check (run for the best candidates only): the six coupled
  * rigid-body modes of the machine on the candidate's mounts (`rigidBodyModes`, with the mounts'
- * dynamic stiffnesses); a mode within ±MODE_SEPARATION of a disturbing frequency, or a direction
- * without stiffness, fails the candidate (docs/engineering/selection.md §9). Keeps, per candidate
+ * dynamic stiffnesses); a direction without stiffness fails the candidate, a mode within
+ * ±MODE_SEPARATION of a disturbing frequency is noted (the whole-machine verdict judges it:
+ * docs/engineering/selection.md §9, §14). Keeps, per candidate
  * judged, the modes and the conflict found (reasons.ts words them).
  */
 import { isVibrationInputError, rigidBodyModes, type ResilientMount } from '@tacet/vibration';
@@ -66,7 +67,8 @@ export class ModeCheck implements FinalistCheck {
         this.inertiaUnusable = true;
       }
     }
-    if (findings.conflict) this.store.fail[c] |= FAIL.modes;
+    // A mode near a disturbing frequency is a note: the whole-machine verdict judges it (selection.md §9, §14).
+    if (findings.conflict?.kind === 'mechanism') this.store.fail[c] |= FAIL.modes;
     this.findings.set(c, findings);
   }
 

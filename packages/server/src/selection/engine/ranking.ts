@@ -4,10 +4,11 @@
  * candidates, and the ranking itself: the best passing candidates, judged on the way by the
  * finalist checks, then the best failing ones (docs/engineering/selection.md §11).
  *
- * Finalist checks are the checks too costly for every candidate (today the rigid-body mode check,
- * mode-check.ts). They run on the best passing candidates only, and may fail some of them; the
- * ranking then looks further down the list (see `rankCandidates`). A new whole-machine check
- * implements `FinalistCheck` and joins the list in selection-evaluation.ts.
+ * Finalist checks are the checks too costly for every candidate (the rigid-body modes,
+ * mode-check.ts; the whole-machine verdict, whole-machine-check.ts). They run on the best passing
+ * candidates only, and may fail some of them; the ranking then looks further down the list (see
+ * `rankCandidates`) until `limit` pass or every candidate has been judged, so that no candidate
+ * the finalist checks would pass is left out unseen (docs/engineering/selection.md §16).
  */
 import { BestCandidates } from '../best-candidates.js';
 import { scoreCandidate, type ScoreInputs } from '../scoring.js';
@@ -20,9 +21,8 @@ export interface FinalistCheck {
   check(c: number): void;
 }
 
-/** Rounds of finalist checks for the best passing candidates: 2×limit first, doubling up to 8×limit. */
+/** Rounds of finalist checks for the best passing candidates: 2×limit first, then doubling. */
 const FINALISTS_GROWTH = 2;
-const FINALISTS_MAX_FACTOR = 8;
 
 /** The references of the score: the same for every candidate of one request. */
 export interface ScoreReferences {
@@ -35,7 +35,8 @@ export interface ScoreReferences {
 
 /**
  * Cheapest price (per currency) and shortest lead time among the candidates that pass the checks
- * so far (among all candidates where none passes): the references of the score.
+ * so far and meet the requirement by the bounce estimate (among all candidates where none does):
+ * the references of the score.
  */
 export function scoreReferences(store: CandidateStore, problem: SelectionProblem): ScoreReferences {
   const C = store.candidateCount;
@@ -50,7 +51,8 @@ export function scoreReferences(store: CandidateStore, problem: SelectionProblem
     const p = price[c];
     if (p >= 0 && p < minPriceAny[cur]) minPriceAny[cur] = p;
     if (lead[c] < minLeadAny) minLeadAny = lead[c];
-    if (fail[c] !== 0) continue;
+    // The bounce estimate fails nothing, but a candidate it puts below the requirement sets no reference.
+    if (fail[c] !== 0 || store.minIsolationDb[c] < problem.isolationDbTarget) continue;
     if (p >= 0 && p < minPrice[cur]) minPrice[cur] = p;
     if (lead[c] < minLead) minLead = lead[c];
   }
@@ -118,7 +120,10 @@ export function candidateOrder(store: CandidateStore): (a: number, b: number) =>
 /**
  * Best `limit` passing candidates, then the best `limit` failing ones. The best passing
  * candidates go through `judgeFinalists` (which may fail some) — the best 2×limit first, then
- * twice as many while fewer than `limit` still pass, up to 8×limit.
+ * twice as many while fewer than `limit` still pass, until every candidate not failed by the
+ * cheap checks has been judged. The cheap checks (loads, deflection, temperature, type, supplier,
+ * CG, the restraint ratings) fail a candidate for a reason the finalist checks cannot undo; the
+ * bounce estimate fails none (it orders only).
  */
 export async function rankCandidates(
   store: CandidateStore,
@@ -141,7 +146,7 @@ export async function rankCandidates(
     const top = best.sorted();
     await judgeFinalists(top);
     passing = top.filter((c) => fail[c] === 0);
-    if (passing.length >= limit || passingTotal <= capacity || capacity >= FINALISTS_MAX_FACTOR * limit) break;
+    if (passing.length >= limit || passingTotal <= capacity) break;
     capacity *= 2;
   }
   const failing = new BestCandidates(limit, better);

@@ -14,6 +14,7 @@ import type { CandidatePoint, CandidateRestraint, RestraintPoint } from '../sele
 import type { CandidateStore, PointMount } from './candidate-store.js';
 import { FAIL } from './checks.js';
 import { MODE_SEPARATION, type ModeConflict, type ModeFindings } from './mode-check.js';
+import type { WholeMachineFindings } from './whole-machine-check.js';
 
 /** What the wording reads about one candidate. */
 export interface WordingContext {
@@ -31,6 +32,8 @@ export interface WordingContext {
   modesUnavailable: boolean;
   /** The seismic restraint figures (undefined when the input asks for no restraint). */
   restraint: CandidateRestraint | undefined;
+  /** The whole-machine verdict's findings (null when the model could not be built or the candidate was not judged). */
+  wholeMachine: NonNullable<WholeMachineFindings['result']> | null;
 }
 
 type Words = (x: WordingContext) => string[];
@@ -38,6 +41,7 @@ type Words = (x: WordingContext) => string[];
 /** The reasons of a failed candidate, check by check, in this order. */
 export const REASONS: readonly (readonly [bit: number, words: Words])[] = [
   [FAIL.cgOutside, cgOutside],
+  [FAIL.wholeMachine, wholeMachine],
   [FAIL.isolation, isolation],
   [FAIL.utilization, utilization],
   [FAIL.deflection, deflection],
@@ -61,6 +65,8 @@ export function notesFor(x: WordingContext): string[] {
   const { store, c, problem } = x;
   const notes: string[] = [];
   const rows = store.rowsOf(c);
+  notes.push(...wholeMachineNotes(x));
+  if (x.modes?.conflict?.kind === 'near') notes.push(`${modeConflict(x.modes.conflict)} The whole-machine verdict judges it.`);
   if (x.modes?.modes && rows.some((r) => store.hasDetails[r] && Number.isNaN(store.kh[r]))) {
     notes.push('The catalog gives no horizontal stiffness: the rigid-body modes take it equal to the vertical stiffness.');
   }
@@ -118,6 +124,67 @@ function isolation({ problem, store, c }: WordingContext): string[] {
       : `Isolation at ${at} is ${formatPctValue(isolationEfficiencyPct(t))}, below the ${formatNumber(problem.criteria.minIsolationPct, 1)} % ` +
         `target (natural frequency ${formatHz(fn)}). Softer mounts are needed.`,
   ];
+}
+
+/** The worst whole-machine point against the requirement, then every crossing inside the running range. */
+function wholeMachine({ problem, wholeMachine: w }: WordingContext): string[] {
+  if (!w) return [];
+  const { worst } = w;
+  const at = worst.speedRpm === null ? formatHz(worst.frequencyHz) : `${formatRpm(worst.speedRpm)} (${formatHz(worst.frequencyHz)})`;
+  const band = bandWords(worst.stiffnessFactor, w.stiffnessTolerancePct);
+  const required = `${formatNumber(problem.criteria.minIsolationPct, 1)} %`;
+  const reasons = [
+    worst.transmissibility > 1
+      ? `Whole machine, ${worst.source}: at ${at}${band} the mounts amplify the force (transmissibility ` +
+        `${formatNumber(worst.transmissibility, 2)}) instead of isolating it; ${required} isolation is required.`
+      : `Whole machine, ${worst.source}: isolation ${formatPctValue(worst.efficiencyPct)} at ${at}${band}, below the ${required} required.`,
+  ];
+  for (const x of w.crossings) reasons.push(crossingWords(x));
+  return reasons;
+}
+
+function crossingWords(x: { mode: string; modeFrequencyHz: number; source: string; order: number; speedRpm: number }): string {
+  return (
+    `The ${x.mode} mode at ${formatHz(x.modeFrequencyHz)} is crossed by ${x.source} (${formatNumber(x.order, 2)}× shaft speed) ` +
+    `at ${formatRpm(x.speedRpm)}, inside the running range.`
+  );
+}
+
+/** The verdict's basis for a candidate that passes it, crossings that did not fail it, the fallback to the estimate. */
+function wholeMachineNotes({ store, c, wholeMachine: w, modes }: WordingContext): string[] {
+  if (!w) {
+    return modes === undefined
+      ? []
+      : [
+          'Whole-machine verdict not computed (the inertia of the machine is unknown or degenerate): the verdict uses the bounce ' +
+            'estimate at the disturbing frequencies.',
+        ];
+  }
+  const notes: string[] = [];
+  if (!(store.fail[c] & FAIL.wholeMachine)) {
+    const { worst } = w;
+    const at = worst.speedRpm === null ? formatHz(worst.frequencyHz) : `${formatRpm(worst.speedRpm)} (${formatHz(worst.frequencyHz)})`;
+    notes.push(
+      `Whole machine: worst isolation ${formatPctValue(worst.efficiencyPct)} (${worst.source} at ${at}` +
+        `${bandWords(worst.stiffnessFactor, w.stiffnessTolerancePct)}); the isolation per frequency above is the bounce estimate.`,
+    );
+    for (const x of w.crossings) notes.push(`${crossingWords(x)} Its response stays within the requirement.`);
+  }
+  if (!w.toleranceFromCriteria && w.stiffnessTolerancePct > 0) {
+    notes.push(`Stiffness band ±${formatNumber(w.stiffnessTolerancePct, 1)} % (the usual tolerance of this mount type).`);
+  }
+  return notes;
+}
+
+function bandWords(factor: number, tolerancePct: number): string {
+  if (tolerancePct === 0 || factor === 1) return tolerancePct === 0 ? '' : ', nominal stiffness';
+  return factor < 1
+    ? `, stiffness ${formatNumber(tolerancePct, 1)} % below nominal`
+    : `, stiffness ${formatNumber(tolerancePct, 1)} % above nominal`;
+}
+
+function formatRpm(rpm: number): string {
+  return `${formatNumber(rpm, 0)} rpm`;
 }
 
 function utilization({ problem, perPoint }: WordingContext): string[] {

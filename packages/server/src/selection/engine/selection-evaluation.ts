@@ -6,13 +6,14 @@
  *                              series groups, candidate index c (rows first, then series)
  *   2. evaluate-uniform.ts     one row at every point: load checks and figures
  *      evaluate-series.ts      a size per point from one series, for a level skid
- *   3. evaluate-isolation.ts   transmissibility of every candidate at once, the isolation check
+ *   3. evaluate-isolation.ts   bounce estimate of every candidate at once (orders, fails none)
  *      restraint-check.ts      seismic restraint, when asked for: the ratings screen of every
  *                              candidate (and, as a finalist check, the exact figures)
  *   4. ranking.ts              score references and scores; `rank` picks the best passing
  *                              candidates, judged by the finalist checks on the way
  *   5. mode-check.ts           finalist check: the six coupled rigid-body modes
  *      restraint-check.ts      finalist check: the restraint figures with each size's stiffness
+ *      whole-machine-check.ts  finalist check: the whole-machine verdict over the running range and the stiffness band
  *   6. describe-candidate.ts   a candidate as the API shows it, with reasons.ts for the words
  *
  * checks.ts lists the checks (fail bits); catalog-tuple.ts the columns the engine reads. The
@@ -28,6 +29,7 @@ import { evaluateSeries } from './evaluate-series.js';
 import { evaluateUniform } from './evaluate-uniform.js';
 import { ModeCheck } from './mode-check.js';
 import { RestraintCheck } from './restraint-check.js';
+import { WholeMachineCheck, type SourceCurves } from './whole-machine-check.js';
 import { candidateOrder, rankCandidates, scoreAll, scoreReferences, type FinalistCheck, type ScoreReferences } from './ranking.js';
 
 export class SelectionEvaluation {
@@ -41,6 +43,7 @@ export class SelectionEvaluation {
   private readonly refs: ScoreReferences;
   private readonly modeCheck: ModeCheck;
   private readonly restraintCheck: RestraintCheck;
+  private readonly wholeMachineCheck: WholeMachineCheck;
   /** The checks run for the best candidates only, in this order (ranking.ts `FinalistCheck`). */
   private readonly finalistChecks: readonly FinalistCheck[];
   private readonly better: (a: number, b: number) => boolean;
@@ -63,7 +66,8 @@ export class SelectionEvaluation {
     scoreAll(store, this.refs);
     this.better = candidateOrder(store);
     this.modeCheck = new ModeCheck(store, problem);
-    this.finalistChecks = [this.restraintCheck, this.modeCheck];
+    this.wholeMachineCheck = new WholeMachineCheck(store, problem);
+    this.finalistChecks = [this.restraintCheck, this.modeCheck, this.wholeMachineCheck];
   }
 
   /**
@@ -85,6 +89,12 @@ export class SelectionEvaluation {
     for (const check of this.finalistChecks) check.check(c);
   }
 
+  /** The modes and crossings of candidate c (judging it if it was not). */
+  judged(c: number): { modes: ReturnType<ModeCheck['findingsOf']>; wholeMachine: ReturnType<WholeMachineCheck['findingsOf']> } {
+    this.checkFinalist(c);
+    return { modes: this.modeCheck.findingsOf(c), wholeMachine: this.wholeMachineCheck.findingsOf(c) };
+  }
+
   /** Makes sure the details of the mounts these candidates use are loaded (and their checks applied). */
   ensureDetails(candidates: readonly number[], loadDetails: DetailsLoader): Promise<void> {
     return this.store.ensureDetails(candidates, loadDetails);
@@ -100,6 +110,16 @@ export class SelectionEvaluation {
     return this.store.findSeries(seriesId);
   }
 
+  /** Transmissibility against speed per source of candidate c over its stiffness band (the chart). */
+  curves(c: number): SourceCurves {
+    return this.wholeMachineCheck.curves(c);
+  }
+
+  /** The resolved sources and speeds of the request. */
+  get forcing(): SelectionProblem['forcing'] {
+    return this.problem.forcing;
+  }
+
   /** Supplier of a candidate. */
   supplierOf(c: number): number {
     return this.store.supplierOf(c);
@@ -107,10 +127,17 @@ export class SelectionEvaluation {
 
   /** The candidate as the API shows it. */
   describe(c: number, supplierNames: ReadonlyMap<number, string>): Candidate {
-    // Every candidate shown carries its restraint figures, and its verdict agrees with them.
-    this.restraintCheck.check(c);
+    // Every candidate shown carries its restraint figures, modes and whole-machine verdict, and its verdict agrees with them.
+    this.checkFinalist(c);
     return describeCandidate(
-      { store: this.store, problem: this.problem, refs: this.refs, modeCheck: this.modeCheck, restraintCheck: this.restraintCheck },
+      {
+        store: this.store,
+        problem: this.problem,
+        refs: this.refs,
+        modeCheck: this.modeCheck,
+        restraintCheck: this.restraintCheck,
+        wholeMachineCheck: this.wholeMachineCheck,
+      },
       c,
       supplierNames,
     );
