@@ -568,6 +568,22 @@ export interface paths {
     patch?: never;
     trace?: never;
   };
+  "/api/selection/curves": {
+    parameters: {
+      query?: never;
+      header?: never;
+      path?: never;
+      cookie?: never;
+    };
+    get?: never;
+    put?: never;
+    post: operations["SelectionController_curves"];
+    delete?: never;
+    options?: never;
+    head?: never;
+    patch?: never;
+    trace?: never;
+  };
   "/api/suppliers": {
     parameters: {
       query?: never;
@@ -694,6 +710,15 @@ export interface components {
        */
       lz: number;
     };
+    CandidateCrossingDto: {
+      /** @description the mode by its motion, e.g. "pitch" or "roll + sway (mixed)" */
+      mode: string;
+      modeFrequencyHz: number;
+      /** @description label of the source */
+      source: string;
+      order: number;
+      speedRpm: number;
+    };
     CandidateDto: {
       kind: components["schemas"]["CandidateKind"];
       mountId?: number;
@@ -707,7 +732,7 @@ export interface components {
       weightMarginPct?: number;
       /** @description √(Σ n_d·k_v / m)/2π */
       verticalNaturalFrequencyHz: number;
-      /** @description in the order of the disturbing frequencies */
+      /** @description the bounce estimate (quick figures) at the disturbing frequencies, in their order; the verdict is wholeMachine */
       isolation: components["schemas"]["CandidateIsolationDto"][];
       /** @description transmissibility at resonance */
       resonanceAmplification: number;
@@ -719,6 +744,11 @@ export interface components {
       modes?: components["schemas"]["CandidateModeDto"][];
       /** @description seismic restraint figures, when the input asks for restraint */
       restraint?: components["schemas"]["CandidateRestraintDto"];
+      /** @description the whole-machine verdict over the running range and the stiffness band (absent when the inertia is unknown) */
+      wholeMachine?: components["schemas"]["CandidateWholeMachineDto"];
+      /** @description crossings of the source orders with the modes inside the running range */
+      crossings?: components["schemas"]["CandidateCrossingDto"][];
+      /** @description follows the whole-machine verdict, with the load, deflection, mode and restraint checks */
       passes: boolean;
       reasons: string[];
       /** @description assumptions and remarks that do not fail the candidate */
@@ -783,6 +813,13 @@ export interface components {
       perPoint: components["schemas"]["RestraintPointDto"][];
       /** @description every point within its ratings */
       passes: boolean;
+    };
+    CandidateWholeMachineDto: {
+      worst: components["schemas"]["WholeMachineWorstDto"];
+      /** @description stiffness band applied, ± % (the criteria’s or the default of the mount type) */
+      stiffnessTolerancePct: number;
+      /** @description per source: at the fixed frequency, or at the range ends, each crossing and the worst point (governing stiffness) */
+      perFrequency: components["schemas"]["WholeMachineFrequencyDto"][];
     };
     CatalogImportDto: {
       id: number;
@@ -998,6 +1035,23 @@ export interface components {
        * @example 15
        */
       stiffnessTolerancePct?: number;
+    };
+    CurvesCandidateDto: {
+      kind: components["schemas"]["CandidateKind"];
+      mountId?: number;
+      seriesId?: string;
+      label: string;
+      passes: boolean;
+    };
+    CurvesModeDto: {
+      frequencyHz: number;
+      dominant: components["schemas"]["RigidBodyMode"];
+      coupled: boolean;
+    };
+    CurvesRequirementDto: {
+      minIsolationPct: number;
+      /** @description the highest transmissibility the requirement allows */
+      transmissibility: number;
     };
     /** @enum {string} */
     DampingModel: "viscous" | "hysteretic";
@@ -1555,6 +1609,11 @@ export interface components {
       /** @example engineer@tacet.test */
       email: string;
     };
+    PointForceDto: {
+      label: string;
+      /** @description peak dynamic force through the mount, N (per newton for the default vertical force) */
+      forceN: number;
+    };
     PredictedDampingDto: {
       model: components["schemas"]["DampingModel"];
       /** @description ζ (viscous) or η (hysteretic) */
@@ -1817,6 +1876,53 @@ export interface components {
      * @enum {string}
      */
     SeismicForceLimit: "formula" | "minimum" | "maximum";
+    SelectionCurvesRequestDto: {
+      /**
+       * @default 20
+       * @example 20
+       */
+      limit?: number;
+      components: components["schemas"]["ComponentDto"][];
+      mountPoints: components["schemas"]["MountPointDto"][];
+      /**
+       * @description Hz, each > 0: a vertical force through the CG at each (give this or operating)
+       * @example [
+       *       24.67,
+       *       49.33,
+       *       100
+       *     ]
+       */
+      disturbingFrequenciesHz?: number[];
+      /** @description the machine's operating conditions, as in a design (sources, speed range, skip bands); instead of disturbingFrequenciesHz */
+      operating?: components["schemas"]["OperatingConditionsDto"];
+      criteria: components["schemas"]["CriteriaDto"];
+      /** @description seismic restraint (ASCE 7-16 §13.3.1); absent: not checked */
+      restraint?: components["schemas"]["RestraintInputDto"];
+      /**
+       * @description the uniform candidate of this mount (give this or seriesId)
+       * @example 12
+       */
+      mountId?: number;
+      /**
+       * @description the series candidate `${supplierId}:${series}`
+       * @example 3:LV
+       */
+      seriesId?: string;
+    };
+    SelectionCurvesResponseDto: {
+      candidate: components["schemas"]["CurvesCandidateDto"];
+      /** @description running range, rpm; null when only fixed frequencies force the machine */
+      speedRangeRpm: components["schemas"]["SpeedBandDto"] | null;
+      skipBandsRpm: components["schemas"]["SpeedBandDto"][];
+      requirement: components["schemas"]["CurvesRequirementDto"];
+      /** @description ± % */
+      stiffnessTolerancePct: number;
+      /** @description modes at the nominal stiffness */
+      modes: components["schemas"]["CurvesModeDto"][];
+      crossings: components["schemas"]["CandidateCrossingDto"][];
+      worst: components["schemas"]["WholeMachineWorstDto"] | null;
+      sources: components["schemas"]["SourceCurveDto"][];
+    };
     SelectionRequestDto: {
       /**
        * @default 20
@@ -1882,6 +1988,21 @@ export interface components {
      * @enum {string}
      */
     SourceAxis: "x" | "y" | "z";
+    SourceCurveDto: {
+      label: string;
+      /** @description shaft order it follows; null at a fixed frequency */
+      order: number | null;
+      fixedFrequencyHz: number | null;
+      /** @description ascending, ≤ 0.5 % steps, with the range ends, skip-band edges and crossings */
+      speedRpm: number[];
+      frequencyHz: number[];
+      /** @description whole-machine transmissibility at the nominal stiffness */
+      transmissibility: number[];
+      /** @description at the soft end of the band (1 − tol); null without a band */
+      softEnd: number[] | null;
+      /** @description at the stiff end of the band (1 + tol); null without a band */
+      stiffEnd: number[] | null;
+    };
     /**
      * @description unbalance: m_r·e·ω² rotating in the plane normal to the axis; force: a harmonic force along the axis
      * @enum {string}
@@ -1903,6 +2024,12 @@ export interface components {
        * @example 0.5
        */
       z: number;
+    };
+    SpeedBandDto: {
+      /** @description rpm */
+      min: number;
+      /** @description rpm */
+      max: number;
     };
     SpeedRangeDto: {
       /**
@@ -2234,6 +2361,29 @@ export interface components {
     VerificationKind: "frf" | "impact";
     /** @enum {string} */
     VerificationVerdict: "agrees" | "stiffer" | "softer";
+    WholeMachineFrequencyDto: {
+      source: string;
+      frequencyHz: number;
+      speedRpm: number | null;
+      transmissibility: number;
+      /** @description the source's amplitude there, N (1 for the default vertical force) */
+      amplitudeN: number;
+      /** @description in the order of mountPoints */
+      perPoint: components["schemas"]["PointForceDto"][];
+    };
+    WholeMachineWorstDto: {
+      /** @description worst whole-machine transmissibility: Σ peak mount force / peak applied force */
+      transmissibility: number;
+      /** @description (1 − transmissibility)·100 */
+      efficiencyPct: number;
+      frequencyHz: number;
+      /** @description rpm; null for a fixed frequency when no speed is given */
+      speedRpm: number | null;
+      /** @description label of the source that governs */
+      source: string;
+      /** @description stiffness factor that governs: 1 − tol, 1 or 1 + tol */
+      stiffnessFactor: number;
+    };
     WorkItemDto: {
       designId: number;
       projectId: number;
@@ -3638,6 +3788,37 @@ export interface operations {
         };
       };
       /** @description Input the calculation cannot use, with the field named */
+      400: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content?: never;
+      };
+    };
+  };
+  SelectionController_curves: {
+    parameters: {
+      query?: never;
+      header?: never;
+      path?: never;
+      cookie?: never;
+    };
+    requestBody: {
+      content: {
+        "application/json": components["schemas"]["SelectionCurvesRequestDto"];
+      };
+    };
+    responses: {
+      /** @description Per source: speeds, frequencies, transmissibility at the nominal stiffness and both band ends */
+      200: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          "application/json": components["schemas"]["SelectionCurvesResponseDto"];
+        };
+      };
+      /** @description Input the calculation cannot use, or a candidate not in the catalog, with the field named */
       400: {
         headers: {
           [name: string]: unknown;

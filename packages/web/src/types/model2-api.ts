@@ -32,40 +32,15 @@ export interface Model2Operating {
   motorPoles?: number;
 }
 
-export interface WholeMachinePoint {
-  /** The source's label (or the default vertical force's name). */
-  source: string;
-  frequencyHz: number;
-  speedRpm?: number;
-  transmissibility: number;
-  /** Peak force per mount [N] for the source's amplitude (per unit force for the default source). */
-  perPoint: { label: string; forceN: number }[];
-}
-
-export interface WholeMachineWorst {
-  transmissibility: number;
-  efficiencyPct: number;
-  frequencyHz: number;
-  speedRpm?: number;
-  source: string;
-  /** The end of the stiffness band that governed (e.g. 1.15 = stiff end). */
-  stiffnessFactor?: number;
-}
-
-export interface WholeMachine {
-  worst: WholeMachineWorst;
-  perFrequency: WholeMachinePoint[];
-}
-
-/** A speed where an order of a source meets a rigid-body mode. */
-export interface Crossing {
-  /** The mode: its number in the modes table (1-based) or its name. */
-  mode: number | string;
-  modeFrequencyHz: number;
-  source: string;
-  order: number;
-  speedRpm: number;
-}
+/** The whole machine at one frequency of one source: T and the peak force per mount [N]. */
+export type WholeMachinePoint = ApiSchemas['WholeMachineFrequencyDto'];
+/** The worst point over the running range (and the stiffness band), which the verdict is checked against. */
+export type WholeMachineWorst = ApiSchemas['WholeMachineWorstDto'];
+export type WholeMachine = ApiSchemas['CandidateWholeMachineDto'];
+/** A speed where an order of a source meets a rigid-body mode (mode named by its motion). */
+export type Crossing = ApiSchemas['CandidateCrossingDto'];
+/** `POST /api/selection/curves`: T against speed per source of one candidate, nominal and both band ends. */
+export type SelectionCurves = ApiSchemas['SelectionCurvesResponseDto'];
 
 /** Start-up and coast-down: steady motion at a mode below the running range. */
 export interface PassagePoint {
@@ -91,8 +66,8 @@ export interface Model2Criteria {
 }
 
 /**
- * One source's transmissibility against speed over the running range, when the server sends
- * the curve: T at the nominal stiffness and, with a stiffness band, at its two ends.
+ * One source's transmissibility against speed over the running range, as the chart reads it:
+ * T at the nominal stiffness and, with a stiffness band, at its two ends (from `SelectionCurves`).
  */
 export interface SpeedCurve {
   source: string;

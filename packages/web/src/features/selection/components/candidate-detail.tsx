@@ -5,9 +5,10 @@ import { useMemo } from 'react';
 
 import type { FrequencyMarker } from '@/components/charts/transmissibility-chart';
 import { useUnits } from '@/lib/units';
-import type { Candidate } from '@/types/design-api';
-import type { Model2Candidate, SpeedCurve } from '@/types/model2-api';
+import type { Candidate, DesignInput } from '@/types/design-api';
+import type { Model2Candidate } from '@/types/model2-api';
 
+import { useSpeedCurves } from '../api/get-speed-curves';
 import { useCandidateDamping } from '../hooks/use-candidate-damping';
 import { CandidateCharts } from './candidate-charts';
 import { CandidateRestraintSection, type RestraintPlanLayout } from './candidate-restraint';
@@ -57,8 +58,8 @@ export interface CandidateDetailProps {
   restraintLayout?: RestraintPlanLayout | null;
   /** What of the saved input the whole-machine section needs (range, skip bands, motion limit). */
   wholeMachineContext?: WholeMachineContext | null;
-  /** The server's speed sweep per source, when it sent one. */
-  speedCurves?: readonly SpeedCurve[] | null;
+  /** The saved input the candidate was found for, to fetch its speed curves (null: the chart shows the result's points). */
+  curvesInput?: DesignInput | null;
 }
 
 const SAME_MASS_TOLERANCE = 1e-9;
@@ -78,7 +79,7 @@ export function CandidateDetail({
   onChoose,
   restraintLayout = null,
   wholeMachineContext = null,
-  speedCurves = null,
+  curvesInput = null,
 }: CandidateDetailProps) {
   const units = useUnits();
   const damping = useCandidateDamping(candidate);
@@ -86,6 +87,7 @@ export function CandidateDetail({
   const assumptions = assumptionsOf(candidate);
   const model2 = candidate as Candidate & Model2Candidate;
   const estimate = model2.wholeMachine ? ' (bounce estimate)' : '';
+  const speedCurves = useSpeedCurves(curvesInput, candidate, model2.wholeMachine !== undefined && wholeMachineContext?.rangeRpm != null);
 
   // Σk_dyn follows from the server's fn and mass; the live fn re-uses it with the current mass.
   const stiffness = useMemo(

@@ -60,7 +60,7 @@ export function worstIsolationWhere(candidate: Candidate): string | null {
   const whole = (candidate as Candidate & Model2Candidate).wholeMachine;
   if (whole) {
     const { speedRpm, frequencyHz } = whole.worst;
-    return speedRpm !== undefined && Number.isFinite(speedRpm)
+    return typeof speedRpm === 'number' && Number.isFinite(speedRpm)
       ? `at ${Math.round(speedRpm).toLocaleString('en-US')} rpm`
       : `at ${formatFrequency(frequencyHz)}`;
   }

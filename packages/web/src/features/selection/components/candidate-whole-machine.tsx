@@ -11,7 +11,8 @@ import { modeText, speedChartData, worstPointForces } from './speed-chart-data';
 const SpeedChart = lazy(() => import('./speed-chart').then((m) => ({ default: m.SpeedChart })));
 
 const rpm = new Intl.NumberFormat('en-US', { maximumFractionDigits: 0 });
-const formatRpm = (value: number | undefined) => (value === undefined || !Number.isFinite(value) ? '—' : `${rpm.format(value)} rpm`);
+const formatRpm = (value: number | null | undefined) =>
+  typeof value !== 'number' || !Number.isFinite(value) ? '—' : `${rpm.format(value)} rpm`;
 
 /** What of the design input the whole-machine section needs (from the saved input). */
 export interface WholeMachineContext {
@@ -69,7 +70,7 @@ export function CandidateWholeMachine({ candidate, context, targetTransmissibili
       <h4 className="tc-subsection-title">Whole machine over the running range</h4>
       <p className="tc-whole-machine-worst" data-testid="whole-machine-worst">
         Worst transmissibility <strong>{formatTransmissibility(worst.transmissibility)}</strong> (isolation{' '}
-        <strong>{formatPct(worst.efficiencyPct)}</strong>) at {worst.speedRpm !== undefined ? `${formatRpm(worst.speedRpm)}, ` : ''}
+        <strong>{formatPct(worst.efficiencyPct)}</strong>) at {typeof worst.speedRpm === 'number' ? `${formatRpm(worst.speedRpm)}, ` : ''}
         {formatFrequency(worst.frequencyHz)}, from {worst.source}
         {bandEnd ? `, at ${bandEnd}` : ''}. This is the figure the verdict is checked against.
       </p>

@@ -291,6 +291,7 @@ export const SelectionPanel = memo(function SelectionPanel({
               onChoose={() => void choose(detailCandidate)}
               restraintLayout={restraintLayout}
               wholeMachineContext={wholeMachineContext}
+              curvesInput={stale ? null : savedInput}
             />
           ) : run ? (
             <p className="tc-muted tc-note">Select a candidate to see its loads, curves and modes.</p>

@@ -8,6 +8,7 @@ import { crossingLabel, modeText, speedChartData, worstPointForces } from './spe
 function candidate(): Model2Candidate {
   return {
     wholeMachine: {
+      stiffnessTolerancePct: 15,
       worst: {
         transmissibility: 2.4,
         efficiencyPct: -140,
@@ -17,29 +18,30 @@ function candidate(): Model2Candidate {
         stiffnessFactor: 1.15,
       },
       perFrequency: [
-        { source: 'Pump impeller', frequencyHz: 1480 / 60, speedRpm: 1480, transmissibility: 0.08, perPoint: [] },
-        { source: 'Pump impeller', frequencyHz: 15, speedRpm: 900, transmissibility: 0.3, perPoint: [] },
+        { source: 'Pump impeller', frequencyHz: 1480 / 60, speedRpm: 1480, transmissibility: 0.08, amplitudeN: 400, perPoint: [] },
+        { source: 'Pump impeller', frequencyHz: 15, speedRpm: 900, transmissibility: 0.3, amplitudeN: 400, perPoint: [] },
         {
           source: 'Pump impeller',
           frequencyHz: 1090 / 60,
           speedRpm: 1090,
           transmissibility: 2.4,
+          amplitudeN: 250,
           perPoint: [
             { label: 'A', forceN: 120 },
             { label: 'B', forceN: 80 },
           ],
         },
-        { source: 'Motor rotor', frequencyHz: 15, speedRpm: 900, transmissibility: 0.2, perPoint: [] },
-        { source: 'Motor rotor', frequencyHz: 1480 / 60, speedRpm: 1480, transmissibility: 0.05, perPoint: [] },
+        { source: 'Motor rotor', frequencyHz: 15, speedRpm: 900, transmissibility: 0.2, amplitudeN: 400, perPoint: [] },
+        { source: 'Motor rotor', frequencyHz: 1480 / 60, speedRpm: 1480, transmissibility: 0.05, amplitudeN: 400, perPoint: [] },
         // outside the range: left out of the chart
-        { source: 'Motor rotor', frequencyHz: 100, transmissibility: 0.01, perPoint: [] },
+        { source: 'Motor rotor', frequencyHz: 100, speedRpm: null, transmissibility: 0.01, amplitudeN: 400, perPoint: [] },
       ],
     },
     crossings: [
-      { mode: 4, modeFrequencyHz: 1090 / 60, source: 'Pump impeller', order: 1, speedRpm: 1090 },
+      { mode: 'roll + yaw', modeFrequencyHz: 1090 / 60, source: 'Pump impeller', order: 1, speedRpm: 1090 },
       { mode: 'pitch', modeFrequencyHz: 40, source: 'Pump impeller', order: 2, speedRpm: 1200 },
       // below the range: not drawn
-      { mode: 2, modeFrequencyHz: 10, source: 'Motor rotor', order: 1, speedRpm: 600 },
+      { mode: 'bounce', modeFrequencyHz: 10, source: 'Motor rotor', order: 1, speedRpm: 600 },
     ],
   };
 }
@@ -63,12 +65,12 @@ describe('speed chart data', () => {
   it('marks the crossings inside the range with their mode and order', () => {
     const data = speedChartData({ candidate: candidate(), rangeRpm: RANGE, targetTransmissibility: null });
     expect(data.sources[0]!.crossings).toEqual([
-      { speedRpm: 1090, label: 'mode 4 · 1×' },
+      { speedRpm: 1090, label: 'roll + yaw · 1×' },
       { speedRpm: 1200, label: 'pitch · 2×' },
     ]);
     expect(data.sources[1]!.crossings).toEqual([]);
     expect(modeText(3)).toBe('mode 3');
-    expect(crossingLabel({ mode: 1, order: 0.1 + 0.2 })).toBe('mode 1 · 0.3×');
+    expect(crossingLabel({ mode: 'bounce', order: 0.1 + 0.2 })).toBe('bounce · 0.3×');
   });
 
   it('draws the requirement at T for the required isolation and spans whole decades that include it and T = 1', () => {

@@ -93,7 +93,8 @@ function sourceNames(input: SpeedChartInput): string[] {
  */
 export function speedChartData(input: SpeedChartInput): SpeedChartData {
   const { min, max } = input.rangeRpm;
-  const inRange = (rpm: number | undefined): rpm is number => rpm !== undefined && Number.isFinite(rpm) && rpm >= min && rpm <= max;
+  const inRange = (rpm: number | null | undefined): rpm is number =>
+    typeof rpm === 'number' && Number.isFinite(rpm) && rpm >= min && rpm <= max;
   const worst = input.candidate.wholeMachine?.worst ?? null;
 
   const sources = sourceNames(input).map<SourceSpeedChart>((source) => {
