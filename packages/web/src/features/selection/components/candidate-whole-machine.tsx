@@ -58,7 +58,7 @@ export function CandidateWholeMachine({ candidate, context, targetTransmissibili
   if (!wm) return null;
   const { worst } = wm;
   const bandEnd = bandEndText(worst.stiffnessFactor);
-  const passage = candidate.passage ?? [];
+  const passage = candidate.passage;
   const crossings = candidate.crossings ?? [];
   const limit = context.maxResonantMotionMm;
   const maxForce = forces ? Math.max(...forces.map((f) => f.forceN), 0) : 0;
@@ -69,8 +69,17 @@ export function CandidateWholeMachine({ candidate, context, targetTransmissibili
     <section className="tc-whole-machine" aria-label="Whole machine" data-testid="whole-machine">
       <h4 className="tc-subsection-title">Whole machine over the running range</h4>
       <p className="tc-whole-machine-worst" data-testid="whole-machine-worst">
-        Worst transmissibility <strong>{formatTransmissibility(worst.transmissibility)}</strong> (isolation{' '}
-        <strong>{formatPct(worst.efficiencyPct)}</strong>) at {typeof worst.speedRpm === 'number' ? `${formatRpm(worst.speedRpm)}, ` : ''}
+        Worst transmissibility <strong>{formatTransmissibility(worst.transmissibility)}</strong>{' '}
+        {worst.transmissibility > 1 ? (
+          <>
+            (<strong>no isolation</strong>: the force reaching the floor is amplified)
+          </>
+        ) : (
+          <>
+            (isolation <strong>{formatPct(worst.efficiencyPct)}</strong>)
+          </>
+        )}{' '}
+        at {typeof worst.speedRpm === 'number' ? `${formatRpm(worst.speedRpm)}, ` : ''}
         {formatFrequency(worst.frequencyHz)}, from {worst.source}
         {bandEnd ? `, at ${bandEnd}` : ''}. This is the figure the verdict is checked against.
       </p>
@@ -139,7 +148,7 @@ export function CandidateWholeMachine({ candidate, context, targetTransmissibili
 
         <div className="tc-whole-machine-side">
           <h5 className="tc-side-title">Start-up and coast-down</h5>
-          {passage.length > 0 ? (
+          {passage && passage.length > 0 ? (
             <HTMLTable compact striped className="tc-table" aria-label="Start-up passage">
               <thead>
                 <tr>
@@ -168,8 +177,12 @@ export function CandidateWholeMachine({ candidate, context, targetTransmissibili
                 })}
               </tbody>
             </HTMLTable>
-          ) : (
+          ) : passage ? (
             <p className="tc-muted tc-note">No mode below the running range: nothing is passed through on the way up.</p>
+          ) : (
+            <p className="tc-muted tc-note" data-testid="passage-missing">
+              This result has no start-up figures: find mounts again to add them.
+            </p>
           )}
           <p className="tc-muted tc-note" data-testid="passage-limit">
             Steady peak motion at the mounts at each mode below the lowest running speed, from the unbalance at that speed.{' '}

@@ -15,11 +15,11 @@ import {
 
 import type { SourceSpeedChart, SpeedChartData } from './speed-chart-data';
 
-const WIDTH = 640;
-const HEIGHT = 300;
-const PADDING = { top: 40, right: 24, bottom: 50, left: 64 };
+const WIDTH = 440;
+const HEIGHT = 280;
+const PADDING = { top: 40, right: 16, bottom: 48, left: 60 };
 
-const BAND_STYLE = { data: { fill: CHART_COLORS.curve, fillOpacity: 0.18, stroke: CHART_COLORS.curveSoft, strokeWidth: 1 } } as const;
+const BAND_STYLE = { data: { fill: CHART_COLORS.curveSoft, fillOpacity: 0.4, stroke: CHART_COLORS.curveSoft, strokeWidth: 1 } } as const;
 const SKIP_STYLE = { data: { fill: '#d9d6cc', fillOpacity: 0.7, stroke: 'none' } } as const;
 const POINT_STYLE = { data: { fill: CHART_COLORS.curve, stroke: '#fff', strokeWidth: 1 } } as const;
 const WORST_STYLE = {
@@ -39,7 +39,7 @@ const rpm = new Intl.NumberFormat('en-US', { maximumFractionDigits: 0 });
 function speedTicks([min, max]: [number, number]): number[] {
   const span = max - min;
   if (!(span > 0)) return [min];
-  const raw = span / 6;
+  const raw = span / 5;
   const magnitude = 10 ** Math.floor(Math.log10(raw));
   const step = [1, 2, 2.5, 5, 10].map((m) => m * magnitude).find((s) => s >= raw) ?? raw;
   const out: number[] = [];
@@ -132,7 +132,7 @@ export const SpeedChart = memo(function SpeedChart({ data, chart }: SpeedChartPr
         <VictoryLabel
           key={`crossing-label-${crossing.label}-${crossing.speedRpm}`}
           text={`${crossing.label} · ${rpm.format(crossing.speedRpm)} rpm`}
-          x={Math.min(Math.max(toPx(crossing.speedRpm), PADDING.left + 60), WIDTH - PADDING.right - 60)}
+          x={Math.min(Math.max(toPx(crossing.speedRpm), PADDING.left + 50), WIDTH - PADDING.right - 50)}
           y={PADDING.top - 8 - (index % 2) * 13}
           textAnchor="middle"
           style={CROSSING_LABEL_STYLE}
