@@ -146,7 +146,7 @@ export const SpeedChart = memo(function SpeedChart({ data, chart }: SpeedChartPr
           size={5}
           style={WORST_STYLE}
           labels={({ datum }: { datum: { label?: string } }) => datum.label ?? ''}
-          labelComponent={<VictoryLabel dy={-10} />}
+          labelComponent={<VictoryLabel dx={8} dy={-8} textAnchor="start" />}
         />
       ) : null}
     </VictoryChart>
