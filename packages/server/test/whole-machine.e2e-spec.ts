@@ -1,6 +1,11 @@
 import { massProperties, prepareWholeMachine, transmissibilityBatch, wholeMachineTransmissibility } from '@tacet/vibration';
+import { DataSource } from 'typeorm';
+import { Design } from '../src/designs/design.entity.js';
+import { PurchasingService } from '../src/purchasing/purchasing.service.js';
 import { createMount, createSupplier, type CreatedMount, type CreatedSupplier } from './factories/selection-catalog.factory.js';
+import { releaseDesign } from './factories/review.factory.js';
 import { createTestApp, type TestApp } from './utils/create-test-app.js';
+import { pdfHasText } from './utils/pdf-text.js';
 
 /**
  * The whole-machine verdict of POST /api/selection (docs/engineering/selection.md §14–§17) on the two
@@ -179,7 +184,7 @@ describe('whole-machine verdict (e2e)', () => {
     }
     expect(crossings.some((x) => /roll/.test(x.mode))).toBe(true);
     expect(c.reasons[0]).toMatch(
-      /^Whole machine, Impeller: at \d+ rpm \([\d.]+ Hz\), stiffness 15 % (above|below) nominal the mounts amplify the force/,
+      /^Whole machine, Impeller: at \d+ rpm, [\d.]+ Hz \((nominal stiffness|stiffness 15 % (above|below) nominal)\) the mounts amplify the force/,
     );
     for (const x of crossings) {
       expect(c.reasons).toContain(
@@ -235,7 +240,7 @@ describe('whole-machine verdict (e2e)', () => {
     expect(c.wholeMachine!.worst.stiffnessFactor).toBe(1.15); // the stiff end brings the mode nearer
     expect(c.crossings).toEqual([]); // a fixed speed crosses nothing on the way (start-up is another check)
     expect(c.reasons[0]).toMatch(
-      /^Whole machine, Motor rotor: isolation [\d.]+ % at 1480 rpm \(24\.67 Hz\), stiffness 15 % above nominal, below the 90 % required\.$/,
+      /^Whole machine, Motor rotor: isolation [\d.]+ % at 1480 rpm, 24\.67 Hz \(stiffness 15 % above nominal\), below the 90 % required\.$/,
     );
   });
 
@@ -280,13 +285,13 @@ describe('whole-machine verdict (e2e)', () => {
     expect(first.isolation[0].transmissibility).toBeGreaterThan(1);
     expect(first.wholeMachine!.worst.efficiencyPct).toBeGreaterThan(90);
     expect(first.notes[0]).toMatch(
-      /^Whole machine: worst isolation [\d.]+ % \(Shaker at 240 rpm \(4 Hz\), stiffness 10 % above nominal\); the isolation per frequency above is the bounce estimate\.$/,
+      /^Whole machine: worst isolation [\d.]+ %, Shaker at 240 rpm, 4 Hz \(stiffness 10 % above nominal\); the isolation per frequency above is the bounce estimate\.$/,
     );
     // the ten rows the estimate ranks higher were judged by the whole machine first and fail on their surge
     const failing = candidates.filter((c) => !c.passes);
     expect(failing).toHaveLength(1);
     expect(shaky.map((m) => m.id)).toContain(failing[0].mountId);
-    expect(failing[0].reasons[0]).toMatch(/^Whole machine, Shaker: at 240 rpm \(4 Hz\)/);
+    expect(failing[0].reasons[0]).toMatch(/^Whole machine, Shaker: at 240 rpm, 4 Hz/);
     // sanity of the construction: the estimate would rank every shaky row above the quiet one
     const out = new Float64Array(2);
     transmissibilityBatch(
@@ -338,6 +343,57 @@ describe('whole-machine verdict (e2e)', () => {
     const worst = Math.max(...curve.transmissibility, ...curve.softEnd, ...curve.stiffEnd);
     expect(worst).toBeLessThanOrEqual(body.worst.transmissibility * (1 + 1e-9));
     expect(worst).toBeGreaterThan(body.worst.transmissibility * 0.99);
+  });
+
+  it('a released design freezes the sources, the worst point, the crossings and the verdict, and its report prints them', async () => {
+    const auth = { Authorization: `Bearer ${engineer}` };
+    const project = await t
+      .http()
+      .post('/api/projects')
+      .set(auth)
+      .send({ name: `Whole machine ${process.pid}` });
+    expect(project.status).toBe(201);
+    const input = {
+      components: TALL,
+      mountPoints: TALL_POINTS,
+      operating: { ...TALL_OPERATING, skipBandsRpm: [{ min: 1000, max: 1100 }] },
+      criteria: { minIsolationPct: 80, minUtilization: 0.5, maxUtilization: 1.0, supplierIds: [rubber.id] },
+    };
+    const created = await t.http().post(`/api/projects/${project.body.id}/designs`).set(auth).send({ name: 'Tall pump on a drive', input });
+    expect(created.status).toBe(201);
+    const chosen = await t.http().put(`/api/designs/${created.body.id}`).set(auth).send({ version: 1, chosenMountId: tallMount.id });
+    expect(chosen.status).toBe(200);
+    expect(chosen.body.chosen.passes).toBe(false);
+    expect(chosen.body.chosen.crossings.length).toBeGreaterThanOrEqual(2);
+    await releaseDesign(t, created.body.id, engineer, await t.login('checker@tacet.test', 'tacet-demo'));
+
+    const design = await t.app
+      .get(DataSource)
+      .getRepository(Design)
+      .findOneOrFail({
+        where: { id: created.body.id },
+        relations: { project: true, author: true, checker: true },
+      });
+    const frozen = design.snapshot!.wholeMachine!;
+    expect(design.snapshot!.operating).toEqual(input.operating);
+    expect(frozen.worst).toEqual(chosen.body.chosen.wholeMachine.worst);
+    expect(frozen.crossings).toEqual(chosen.body.chosen.crossings);
+    expect(frozen.passes).toBe(false);
+    expect(frozen.reasons).toEqual(chosen.body.chosen.reasons);
+    expect(frozen.skipBandsRpm).toEqual([{ min: 1000, max: 1100 }]);
+    expect(frozen.curves[0].label).toBe('Impeller');
+    expect(frozen.curves[0].speedRpm.length).toBeGreaterThan(100);
+
+    const pdf = await t.app.get(PurchasingService).reportOf(design, false);
+    const wanted = [
+      'Whole machine over the running range',
+      'Source Impeller: unbalance of a 40.0 kg rotor balanced to G6.3',
+      'Skip bands of the drive: 1000 rpm',
+      'Verdict: does not meet the requirements',
+      `Crossing: the ${frozen.crossings[0].mode} mode`,
+      'Whole-machine transmissibility T (log) against shaft speed',
+    ];
+    expect(wanted.filter((text) => !pdfHasText(pdf, text))).toEqual([]);
   });
 
   it('the curves route refuses a candidate that is not in the catalog, and neither or both of a mount and a series', async () => {

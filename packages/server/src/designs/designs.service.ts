@@ -176,7 +176,7 @@ export class DesignsService {
 
   /** The chosen candidate, its bill of materials and the snapshot of its catalog data and figures. */
   async choose(input: DesignInput, choice: CandidateChoice): Promise<Required<Pick<DesignChanges, 'chosen' | 'bom' | 'snapshot'>>> {
-    const { candidate, problem, frequencies } = await this.selection.evaluateChoice(input, choice);
+    const { candidate, problem, frequencies, curves } = await this.selection.evaluateChoice(input, choice);
     const mounts = await this.catalog.snapshots(candidate.perPoint.map((p) => p.mountId));
     return {
       chosen: candidate,
@@ -189,6 +189,22 @@ export class DesignsService {
         pointLoadsN: Array.from(problem.equalLoadsN),
         disturbingFrequencies: frequencies,
         criteria: input.criteria,
+        operating: input.operating,
+        ...(candidate.wholeMachine && curves
+          ? {
+              wholeMachine: {
+                worst: candidate.wholeMachine.worst,
+                stiffnessTolerancePct: candidate.wholeMachine.stiffnessTolerancePct,
+                crossings: candidate.crossings ?? [],
+                passes: candidate.passes,
+                reasons: candidate.reasons,
+                curves: curves.sources,
+                speedRangeRpm: problem.forcing.speedRangeRpm,
+                skipBandsRpm: problem.forcing.skipBandsRpm,
+                requirementTransmissibility: problem.transmissibilityTarget,
+              },
+            }
+          : {}),
       },
     };
   }

@@ -88,11 +88,106 @@ describe('designReportPdf', () => {
     const wanted = [
       'Speed 1480 rpm',
       'Vanes or blades: 6',
-      'Minimum isolation 90.0 %',
+      'Minimum isolation 90.0 % of the whole machine',
       'x 0.500 m',
       'IS-100',
       'damping ratio 0.01',
       'Transmissibility T (log)',
+    ];
+    expect(wanted.filter((text) => !pdfHasText(pdf, text))).toEqual([]);
+  }, 20000);
+});
+
+describe('designReportPdf: the whole machine (docs/engineering/selection.md §14–§17)', () => {
+  it('prints the frozen sources, skip bands, band, worst point, crossings and verdict, and draws the speed chart', async () => {
+    const worst = {
+      transmissibility: 7.5,
+      efficiencyPct: -650,
+      frequencyHz: 13.8,
+      speedRpm: 829,
+      source: 'Impeller',
+      stiffnessFactor: 1.15,
+    };
+    const crossings = [{ mode: 'roll + sway (mixed)', modeFrequencyHz: 13.89, source: 'Impeller', order: 1, speedRpm: 833.4 }];
+    const speeds = [780, 829, 833.4, 1000, 1100, 1800];
+    const candidate = {
+      label: 'WM-TALL',
+      supplier: { id: 1, name: 'Invented Rubber' },
+      verticalNaturalFrequencyHz: 5.03,
+      resonanceAmplification: 10,
+      levelErrorMm: 0,
+      perPoint: [],
+      isolation: [],
+      modes: [],
+      passes: false,
+      reasons: ['Whole machine, Impeller: at 829 rpm (13.82 Hz), stiffness 15 % above nominal the mounts amplify the force'],
+      wholeMachine: { worst, stiffnessTolerancePct: 15, perFrequency: [] },
+      crossings,
+    };
+    const operating = {
+      speedRangeRpm: { min: 780, max: 1800 },
+      orders: [1],
+      motorPoles: 4,
+      skipBandsRpm: [{ min: 1000, max: 1100 }],
+      sources: [{ label: 'Impeller', kind: 'unbalance', at: { x: 0, y: 0, z: 0.5 }, axis: 'z', rotorMassKg: 40 }],
+    };
+    const released = {
+      ...design('released'),
+      input: {
+        components: [{ name: 'Tall machine', massKg: 800, cg: { x: 0, y: 0, z: 1.2 } }],
+        mountPoints: [{ label: 'A', x: 0.5, y: 0.4, z: 0 }],
+        operating,
+        criteria: { minIsolationPct: 80, minUtilization: 0.5, maxUtilization: 1 },
+      },
+      chosen: candidate,
+      snapshot: {
+        takenAt: '2026-01-02T00:00:00Z',
+        mounts: [],
+        candidate,
+        massProperties: { massKg: 800, cg: { x: 0, y: 0, z: 1.2 } },
+        operating,
+        wholeMachine: {
+          worst,
+          stiffnessTolerancePct: 15,
+          crossings,
+          passes: false,
+          reasons: candidate.reasons,
+          curves: [
+            {
+              label: 'Impeller',
+              order: 1,
+              fixedFrequencyHz: null,
+              speedRpm: speeds,
+              frequencyHz: speeds.map((n) => n / 60),
+              transmissibility: [1.2, 7.5, 7.1, 0.4, 0.3, 0.1],
+              softEnd: [2, 3, 3.5, 0.5, 0.35, 0.1],
+              stiffEnd: [1, 6, 7.5, 0.35, 0.3, 0.1],
+            },
+          ],
+          speedRangeRpm: { min: 780, max: 1800 },
+          skipBandsRpm: [{ min: 1000, max: 1100 }],
+          requirementTransmissibility: 0.2,
+        },
+      },
+    } as unknown as Design;
+    const pdf = await designReportPdf(released, {
+      disturbingFrequencies: [{ frequencyHz: 13, label: '1× shaft' }],
+      releasedAt: null,
+      compress: false,
+    });
+    const wanted = [
+      'Whole machine over the running range',
+      'Source Impeller: unbalance of a 40.0 kg rotor balanced to G6.3',
+      'Skip bands of the drive: 1000 rpm',
+      'Motor on a drive with 4 poles',
+      'Stiffness band:',
+      'Worst point: Impeller at 829 rpm (13.80 Hz), stiff end of the band',
+      'whole-machine transmissibility 7.5000',
+      'Verdict: does not meet the requirements',
+      'Crossing: the roll + sway (mixed) mode at 13.89 Hz is crossed by Impeller (1',
+      'Whole-machine transmissibility T (log) against shaft speed',
+      'Isolation at each disturbing frequency (bounce estimate)',
+      'of the whole machine over the running range',
     ];
     expect(wanted.filter((text) => !pdfHasText(pdf, text))).toEqual([]);
   }, 20000);

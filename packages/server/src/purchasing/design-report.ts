@@ -6,6 +6,7 @@ import type { CandidateMode, LabelledFrequency, MountSnapshot } from '../selecti
 import type { Verification } from '../verifications/verification.entity.js';
 import { bomTotals } from './bom-export.js';
 import { restraintReportLines } from './report-restraint.js';
+import { speedChart, wholeMachineReportLines } from './report-whole-machine.js';
 
 /** The caution every report carries (PRODUCT.md, "Cautions the product shows"). */
 export const REPORT_CAUTION =
@@ -136,12 +137,17 @@ export function designReportPdf(design: Design, options: ReportOptions): Promise
     body(`Orders: ${(operating.orders ?? []).map((o) => `${o}×`).join(', ') || '—'}`);
     if (operating.vaneCount) body(`Vanes or blades: ${operating.vaneCount}`);
     if (operating.lineFrequencyHz) body(`Electrical line frequency: ${fmt(operating.lineFrequencyHz, 0)} Hz`);
+    if (operating.skipBandsRpm?.length)
+      body(`Skip bands: ${operating.skipBandsRpm.map((b) => `${fmt(b.min, 0)}–${fmt(b.max, 0)} rpm`).join(', ')}`);
+    if (operating.motorPoles !== undefined) body(`Motor poles: ${operating.motorPoles}`);
+    if (operating.sources?.length) body(`Sources: ${operating.sources.map((s) => s.label).join(', ')} (see the whole machine below)`);
   }
 
   const criteria = design.input.criteria;
   if (criteria) {
     heading('Criteria');
-    body(`Minimum isolation ${fmt(criteria.minIsolationPct, 1)} % at every disturbing frequency`);
+    body(`Minimum isolation ${fmt(criteria.minIsolationPct, 1)} % of the whole machine over the running range`);
+    if (criteria.stiffnessTolerancePct !== undefined) body(`Stiffness tolerance ±${fmt(criteria.stiffnessTolerancePct, 1)} %`);
     body(
       `Load utilisation between ${fmt(criteria.minUtilization * 100, 0)} % and ${fmt(criteria.maxUtilization * 100, 0)} % of the rated load`,
     );
@@ -168,7 +174,7 @@ export function designReportPdf(design: Design, options: ReportOptions): Promise
         `${point.label}: ${point.partNumber}, load ${fmt(point.loadN, 0)} N, utilisation ${fmt(point.utilization * 100, 0)} %, static deflection ${fmt(point.staticDeflectionMm, 2)} mm`,
       );
     }
-    heading('Isolation at each disturbing frequency');
+    heading('Isolation at each disturbing frequency (bounce estimate)');
     for (const row of candidate.isolation) {
       body(
         `${fmt(row.frequencyHz, 2)} Hz: transmissibility ${row.transmissibility.toFixed(4)}, isolation ${fmt(row.efficiencyPct, 1)} %, ${fmt(row.dB, 1)} dB`,
@@ -178,13 +184,17 @@ export function designReportPdf(design: Design, options: ReportOptions): Promise
       heading('Rigid-body modes');
       for (const mode of candidate.modes) body(`${fmt(mode.frequencyHz, 2)} Hz — ${modeMotionText(mode)}`);
     }
+    const whole = wholeMachineReportLines(design.input.operating, snapshot?.wholeMachine, candidate, criteria?.minIsolationPct);
+    heading(whole.heading);
+    for (const paragraph of whole.paragraphs) body(paragraph);
+    if (snapshot?.wholeMachine) speedChart(doc, snapshot.wholeMachine);
     const mounts = snapshot?.mounts ?? [];
     if (mounts.length) {
       heading('Chosen mounts — catalog data as frozen');
       for (const mount of mounts) body(mountLine(mount));
     }
     const damping = mounts.length ? dampingOf(mounts[0]) : undefined;
-    heading('Transmissibility');
+    heading('Transmissibility (bounce estimate)');
     transmissibilityChart(doc, candidate.verticalNaturalFrequencyHz, damping, options.disturbingFrequencies, criteria?.minIsolationPct);
     if (candidate.reasons.length) {
       heading('Checks not met');

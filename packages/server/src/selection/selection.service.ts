@@ -11,6 +11,7 @@ import type { RestraintInput } from './dto/restraint.dto.js';
 import { SelectionCatalogReader } from './selection-catalog.reader.js';
 import type { DetailsLoader } from './engine/catalog-tuple.js';
 import { SelectionEvaluation } from './engine/selection-evaluation.js';
+import type { SourceCurves } from './engine/whole-machine-check.js';
 import { designFrequencies, prefilterBounds, prepareProblem, withInputErrors, type SelectionProblem } from './selection-problem.js';
 import type { Candidate, LabelledFrequency, SelectionCurves, SelectionResult } from './selection.types.js';
 
@@ -30,6 +31,8 @@ export interface ChosenCandidate {
   candidate: Candidate;
   problem: SelectionProblem;
   frequencies: LabelledFrequency[];
+  /** Transmissibility against speed per source (null when the whole-machine model cannot be built). */
+  curves: SourceCurves | null;
 }
 
 export type CandidateChoice = { mountId: number } | { seriesId: string };
@@ -106,7 +109,8 @@ export class SelectionService {
     const problem = withInputErrors(() => prepareProblem({ ...input, frequencies }), 'input');
     const { evaluation, c } = await this.evaluationOf(problem, choice);
     const names = await this.catalog.supplierNames([evaluation.supplierOf(c)]);
-    return { candidate: evaluation.describe(c, names), problem, frequencies };
+    const candidate = evaluation.describe(c, names);
+    return { candidate, problem, frequencies, curves: candidate.wholeMachine ? evaluation.curves(c) : null };
   }
 
   /**

@@ -1,5 +1,5 @@
 import type { InertiaTensor, RigidBodyDof } from '@tacet/vibration';
-import type { Criteria, Vec3 } from './dto/design-input.dto.js';
+import type { Criteria, OperatingConditions, Vec3 } from './dto/design-input.dto.js';
 
 /** A mount point's share of a candidate (in the order of the request's mount points). */
 export interface CandidatePoint {
@@ -264,4 +264,22 @@ export interface DesignSnapshot {
   pointLoadsN: number[];
   disturbingFrequencies: LabelledFrequency[];
   criteria: Criteria;
+  /**
+   * The operating conditions the verdict was computed for (sources, speeds, skip bands, motor
+   * poles), frozen with it. Absent in snapshots taken before the whole-machine verdict.
+   */
+  operating?: OperatingConditions;
+  /** The whole-machine figures frozen at the choice: the sweep's worst point, the crossings and the verdict (absent before it existed, or when the inertia is unknown). */
+  wholeMachine?: {
+    worst: CandidateWholeMachine['worst'];
+    stiffnessTolerancePct: number;
+    crossings: CandidateCrossing[];
+    passes: boolean;
+    reasons: string[];
+    /** Transmissibility against speed per source (the report's chart). */
+    curves: SelectionCurves['sources'];
+    speedRangeRpm: { min: number; max: number } | null;
+    skipBandsRpm: { min: number; max: number }[];
+    requirementTransmissibility: number;
+  };
 }

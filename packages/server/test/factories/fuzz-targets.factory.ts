@@ -253,6 +253,22 @@ export async function createFuzzTargets(t: TestApp): Promise<FuzzTargets> {
         limit: 5,
       }),
     },
+    'POST /api/selection/curves': {
+      url: '/api/selection/curves',
+      as: 'admin',
+      body: () => ({
+        components: input.components,
+        mountPoints: input.mountPoints,
+        operating: {
+          speedRangeRpm: { min: 900, max: 1480 },
+          orders: [1],
+          skipBandsRpm: [{ min: 1000, max: 1050 }],
+          sources: [{ label: 'Impeller', kind: 'unbalance', at: { x: 0.5, y: 0, z: 0.5 }, axis: 'x', rotorMassKg: 30 }],
+        },
+        criteria: input.criteria,
+        mountId: catalog.mountId,
+      }),
+    },
   };
 
   const queries: Record<string, QueryFuzzTarget> = {

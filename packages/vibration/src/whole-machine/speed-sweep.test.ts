@@ -2,6 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { boxInertia } from '../assembly/mass-properties.js';
 import { VibrationInputError } from '../errors/vibration-input-error.js';
 import { hystereticDamping, viscousDamping } from '../sdof/damping.js';
+import { transmissibilityHysteretic } from '../transmissibility/transmissibility.js';
 import { crossingSpeeds } from './crossings.js';
 import { wholeMachineResponse, wholeMachineTransmissibility } from './forced-response.js';
 import { seriesStiffness } from './series-stiffness.js';
@@ -144,6 +145,21 @@ describe('the speed sweep (docs/engineering/whole-machine.md §7)', () => {
     expect(r.worst.speedRpm).toBe(1450);
     expect(r.worst.frequencyHz).toBeCloseTo((2 * 1450) / 60, 12);
     expect(r.evaluations).toBe(1);
+  });
+});
+
+describe('stiffness band (docs/engineering/whole-machine.md §10)', () => {
+  it('symmetric machine above resonance: the stiff end governs and equals the one-mass T at r = f/(f_v·√1.15)', () => {
+    const level = cv21Machine(hystereticDamping(0.1));
+    const src: SpeedSource = { at: { x: 0, y: 0, z: 0.3 }, kind: 'directional', axis: 'z', order: 1, amplitudeN: 100 };
+    const fv = Math.sqrt(1e6 / 1000) / (2 * Math.PI);
+    const ends = [0.85, 1, 1.15].map((phi) =>
+      speedSweep(prepareWholeMachine(level, { stiffnessFactor: phi }), { source: src, minRpm: 1450, maxRpm: 1450 }),
+    );
+    expect(ends[2].worst.transmissibility).toBeGreaterThan(ends[1].worst.transmissibility);
+    expect(ends[1].worst.transmissibility).toBeGreaterThan(ends[0].worst.transmissibility);
+    const r = 1450 / 60 / (fv * Math.sqrt(1.15));
+    expect(Math.abs(ends[2].worst.transmissibility / transmissibilityHysteretic(r, 0.1) - 1)).toBeLessThan(1e-9);
   });
 });
 

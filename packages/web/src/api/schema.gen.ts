@@ -1031,7 +1031,7 @@ export interface components {
        */
       weightMarginPct?: number;
       /**
-       * @description stiffness tolerance of the catalog figures, ± %; the verdict is the worst over the band (default by mount type, docs/engineering/whole-machine.md §7)
+       * @description stiffness tolerance of the catalog figures, ± %; the verdict is the worst over the band (default by mount type, docs/engineering/selection.md §15)
        * @example 15
        */
       stiffnessTolerancePct?: number;

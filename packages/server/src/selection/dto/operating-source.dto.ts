@@ -17,7 +17,7 @@ import { IsAbove, IsFiniteNumber, OnlyWhen } from './validators.js';
 
 /**
  * An operating source of the whole-machine model and the drive's skip bands
- * (docs/engineering/whole-machine.md §2). The DTO checks each field; what depends on the rest of
+ * (docs/engineering/forcing.md §7). The DTO checks each field; what depends on the rest of
  * the operating conditions (an unbalance needs a speed) is checked when the sources are resolved.
  */
 export const SOURCE_KINDS = ['unbalance', 'force'] as const;

@@ -130,7 +130,7 @@ function isolation({ problem, store, c }: WordingContext): string[] {
 function wholeMachine({ problem, wholeMachine: w }: WordingContext): string[] {
   if (!w) return [];
   const { worst } = w;
-  const at = worst.speedRpm === null ? formatHz(worst.frequencyHz) : `${formatRpm(worst.speedRpm)} (${formatHz(worst.frequencyHz)})`;
+  const at = worst.speedRpm === null ? formatHz(worst.frequencyHz) : `${formatRpm(worst.speedRpm)}, ${formatHz(worst.frequencyHz)}`;
   const band = bandWords(worst.stiffnessFactor, w.stiffnessTolerancePct);
   const required = `${formatNumber(problem.criteria.minIsolationPct, 1)} %`;
   const reasons = [
@@ -163,10 +163,10 @@ function wholeMachineNotes({ store, c, wholeMachine: w, modes }: WordingContext)
   const notes: string[] = [];
   if (!(store.fail[c] & FAIL.wholeMachine)) {
     const { worst } = w;
-    const at = worst.speedRpm === null ? formatHz(worst.frequencyHz) : `${formatRpm(worst.speedRpm)} (${formatHz(worst.frequencyHz)})`;
+    const at = worst.speedRpm === null ? formatHz(worst.frequencyHz) : `${formatRpm(worst.speedRpm)}, ${formatHz(worst.frequencyHz)}`;
     notes.push(
-      `Whole machine: worst isolation ${formatPctValue(worst.efficiencyPct)} (${worst.source} at ${at}` +
-        `${bandWords(worst.stiffnessFactor, w.stiffnessTolerancePct)}); the isolation per frequency above is the bounce estimate.`,
+      `Whole machine: worst isolation ${formatPctValue(worst.efficiencyPct)}, ${worst.source} at ${at}` +
+        `${bandWords(worst.stiffnessFactor, w.stiffnessTolerancePct)}; the isolation per frequency above is the bounce estimate.`,
     );
     for (const x of w.crossings) notes.push(`${crossingWords(x)} Its response stays within the requirement.`);
   }
@@ -177,10 +177,10 @@ function wholeMachineNotes({ store, c, wholeMachine: w, modes }: WordingContext)
 }
 
 function bandWords(factor: number, tolerancePct: number): string {
-  if (tolerancePct === 0 || factor === 1) return tolerancePct === 0 ? '' : ', nominal stiffness';
-  return factor < 1
-    ? `, stiffness ${formatNumber(tolerancePct, 1)} % below nominal`
-    : `, stiffness ${formatNumber(tolerancePct, 1)} % above nominal`;
+  if (tolerancePct === 0) return '';
+  if (factor === 1) return ' (nominal stiffness)';
+  const pct = formatNumber(Math.abs(factor - 1) * 100, 1);
+  return factor < 1 ? ` (stiffness ${pct} % below nominal)` : ` (stiffness ${pct} % above nominal)`;
 }
 
 function formatRpm(rpm: number): string {

@@ -78,7 +78,13 @@ export class SelectionEvaluation {
   async rank(limit: number, loadDetails: DetailsLoader): Promise<number[]> {
     const ranked = await rankCandidates(this.store, this.better, limit, async (top) => {
       await this.store.ensureDetails(top, loadDetails);
-      for (const c of top) if (this.store.fail[c] === 0) this.checkFinalist(c);
+      // In rank order, until `limit` pass: the ones below them would not be returned as passing anyway.
+      let passing = 0;
+      for (const c of top) {
+        if (passing >= limit) break;
+        if (this.store.fail[c] === 0) this.checkFinalist(c);
+        if (this.store.fail[c] === 0) passing++;
+      }
     });
     await this.store.ensureDetails(ranked, loadDetails);
     return ranked;

@@ -1,8 +1,8 @@
 /**
  * The whole-machine verdict, a finalist check (docs/engineering/selection.md §14–§16): the six-degree-
  * of-freedom forced response of the machine on the candidate's mounts, each source swept over the
- * running range (outside the skip bands) at each end of the stiffness band and at the nominal
- * stiffness; the worst whole-machine transmissibility against the isolation requirement decides.
+ * running range (outside the skip bands) and the whole stiffness band in one sweep (`judge`); the
+ * worst whole-machine transmissibility against the isolation requirement decides.
  * Keeps, per candidate judged, the worst point and the crossings of the source orders with the
  * modes (reasons.ts words them); the forces per mount point are computed only for the candidates
  * shown (`describe`).
@@ -11,6 +11,7 @@
  * back to the bounce estimate at the disturbing frequencies, and a note says so.
  */
 import {
+  crossingSpeeds,
   describeModeMotion,
   isolationEfficiencyPct,
   isVibrationInputError,
@@ -223,6 +224,14 @@ export class WholeMachineCheck implements FinalistCheck {
     return out;
   }
 
+  /**
+   * The worst over the running range and the whole stiffness band with one sweep per source
+   * (docs/engineering/selection.md §15): with every stiffness scaled by φ, T(φ, f) = T(1, f/√φ)
+   * exactly, so the band's worst is the nominal system's worst over the speeds n/√φ — the range
+   * stretched to [n_min/√(1+tol), n_max/√(1−tol)], less the speeds that every factor maps into a
+   * skip band — and the governing factor is the one nearest 1 that brings that speed back into
+   * the running range.
+   */
   private judge(
     points: readonly PointMount[],
     tolerance: { pct: number; fromCriteria: boolean },
@@ -231,51 +240,75 @@ export class WholeMachineCheck implements FinalistCheck {
     const { sources, skipBandsRpm } = problem.forcing;
     const { min, max } = this.range;
     const fixedSpeed = problem.forcing.speedRangeRpm === null;
-    const body = { massKg: problem.massKg, cg: problem.cg, inertia: problem.inertia };
-    const mounts = this.modelMounts(points);
+    const system = prepareWholeMachine({
+      body: { massKg: problem.massKg, cg: problem.cg, inertia: problem.inertia },
+      mounts: this.modelMounts(points),
+    });
+    const modes = wholeMachineModes(system).modes;
+    const modeFrequenciesHz = modes.map((m) => m.frequencyHz);
+    const lo = 1 - tolerance.pct / 100;
+    const hi = 1 + tolerance.pct / 100;
     let worst: CandidateWholeMachine['worst'] | null = null;
-    let worstSpeedBySource: number[] = [];
-    let crossings: CandidateCrossing[] = [];
-    for (const factor of bandFactors(tolerance.pct)) {
-      const system = prepareWholeMachine({ body, mounts }, { stiffnessFactor: factor });
-      const modes = wholeMachineModes(system).modes;
-      const modeFrequenciesHz = modes.map((m) => m.frequencyHz);
-      const speeds: number[] = [];
-      let factorWorst: CandidateWholeMachine['worst'] | null = null;
-      sources.forEach((source, s) => {
-        const sweep = speedSweep(system, { source, minRpm: min, maxRpm: max, skipBandsRpm, modeFrequenciesHz });
-        speeds.push(sweep.worst.speedRpm);
-        const t = sweep.worst.transmissibility;
-        if (!factorWorst || t > factorWorst.transmissibility || Number.isNaN(t)) {
-          factorWorst = {
-            transmissibility: t,
-            efficiencyPct: isolationEfficiencyPct(t),
-            frequencyHz: sweep.worst.frequencyHz,
-            speedRpm: fixedSpeed && source.frequencyHz !== undefined ? null : sweep.worst.speedRpm,
+    const worstSpeedBySource: number[] = [];
+    const crossings: CandidateCrossing[] = [];
+    sources.forEach((source, s) => {
+      let point: CandidateWholeMachine['worst'];
+      if (source.frequencyHz !== undefined) {
+        // T does not depend on the speed: sweep the frequency over the band as a pseudo speed (order 1: n = 60·f)
+        const f = source.frequencyHz;
+        const pseudo = { at: source.at, kind: source.kind, axis: source.axis, order: 1, amplitudeN: 1 };
+        const sweep = speedSweep(system, {
+          source: pseudo,
+          minRpm: (60 * f) / Math.sqrt(hi),
+          maxRpm: (60 * f) / Math.sqrt(lo),
+          modeFrequenciesHz,
+        });
+        const factor = snapFactor((f / sweep.worst.frequencyHz) ** 2, lo, hi);
+        point = {
+          transmissibility: sweep.worst.transmissibility,
+          efficiencyPct: isolationEfficiencyPct(sweep.worst.transmissibility),
+          frequencyHz: f,
+          speedRpm: fixedSpeed ? null : min,
+          source: source.label,
+          stiffnessFactor: factor,
+        };
+        worstSpeedBySource.push(min);
+      } else {
+        const stretched = skipBandsRpm
+          .map((b) => ({ min: b.min / Math.sqrt(lo), max: b.max / Math.sqrt(hi) }))
+          .filter((b) => b.max > b.min);
+        const sweep = speedSweep(system, {
+          source,
+          minRpm: min / Math.sqrt(hi),
+          maxRpm: max / Math.sqrt(lo),
+          skipBandsRpm: stretched,
+          modeFrequenciesHz,
+        });
+        const factor = governingFactor(sweep.worst.speedRpm, min, max, skipBandsRpm, lo, hi);
+        const speedRpm = sweep.worst.speedRpm * Math.sqrt(factor);
+        point = {
+          transmissibility: sweep.worst.transmissibility,
+          efficiencyPct: isolationEfficiencyPct(sweep.worst.transmissibility),
+          frequencyHz: sourceFrequencyHz(source, speedRpm),
+          speedRpm,
+          source: source.label,
+          stiffnessFactor: factor,
+        };
+        worstSpeedBySource.push(speedRpm);
+        for (const x of crossingSpeeds({ modeFrequenciesHz, order: source.order ?? 1, minRpm: min, maxRpm: max, skipBandsRpm })) {
+          crossings.push({
+            mode: describeModeMotion(modes[x.modeIndex].energyFractions).name,
+            modeFrequencyHz: x.modeFrequencyHz,
             source: source.label,
-            stiffnessFactor: factor,
-          };
+            sourceIndex: s,
+            order: x.order,
+            speedRpm: x.speedRpm,
+          });
         }
-        if (factor === 1) {
-          for (const x of sweep.crossings) {
-            crossings.push({
-              mode: describeModeMotion(modes[x.modeIndex].energyFractions).name,
-              modeFrequencyHz: x.modeFrequencyHz,
-              source: source.label,
-              sourceIndex: s,
-              order: x.order,
-              speedRpm: x.speedRpm,
-            });
-          }
-        }
-      });
-      const found = factorWorst as CandidateWholeMachine['worst'] | null;
-      if (found && (!worst || found.transmissibility > worst.transmissibility)) {
-        worst = found;
-        worstSpeedBySource = speeds;
       }
-    }
-    crossings = crossings.sort((a, b) => a.speedRpm - b.speedRpm);
+      if (!worst || point.transmissibility > worst.transmissibility || Number.isNaN(point.transmissibility)) worst = point;
+    });
+    crossings.sort((a, b) => a.speedRpm - b.speedRpm);
     return {
       worst: worst!,
       worstSpeedBySource,
@@ -303,6 +336,43 @@ export class WholeMachineCheck implements FinalistCheck {
     for (let j = 0; j < nf; j++) if (this.store.transmissibility[c * nf + j] > this.problem.transmissibilityTarget) return true;
     return false;
   }
+}
+
+/** A factor within rounding of 1 or a band end is that value (so that the answer says 1.15, not 1.1500000000000001). */
+function snapFactor(factor: number, lo: number, hi: number): number {
+  for (const exact of [1, lo, hi]) if (Math.abs(factor - exact) <= 1e-9 * exact) return exact;
+  return Math.min(hi, Math.max(lo, factor));
+}
+
+/**
+ * The stiffness factor φ ∈ [lo, hi] nearest 1 that brings the nominal-equivalent speed n′ back to
+ * a running speed n = n′·√φ (inside [min, max], not strictly inside a skip band).
+ */
+export function governingFactor(
+  nominalRpm: number,
+  min: number,
+  max: number,
+  bands: readonly { min: number; max: number }[],
+  lo: number,
+  hi: number,
+): number {
+  const candidates = [
+    1,
+    lo,
+    hi,
+    (min / nominalRpm) ** 2,
+    (max / nominalRpm) ** 2,
+    ...bands.flatMap((b) => [(b.min / nominalRpm) ** 2, (b.max / nominalRpm) ** 2]),
+  ];
+  const allowed = (phi: number) => {
+    if (phi < lo * (1 - 1e-12) || phi > hi * (1 + 1e-12)) return false;
+    const n = nominalRpm * Math.sqrt(phi);
+    if (n < min * (1 - 1e-12) || n > max * (1 + 1e-12)) return false;
+    return !bands.some((b) => n > b.min * (1 + 1e-12) && n < b.max * (1 - 1e-12));
+  };
+  let best = Number.NaN;
+  for (const phi of candidates) if (allowed(phi) && !(Math.abs(phi - 1) >= Math.abs(best - 1))) best = phi;
+  return Number.isNaN(best) ? snapFactor((min / nominalRpm) ** 2, lo, hi) : snapFactor(best, lo, hi);
 }
 
 /** Stiffness factors of a band of ± pct: the soft end, the nominal and the stiff end (the nominal alone without a band). */
