@@ -108,6 +108,15 @@ export function CriteriaPanel({ readOnly, suppliers }: CriteriaPanelProps) {
           placeholder="0"
           helperText="Allowance on the weight for the overload check, e.g. 10 % for uncertain data."
         />
+        <QuantityField
+          name="criteria.stiffnessTolerancePct"
+          id="criteria-stiffness-tolerance"
+          label="Stiffness tolerance, ±"
+          unit="%"
+          readOnly={readOnly}
+          placeholder="by mount type"
+          helperText="How far the real stiffness may be from the catalog's; the verdict holds at the worse end. Empty: ±10 % for springs, ±15 % for elastomer mounts, ±20 % for pads and wire ropes (common practice)."
+        />
       </div>
       <div>
         <h3 className="tc-subsection-title tc-first">Mounts to consider</h3>

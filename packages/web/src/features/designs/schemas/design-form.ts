@@ -39,6 +39,8 @@ export const DESIGN_LIMITS = {
   maxIsolationPct: 99.9,
   maxUtilization: 1.5,
   ambientTempC: { min: -100, max: 400 },
+  /** ± % on the catalog stiffness (the server's limit). */
+  stiffnessTolerancePct: 50,
   /** Seismic restraint (the server's RestraintInputDto; ASCE 7-16 §13.3.1). */
   restraint: { sdsG: { max: 4 }, ap: { min: 1, max: 2.5 }, rp: { min: 1, max: 12 }, gapMm: { max: 100 } },
 } as const;
@@ -92,6 +94,8 @@ export interface CriteriaValues {
   /** In the user's temperature unit. */
   ambientTemp: string;
   weightMarginPct: string;
+  /** ± % on the catalog stiffness; blank: the default of each mount type. */
+  stiffnessTolerancePct: string;
   mountTypes: string[];
   /** Supplier ids as text (checkbox values). */
   supplierIds: string[];
@@ -187,6 +191,7 @@ export function toFormValues(input: DesignInput, units: Units): DesignFormValues
       maxUtilization: numberText(criteria.maxUtilization),
       ambientTemp: criteria.ambientTempC === undefined ? '' : numberText(units.toDisplay('temperature', criteria.ambientTempC)),
       weightMarginPct: numberText(criteria.weightMarginPct),
+      stiffnessTolerancePct: numberText(criteria.stiffnessTolerancePct),
       mountTypes: [...(criteria.mountTypes ?? [])],
       supplierIds: (criteria.supplierIds ?? []).map(String),
     },
@@ -325,6 +330,11 @@ export function parseCriteria(values: CriteriaValues, units: Units): Criteria | 
     const margin = parseNumber(values.weightMarginPct);
     if (margin === undefined) return null;
     criteria.weightMarginPct = margin;
+  }
+  if (!isBlank(values.stiffnessTolerancePct)) {
+    const tolerance = parseNumber(values.stiffnessTolerancePct);
+    if (tolerance === undefined) return null;
+    criteria.stiffnessTolerancePct = tolerance;
   }
   const mountTypes = values.mountTypes.filter(isMountType);
   if (mountTypes.length > 0) criteria.mountTypes = mountTypes;
@@ -485,6 +495,9 @@ const criteriaSchema = yup.object({
     .max(100, 'The weight margin must be at most 100 %'),
   mountTypes: yup.array(yup.string().required()).required(),
   supplierIds: yup.array(yup.string().required()).required(),
+  stiffnessTolerancePct: optionalNumber('The stiffness tolerance')
+    .min(0, 'The stiffness tolerance cannot be negative')
+    .max(DESIGN_LIMITS.stiffnessTolerancePct, `The stiffness tolerance is at most ${DESIGN_LIMITS.stiffnessTolerancePct} %`),
 });
 
 /** Seismic restraint: checked only when it is on; the gap limit is stated in the user's unit. */
