@@ -207,8 +207,8 @@ describe('selection (e2e)', () => {
 
   it('a frequency below √2·fn is amplified: the whole-machine verdict fails it at the stiff end of the ±10 % band', async () => {
     // fn = 3.183 Hz → √2·fn = 4.50 Hz; 4 Hz is amplified, not isolated. A symmetric machine with a vertical force
-    // through its CG reduces to the one-mass system (docs/engineering/selection.md §14); a steel spring's band is
-    // ±10 % (§15, common practice), and the stiff end, fn·√1.1, lies nearer 4 Hz.
+    // through its CG reduces to the one-mass system (docs/engineering/selection.md §19); a steel spring's band is
+    // ±10 % (§20, common practice), and the stiff end, fn·√1.1, lies nearer 4 Hz.
     const response = await select(request({ disturbingFrequenciesHz: [SHAFT_1480, 4] }));
     expect(response.status).toBe(200);
     const c = find(response.body.candidates, soft.id) as Candidate & { wholeMachine: WholeMachine };
@@ -337,7 +337,7 @@ describe('selection (e2e)', () => {
     expect(driven.status).toBe(200);
     const d = find(driven.body.candidates, swayMount.id) as Candidate & { wholeMachine: WholeMachine };
     expect(d.passes).toBe(false);
-    expect(d.wholeMachine.worst.transmissibility).toBeGreaterThan(1); // well damped: viscous rows damp as 2ζω/ω_v (selection.md §14)
+    expect(d.wholeMachine.worst.transmissibility).toBeGreaterThan(1); // well damped: viscous rows damp as 2ζω/ω_v (selection.md §19)
     expect(d.reasons[0]).toMatch(
       /^Whole machine, Rotor: at 1480 rpm, 24\.67 Hz \((nominal stiffness|stiffness 10 % (above|below) nominal)\) the mounts amplify the force/,
     );

@@ -8,7 +8,7 @@ import { createTestApp, type TestApp } from './utils/create-test-app.js';
 import { pdfHasText } from './utils/pdf-text.js';
 
 /**
- * The whole-machine verdict of POST /api/selection (docs/engineering/selection.md §14–§17) on the two
+ * The whole-machine verdict of POST /api/selection (docs/engineering/selection.md §19–§22) on the two
  * cases of the issue, the stiffness band, the crossings in the reasons, the guarantee that the bounce
  * estimate excludes nothing, and POST /api/selection/curves. Catalog rows are invented.
  *
@@ -175,7 +175,7 @@ describe('whole-machine verdict (e2e)', () => {
     for (const x of crossings) {
       expect(x.source).toBe('Impeller');
       expect(x.order).toBe(1);
-      // n = 60·f/o exactly (selection.md §15)
+      // n = 60·f/o exactly (selection.md §20)
       expect(x.speedRpm).toBeCloseTo(60 * x.modeFrequencyHz, 9);
       expect(x.speedRpm).toBeGreaterThanOrEqual(780);
       expect(x.speedRpm).toBeLessThanOrEqual(1800);

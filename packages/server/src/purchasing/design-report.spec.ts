@@ -98,7 +98,7 @@ describe('designReportPdf', () => {
   }, 20000);
 });
 
-describe('designReportPdf: the whole machine (docs/engineering/selection.md §14–§17)', () => {
+describe('designReportPdf: the whole machine (docs/engineering/selection.md §19–§22)', () => {
   it('prints the frozen sources, skip bands, band, worst point, crossings and verdict, and draws the speed chart', async () => {
     const worst = {
       transmissibility: 7.5,

@@ -2,7 +2,7 @@ import type { OperatingConditions } from '../selection/dto/design-input.dto.js';
 import type { Candidate, DesignSnapshot } from '../selection/selection.types.js';
 
 /**
- * The whole-machine section of the calculation report (docs/engineering/selection.md §14–§17): the
+ * The whole-machine section of the calculation report (docs/engineering/selection.md §19–§22): the
  * sources where the forces act, the speeds and skip bands, the stiffness band, the verdict with its
  * worst point, the crossings, and (drawn by `speedChart`) transmissibility against speed per
  * source as frozen at the choice. Plain text lines; the report lays them out. (The report fonts

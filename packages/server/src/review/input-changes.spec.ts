@@ -58,6 +58,34 @@ describe('inputChanges (what changed between two submissions)', () => {
     for (const change of changes) expect(change.label).not.toMatch(/[a-z][A-Z]|_/); // words, not identifiers
   });
 
+  it('names the operating sources by their label, and the skip bands, motor poles and stiffness tolerance in words', () => {
+    const impeller = { label: 'Impeller', kind: 'unbalance', at: { x: 0.3, y: 0, z: 0.5 }, axis: 'x', rotorMassKg: 30 };
+    const before = { ...clone(), operating: { ...base.operating, sources: [impeller] } };
+    const after = {
+      ...clone(),
+      operating: {
+        ...base.operating,
+        motorPoles: 4,
+        skipBandsRpm: [{ min: 1000, max: 1100 }],
+        sources: [{ ...impeller, rotorMassKg: 35, at: { x: 0.3, y: 0, z: 0.55 } }],
+      },
+      criteria: { ...base.criteria, stiffnessTolerancePct: 15 },
+    };
+    const changes = inputChanges({ input: before, chosen: null }, { input: after, chosen: null }, context);
+    const byField = Object.fromEntries(changes.map((c) => [c.field, c]));
+    expect(byField['operating.sources[Impeller].rotorMassKg']).toMatchObject({
+      label: 'Source Impeller: rotor mass',
+      quantity: 'mass',
+      before: 30,
+      after: 35,
+    });
+    expect(byField['operating.sources[Impeller].at.z']).toMatchObject({ label: 'Source Impeller: position z', before: 0.5, after: 0.55 });
+    expect(byField['operating.skipBandsRpm']).toMatchObject({ label: 'Skip bands', beforeText: null, afterText: '1000–1100 rpm' });
+    expect(byField['operating.motorPoles']).toMatchObject({ label: 'Motor poles', after: 4 });
+    expect(byField['criteria.stiffnessTolerancePct']).toMatchObject({ label: 'Stiffness tolerance', quantity: 'percent', after: 15 });
+    for (const change of changes) expect(change.label).not.toMatch(/[a-z][A-Z]|_/);
+  });
+
   it('names a field it has no rule for from its key and unit suffix (fields added later)', () => {
     const after = clone();
     after.support = { floorStiffnessNPerM: 2e7, spanM: 6 };

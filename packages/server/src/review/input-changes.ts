@@ -87,6 +87,26 @@ const RULES: Record<string, LeafRule> = {
         .map((f) => `${plainNumber(Number(f))} Hz`)
         .join(', '),
   },
+  'operating.motorPoles': { label: 'Motor poles', quantity: 'count' },
+  'operating.skipBandsRpm': {
+    label: 'Skip bands',
+    quantity: null,
+    words: (v) =>
+      list(v)
+        .map((b) => (isObject(b) ? `${plainNumber(Number(b.min))}–${plainNumber(Number(b.max))} rpm` : ''))
+        .join(', '),
+  },
+  'operating.sources.kind': { label: 'kind', quantity: null, words: (v) => (v === 'unbalance' ? 'unbalance' : 'force') },
+  'operating.sources.axis': { label: 'axis', quantity: null, words: (v) => String(v) },
+  'operating.sources.at.x': { label: 'position x', quantity: 'position' },
+  'operating.sources.at.y': { label: 'position y', quantity: 'position' },
+  'operating.sources.at.z': { label: 'position z', quantity: 'position' },
+  'operating.sources.order': { label: 'order', quantity: 'count' },
+  'operating.sources.rotorMassKg': { label: 'rotor mass', quantity: 'mass' },
+  'operating.sources.balanceGradeMmPerS': { label: 'balance grade (mm/s)', quantity: 'count' },
+  'operating.sources.amplitudeN': { label: 'amplitude', quantity: 'force' },
+  'operating.sources.frequencyHz': { label: 'frequency', quantity: 'frequency' },
+  'criteria.stiffnessTolerancePct': { label: 'Stiffness tolerance', quantity: 'percent' },
   'criteria.minIsolationPct': { label: 'Minimum isolation', quantity: 'percent' },
   'criteria.minUtilization': { label: 'Lowest load utilisation', quantity: 'percent', scale: (u) => u * 100 },
   'criteria.maxUtilization': { label: 'Highest load utilisation', quantity: 'percent', scale: (u) => u * 100 },
@@ -114,6 +134,7 @@ const RULES: Record<string, LeafRule> = {
 const KEYED_LISTS: Record<string, { key: string; name: (key: string) => string }> = {
   components: { key: 'name', name: (key) => key },
   mountPoints: { key: 'label', name: (key) => `Mount point ${key}` },
+  'operating.sources': { key: 'label', name: (key) => `Source ${key}` },
 };
 
 /** Unit suffixes of field names (CONVENTIONS.md: a name carries its unit where it is not SI base). */

@@ -116,7 +116,7 @@ export class SelectionService {
   /**
    * Transmissibility against speed of each source for one candidate of a stateless request, at
    * the nominal stiffness and both ends of its band, with the speeds, skip bands, requirement,
-   * modes and crossings the chart draws (docs/engineering/selection.md §17).
+   * modes and crossings the chart draws (docs/engineering/selection.md §22).
    */
   async curves(
     body: Omit<SelectionRequest, 'frequencies'> & { disturbingFrequenciesHz?: readonly number[] },

@@ -73,7 +73,7 @@ export interface CandidateRestraint {
   passes: boolean;
 }
 
-/** A source order crossing a rigid-body mode inside the running range (docs/engineering/selection.md §15). */
+/** A source order crossing a rigid-body mode inside the running range (docs/engineering/selection.md §20). */
 export interface CandidateCrossing {
   /** The mode's motion, e.g. "pitch" or "roll + sway (mixed)". */
   mode: string;
@@ -99,7 +99,7 @@ export interface WholeMachinePerFrequency {
   perPoint: { label: string; forceN: number }[];
 }
 
-/** The whole-machine verdict's figures (docs/engineering/selection.md §14–§16). */
+/** The whole-machine verdict's figures (docs/engineering/selection.md §19–§21). */
 export interface CandidateWholeMachine {
   worst: {
     transmissibility: number;
@@ -183,7 +183,7 @@ export interface SelectionResult {
   disturbingFrequenciesHz: number[];
 }
 
-/** `POST /api/selection/curves`: transmissibility against speed per source of one candidate (docs/engineering/selection.md §17). */
+/** `POST /api/selection/curves`: transmissibility against speed per source of one candidate (docs/engineering/selection.md §22). */
 export interface SelectionCurves {
   candidate: { kind: 'uniform' | 'series'; mountId?: number; seriesId?: string; label: string; passes: boolean };
   /** Running range, rpm (min = max at a fixed speed); null when only fixed frequencies force the machine. */

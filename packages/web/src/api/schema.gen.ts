@@ -1031,7 +1031,7 @@ export interface components {
        */
       weightMarginPct?: number;
       /**
-       * @description stiffness tolerance of the catalog figures, ± %; the verdict is the worst over the band (default by mount type, docs/engineering/selection.md §15)
+       * @description stiffness tolerance of the catalog figures, ± %; the verdict is the worst over the band (default by mount type, docs/engineering/selection.md §20)
        * @example 15
        */
       stiffnessTolerancePct?: number;

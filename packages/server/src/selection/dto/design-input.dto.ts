@@ -334,7 +334,7 @@ export class CriteriaDto {
   @ApiPropertyOptional({
     example: 15,
     description:
-      'stiffness tolerance of the catalog figures, ± %; the verdict is the worst over the band (default by mount type, docs/engineering/selection.md §15)',
+      'stiffness tolerance of the catalog figures, ± %; the verdict is the worst over the band (default by mount type, docs/engineering/selection.md §20)',
   })
   @IsOptional()
   @IsFiniteNumber({ message: 'The stiffness tolerance must be a number' })

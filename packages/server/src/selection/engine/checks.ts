@@ -48,8 +48,11 @@ export const FAIL = {
   supplier: 128,
   /** Seismic restraint: a point's demand over its mount's rating, or no rating (restraint-check.ts). */
   restraint: 256,
-  /** Worst whole-machine transmissibility over the running range and the stiffness band above the target (whole-machine-check.ts). */
-  wholeMachine: 512,
+  /**
+   * Worst whole-machine transmissibility over the running range and the stiffness band above the
+   * target (whole-machine-check.ts). 8192: the bits between are taken by the robustness checks.
+   */
+  wholeMachine: 8192,
 } as const;
 
 /** The row checks that need a mount's details (DETAIL_COLUMNS); a candidate takes them once the details are loaded. */

@@ -3,7 +3,7 @@
  * rigid-body modes of the machine on the candidate's mounts (`rigidBodyModes`, with the mounts'
  * dynamic stiffnesses); a direction without stiffness fails the candidate, a mode within
  * ±MODE_SEPARATION of a disturbing frequency is noted (the whole-machine verdict judges it:
- * docs/engineering/selection.md §9, §14). Keeps, per candidate
+ * docs/engineering/selection.md §9, §19). Keeps, per candidate
  * judged, the modes and the conflict found (reasons.ts words them).
  */
 import { isVibrationInputError, rigidBodyModes, type ResilientMount } from '@tacet/vibration';
@@ -67,7 +67,7 @@ export class ModeCheck implements FinalistCheck {
         this.inertiaUnusable = true;
       }
     }
-    // A mode near a disturbing frequency is a note: the whole-machine verdict judges it (selection.md §9, §14).
+    // A mode near a disturbing frequency is a note: the whole-machine verdict judges it (selection.md §9, §19).
     if (findings.conflict?.kind === 'mechanism') this.store.fail[c] |= FAIL.modes;
     this.findings.set(c, findings);
   }

@@ -8,7 +8,7 @@
  * mode-check.ts; the whole-machine verdict, whole-machine-check.ts). They run on the best passing
  * candidates only, and may fail some of them; the ranking then looks further down the list (see
  * `rankCandidates`) until `limit` pass or every candidate has been judged, so that no candidate
- * the finalist checks would pass is left out unseen (docs/engineering/selection.md §16).
+ * the finalist checks would pass is left out unseen (docs/engineering/selection.md §21).
  */
 import { BestCandidates } from '../best-candidates.js';
 import { scoreCandidate, type ScoreInputs } from '../scoring.js';

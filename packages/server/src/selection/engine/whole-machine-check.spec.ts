@@ -6,7 +6,7 @@ import { SelectionEvaluation } from './selection-evaluation.js';
 import { bandFactors, governingFactor } from './whole-machine-check.js';
 
 /**
- * The whole-machine verdict over the stiffness band (docs/engineering/selection.md §15): one sweep
+ * The whole-machine verdict over the stiffness band (docs/engineering/selection.md §20): one sweep
  * of the nominal system over the stretched range against a brute-force search over the band with
  * the kernel (401 factors, each swept over the running range with its skip band).
  */

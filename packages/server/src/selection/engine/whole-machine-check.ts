@@ -1,5 +1,5 @@
 /**
- * The whole-machine verdict, a finalist check (docs/engineering/selection.md §14–§16): the six-degree-
+ * The whole-machine verdict, a finalist check (docs/engineering/selection.md §19–§21): the six-degree-
  * of-freedom forced response of the machine on the candidate's mounts, each source swept over the
  * running range (outside the skip bands) and the whole stiffness band in one sweep (`judge`); the
  * worst whole-machine transmissibility against the isolation requirement decides.
@@ -55,7 +55,7 @@ const FALLBACK_TOLERANCE_PCT = 20;
 /** The shaft speed used for fixed-frequency sources when the input gives no speed (T does not depend on it). */
 const NO_SPEED_RPM = 60;
 
-/** Transmissibility against speed per source over the stiffness band (docs/engineering/selection.md §17). */
+/** Transmissibility against speed per source over the stiffness band (docs/engineering/selection.md §22). */
 export interface SourceCurves {
   stiffnessTolerancePct: number;
   sources: {
@@ -226,7 +226,7 @@ export class WholeMachineCheck implements FinalistCheck {
 
   /**
    * The worst over the running range and the whole stiffness band with one sweep per source
-   * (docs/engineering/selection.md §15): with every stiffness scaled by φ, T(φ, f) = T(1, f/√φ)
+   * (docs/engineering/selection.md §20): with every stiffness scaled by φ, T(φ, f) = T(1, f/√φ)
    * exactly, so the band's worst is the nominal system's worst over the speeds n/√φ — the range
    * stretched to [n_min/√(1+tol), n_max/√(1−tol)], less the speeds that every factor maps into a
    * skip band — and the governing factor is the one nearest 1 that brings that speed back into
