@@ -108,6 +108,15 @@ export function CriteriaPanel({ readOnly, suppliers }: CriteriaPanelProps) {
           placeholder="10"
           helperText="Allowance for an uncertain weight: added in the overload checks, taken off for the springs' light case. Empty: 10 %."
         />
+        <QuantityField
+          name="criteria.stiffnessTolerancePct"
+          id="criteria-stiffness-tolerance"
+          label="Stiffness tolerance, ±"
+          unit="%"
+          readOnly={readOnly}
+          placeholder="by mount type"
+          helperText="How far the real stiffness may be from the catalog's; the verdict holds at the worse end. Empty: ±10 % for springs, ±15 % for elastomer mounts, ±20 % for pads and wire ropes (common practice)."
+        />
       </div>
       <div>
         <h3 className="tc-subsection-title tc-first">Mounts to consider</h3>

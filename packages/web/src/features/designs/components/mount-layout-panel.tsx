@@ -12,7 +12,7 @@ import { SideElevation } from './side-elevation';
 /** Mount positions with the live plan and side drawings and the load each point takes. */
 export function MountLayoutPanel({ readOnly, figures }: { readOnly: boolean; figures: DesignFigures }) {
   const units = useUnits();
-  const { mountPoints, mass, loads, layoutWarnings, components } = figures;
+  const { mountPoints, mass, loads, layoutWarnings, components, sources } = figures;
   const flagged = useMemo(
     () => new Set(layoutWarnings.filter((w) => w.code === 'mount-lift-off' && w.pointIndex !== undefined).map((w) => w.pointIndex!)),
     [layoutWarnings],
@@ -42,9 +42,9 @@ export function MountLayoutPanel({ readOnly, figures }: { readOnly: boolean; fig
           {mountPoints && mountPoints.length > 0 ? (
             <>
               <h3 className="tc-subsection-title tc-first">Plan, from above</h3>
-              <PlanView points={mountPoints} loadsN={loads?.loadsN ?? null} cg={planCg} flagged={flagged} units={units} />
+              <PlanView points={mountPoints} loadsN={loads?.loadsN ?? null} cg={planCg} flagged={flagged} sources={sources} units={units} />
               <h3 className="tc-subsection-title">Side elevation, looking along +y</h3>
-              <SideElevation points={mountPoints} cg={mass?.cg ?? null} components={components} units={units} />
+              <SideElevation points={mountPoints} cg={mass?.cg ?? null} components={components} sources={sources} units={units} />
             </>
           ) : null}
         </div>

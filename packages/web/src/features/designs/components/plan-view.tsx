@@ -3,6 +3,8 @@ import { memo, useMemo } from 'react';
 import type { Units } from '@/lib/units';
 import type { MountPoint } from '@/types/design-api';
 
+import { SourceArrowDef, SourceLegend, SourceMark, type DrawnSource } from './source-marks';
+
 const WIDTH = 560;
 const HEIGHT = 380;
 /** Room around the drawing for labels and the axes, px. */
@@ -16,8 +18,13 @@ export interface PlanViewProps {
   cg: { x: number; y: number } | null;
   /** Points to draw in the warning colour (lift-off). */
   flagged?: ReadonlySet<number>;
+  /** Disturbing sources to draw where they act, if any. */
+  sources?: readonly DrawnSource[] | null;
   units: Units;
 }
+
+/** Seen from above: x to the right, y up the page, z towards the viewer. */
+const PLAN_AXES = { x: { dx: 1, dy: 0 }, y: { dx: 0, dy: -1 }, z: null } as const;
 
 interface Frame {
   minX: number;
@@ -42,10 +49,10 @@ export function frameOutline(points: readonly { x: number; y: number }[]): Frame
  * A to-scale plan of the mount layout, seen from above (x to the right, y up): the frame
  * outline, every mount point with its label and live load, and the centre of gravity.
  */
-export const PlanView = memo(function PlanView({ points, loadsN, cg, flagged, units }: PlanViewProps) {
+export const PlanView = memo(function PlanView({ points, loadsN, cg, flagged, sources, units }: PlanViewProps) {
   const geometry = useMemo(() => {
     if (points.length === 0) return null;
-    const frame = frameOutline(cg ? [...points, cg] : points);
+    const frame = frameOutline([...points, ...(cg ? [cg] : []), ...(sources ?? []).map((s) => s.at)]);
     const spanX = frame.maxX - frame.minX;
     const spanY = frame.maxY - frame.minY;
     const scale = Math.min((WIDTH - PAD.left - PAD.right) / spanX, (HEIGHT - PAD.top - PAD.bottom) / spanY);
@@ -55,7 +62,7 @@ export const PlanView = memo(function PlanView({ points, loadsN, cg, flagged, un
     const px = (x: number) => offsetX + (x - frame.minX) * scale;
     const py = (y: number) => offsetY + (frame.maxY - y) * scale;
     return { frame, scale, px, py };
-  }, [points, cg]);
+  }, [points, cg, sources]);
 
   if (!geometry) return null;
   const { frame, px, py } = geometry;
@@ -74,6 +81,7 @@ export const PlanView = memo(function PlanView({ points, loadsN, cg, flagged, un
           <marker id="tc-arrow" viewBox="0 0 10 10" refX="9" refY="5" markerWidth="7" markerHeight="7" orient="auto-start-reverse">
             <path d="M 0 0 L 10 5 L 0 10 z" className="tc-drawing-arrowhead" />
           </marker>
+          <SourceArrowDef id="tc-plan-source-arrow" />
         </defs>
         <rect
           x={px(frame.minX)}
@@ -130,6 +138,18 @@ export const PlanView = memo(function PlanView({ points, loadsN, cg, flagged, un
             </g>
           );
         })}
+        {(sources ?? []).map((source, index) => (
+          <SourceMark
+            key={`${source.label}-${index}`}
+            source={source}
+            number={index + 1}
+            cx={px(source.at.x)}
+            cy={py(source.at.y)}
+            arrowId="tc-plan-source-arrow"
+            screenAxes={PLAN_AXES}
+            labelLeft={px(source.at.x) > centreX}
+          />
+        ))}
         {cg ? (
           <g className="tc-drawing-cg" data-testid="plan-cg">
             <circle cx={px(cg.x)} cy={py(cg.y)} r={9} />
@@ -147,6 +167,7 @@ export const PlanView = memo(function PlanView({ points, loadsN, cg, flagged, un
           {units.format('position', frame.maxY - frame.minY)}
         </text>
       </svg>
+      <SourceLegend sources={sources ?? []} />
       <figcaption className="tc-visually-hidden">Plan view to scale. Frame outline drawn around the mount points with a margin.</figcaption>
     </figure>
   );

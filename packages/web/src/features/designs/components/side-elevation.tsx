@@ -3,6 +3,8 @@ import { memo, useMemo } from 'react';
 import type { Units } from '@/lib/units';
 import type { DesignComponent, MountPoint, Vec3 } from '@/types/design-api';
 
+import { SourceArrowDef, SourceLegend, SourceMark, type DrawnSource } from './source-marks';
+
 const WIDTH = 560;
 const HEIGHT = 300;
 const PAD = { left: 56, right: 170, top: 30, bottom: 60 };
@@ -13,8 +15,13 @@ export interface SideElevationProps {
   points: readonly MountPoint[];
   cg: Vec3 | null;
   components?: readonly DesignComponent[] | null;
+  /** Disturbing sources to draw where they act, if any. */
+  sources?: readonly DrawnSource[] | null;
   units: Units;
 }
+
+/** Looking along +y: x to the right, z up the page, y away from the viewer. */
+const SIDE_AXES = { x: { dx: 1, dy: 0 }, y: null, z: { dx: 0, dy: -1 } } as const;
 
 /** Height of the mount plane: the mean height of the mounts' elastic centres [m]. */
 export function mountPlaneHeight(points: readonly MountPoint[]): number {
@@ -33,12 +40,13 @@ function springPath(x: number, yTop: number, yBottom: number): string {
  * A to-scale side elevation seen looking along +y (x to the right, z up): the mounts, the mount
  * plane, the centre of gravity and its height above the plane, and each component's CG.
  */
-export const SideElevation = memo(function SideElevation({ points, cg, components, units }: SideElevationProps) {
+export const SideElevation = memo(function SideElevation({ points, cg, components, sources, units }: SideElevationProps) {
   const geometry = useMemo(() => {
     if (points.length === 0) return null;
     const plane = mountPlaneHeight(points);
-    const xs = [...points.map((p) => p.x), ...(cg ? [cg.x] : []), ...(components ?? []).map((c) => c.cg.x)];
-    const zs = [...points.map((p) => p.z), ...(cg ? [cg.z] : []), ...(components ?? []).map((c) => c.cg.z)];
+    const at = (sources ?? []).map((s) => s.at);
+    const xs = [...points.map((p) => p.x), ...(cg ? [cg.x] : []), ...(components ?? []).map((c) => c.cg.x), ...at.map((a) => a.x)];
+    const zs = [...points.map((p) => p.z), ...(cg ? [cg.z] : []), ...(components ?? []).map((c) => c.cg.z), ...at.map((a) => a.z)];
     const minX = Math.min(...xs);
     const maxX = Math.max(...xs);
     const minZ = Math.min(...zs);
@@ -53,7 +61,7 @@ export const SideElevation = memo(function SideElevation({ points, cg, component
     const px = (x: number) => offsetX + (x - frame.minX) * scale;
     const py = (z: number) => offsetY + (frame.maxZ - z) * scale;
     return { plane, frame, px, py };
-  }, [points, cg, components]);
+  }, [points, cg, components, sources]);
 
   if (!geometry) return null;
   const { plane, frame, px, py } = geometry;
@@ -78,6 +86,7 @@ export const SideElevation = memo(function SideElevation({ points, cg, component
           <marker id="tc-dim-arrow" viewBox="0 0 10 10" refX="9" refY="5" markerWidth="6" markerHeight="6" orient="auto-start-reverse">
             <path d="M 0 0 L 10 5 L 0 10 z" className="tc-drawing-arrowhead" />
           </marker>
+          <SourceArrowDef id="tc-side-source-arrow" />
         </defs>
         <line x1={left} y1={groundY} x2={right} y2={groundY} className="tc-drawing-ground" />
         {points.map((p, index) => (
@@ -98,6 +107,18 @@ export const SideElevation = memo(function SideElevation({ points, cg, component
               {c.name}
             </text>
           </g>
+        ))}
+        {(sources ?? []).map((source, index) => (
+          <SourceMark
+            key={`${source.label}-${index}`}
+            source={source}
+            number={index + 1}
+            cx={px(source.at.x)}
+            cy={py(source.at.z)}
+            arrowId="tc-side-source-arrow"
+            screenAxes={SIDE_AXES}
+            labelLeft={px(source.at.x) > (left + right) / 2}
+          />
         ))}
         {cg && heightAbovePlane !== null ? (
           <>
@@ -143,6 +164,7 @@ export const SideElevation = memo(function SideElevation({ points, cg, component
           </text>
         </g>
       </svg>
+      <SourceLegend sources={sources ?? []} />
     </figure>
   );
 });

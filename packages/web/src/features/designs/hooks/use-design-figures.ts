@@ -15,7 +15,15 @@ import { useState } from 'react';
 import type { Units } from '@/lib/units';
 import type { DesignComponent, MountPoint, OperatingConditions } from '@/types/design-api';
 
-import { parseComponents, parseCriteria, parseMountPoints, parseOperating, type DesignFormValues } from '../schemas/design-form';
+import type { DrawnSource } from '../components/source-marks';
+import {
+  parseComponents,
+  parseCriteria,
+  parseMountPoints,
+  parseNumber,
+  parseOperating,
+  type DesignFormValues,
+} from '../schemas/design-form';
 
 /** Any equal value gives the same loads: with equal mounts the loads do not depend on the stiffness. */
 const EQUAL_STIFFNESS_N_PER_M = 1e6;
@@ -50,6 +58,26 @@ export interface DesignFigures {
   /** T at the minimum isolation asked for, or null while the criterion is blank. */
   targetTransmissibility: number | null;
   minIsolationPct: number | null;
+  /** The sources whose position is complete, for the drawings (SI). */
+  sources: DrawnSource[];
+}
+
+/** Sources with a complete position, for the drawings; rows still being typed are left out. */
+export function drawnSources(values: DesignFormValues, units: Units): DrawnSource[] {
+  const out: DrawnSource[] = [];
+  values.operating.sources.forEach((row, index) => {
+    const x = parseNumber(row.x);
+    const y = parseNumber(row.y);
+    const z = parseNumber(row.z);
+    if (x === undefined || y === undefined || z === undefined) return;
+    out.push({
+      label: row.label.trim() || `Source ${index + 1}`,
+      kind: row.kind,
+      axis: row.axis,
+      at: { x: units.toSi('position', x), y: units.toSi('position', y), z: units.toSi('position', z) },
+    });
+  });
+  return out;
 }
 
 /** Shape used by `massProperties`: a box when dimensions are given, own inertia when known. */
@@ -188,10 +216,11 @@ export function computeDesignFigures(values: DesignFormValues, units: Units): De
     governing: frequencies?.find((f) => f.governing) ?? null,
     targetTransmissibility,
     minIsolationPct: criteria?.minIsolationPct ?? null,
+    sources: drawnSources(values, units),
   };
 }
 
-const SHARED_PARTS = ['components', 'mountPoints', 'mass', 'loads', 'layoutWarnings', 'frequencies'] as const;
+const SHARED_PARTS = ['components', 'mountPoints', 'mass', 'loads', 'layoutWarnings', 'frequencies', 'sources'] as const;
 
 /**
  * Keeps the previous object for every part whose content did not change, so that drawings and

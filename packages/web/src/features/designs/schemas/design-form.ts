@@ -11,6 +11,16 @@ import {
   type OperatingConditions,
   type RestraintInput,
 } from '@/types/design-api';
+import type { Model2Operating } from '@/types/model2-api';
+
+import {
+  model2OperatingFields,
+  parseModel2Operating,
+  skipBandValues,
+  sourceValues,
+  type SkipBandValues,
+  type SourceValues,
+} from './sources-form';
 
 /**
  * The design form holds what the user typed, as text in the user's units; `toDesignInput`
@@ -30,6 +40,8 @@ export const DESIGN_LIMITS = {
   /** A mount is never loaded beyond its rating (the server refuses more). */
   maxUtilization: 1,
   ambientTempC: { min: -100, max: 400 },
+  /** ± % on the catalog stiffness (the server's limit). */
+  stiffnessTolerancePct: 50,
   /** Seismic restraint (the server's RestraintInputDto; ASCE 7-16 §13.3.1). */
   restraint: { sdsG: { max: 4 }, ap: { min: 1, max: 2.5 }, rp: { min: 1, max: 12 }, gapMm: { max: 100 } },
 } as const;
@@ -68,6 +80,12 @@ export interface OperatingValues {
   lineFrequencyHz: string;
   /** Further frequencies in Hz, e.g. "37.5, 75". */
   extraFrequenciesHz: string;
+  /** Where each force acts and how big it is (the whole-machine model); none: a vertical force at the CG. */
+  sources: SourceValues[];
+  /** Speed bands the drive skips, in rpm. */
+  skipBands: SkipBandValues[];
+  /** Poles of the drive motor (blank: not given). */
+  motorPoles: string;
 }
 
 export interface CriteriaValues {
@@ -77,6 +95,8 @@ export interface CriteriaValues {
   /** In the user's temperature unit. */
   ambientTemp: string;
   weightMarginPct: string;
+  /** ± % on the catalog stiffness; blank: the default of each mount type. */
+  stiffnessTolerancePct: string;
   mountTypes: string[];
   /** Supplier ids as text (checkbox values). */
   supplierIds: string[];
@@ -138,7 +158,8 @@ export function blankMountPoint(label = ''): MountPointValues {
 /** The saved SI input → what the form shows in the user's units. */
 export function toFormValues(input: DesignInput, units: Units): DesignFormValues {
   const position = (v: number) => numberText(units.toDisplay('position', v));
-  const { operating, criteria } = input;
+  const { criteria } = input;
+  const operating = input.operating as OperatingConditions & Model2Operating;
   return {
     components: input.components.map((c) => ({
       name: c.name,
@@ -161,6 +182,9 @@ export function toFormValues(input: DesignInput, units: Units): DesignFormValues
       vaneCount: numberText(operating.vaneCount),
       lineFrequencyHz: numberText(operating.lineFrequencyHz),
       extraFrequenciesHz: listText(operating.extraFrequenciesHz),
+      sources: (operating.sources ?? []).map((source) => sourceValues(source, units)),
+      skipBands: (operating.skipBandsRpm ?? []).map(skipBandValues),
+      motorPoles: numberText(operating.motorPoles),
     },
     criteria: {
       minIsolationPct: numberText(criteria.minIsolationPct),
@@ -168,6 +192,7 @@ export function toFormValues(input: DesignInput, units: Units): DesignFormValues
       maxUtilization: numberText(criteria.maxUtilization),
       ambientTemp: criteria.ambientTempC === undefined ? '' : numberText(units.toDisplay('temperature', criteria.ambientTempC)),
       weightMarginPct: numberText(criteria.weightMarginPct),
+      stiffnessTolerancePct: numberText(criteria.stiffnessTolerancePct),
       mountTypes: [...(criteria.mountTypes ?? [])],
       supplierIds: (criteria.supplierIds ?? []).map(String),
     },
@@ -307,6 +332,11 @@ export function parseCriteria(values: CriteriaValues, units: Units): Criteria | 
     if (margin === undefined) return null;
     criteria.weightMarginPct = margin;
   }
+  if (!isBlank(values.stiffnessTolerancePct)) {
+    const tolerance = parseNumber(values.stiffnessTolerancePct);
+    if (tolerance === undefined) return null;
+    criteria.stiffnessTolerancePct = tolerance;
+  }
   const mountTypes = values.mountTypes.filter(isMountType);
   if (mountTypes.length > 0) criteria.mountTypes = mountTypes;
   if (values.supplierIds.length > 0) criteria.supplierIds = values.supplierIds.map(Number);
@@ -342,10 +372,12 @@ export function parseRestraint(values: RestraintValues, units: Units): Restraint
 export function toDesignInput(values: DesignFormValues, units: Units): DesignInput | null {
   const components = parseComponents(values.components, units);
   const mountPoints = parseMountPoints(values.mountPoints, units);
-  const operating = parseOperating(values.operating);
+  const basic = parseOperating(values.operating);
+  const model2 = parseModel2Operating(values.operating, units);
   const criteria = parseCriteria(values.criteria, units);
   const restraint = parseRestraint(values.restraint, units);
-  if (!components || !mountPoints || !operating || !criteria || restraint === null) return null;
+  if (!components || !mountPoints || !basic || !model2 || !criteria || restraint === null) return null;
+  const operating: OperatingConditions & Model2Operating = { ...basic, ...model2 };
   return { components, mountPoints, operating, criteria, ...(restraint ? { restraint } : {}) };
 }
 
@@ -433,6 +465,7 @@ const operatingSchema = yup
       .max(DESIGN_LIMITS.vaneCount, `At most ${DESIGN_LIMITS.vaneCount} vanes`),
     lineFrequencyHz: optionalNumber('The line frequency').positive('The line frequency must be more than 0'),
     extraFrequenciesHz: listOf('Further frequencies', { max: DESIGN_LIMITS.extraFrequencies }),
+    ...model2OperatingFields,
   })
   .test('source', 'Give a speed or a line frequency: there is nothing to isolate from otherwise', function (values) {
     const hasSpeed = values.speedMode === 'range' ? true : values.speedRpm !== undefined;
@@ -463,6 +496,9 @@ const criteriaSchema = yup.object({
     .max(100, 'The weight margin must be at most 100 %'),
   mountTypes: yup.array(yup.string().required()).required(),
   supplierIds: yup.array(yup.string().required()).required(),
+  stiffnessTolerancePct: optionalNumber('The stiffness tolerance')
+    .min(0, 'The stiffness tolerance cannot be negative')
+    .max(DESIGN_LIMITS.stiffnessTolerancePct, `The stiffness tolerance is at most ${DESIGN_LIMITS.stiffnessTolerancePct} %`),
 });
 
 /** Seismic restraint: checked only when it is on; the gap limit is stated in the user's unit. */
@@ -544,6 +580,30 @@ const SECTION_NAMES: Record<keyof DesignFormValues, string> = {
   restraint: 'Seismic restraint',
 };
 
+/** Names of the rows of the lists inside a section (the sources and skip bands of the running conditions). */
+const ROW_NAMES: Record<string, string> = { sources: 'source', skipBands: 'skip band' };
+
+function describeRowErrors(
+  where: string,
+  rows: unknown[],
+  values: DesignFormValues,
+  section: keyof DesignFormValues,
+  key: string,
+): string[] {
+  const out: string[] = [];
+  const list = (values[section] as unknown as Record<string, { label?: string }[] | undefined>)[key] ?? [];
+  rows.forEach((rowErrors, index) => {
+    if (!rowErrors) return;
+    const label = list[index]?.label?.trim();
+    const at = `${where} ${index + 1}${label ? ` (${label})` : ''}`;
+    if (typeof rowErrors === 'string') out.push(`${at}: ${rowErrors}`);
+    else
+      for (const message of Object.values(rowErrors as Record<string, unknown>))
+        if (typeof message === 'string') out.push(`${at}: ${message}`);
+  });
+  return out;
+}
+
 /**
  * Formik's nested error object → one sentence per problem, naming where it is
  * ("Equipment, row 2 (Motor): The mass must be more than 0").
@@ -570,8 +630,9 @@ export function describeErrors(errors: unknown, values: DesignFormValues): strin
       });
       continue;
     }
-    for (const message of Object.values(sectionErrors as Record<string, unknown>)) {
+    for (const [key, message] of Object.entries(sectionErrors as Record<string, unknown>)) {
       if (typeof message === 'string') out.push(`${name}: ${message}`);
+      else if (Array.isArray(message)) out.push(...describeRowErrors(`${name}, ${ROW_NAMES[key] ?? 'row'}`, message, values, section, key));
     }
   }
   return out;

@@ -28,6 +28,8 @@ export interface CandidateChartsProps {
   markers: readonly FrequencyMarker[];
   targetTransmissibility: number | null;
   dampingNote: string;
+  /** The whole-machine figures are the verdict: label these as the bounce estimate. */
+  estimate?: boolean;
 }
 
 /** The candidate's transmissibility and the machine's frequency response, side by side with captions. */
@@ -39,11 +41,12 @@ export function CandidateCharts({
   markers,
   targetTransmissibility,
   dampingNote,
+  estimate = false,
 }: CandidateChartsProps) {
   return (
     <>
       <figure className="tc-chart" data-testid="transmissibility-chart" aria-label="Transmissibility against frequency">
-        <h4 className="tc-chart-title">Transmissibility</h4>
+        <h4 className="tc-chart-title">{estimate ? 'Transmissibility, bounce estimate' : 'Transmissibility'}</h4>
         <Suspense fallback={<ChartLoading />}>
           <TransmissibilityChart
             naturalFrequencyHz={naturalFrequencyHz}

@@ -6,6 +6,7 @@ import { SERIES_COLORS } from '@/components/charts/chart-style';
 import type { FrequencyMarker, TransmissibilityCurve } from '@/components/charts/transmissibility-chart';
 import { useUnits } from '@/lib/units';
 import type { Candidate } from '@/types/design-api';
+import type { Model2Candidate } from '@/types/model2-api';
 
 import { useCandidatesDamping } from '../hooks/use-candidate-damping';
 import {
@@ -97,6 +98,8 @@ export function CandidateComparison({
   const units = useUnits();
   const candidates = useMemo(() => compared.map((c) => c.candidate), [compared]);
   const damping = useCandidatesDamping(candidates);
+  // With the whole-machine verdict the per-frequency figures are the bounce estimate: say so.
+  const estimate = candidates.some((c) => (c as Candidate & Model2Candidate).wholeMachine !== undefined);
 
   const isolationRows = useMemo<FigureRow[]>(() => {
     const byFrequency = (candidates[0]?.isolation ?? []).map((row, j) => {
@@ -105,7 +108,7 @@ export function CandidateComparison({
       return {
         label: (
           <>
-            Isolation at {formatFrequency(row.frequencyHz)}
+            {estimate ? 'Bounce estimate' : 'Isolation'} at {formatFrequency(row.frequencyHz)}
             {label ? <span className="tc-cell-note">{label}</span> : null}
           </>
         ),
@@ -116,12 +119,12 @@ export function CandidateComparison({
       };
     });
     return byFrequency;
-  }, [candidates, frequencies]);
+  }, [candidates, frequencies, estimate]);
 
   const rows: FigureRow[] = [
     { label: 'Result', cells: candidates.map((c) => <VerdictTag key="v" passes={c.passes} />) },
     {
-      label: 'Isolation, lowest',
+      label: estimate ? 'Isolation, whole machine' : 'Isolation, lowest',
       cells: candidates.map((c) => formatPct(worstIsolationPct(c))),
       values: candidates.map(worstIsolationPct),
       better: 'high',
@@ -267,7 +270,7 @@ export function CandidateComparison({
         </table>
       </div>
       <figure className="tc-chart" data-testid="comparison-chart" aria-label="Transmissibility of the compared candidates">
-        <h4 className="tc-chart-title">Transmissibility, compared</h4>
+        <h4 className="tc-chart-title">{estimate ? 'Transmissibility, compared (bounce estimate)' : 'Transmissibility, compared'}</h4>
         <ul className="tc-chart-legend">
           {compared.map(({ rank, candidate }, i) => (
             <li key={candidateKey(candidate)}>

@@ -5,12 +5,16 @@ import { useMemo } from 'react';
 
 import type { FrequencyMarker } from '@/components/charts/transmissibility-chart';
 import { useUnits } from '@/lib/units';
-import type { Candidate } from '@/types/design-api';
+import type { Candidate, DesignInput } from '@/types/design-api';
+import type { Model2Candidate } from '@/types/model2-api';
 
+import { useSpeedCurves } from '../api/get-speed-curves';
 import { useCandidateDamping } from '../hooks/use-candidate-damping';
 import { CandidateCharts } from './candidate-charts';
 import { CandidateRestraintSection, type RestraintPlanLayout } from './candidate-restraint';
+import { CandidateWholeMachine, type WholeMachineContext } from './candidate-whole-machine';
 import {
+  assumptionsOf,
   formatDays,
   formatFrequency,
   formatMargin,
@@ -52,6 +56,10 @@ export interface CandidateDetailProps {
   onChoose: () => void;
   /** Mount points and CG in plan (of the input the candidate was computed from), for the restraint plan. */
   restraintLayout?: RestraintPlanLayout | null;
+  /** What of the saved input the whole-machine section needs (range, skip bands, motion limit). */
+  wholeMachineContext?: WholeMachineContext | null;
+  /** The saved input the candidate was found for, to fetch its speed curves (null: the chart shows the result's points). */
+  curvesInput?: DesignInput | null;
 }
 
 const SAME_MASS_TOLERANCE = 1e-9;
@@ -70,10 +78,16 @@ export function CandidateDetail({
   choosing,
   onChoose,
   restraintLayout = null,
+  wholeMachineContext = null,
+  curvesInput = null,
 }: CandidateDetailProps) {
   const units = useUnits();
   const damping = useCandidateDamping(candidate);
   const margin = weightMarginPct(candidate);
+  const assumptions = assumptionsOf(candidate);
+  const model2 = candidate as Candidate & Model2Candidate;
+  const estimate = model2.wholeMachine ? ' (bounce estimate)' : '';
+  const speedCurves = useSpeedCurves(curvesInput, candidate, model2.wholeMachine !== undefined && wholeMachineContext?.rangeRpm != null);
 
   // Σk_dyn follows from the server's fn and mass; the live fn re-uses it with the current mass.
   const stiffness = useMemo(
@@ -128,7 +142,7 @@ export function CandidateDetail({
       {!isChosen && canChoose && chooseBlockedReason ? <p className="tc-muted tc-note">{chooseBlockedReason}</p> : null}
 
       <dl className="tc-facts tc-facts--grid" aria-label="Candidate figures">
-        <dt>Natural frequency, vertical</dt>
+        <dt>Natural frequency, vertical{estimate}</dt>
         <dd>
           {formatFrequency(candidate.verticalNaturalFrequencyHz)}
           {massChanged ? (
@@ -162,6 +176,16 @@ export function CandidateDetail({
           </ul>
         </Callout>
       ) : null}
+      {assumptions.length > 0 ? (
+        <Callout intent="warning" title="Assumed, not from the catalog" className="tc-note" data-testid="candidate-assumptions">
+          <ul className="tc-problem-list">
+            {assumptions.map((assumption) => (
+              <li key={assumption}>{assumption}</li>
+            ))}
+          </ul>
+          <p className="tc-muted">Each missing figure is filled in with the value that is unfavourable for the check it feeds.</p>
+        </Callout>
+      ) : null}
       {candidate.notes && candidate.notes.length > 0 ? (
         <Callout title="Notes" className="tc-note" data-testid="candidate-notes">
           <ul className="tc-problem-list">
@@ -170,6 +194,15 @@ export function CandidateDetail({
             ))}
           </ul>
         </Callout>
+      ) : null}
+
+      {model2.wholeMachine && wholeMachineContext ? (
+        <CandidateWholeMachine
+          candidate={model2}
+          context={wholeMachineContext}
+          targetTransmissibility={targetTransmissibility}
+          curves={speedCurves}
+        />
       ) : null}
 
       <h4 className="tc-subsection-title">Per mount point</h4>
@@ -219,7 +252,15 @@ export function CandidateDetail({
 
       {candidate.restraint ? <CandidateRestraintSection restraint={candidate.restraint} layout={restraintLayout} /> : null}
 
-      <h4 className="tc-subsection-title">Isolation at each disturbing frequency</h4>
+      <h4 className="tc-subsection-title">
+        {model2.wholeMachine ? 'Bounce estimate: isolation at each disturbing frequency' : 'Isolation at each disturbing frequency'}
+      </h4>
+      {model2.wholeMachine ? (
+        <p className="tc-muted tc-note" data-testid="estimate-note">
+          The quick figures below treat the machine as one mass bouncing on its mounts. They are the estimate; the verdict comes from the
+          whole machine above.
+        </p>
+      ) : null}
       <HTMLTable compact striped className="tc-table" aria-label="Isolation per frequency">
         <thead>
           <tr>
@@ -260,6 +301,7 @@ export function CandidateDetail({
           markers={markers}
           targetTransmissibility={targetTransmissibility}
           dampingNote={dampingNote}
+          estimate={model2.wholeMachine !== undefined}
         />
       </div>
 

@@ -1,4 +1,5 @@
 import type { Candidate } from '@/types/design-api';
+import type { Model2Candidate } from '@/types/model2-api';
 
 const hz3 = new Intl.NumberFormat('en-US', { minimumSignificantDigits: 3, maximumSignificantDigits: 3, useGrouping: false });
 const pct1 = new Intl.NumberFormat('en-US', { minimumFractionDigits: 1, maximumFractionDigits: 1 });
@@ -43,9 +44,33 @@ export function formatDays(days: number | null): string {
   return days === 1 ? '1 day' : `${days} days`;
 }
 
-/** The lowest isolation efficiency over the disturbing frequencies [%]. */
+/**
+ * The isolation the verdict is checked against [%]: the whole machine's worst over the running
+ * range when the result carries it, else the lowest of the bounce estimate over the disturbing
+ * frequencies.
+ */
 export function worstIsolationPct(candidate: Candidate): number {
+  const whole = (candidate as Candidate & Model2Candidate).wholeMachine;
+  if (whole) return whole.worst.efficiencyPct;
   return candidate.isolation.length === 0 ? NaN : Math.min(...candidate.isolation.map((i) => i.efficiencyPct));
+}
+
+/** Where the verdict's isolation is worst: "at 1,200 rpm" (whole machine) or "at 24.7 Hz" (estimate); null when unknown. */
+export function worstIsolationWhere(candidate: Candidate): string | null {
+  const whole = (candidate as Candidate & Model2Candidate).wholeMachine;
+  if (whole) {
+    const { speedRpm, frequencyHz } = whole.worst;
+    return typeof speedRpm === 'number' && Number.isFinite(speedRpm)
+      ? `at ${Math.round(speedRpm).toLocaleString('en-US')} rpm`
+      : `at ${formatFrequency(frequencyHz)}`;
+  }
+  const governing = governingIsolation(candidate);
+  return governing ? `at ${formatFrequency(governing.frequencyHz)}` : null;
+}
+
+/** What the candidate's figures assumed for values the catalog does not give. */
+export function assumptionsOf(candidate: Candidate): string[] {
+  return (candidate as Candidate & Model2Candidate).assumptions ?? [];
 }
 
 /** The allowance on the weight the candidate's checks applied [%] (0 for a candidate stored before it was kept). */

@@ -6,6 +6,7 @@ import type { Candidate } from '@/types/design-api';
 
 import {
   allRemarks,
+  assumptionsOf,
   candidateKey,
   firstReason,
   formatDays,
@@ -14,12 +15,12 @@ import {
   formatMoney,
   formatPct,
   formatUtilizationRange,
-  governingIsolation,
   KIND_LABELS,
   utilizationBasis,
   utilizationRange,
   weightMarginPct,
   worstIsolationPct,
+  worstIsolationWhere,
 } from './candidate-format';
 
 export type SortDirection = 'asc' | 'desc';
@@ -247,7 +248,7 @@ export const CandidatesTable = memo(function CandidatesTable({
                 sort={sort}
                 onSort={onSort}
                 className="tc-number"
-                title="The lowest isolation over the disturbing frequencies: the figure the requirement is checked against"
+                title="The isolation the requirement is checked against: the whole machine's worst over the running range (or, without it, the lowest of the bounce estimate over the disturbing frequencies)"
               >
                 Isolation
               </SortHeader>
@@ -285,7 +286,8 @@ export const CandidatesTable = memo(function CandidatesTable({
             {sorted.map((row) => {
               const { candidate } = row;
               const key = candidateKey(candidate);
-              const governing = governingIsolation(candidate);
+              const where = worstIsolationWhere(candidate);
+              const assumed = assumptionsOf(candidate);
               const classes = [
                 'tc-results-row',
                 key === selectedKey ? 'is-selected' : '',
@@ -325,6 +327,17 @@ export const CandidatesTable = memo(function CandidatesTable({
                               Chosen
                             </Tag>
                           ) : null}
+                          {assumed.length > 0 ? (
+                            <Tag
+                              minimal
+                              intent="warning"
+                              className="tc-assumed-tag"
+                              data-testid="assumed-tag"
+                              title={`Not from the catalog, assumed: ${assumed.join('; ')}`}
+                            >
+                              {assumed.length} assumed
+                            </Tag>
+                          ) : null}
                         </span>
                       </span>
                     </div>
@@ -334,7 +347,7 @@ export const CandidatesTable = memo(function CandidatesTable({
                   </td>
                   <td className="tc-number">
                     {formatPct(worstIsolationPct(candidate))}
-                    {governing ? <span className="tc-cell-note">at {formatFrequency(governing.frequencyHz)}</span> : null}
+                    {where ? <span className="tc-cell-note">{where}</span> : null}
                   </td>
                   <td className="tc-number">{formatFrequency(candidate.verticalNaturalFrequencyHz)}</td>
                   <td className="tc-number">{formatUtilizationRange(candidate)}</td>
@@ -348,7 +361,9 @@ export const CandidatesTable = memo(function CandidatesTable({
         </table>
       </div>
       <p className="tc-muted tc-table-note">
-        Isolation: the lowest over the disturbing frequencies. Utilisation: load ÷ rated load from the lightest point to the heaviest
+        Isolation: the whole machine’s worst over the running range, where the results carry it; otherwise the lowest of the bounce estimate
+        over the disturbing frequencies. “Assumed”: figures not in the catalog, filled in with the unfavourable value. Utilisation: load ÷
+        rated load from the lightest point to the heaviest
         {margin > 0 ? `, the heaviest with the ${formatMargin(margin)} % weight margin` : ''}, as the checks compare it. Level error and the
         figures per point are in each candidate’s details.
       </p>

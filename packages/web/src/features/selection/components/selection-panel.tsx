@@ -7,12 +7,14 @@ import { SafetyCautions } from '@/components/safety-cautions';
 import { errorMessage } from '@/lib/api-errors';
 import { formatDateTime } from '@/lib/dates';
 import type { Candidate, DesignInput, SelectionResult, StoredSelection } from '@/types/design-api';
+import type { Model2Criteria, Model2Operating } from '@/types/model2-api';
 
 import { useRunDesignSelection } from '../api/run-design-selection';
 import { candidateKey } from './candidate-format';
 import { CandidateComparison } from './candidate-comparison';
 import { CandidateDetail, type DisturbingFrequencyLine } from './candidate-detail';
 import type { RestraintPlanLayout } from './candidate-restraint';
+import type { WholeMachineContext } from './candidate-whole-machine';
 import { CandidatesTable, MAX_COMPARED, type CandidateSort, type RankedCandidate } from './candidates-table';
 
 /** How many candidates a run asks for: enough to see why plausible mounts were rejected. */
@@ -59,6 +61,17 @@ function restraintLayoutOf(input: DesignInput): RestraintPlanLayout | null {
   } catch {
     return null;
   }
+}
+
+/** What the whole-machine section needs of the saved input. */
+export function wholeMachineContextOf(input: DesignInput): WholeMachineContext {
+  const operating = input.operating as DesignInput['operating'] & Model2Operating;
+  const criteria = input.criteria as DesignInput['criteria'] & Model2Criteria;
+  return {
+    rangeRpm: operating.speedRangeRpm ?? null,
+    skipBandsRpm: operating.skipBandsRpm ?? [],
+    maxResonantMotionMm: criteria.maxResonantMotionMm ?? null,
+  };
 }
 
 /** Total mass of a saved input [kg], for the chosen candidate's reference. */
@@ -126,6 +139,7 @@ export const SelectionPanel = memo(function SelectionPanel({
   const chosenKey = chosen ? candidateKey(chosen) : null;
   const savedMass = useMemo(() => savedMassKg(savedInput), [savedInput]);
   const restraintLayout = useMemo(() => restraintLayoutOf(savedInput), [savedInput]);
+  const wholeMachineContext = useMemo(() => wholeMachineContextOf(savedInput), [savedInput]);
 
   const find = async () => {
     setRunError(null);
@@ -276,6 +290,8 @@ export const SelectionPanel = memo(function SelectionPanel({
               choosing={choosing}
               onChoose={() => void choose(detailCandidate)}
               restraintLayout={restraintLayout}
+              wholeMachineContext={wholeMachineContext}
+              curvesInput={stale ? null : savedInput}
             />
           ) : run ? (
             <p className="tc-muted tc-note">Select a candidate to see its loads, curves and modes.</p>
