@@ -2,13 +2,15 @@
  * The words of the selection: for each failed check (a bit of the fail mask, checks.ts) the
  * sentences that say why, with the figures that decide it, and the notes on what the engine
  * assumed. Runs only for the candidates shown. Numbers in the words are rounded for reading
- * (selection-format.ts); the figures of the answer stay unrounded.
+ * (selection-format.ts); the figures of the answer stay unrounded. A figure with a unit is a
+ * `measure(…)` mark, written in each reader's units when the words go out (common/units/reader-words.ts).
  *
  * To word a new check: a function (context → sentences) and its row in REASONS, placed where its
  * sentence should come in the list.
  */
 import { describeModeMotion, isolationEfficiencyPct } from '@tacet/vibration';
-import { formatHz, formatMm, formatNumber, formatPct, formatPctValue } from '../selection-format.js';
+import { measure } from '../../common/units/reader-words.js';
+import { formatHz, formatNumber, formatPct, formatPctValue } from '../selection-format.js';
 import type { SelectionProblem } from '../selection-problem.js';
 import type { CandidatePoint, CandidateRestraint, RestraintPoint } from '../selection.types.js';
 import type { CandidateStore, PointMount } from './candidate-store.js';
@@ -83,7 +85,7 @@ export function notesFor(x: WordingContext): string[] {
   }
   if (!store.isUniform(c) && store.levelErrorM[c] > 0) {
     notes.push(
-      `Sizes picked per point for a level skid; the remaining level error of ${formatMm(store.levelErrorM[c] * 1000)} is trimmed with shims or levelling bolts.`,
+      `Sizes picked per point for a level skid; the remaining level error of ${measure('deflection', store.levelErrorM[c])} is trimmed with shims or levelling bolts.`,
     );
   }
   return notes;
@@ -93,7 +95,7 @@ export function notesFor(x: WordingContext): string[] {
 
 function cgOutside({ problem }: WordingContext): string[] {
   return [
-    `The centre of gravity (x ${formatNumber(problem.cg.x, 3)} m, y ${formatNumber(problem.cg.y, 3)} m) lies outside ` +
+    `The centre of gravity (x ${measure('position', problem.cg.x)}, y ${measure('position', problem.cg.y)}) lies outside ` +
       'the polygon of the mount points: the machine would tip. Move the mount points or the equipment.',
   ];
 }
@@ -124,7 +126,7 @@ function utilization({ problem, perPoint }: WordingContext): string[] {
   const { criteria } = problem;
   const reasons: string[] = [];
   for (const p of perPoint.filter((q) => q.loadN < 0)) {
-    reasons.push(`Point ${p.label} would lift off (it would need to pull ${formatNumber(-p.loadN, 0)} N).`);
+    reasons.push(`Point ${p.label} would lift off (it would need to pull ${measure('force', -p.loadN)}).`);
   }
   const over = (p: CandidatePoint) => p.utilization * problem.marginFactor > criteria.maxUtilization;
   const outside = perPoint.filter((p) => p.loadN >= 0 && (over(p) || p.utilization < criteria.minUtilization));
@@ -144,8 +146,8 @@ function deflection({ problem, points, perPoint }: WordingContext): string[] {
     const maxMm = points[i].maxDeflectionM * 1000;
     if (p.staticDeflectionMm * problem.marginFactor > maxMm) {
       reasons.push(
-        `Static deflection at point ${p.label} (${formatMm(p.staticDeflectionMm * problem.marginFactor)}${marginNote(problem)}) exceeds ` +
-          `the ${formatMm(maxMm)} the mount ${p.partNumber} allows.`,
+        `Static deflection at point ${p.label} (${measure('deflection', (p.staticDeflectionMm * problem.marginFactor) / 1000)}${marginNote(problem)}) exceeds ` +
+          `the ${measure('deflection', maxMm / 1000)} the mount ${p.partNumber} allows.`,
       );
     }
   });
@@ -158,7 +160,7 @@ function temperature({ problem, store, c }: WordingContext): string[] {
     .filter((r) => store.rowFail[r] & FAIL.temperature)
     .map(
       (r) =>
-        `The ambient temperature ${formatNumber(problem.criteria.ambientTempC ?? 0, 1)} °C is outside the range of ${store.partNumberOf(r)} ` +
+        `The ambient temperature ${measure('temperature', problem.criteria.ambientTempC ?? 0)} is outside the range of ${store.partNumberOf(r)} ` +
         `(${rangeText(store.tempMin[r], store.tempMax[r])}).`,
     );
 }
@@ -182,7 +184,7 @@ function modeConflict(conflict: ModeConflict): string {
 function restraint({ restraint: figures }: WordingContext): string[] {
   if (!figures) return [];
   const reasons: string[] = [];
-  const n = (value: number) => `${formatNumber(value, 0)} N`;
+  const n = (value: number) => measure('force', value);
   const grouped = (points: readonly RestraintPoint[]) => {
     const byPart = new Map<string, RestraintPoint[]>();
     for (const p of points) byPart.set(p.partNumber, [...(byPart.get(p.partNumber) ?? []), p]);
@@ -247,7 +249,7 @@ function labelSuffix(label: string | undefined): string {
 }
 
 function rangeText(min: number, max: number): string {
-  const lo = Number.isNaN(min) ? 'no lower limit' : `${formatNumber(min, 1)} °C`;
-  const hi = Number.isNaN(max) ? 'no upper limit' : `${formatNumber(max, 1)} °C`;
+  const lo = Number.isNaN(min) ? 'no lower limit' : measure('temperature', min);
+  const hi = Number.isNaN(max) ? 'no upper limit' : measure('temperature', max);
   return `${lo} to ${hi}`;
 }
