@@ -1,5 +1,12 @@
 import { createMount, createSupplier, type CreatedSupplier } from './factories/selection-catalog.factory.js';
 import { createTestApp, type TestApp } from './utils/create-test-app.js';
+import { inflatePdf, pdfHasText } from './utils/pdf-text.js';
+
+const binary = (res: NodeJS.ReadableStream, callback: (error: Error | null, body: Buffer) => void) => {
+  const chunks: Buffer[] = [];
+  res.on('data', (chunk: Buffer) => chunks.push(chunk));
+  res.on('end', () => callback(null, Buffer.concat(chunks)));
+};
 
 /**
  * The words of the selection (reasons and notes) follow the reader's unit system, the figures
@@ -133,5 +140,17 @@ describe('reasons and notes in the reader’s units (e2e)', () => {
     expect(us.reasons).toContain('The ambient temperature 194 °F is outside the range of RU-FIRM (-4 °F to 158 °F).');
     expect(us.reasons).toContain('Static deflection at point B (1.45 in) exceeds the 1.18 in the mount RU-FIRM allows.');
     expect(us.perPoint).toEqual(metric.perPoint);
+
+    // the report the reader downloads, in the same units
+    const report = async () =>
+      inflatePdf(
+        (await t.http().get(`/api/designs/${design.body.id}/report.pdf`).set(auth).buffer(true).parse(binary).expect(200)).body as Buffer,
+      );
+    const usPdf = await report();
+    expect(pdfHasText(usPdf, 'Ambient temperature 194 °F')).toBe(true);
+    expect(pdfHasText(usPdf, 'The ambient temperature 194 °F is outside the range of RU-FIRM (-4 °F to 158 °F).')).toBe(true);
+    expect(pdfHasText(usPdf, '\u27e6')).toBe(false);
+    await setUnits('SI');
+    expect(pdfHasText(await report(), 'Ambient temperature 90 °C')).toBe(true);
   });
 });
