@@ -185,6 +185,19 @@ describe('SelectionEvaluation', () => {
     expect(c.perPoint[0].staticDeflectionMm).toBe(metric(evaluation.describe(0, names)).perPoint[0].staticDeflectionMm); // figures stay SI
   });
 
+  it('states utilisation on the check’s basis: utilizationWithMargin is what the upper check compares (docs/engineering/selection.md)', () => {
+    // W/4 = 2451.66 N on a 2600 N rating: 0.943 bare, × 1.1 = 1.037 > 1.0 with a 10 % margin (fails); 0.943 alone would pass
+    const p = problem({ criteria: { minIsolationPct: 90, minUtilization: 0.5, maxUtilization: 1.0, weightMarginPct: 10 } });
+    const c = metric(evaluate(p, [row({ ratedLoadN: 2600 })]).describe(0, names));
+    expect(c.perPoint[0].utilization).toBeCloseTo(W4 / 2600, 12);
+    expect(c.perPoint[0].utilizationWithMargin).toBeCloseTo((W4 * 1.1) / 2600, 12);
+    expect(c.passes).toBe(false);
+    expect(c.reasons[0]).toContain('with the 10 % weight margin at point A (104 %)');
+    const none = metric(evaluate(problem(), [row({ ratedLoadN: 2600 })]).describe(0, names));
+    expect(none.perPoint[0].utilizationWithMargin).toBe(none.perPoint[0].utilization);
+    expect(none.passes).toBe(true);
+  });
+
   it('notes assumptions: horizontal stiffness taken equal to vertical; no modes without inertia', () => {
     const noHorizontal = row({ horizontalStiffnessNPerM: null });
     const withBox = evaluate(problem(), [noHorizontal]);
