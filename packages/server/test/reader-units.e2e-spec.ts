@@ -1,8 +1,9 @@
+import type { Response } from 'supertest';
 import { createMount, createSupplier, type CreatedSupplier } from './factories/selection-catalog.factory.js';
 import { createTestApp, type TestApp } from './utils/create-test-app.js';
 import { inflatePdf, pdfHasText } from './utils/pdf-text.js';
 
-const binary = (res: NodeJS.ReadableStream, callback: (error: Error | null, body: Buffer) => void) => {
+const binary = (res: Response, callback: (error: Error | null, body: Buffer) => void) => {
   const chunks: Buffer[] = [];
   res.on('data', (chunk: Buffer) => chunks.push(chunk));
   res.on('end', () => callback(null, Buffer.concat(chunks)));

@@ -63,7 +63,8 @@ function walk(value: unknown, system: UnitSystem, depth: number): unknown {
   for (const [key, item] of Object.entries(value)) {
     const rendered = walk(item, system, depth + 1);
     if (rendered !== item)
-      (copy ??= Object.assign(Object.create(Object.getPrototypeOf(value) as object | null) as object, value))[key] = rendered;
+      (copy ??= Object.assign(Object.create(Object.getPrototypeOf(value) as object | null) as Record<string, unknown>, value))[key] =
+        rendered;
   }
   return copy ?? value;
 }
