@@ -749,8 +749,10 @@ export interface components {
       partNumber: string;
       /** @description N */
       loadN: number;
-      /** @description load / rated load */
+      /** @description load / rated load, without the weight margin (the basis of the lower utilisation check) */
       utilization: number;
+      /** @description load × (1 + weightMarginPct/100) / rated load: the basis of the upper utilisation check, the figure to show beside the allowed window (equal to utilization without a margin; absent on candidates stored before it was given) */
+      utilizationWithMargin?: number;
       staticDeflectionMm: number;
     };
     CandidateRestraintDto: {
@@ -784,6 +786,8 @@ export interface components {
       /** @description every point within its ratings */
       passes: boolean;
     };
+    /** @enum {string} */
+    CatalogExportUnits: "SI" | "US" | "both";
     CatalogImportDto: {
       id: number;
       /** @example spring-mounts-2026.csv */
@@ -2939,14 +2943,17 @@ export interface operations {
   };
   MountsController_export: {
     parameters: {
-      query?: never;
+      query?: {
+        /** @description SI: the metric columns (N, N/mm, mm, °C); US: the US customary ones (lbf, lbf/in, in, °F) where a quantity has them; both: each quantity in both. Default: the signed-in user's unit system */
+        units?: components["schemas"]["CatalogExportUnits"];
+      };
       header?: never;
       path?: never;
       cookie?: never;
     };
     requestBody?: never;
     responses: {
-      /** @description The active catalog in the import format (catalog/FORMAT.md), SI columns */
+      /** @description The active catalog in the import format (catalog/FORMAT.md), in the columns of `units` (default: the reader's unit system) */
       200: {
         headers: {
           [name: string]: unknown;
@@ -2954,6 +2961,13 @@ export interface operations {
         content: {
           "text/csv": string;
         };
+      };
+      /** @description `units` is not SI, US or both */
+      400: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content?: never;
       };
     };
   };
@@ -3848,6 +3862,7 @@ type ReadonlyArray<T> = [
 export const pathsApiDesignsIdVerificationsPostRequestBodyContentMultipartFormDataKindValues: ReadonlyArray<FlattenedDeepRequired<paths>["/api/designs/{id}/verifications"]["post"]["requestBody"]["content"]["multipart/form-data"]["kind"]> = ["frf", "impact"];
 export const pathsApiDesignsIdVerificationsPostRequestBodyContentMultipartFormDataQuantityValues: ReadonlyArray<FlattenedDeepRequired<paths>["/api/designs/{id}/verifications"]["post"]["requestBody"]["content"]["multipart/form-data"]["quantity"]> = ["accelerance", "mobility", "receptance"];
 export const candidateKindValues: ReadonlyArray<FlattenedDeepRequired<components>["schemas"]["CandidateKind"]> = ["uniform", "series"];
+export const catalogExportUnitsValues: ReadonlyArray<FlattenedDeepRequired<components>["schemas"]["CatalogExportUnits"]> = ["SI", "US", "both"];
 export const dampingModelValues: ReadonlyArray<FlattenedDeepRequired<components>["schemas"]["DampingModel"]> = ["viscous", "hysteretic"];
 export const designStatusValues: ReadonlyArray<FlattenedDeepRequired<components>["schemas"]["DesignStatus"]> = ["draft", "in_review", "released", "superseded"];
 export const frfQuantityValues: ReadonlyArray<FlattenedDeepRequired<components>["schemas"]["FrfQuantity"]> = ["accelerance", "mobility", "receptance"];
