@@ -9,6 +9,7 @@ import { AllExceptionsFilter } from './common/filters/all-exceptions.filter.js';
 import { BodyShapePipe } from './common/pipes/body-shape.pipe.js';
 import { IdParamPipe } from './common/pipes/id-param.pipe.js';
 import { createValidationPipe } from './common/pipes/validation.pipe.js';
+import { ReaderUnitsInterceptor } from './common/units/reader-units.interceptor.js';
 import { AppConfig } from './config/app-config.js';
 import { hasWebClient } from './web-client.js';
 
@@ -27,7 +28,8 @@ export function createOpenApiDocument(app: INestApplication): OpenAPIObject {
     new DocumentBuilder()
       .setTitle('Tacet API')
       .setDescription(
-        'Selection and sizing of resilient isolation mounts. SI units throughout. ' +
+        'Selection and sizing of resilient isolation mounts. Figures in SI units throughout; the words of reasons and notes ' +
+          "name their figures in the signed-in user's unit system (`unitSystem`). " +
           'Errors are `{statusCode, message, errors?}` (schema `ApiErrorDto`).',
       )
       .setVersion('0.1.0')
@@ -58,6 +60,8 @@ export function configureApp(app: NestExpressApplication): NestExpressApplicatio
   // and an id beyond a 32-bit integer must not reach PostgreSQL.
   app.useGlobalPipes(new BodyShapePipe(), new IdParamPipe(), createValidationPipe());
   app.useGlobalFilters(new AllExceptionsFilter());
+  // Figures inside words (reasons, notes) in the reader's unit system (common/units/reader-words.ts).
+  app.useGlobalInterceptors(new ReaderUnitsInterceptor());
   app.enableShutdownHooks();
   setupOpenApi(app);
 

@@ -1,5 +1,6 @@
 import { readFileSync } from 'node:fs';
 import { parse } from 'csv-parse/sync';
+import { withoutBinaryNoise } from '@tacet/vibration';
 import { DataSource } from 'typeorm';
 import { Mount } from '../src/catalog/mount.entity.js';
 import { SI_HEADER, csvOf, example, mountBody, mountRow } from './factories/catalog.factory.js';
@@ -420,7 +421,7 @@ describe('catalog (e2e)', () => {
       // Mounts from US columns and from the API hold values that N/mm text must carry exactly.
       await upload(readFileSync(example('good-us.csv'))).expect(200);
       await upload(readFileSync(example('crlf-bom.csv'))).expect(200);
-      await t
+      const typed = await t
         .http()
         .post('/api/mounts')
         .set(as(manager))
@@ -445,7 +446,93 @@ describe('catalog (e2e)', () => {
       expect(dry.body).toMatchObject({ accepted: rowCount, rejected: 0, created: 0, updated: rowCount, errors: [] });
 
       await upload(bytes).expect(200);
-      expect(await figures()).toEqual(before);
+      // Numbers are written to 15 significant digits (FORMAT.md): a figure typed into the API with
+      // more digits reads back equal to 15 digits; every other figure reads back exactly.
+      const after = await figures();
+      const fifteen = (value: unknown) => (typeof value === 'number' ? withoutBinaryNoise(value) : value);
+      const typedAfter = after.find((m) => m.id === typed.body.id)!;
+      const typedBefore = before.find((m) => m.id === typed.body.id)!;
+      expect(Object.fromEntries(Object.entries(typedAfter).map(([k, v]) => [k, fifteen(v)]))).toEqual(
+        Object.fromEntries(Object.entries(typedBefore).map(([k, v]) => [k, fifteen(v)])),
+      );
+      expect(typedAfter.verticalStiffnessNPerM).toBe(123_456.789_012_346);
+      expect(after.filter((m) => m.id !== typed.body.id)).toEqual(before.filter((m) => m.id !== typed.body.id));
+    });
+
+    it('writes the columns of the reader’s units, or both; each export imports back to the same figures (round trip)', async () => {
+      await upload(readFileSync(example('good-us.csv'))).expect(200);
+      const download = async (query: string, token = viewer) =>
+        (
+          await t
+            .http()
+            .get(`/api/mounts/export.csv${query}`)
+            .set(as(token))
+            .buffer(true)
+            .parse((res, done) => {
+              const chunks: Buffer[] = [];
+              res.on('data', (chunk: Buffer) => chunks.push(chunk));
+              res.on('end', () => done(null, Buffer.concat(chunks)));
+            })
+            .expect(200)
+        ).body as Buffer;
+      const figures = async () =>
+        (
+          await t.app
+            .get(DataSource)
+            .getRepository(Mount)
+            .find({ where: { active: true }, order: { id: 'ASC' } })
+        ).map(({ updatedAt: _updatedAt, ...rest }) => rest);
+      const before = await figures();
+
+      const us = await download('?units=US');
+      const usHeader: string[] = parse(us, { bom: true })[0];
+      expect(usHeader).toEqual(
+        expect.arrayContaining([
+          'rated_load_lbf',
+          'vertical_stiffness_lbf_per_in',
+          'max_deflection_in',
+          'temp_min_f',
+          'temp_max_f',
+          'height_in',
+        ]),
+      );
+      expect(usHeader.filter((name) => /_(n|mm|c|n_per_mm)$/.test(name))).toEqual([]);
+      // a US customary reader gets the same file without asking
+      await t.http().patch('/api/auth/me').set(as(viewer)).send({ unitSystem: 'US' }).expect(200);
+      expect(parse(await download(''), { bom: true })[0]).toEqual(usHeader);
+      await t.http().patch('/api/auth/me').set(as(viewer)).send({ unitSystem: 'SI' }).expect(200);
+      expect(us.toString('utf8')).not.toMatch(/\d\.\d{16,}|\d{17,}/); // no binary noise: at most 15 significant digits
+
+      const rowCount = parse(us, { bom: true }).length - 1;
+      expect((await upload(us, '?dryRun=true').expect(200)).body).toMatchObject({
+        accepted: rowCount,
+        created: 0,
+        updated: rowCount,
+        errors: [],
+      });
+      await upload(us).expect(200);
+      // US customary figures read back to within the 15 digits written (conversions: NIST SP 811, exact factors)
+      const afterUs = await figures();
+      afterUs.forEach((mount, i) => {
+        for (const [key, value] of Object.entries(mount)) {
+          const was = (before[i] as Record<string, unknown>)[key];
+          if (typeof value === 'number' && typeof was === 'number')
+            expect(Math.abs(value - was)).toBeLessThanOrEqual(Math.abs(was) * 1e-13);
+          else expect(value).toEqual(was);
+        }
+      });
+
+      const both = await download('?units=both');
+      const bothHeader: string[] = parse(both, { bom: true })[0];
+      expect(bothHeader.slice(4, 6)).toEqual(['rated_load_n', 'rated_load_lbf']);
+      expect(bothHeader).toEqual(expect.arrayContaining(['temp_min_c', 'temp_min_f', 'height_mm', 'height_in']));
+      const stored = await figures();
+      expect((await upload(both, '?dryRun=true').expect(200)).body).toMatchObject({ accepted: rowCount, updated: rowCount, errors: [] });
+      await upload(both).expect(200);
+      expect(await figures()).toEqual(stored); // both columns agree; the SI one is kept, exactly
+
+      const refused = await t.http().get('/api/mounts/export.csv?units=metric').set(as(viewer)).expect(400);
+      expect(JSON.stringify(refused.body)).toContain('units must be SI, US or both');
     });
 
     it('round-trips the restraint ratings given in N and in lbf (exact factor 1 lbf = 4.4482216152605 N, NIST SP 811)', async () => {
@@ -488,7 +575,7 @@ describe('catalog (e2e)', () => {
       expect(await stored('RS-N')).toMatchObject({ restraintCapacityN: 9000.5, upliftCapacityN: 4500 });
       expect(await stored('RS-LBF')).toMatchObject({
         restraintCapacityN: 2000 * 4.4482216152605,
-        upliftCapacityN: 1011.6 * 4.4482216152605,
+        upliftCapacityN: 4499.82098599752, // 1011.6 × 4.4482216152605 to 15 significant digits (no binary noise)
       });
 
       // the export writes N; importing it back changes nothing, and an lbf file written from it reads back the same figures
@@ -498,6 +585,7 @@ describe('catalog (e2e)', () => {
       expect(exported('RS-N')[column('restraint_capacity_n')]).toBe('9000.5');
       expect(exported('RS-N')[column('uplift_capacity_n')]).toBe('4500');
       expect(Number(exported('RS-LBF')[column('restraint_capacity_n')])).toBe(2000 * 4.4482216152605);
+      expect(exported('RS-LBF')[column('uplift_capacity_n')]).toBe('4499.82098599752');
       const mine = rows.filter((row) => row[0] === 'Restraint Example Supplier');
       const n = rows[0].map((name, i) => [name, i] as const);
       const si = csvOf(
@@ -508,7 +596,7 @@ describe('catalog (e2e)', () => {
       await upload(si).expect(200);
       expect(await stored('RS-LBF')).toMatchObject({
         restraintCapacityN: 2000 * 4.4482216152605,
-        upliftCapacityN: 1011.6 * 4.4482216152605,
+        upliftCapacityN: 4499.82098599752, // 1011.6 × 4.4482216152605 to 15 significant digits (no binary noise)
       });
       const usHeader = rows[0].map((name) => name.replace(/^(restraint|uplift)_capacity_n$/, '$1_capacity_lbf'));
       const us = csvOf(

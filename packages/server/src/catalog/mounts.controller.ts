@@ -9,9 +9,12 @@ import {
   ApiProduces,
   ApiTags,
 } from '@nestjs/swagger';
+import { CurrentUser } from '../common/decorators/current-user.decorator.js';
 import { Roles } from '../common/decorators/roles.decorator.js';
+import type { User } from '../users/user.entity.js';
 import { CatalogExportService } from './catalog-export.service.js';
 import { CreateMountDto } from './dto/create-mount.dto.js';
+import { ExportQueryDto } from './dto/export-query.dto.js';
 import { MountDto, MountPageDto } from './dto/mount.dto.js';
 import { SearchMountsQueryDto } from './dto/search-mounts-query.dto.js';
 import { UpdateMountDto } from './dto/update-mount.dto.js';
@@ -39,10 +42,12 @@ export class MountsController {
   @ApiProduces('text/csv')
   @ApiOkResponse({
     schema: { type: 'string', format: 'binary' },
-    description: 'The active catalog in the import format (catalog/FORMAT.md), SI columns',
+    description:
+      "The active catalog in the import format (catalog/FORMAT.md), in the columns of `units` (default: the reader's unit system)",
   })
-  export(): StreamableFile {
-    return new StreamableFile(this.exporter.stream(), {
+  @ApiBadRequestResponse({ description: '`units` is not SI, US or both' })
+  export(@CurrentUser() user: User, @Query() query: ExportQueryDto): StreamableFile {
+    return new StreamableFile(this.exporter.stream(query.units ?? user.unitSystem), {
       type: 'text/csv; charset=utf-8',
       disposition: `attachment; filename="${this.exporter.fileName()}"`,
     });

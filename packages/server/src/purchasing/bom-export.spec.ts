@@ -33,6 +33,12 @@ describe('BOM exports', () => {
     expect(rows[2]).toEqual(['Invented Springs', 'IS-200', '1', 'C', '', '', 'USD', '']);
   });
 
+  it('CSV: numbers without binary noise (a price converted or summed in floating point)', () => {
+    const [, row] = parse(bomCsv([line({ unitPrice: 0.1 + 0.2, extendedPrice: 3 * 1.1 })], false)) as string[][];
+    expect(String(0.1 + 0.2)).toBe('0.30000000000000004');
+    expect(row.slice(4, 6)).toEqual(['0.3', '3.3']);
+  });
+
   it('CSV: text a spreadsheet would run as a formula is neutralised (OWASP CSV injection)', () => {
     const hostile = bomCsv([line({ supplier: { id: 1, name: '=HYPERLINK("http://x")' }, partNumber: '+1-2', mountPoints: ['@A'] })], false);
     const [, row] = parse(hostile) as string[][];

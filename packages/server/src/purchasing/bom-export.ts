@@ -1,4 +1,5 @@
 import { stringify } from 'csv-stringify/sync';
+import { exportNumber } from '@tacet/vibration';
 import ExcelJS from 'exceljs';
 import type { BomLine } from '../selection/selection.types.js';
 
@@ -60,7 +61,7 @@ export function bomTotals(lines: readonly BomLine[]): BomTotal[] {
 /**
  * The BOM as CSV: a header of BOM_CSV_COLUMNS, one row per line. Text that a spreadsheet would
  * read as a formula (= + - @, tab, CR) is prefixed with a quote (csv-stringify `escape_formulas`).
- * A draft gets one marking line before the header.
+ * A draft gets one marking line before the header. Numbers are written without binary noise (exportNumber).
  */
 export function bomCsv(lines: readonly BomLine[], draft: boolean): string {
   const rows = lines.map((line) => [
@@ -68,8 +69,8 @@ export function bomCsv(lines: readonly BomLine[], draft: boolean): string {
     line.partNumber,
     line.quantity,
     line.mountPoints.join(' '),
-    line.unitPrice ?? '',
-    line.extendedPrice ?? '',
+    line.unitPrice === null ? '' : exportNumber(line.unitPrice),
+    line.extendedPrice === null ? '' : exportNumber(line.extendedPrice),
     line.currency,
     line.leadTimeDays ?? '',
   ]);

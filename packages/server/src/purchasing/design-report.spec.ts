@@ -1,7 +1,8 @@
 import { describe, expect, it } from '@jest/globals';
 import type { Design } from '../designs/design.entity.js';
 import { pdfHasText, pdfPageCount } from '../../test/utils/pdf-text.js';
-import { designReportPdf, modeMotionText } from './design-report.js';
+import { measure } from '../common/units/reader-words.js';
+import { designReportPdf, modeMotionText, utilizationText } from './design-report.js';
 
 const design = (status: Design['status']) =>
   ({
@@ -92,7 +93,7 @@ describe('designReportPdf', () => {
       'Speed 1480 rpm',
       'Vanes or blades: 6',
       'Minimum isolation 90.0 % of the whole machine',
-      'x 0.500 m',
+      'x 0.5 m',
       'IS-100',
       'damping ratio 0.01',
       'Transmissibility T (log)',
@@ -200,6 +201,64 @@ describe('designReportPdf: the whole machine (docs/engineering/selection.md §19
       'of the whole machine over the running range',
     ];
     expect(wanted.filter((text) => !pdfHasText(pdf, text))).toEqual([]);
+  }, 20000);
+
+  // 1 in = 25.4 mm, 1 lb = 0.45359237 kg, 1 lbf = 4.4482216152605 N (NIST SP 811, Appendix B); °F = 1.8 °C + 32.
+  const chosenDesign = () => {
+    const candidate = {
+      label: 'IS-100',
+      supplier: { id: 1, name: 'Invented Springs' },
+      verticalNaturalFrequencyHz: 2.85,
+      resonanceAmplification: 50,
+      levelErrorMm: 6.6,
+      weightMarginPct: 10,
+      perPoint: [{ label: 'A', partNumber: 'IS-100', loadN: 2224.11080763025, utilization: 0.8, staticDeflectionMm: 25.4 }],
+      isolation: [],
+      modes: [],
+      reasons: [
+        `Static deflection at point A (${measure('deflection', 0.0254)}) exceeds the ${measure('deflection', 0.02)} the mount IS-100 allows.`,
+      ],
+    };
+    return {
+      ...design('released'),
+      input: {
+        components: [{ name: 'Machine', massKg: 453.59237, cg: { x: 0.254, y: 0, z: 0.508 } }],
+        mountPoints: [{ label: 'A', x: 0.762, y: 0.254, z: 0 }],
+        criteria: { minIsolationPct: 90, minUtilization: 0.5, maxUtilization: 1, ambientTempC: 40, weightMarginPct: 10 },
+      },
+      chosen: candidate,
+    } as unknown as Design;
+  };
+
+  it('follows a US customary reader: lb, in, lbf, °F, and the reasons in inches', async () => {
+    const pdf = await designReportPdf(chosenDesign(), { disturbingFrequencies: [], releasedAt: null, compress: false, units: 'US' });
+    const wanted = [
+      'Machine: 1000 lb, centre of gravity (10, 0, 20) in',
+      'A: x 30 in, y 10 in, z 0 in',
+      'Ambient temperature 104 °F',
+      'level difference between points: 0.26 in',
+      'load 500 lbf',
+      'static deflection 1 in',
+      'Static deflection at point A (1 in) exceeds the 0.79 in the mount IS-100 allows.',
+    ];
+    expect(wanted.filter((text) => !pdfHasText(pdf, text))).toEqual([]);
+    expect(pdfHasText(pdf, ' mm')).toBe(false);
+    expect(pdfHasText(pdf, ' kg')).toBe(false);
+  }, 20000);
+
+  it('follows a metric reader, and shows utilisation on the check’s basis (with the weight margin)', async () => {
+    const pdf = await designReportPdf(chosenDesign(), { disturbingFrequencies: [], releasedAt: null, compress: false, units: 'SI' });
+    const wanted = [
+      'Machine: 453.6 kg, centre of gravity (0.254, 0, 0.508) m',
+      'level difference between points: 6.6 mm',
+      'load 2224 N',
+      'utilisation 88 % with the 10 % weight margin (80 % without)',
+      'static deflection 25.4 mm',
+      'Static deflection at point A (25.4 mm) exceeds the 20 mm the mount IS-100 allows.',
+      'the upper limit with the 10 % weight margin on the load',
+    ];
+    expect(wanted.filter((text) => !pdfHasText(pdf, text))).toEqual([]);
+    expect(utilizationText(0.8, 0)).toBe('80 %');
   }, 20000);
 });
 

@@ -1,6 +1,20 @@
 import { createRequire } from 'node:module';
-import { describeModeMotion, hystereticDamping, logSpace, transmissibility, viscousDamping, type Damping } from '@tacet/vibration';
+import {
+  describeModeMotion,
+  formatDecimal,
+  formatMeasure,
+  hystereticDamping,
+  logSpace,
+  SENTENCE_DECIMALS,
+  toDisplay,
+  transmissibility,
+  unitLabel,
+  viscousDamping,
+  type Damping,
+  type UnitSystem,
+} from '@tacet/vibration';
 import PDFDocument from 'pdfkit';
+import { inReaderUnits } from '../common/units/reader-words.js';
 import type { Design } from '../designs/design.entity.js';
 import type { CandidateMode, LabelledFrequency, MountSnapshot } from '../selection/selection.types.js';
 import type { Verification } from '../verifications/verification.entity.js';
@@ -57,6 +71,22 @@ export interface ReportOptions {
   machineCount?: number;
   /** Uncompressed content streams (tests read the text back). */
   compress?: boolean;
+  /** The reader's unit system: every figure with a unit, and the reasons, are written in it (SI when not given). */
+  units?: UnitSystem;
+}
+
+/** A point in the reader's units: "(0.65, 0.05, 0.5) m" / "(25.59, 1.97, 19.69) in". */
+function pointText(p: { x: number; y: number; z: number }, units: UnitSystem): string {
+  const digits = SENTENCE_DECIMALS[units].position;
+  const coordinate = (v: number) => formatDecimal(toDisplay('position', v, units), digits);
+  return `(${coordinate(p.x)}, ${coordinate(p.y)}, ${coordinate(p.z)}) ${unitLabel('position', units)}`;
+}
+
+/** A point's utilisation as the checks read it: with the weight margin beside the bare figure when there is one. */
+export function utilizationText(utilization: number, weightMarginPct: number): string {
+  const bare = `${fmt(utilization * 100, 0)} %`;
+  if (!(weightMarginPct > 0)) return bare;
+  return `${fmt(utilization * (1 + weightMarginPct / 100) * 100, 0)} % with the ${formatDecimal(weightMarginPct, 1)} % weight margin (${bare} without)`;
 }
 
 /**
@@ -67,6 +97,8 @@ export interface ReportOptions {
  */
 export function designReportPdf(design: Design, options: ReportOptions): Promise<Buffer> {
   const fonts = reportFonts();
+  const units = options.units ?? 'SI';
+  const q = (quantity: Parameters<typeof formatMeasure>[0], si: number) => formatMeasure(quantity, si, units);
   const draft = design.status !== 'released' && design.status !== 'superseded';
   const doc = new PDFDocument({
     size: 'A4',
@@ -117,18 +149,16 @@ export function designReportPdf(design: Design, options: ReportOptions): Promise
   const snapshot = design.snapshot;
   heading('Equipment');
   for (const component of design.input.components) {
-    body(
-      `${component.name}: ${fmt(component.massKg, 1)} kg, centre of gravity (${fmt(component.cg.x, 3)}, ${fmt(component.cg.y, 3)}, ${fmt(component.cg.z, 3)}) m`,
-    );
+    body(`${component.name}: ${q('mass', component.massKg)}, centre of gravity ${pointText(component.cg, units)}`);
   }
   if (snapshot) {
     const { massKg, cg } = snapshot.massProperties;
-    body(`Total: ${fmt(massKg, 1)} kg, centre of gravity (${fmt(cg.x, 3)}, ${fmt(cg.y, 3)}, ${fmt(cg.z, 3)}) m`);
+    body(`Total: ${q('mass', massKg)}, centre of gravity ${pointText(cg, units)}`);
   }
 
   heading('Mount points (positions of the elastic centres)');
   for (const point of design.input.mountPoints ?? []) {
-    body(`${point.label}: x ${fmt(point.x, 3)} m, y ${fmt(point.y, 3)} m, z ${fmt(point.z, 3)} m`);
+    body(`${point.label}: x ${q('position', point.x)}, y ${q('position', point.y)}, z ${q('position', point.z)}`);
   }
 
   const operating = design.input.operating;
@@ -154,13 +184,14 @@ export function designReportPdf(design: Design, options: ReportOptions): Promise
     if (criteria.maxResonantMotionMm !== undefined)
       body(`Largest motion passing a mode on start-up ${fmt(criteria.maxResonantMotionMm, 1)} mm`);
     body(
-      `Load utilisation between ${fmt(criteria.minUtilization * 100, 0)} % and ${fmt(criteria.maxUtilization * 100, 0)} % of the rated load`,
+      `Load utilisation between ${fmt(criteria.minUtilization * 100, 0)} % and ${fmt(criteria.maxUtilization * 100, 0)} % of the rated load` +
+        `${criteria.weightMarginPct ? `, the upper limit with the ${formatDecimal(criteria.weightMarginPct, 1)} % weight margin on the load` : ''}`,
     );
     const margin = criteria.weightMarginPct;
     body(
       `Weight margin ${fmt(margin ?? DEFAULT_WEIGHT_MARGIN_PCT, 0)} %${margin === undefined ? ' (the default for weights not yet final)' : ''}`,
     );
-    if (criteria.ambientTempC !== undefined) body(`Ambient temperature ${fmt(criteria.ambientTempC, 0)} °C`);
+    if (criteria.ambientTempC !== undefined) body(`Ambient temperature ${q('temperature', criteria.ambientTempC)}`);
     if (criteria.mountTypes?.length) body(`Mount types: ${criteria.mountTypes.map((t) => t.replace(/_/g, ' ')).join(', ')}`);
   }
 
@@ -175,12 +206,13 @@ export function designReportPdf(design: Design, options: ReportOptions): Promise
     body(`${candidate.label} (${candidate.supplier.name})`);
     body(`Vertical natural frequency (uncoupled bounce estimate): ${fmt(candidate.verticalNaturalFrequencyHz, 2)} Hz`);
     body(
-      `Transmissibility at resonance: ${fmt(candidate.resonanceAmplification, 1)}; level difference between points: ${fmt(candidate.levelErrorMm, 2)} mm`,
+      `Transmissibility at resonance: ${fmt(candidate.resonanceAmplification, 1)}; level difference between points: ${q('deflection', candidate.levelErrorMm / 1000)}`,
     );
     heading('Mount points');
     for (const point of candidate.perPoint) {
       body(
-        `${point.label}: ${point.partNumber}, load ${fmt(point.loadN, 0)} N, utilisation ${fmt(point.utilization * 100, 0)} %, static deflection ${fmt(point.staticDeflectionMm, 2)} mm`,
+        `${point.label}: ${point.partNumber}, load ${q('force', point.loadN)}, utilisation ${utilizationText(point.utilization, candidate.weightMarginPct ?? 0)}, ` +
+          `static deflection ${q('deflection', point.staticDeflectionMm / 1000)}`,
       );
     }
     heading('Isolation at each disturbing frequency (bounce estimate)');
@@ -195,27 +227,27 @@ export function designReportPdf(design: Design, options: ReportOptions): Promise
     }
     const whole = wholeMachineReportLines(design.input.operating, snapshot?.wholeMachine, candidate, criteria?.minIsolationPct);
     heading(whole.heading);
-    for (const paragraph of whole.paragraphs) body(paragraph);
+    for (const paragraph of whole.paragraphs) body(inReaderUnits(paragraph, units));
     if (snapshot?.wholeMachine) speedChart(doc, snapshot.wholeMachine);
-    for (const line of passageReportLines(snapshot?.wholeMachine, candidate)) body(line);
+    for (const line of passageReportLines(snapshot?.wholeMachine, candidate)) body(inReaderUnits(line, units));
     const mounts = snapshot?.mounts ?? [];
     if (mounts.length) {
       heading('Chosen mounts — catalog data as frozen');
-      for (const mount of mounts) body(mountLine(mount));
+      for (const mount of mounts) body(mountLine(mount, units));
     }
     const damping = mounts.length ? dampingOf(mounts[0]) : undefined;
     heading('Transmissibility (bounce estimate)');
     transmissibilityChart(doc, candidate.verticalNaturalFrequencyHz, damping, options.disturbingFrequencies, criteria?.minIsolationPct);
     const verdict = verdictReportLines(candidate);
     heading(verdict.heading);
-    for (const paragraph of verdict.paragraphs) body(paragraph);
+    for (const paragraph of verdict.paragraphs) body(inReaderUnits(paragraph, units));
   }
   if (design.input.restraint) {
-    const section = restraintReportLines(design.input.restraint, candidate?.restraint);
+    const section = restraintReportLines(design.input.restraint, candidate?.restraint, units);
     heading(section.heading);
     for (const paragraph of section.paragraphs) body(paragraph);
   }
-  if (options.verifications?.length) asBuiltSection(doc, options.verifications, heading, body);
+  if (options.verifications?.length) asBuiltSection(doc, options.verifications, heading, body, units);
 
   doc.addPage();
   doc.font('heading').fontSize(16).fillColor('black').text('Bill of materials');
@@ -271,6 +303,7 @@ function asBuiltSection(
   verifications: Verification[],
   heading: (text: string) => unknown,
   body: (text: string) => unknown,
+  units: UnitSystem,
 ): void {
   heading('As-built verification (tap tests)');
   body(
@@ -296,8 +329,8 @@ function asBuiltSection(
     );
     body(
       `Damping ratio ${o.identified.dampingRatio === null ? 'not identified' : o.identified.dampingRatio.toFixed(3)}; ` +
-        `apparent stiffness ${fmt(o.identified.stiffnessNPerM / 1000, 1)} N/mm against ${fmt(o.predicted.stiffnessNPerM / 1000, 1)} N/mm predicted ` +
-        `(design mass ${fmt(o.predicted.massKg, 0)} kg, ${sign}${fmt(o.stiffnessDeviationPct, 1)} %).`,
+        `apparent stiffness ${formatMeasure('stiffness', o.identified.stiffnessNPerM, units)} against ${formatMeasure('stiffness', o.predicted.stiffnessNPerM, units)} predicted ` +
+        `(design mass ${formatMeasure('mass', o.predicted.massKg, units, 0)}, ${sign}${fmt(o.stiffnessDeviationPct, 1)} %).`,
     );
     for (const note of o.notes) body(`• ${note}`);
     for (const warning of o.warnings) body(`• Caution: ${warning}`);
@@ -313,15 +346,16 @@ function dampingOf(mount: MountSnapshot): Damping | undefined {
   return undefined;
 }
 
-function mountLine(m: MountSnapshot): string {
+function mountLine(m: MountSnapshot, units: UnitSystem): string {
+  const q = (quantity: Parameters<typeof formatMeasure>[0], si: number) => formatMeasure(quantity, si, units);
   const damping = m.dampingModel === 'hysteretic' ? `loss factor ${m.lossFactor}` : `damping ratio ${m.dampingRatio}`;
   return (
     `${m.supplier.name} ${m.partNumber} (${m.mountType.replace(/_/g, ' ')}${m.series ? `, series ${m.series}` : ''}): ` +
-    `rated load ${fmt(m.ratedLoadN, 0)} N, vertical stiffness ${fmt(m.verticalStiffnessNPerM / 1000, 1)} N/mm` +
-    `${m.horizontalStiffnessNPerM === null ? '' : `, horizontal ${fmt(m.horizontalStiffnessNPerM / 1000, 1)} N/mm`}` +
+    `rated load ${q('force', m.ratedLoadN)}, vertical stiffness ${q('stiffness', m.verticalStiffnessNPerM)}` +
+    `${m.horizontalStiffnessNPerM === null ? '' : `, horizontal ${q('stiffness', m.horizontalStiffnessNPerM)}`}` +
     `, dynamic-to-static ratio ${m.dynamicStiffnessRatio ?? 'not given'}, ${damping}` +
-    `${m.maxDeflectionMm === null ? '' : `, max deflection ${fmt(m.maxDeflectionMm, 1)} mm`}` +
-    `${m.tempMinC === null || m.tempMaxC === null ? '' : `, ${fmt(m.tempMinC, 0)}…${fmt(m.tempMaxC, 0)} °C`}`
+    `${m.maxDeflectionMm === null ? '' : `, max deflection ${q('deflection', m.maxDeflectionMm / 1000)}`}` +
+    `${m.tempMinC === null || m.tempMaxC === null ? '' : `, ${q('temperature', m.tempMinC)} to ${q('temperature', m.tempMaxC)}`}`
   );
 }
 

@@ -1,6 +1,6 @@
 import { ConflictException, ForbiddenException, Injectable } from '@nestjs/common';
 import { InjectRepository } from '@nestjs/typeorm';
-import { isVibrationInputError } from '@tacet/vibration';
+import { isVibrationInputError, type UnitSystem } from '@tacet/vibration';
 import { In, type Repository } from 'typeorm';
 import { PURCHASER_VISIBLE_STATUSES } from '../designs/design-status.js';
 import { Design } from '../designs/design.entity.js';
@@ -68,15 +68,15 @@ export class PurchasingService {
     return {
       fileName: exportFileName(headingOf(design), 'report.pdf'),
       contentType: 'application/pdf',
-      content: await this.reportOf(design),
+      content: await this.reportOf(design, true, undefined, user.unitSystem),
     };
   }
 
   /**
    * The PDF of a design already loaded with its project and people. `forSupplier`: the copy sent
-   * with a request for quotation, without our prices.
+   * with a request for quotation, without our prices. `units`: the reader's unit system (the sender's for a supplier's copy).
    */
-  async reportOf(design: Design, compress = true, forSupplier?: { machineCount: number }): Promise<Buffer> {
+  async reportOf(design: Design, compress = true, forSupplier?: { machineCount: number }, units: UnitSystem = 'SI'): Promise<Buffer> {
     const release = isReleased(design) ? await this.review.releaseOf(design.id) : null;
     const verifications = await this.verifications.listOf(design.id);
     return designReportPdf(design, {
@@ -87,6 +87,7 @@ export class PurchasingService {
       compress,
       prices: !forSupplier,
       machineCount: forSupplier?.machineCount,
+      units,
     });
   }
 

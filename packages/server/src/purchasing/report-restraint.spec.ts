@@ -35,7 +35,7 @@ describe('restraint section of the report', () => {
     const text = paragraphs.join('\n');
     expect(heading).toBe('Seismic restraint (ASCE 7-16)');
     expect(text).toContain('Checked to ASCE 7-16 §13.3.1');
-    expect(text).toContain('S_DS = 0.600 g, I_p = 1.5, z/h = 0.50, a_p = 2.50, R_p = 2.00, gap to the restraints 5.0 mm');
+    expect(text).toContain('S_DS = 0.600 g, I_p = 1.5, z/h = 0.50, a_p = 2.50, R_p = 2.00, gap to the restraints 5 mm');
     // F_p = 0.4·2.5·0.6·9806.65·2/(2/1.5) = 8826 N (hand calculation, ASCE 7-16 Eq. 13.3-1)
     expect(text).toContain('the formula governs: F_p = 8,826 N');
     expect(text).toContain('at most 0.25 in (6.35 mm): the design force is F_p = 8,826 N');

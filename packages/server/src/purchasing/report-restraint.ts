@@ -1,4 +1,4 @@
-import { SEISMIC_CODE_EDITION, SEISMIC_RESTRAINT_CAUTION } from '@tacet/vibration';
+import { formatMeasure, SEISMIC_CODE_EDITION, SEISMIC_RESTRAINT_CAUTION, toDisplay, unitLabel, type UnitSystem } from '@tacet/vibration';
 import type { RestraintInput } from '../selection/dto/restraint.dto.js';
 import type { CandidateRestraint } from '../selection/selection.types.js';
 
@@ -13,7 +13,6 @@ export interface RestraintReportLines {
   paragraphs: string[];
 }
 
-const n = (value: number) => `${Math.round(value).toLocaleString('en-US')} N`;
 const pct = (value: number) => `${Math.round(value * 100)} %`;
 const deg = (value: number) => `${Math.round(value)}°`;
 const num = (value: number, digits: number) => value.toFixed(digits);
@@ -35,7 +34,13 @@ export const RESTRAINT_ASSUMPTIONS: readonly string[] = [
 ];
 
 /** The lines of the section; `restraint` is the design's input, `figures` the chosen candidate's (when computed). */
-export function restraintReportLines(restraint: RestraintInput, figures: CandidateRestraint | undefined): RestraintReportLines {
+export function restraintReportLines(
+  restraint: RestraintInput,
+  figures: CandidateRestraint | undefined,
+  units: UnitSystem = 'SI',
+): RestraintReportLines {
+  /** A force in the reader's units, whole, grouped: "8,826 N" / "1,984 lbf". */
+  const n = (value: number) => `${Math.round(toDisplay('force', value, units)).toLocaleString('en-US')} ${unitLabel('force', units)}`;
   const paragraphs: string[] = [];
   paragraphs.push(
     `Checked to ${SEISMIC_CODE_EDITION} §13.3.1 (nonstructural components), with the coefficients of Table 13.6-1 for vibration-isolated components unless stated.`,
@@ -43,7 +48,7 @@ export function restraintReportLines(restraint: RestraintInput, figures: Candida
   paragraphs.push(
     `Input: S_DS = ${num(restraint.sdsG, 3)} g, I_p = ${num(restraint.importanceFactor, 1)}, z/h = ${num(restraint.zOverH, 2)}, ` +
       `a_p = ${num(restraint.ap ?? figures?.ap ?? 2.5, 2)}, R_p = ${num(restraint.rp ?? figures?.rp ?? 2, 2)}, ` +
-      `gap to the restraints ${restraint.snubberGapMm === undefined || restraint.snubberGapMm === null ? 'not specified' : `${num(restraint.snubberGapMm, 1)} mm`}.`,
+      `gap to the restraints ${restraint.snubberGapMm === undefined || restraint.snubberGapMm === null ? 'not specified' : formatMeasure('deflection', restraint.snubberGapMm / 1000, units, units === 'SI' ? 1 : 3)}.`,
   );
   if (!figures) {
     paragraphs.push(
@@ -62,7 +67,7 @@ export function restraintReportLines(restraint: RestraintInput, figures: Candida
       : `The gap to the restraints is at most 0.25 in (6.35 mm): the design force is F_p = ${n(figures.designForceN)}.`,
   );
   paragraphs.push(
-    `Vertical effect E_v = 0.2·S_DS·D = ${n(figures.verticalForceN)}; height of the centre of gravity above the mount plane ${num(figures.cgHeightM, 3)} m.`,
+    `Vertical effect E_v = 0.2·S_DS·D = ${n(figures.verticalForceN)}; height of the centre of gravity above the mount plane ${formatMeasure('position', figures.cgHeightM, units)}.`,
   );
   paragraphs.push('Assumptions:');
   for (const assumption of RESTRAINT_ASSUMPTIONS) paragraphs.push(`• ${assumption}`);

@@ -219,7 +219,7 @@ export class RfqsService {
       },
       {
         filename: exportFileName(heading, 'report.pdf'),
-        content: await this.purchasing.reportOf(design, true, { machineCount }),
+        content: await this.purchasing.reportOf(design, true, { machineCount }, user.unitSystem),
         contentType: 'application/pdf',
       },
     ];

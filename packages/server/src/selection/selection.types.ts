@@ -8,8 +8,13 @@ export interface CandidatePoint {
   partNumber: string;
   /** Static load, N. */
   loadN: number;
-  /** Load / rated load. */
+  /** Load / rated load, without the weight margin: what the lower utilisation check compares with minUtilization. */
   utilization: number;
+  /**
+   * Load × (1 + weightMarginPct/100) / rated load: what the upper utilisation check compares with
+   * maxUtilization (equal to `utilization` without a margin). Absent on candidates stored before it was given.
+   */
+  utilizationWithMargin?: number;
   /** The mount's own static deflection, mm. */
   staticDeflectionMm: number;
   /** The deflection of the flexible support under the point, mm (only where `supportStiffnessNPerMm` is given). */

@@ -288,6 +288,7 @@ export async function createFuzzTargets(t: TestApp): Promise<FuzzTargets> {
       },
     },
     'POST /api/mounts/import': { url: '/api/mounts/import', as: 'admin', query: { dryRun: 'true', onInvalid: 'skip' } },
+    'GET /api/mounts/export.csv': { url: '/api/mounts/export.csv', as: 'admin', query: { units: 'both' } },
   };
 
   return { tokens: { admin, 'own-user': ownUser, anonymous: undefined }, bodies, queries };

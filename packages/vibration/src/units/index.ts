@@ -1,3 +1,4 @@
 export * from './constants.js';
 export * from './convert.js';
 export * from './display.js';
+export * from './words.js';

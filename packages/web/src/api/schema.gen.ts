@@ -807,7 +807,7 @@ export interface components {
       partNumber: string;
       /** @description N */
       loadN: number;
-      /** @description load / rated load */
+      /** @description load / rated load, without the weight margin (the basis of the lower utilisation check) */
       utilization: number;
       /** @description the mount's own static deflection, mm */
       staticDeflectionMm: number;
@@ -3222,14 +3222,17 @@ export interface operations {
   };
   MountsController_export: {
     parameters: {
-      query?: never;
+      query?: {
+        /** @description SI: the metric columns (N, N/mm, mm, °C); US: the US customary ones (lbf, lbf/in, in, °F) where a quantity has them; both: each quantity in both. Default: the signed-in user's unit system */
+        units?: components["schemas"]["CatalogExportUnits"];
+      };
       header?: never;
       path?: never;
       cookie?: never;
     };
     requestBody?: never;
     responses: {
-      /** @description The active catalog in the import format (catalog/FORMAT.md), SI columns */
+      /** @description The active catalog in the import format (catalog/FORMAT.md), in the columns of `units` (default: the reader's unit system) */
       200: {
         headers: {
           [name: string]: unknown;
@@ -3237,6 +3240,13 @@ export interface operations {
         content: {
           "text/csv": string;
         };
+      };
+      /** @description `units` is not SI, US or both */
+      400: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content?: never;
       };
     };
   };
@@ -4162,6 +4172,7 @@ type ReadonlyArray<T> = [
 export const pathsApiDesignsIdVerificationsPostRequestBodyContentMultipartFormDataKindValues: ReadonlyArray<FlattenedDeepRequired<paths>["/api/designs/{id}/verifications"]["post"]["requestBody"]["content"]["multipart/form-data"]["kind"]> = ["frf", "impact"];
 export const pathsApiDesignsIdVerificationsPostRequestBodyContentMultipartFormDataQuantityValues: ReadonlyArray<FlattenedDeepRequired<paths>["/api/designs/{id}/verifications"]["post"]["requestBody"]["content"]["multipart/form-data"]["quantity"]> = ["accelerance", "mobility", "receptance"];
 export const candidateKindValues: ReadonlyArray<FlattenedDeepRequired<components>["schemas"]["CandidateKind"]> = ["uniform", "series"];
+export const catalogExportUnitsValues: ReadonlyArray<FlattenedDeepRequired<components>["schemas"]["CatalogExportUnits"]> = ["SI", "US", "both"];
 export const dampingModelValues: ReadonlyArray<FlattenedDeepRequired<components>["schemas"]["DampingModel"]> = ["viscous", "hysteretic"];
 export const designStatusValues: ReadonlyArray<FlattenedDeepRequired<components>["schemas"]["DesignStatus"]> = ["draft", "in_review", "released", "superseded"];
 export const frfQuantityValues: ReadonlyArray<FlattenedDeepRequired<components>["schemas"]["FrfQuantity"]> = ["accelerance", "mobility", "receptance"];

@@ -37,6 +37,14 @@ describe('useUnits', () => {
     expect(result.current.toDisplay('deflection', 0.0508)).toBeCloseTo(2, 12);
   });
 
+  it('measure: a figure beside the server’s words reads as they do ("6.6 mm" / "0.26 in")', () => {
+    const si = renderHook(() => useUnits(), { wrapper: wrapperFor({ ...TEST_USERS.engineer, unitSystem: 'SI' }) }).result.current;
+    const us = renderHook(() => useUnits(), { wrapper: wrapperFor({ ...TEST_USERS.engineer, unitSystem: 'US' }) }).result.current;
+    expect(si.measure('deflection', 0.0066)).toBe('6.6 mm');
+    expect(us.measure('deflection', 0.0066)).toBe('0.26 in'); // 6.6 / 25.4 = 0.2598
+    expect(us.measure('deflection', Number.NaN)).toBe('—');
+  });
+
   it('falls back to SI when nobody is signed in', () => {
     const { result } = renderHook(() => useUnits(), { wrapper: wrapperFor(null) });
     expect(result.current.format('mass', 850)).toBe('850 kg');

@@ -1,4 +1,4 @@
-import { fromDisplay, toDisplay, unitLabel, type Quantity, type UnitSystem } from '@tacet/vibration';
+import { formatMeasure, fromDisplay, toDisplay, unitLabel, type Quantity, type UnitSystem } from '@tacet/vibration';
 import { useMemo } from 'react';
 
 import { useAuth } from './auth';
@@ -41,6 +41,8 @@ export interface Units {
   system: UnitSystem;
   /** SI value → text with the unit, e.g. `format('deflection', 0.0254)` → "25.4 mm" or "1.00 in". */
   format: (quantity: Quantity, siValue: number, digits?: number) => string;
+  /** SI value → text with the precision of the server's words ("6.6 mm" / "0.26 in"), for a figure shown beside a reason or note. */
+  measure: (quantity: Quantity, siValue: number) => string;
   /** The unit symbol shown for a quantity, e.g. "mm" or "in". */
   label: (quantity: Quantity) => string;
   /** SI value → number in the user's units (for inputs). */
@@ -53,6 +55,7 @@ export function unitsFor(system: UnitSystem): Units {
   return {
     system,
     format: (quantity, siValue, digits) => formatQuantity(quantity, siValue, system, digits),
+    measure: (quantity, siValue) => (Number.isFinite(siValue) ? formatMeasure(quantity, siValue, system) : NO_VALUE),
     label: (quantity) => unitLabel(quantity, system),
     toDisplay: (quantity, siValue) => toDisplay(quantity, siValue, system),
     toSi: (quantity, displayValue) => fromDisplay(quantity, displayValue, system),

@@ -1,10 +1,24 @@
-import { inToMm, lbfPerInToNPerM, lbfToN, mmToIn, nPerMToLbfPerIn, nToLbf } from '@tacet/vibration';
+import {
+  cToF,
+  exportNumber,
+  fToC,
+  inToMm,
+  lbfPerInToNPerM,
+  lbfToN,
+  mmToIn,
+  nPerMToLbfPerIn,
+  nToLbf,
+  withoutBinaryNoise,
+  type UnitSystem,
+} from '@tacet/vibration';
 import { shiftDecimal } from './decimal-shift.js';
 import { MOUNT_LIMITS, type MountType } from '../mount-rules.js';
 
 /**
  * The columns of the catalog CSV format (catalog/FORMAT.md). A quantity may come in SI or US
- * customary units: each variant names its unit and converts to the stored SI value.
+ * customary units: each variant names its unit and converts to the stored SI value. Numbers are
+ * written with exportNumber (at most 15 significant digits: no binary noise from a conversion), and
+ * a value converted from a US customary cell is stored the same way, so an export reads back exactly.
  */
 
 /** A mount as one CSV row describes it, in the stored units (SI; mm and °C where named). */
@@ -45,9 +59,13 @@ export type CellRule =
 export interface ColumnVariant {
   /** The header name (lower case). */
   name: string;
+  /** The unit system the column is in (a column without a unit counts as SI). */
+  system: UnitSystem;
+  /** A stored value → the column's own unit (US customary columns; for messages). */
+  fromStored?: (stored: number) => number;
   /** A cell (a valid plain number) → the stored value. */
   read: (text: string) => number;
-  /** A stored value → the cell text (the export writes the SI variant). */
+  /** A stored value → the cell text. */
   write: (stored: number) => string;
 }
 
@@ -55,24 +73,27 @@ export interface ColumnVariant {
 export interface ColumnSpec {
   field: MountField;
   rule: CellRule;
-  /** The first variant is the SI one (the export writes it). */
+  /** The first variant is the SI one, the second (if any) the US customary one. */
   variants: readonly ColumnVariant[];
   required: boolean;
 }
 
 /** The stored unit itself. */
-const stored = (name: string): ColumnVariant => ({ name, read: Number, write: String });
+const stored = (name: string): ColumnVariant => ({ name, system: 'SI', read: Number, write: exportNumber });
 /** A power-of-ten multiple of the stored unit, shifted exactly on the decimal digits. */
 const decimal = (name: string, places: number): ColumnVariant => ({
   name,
+  system: 'SI',
   read: (text) => Number(shiftDecimal(text, places)),
-  write: (value) => shiftDecimal(String(value), -places),
+  write: (value) => shiftDecimal(exportNumber(value), -places),
 });
 /** A US customary unit, converted with the exact factors of @tacet/vibration. */
 const customary = (name: string, toStored: (v: number) => number, fromStored: (v: number) => number): ColumnVariant => ({
   name,
-  read: (text) => toStored(Number(text)),
-  write: (value) => String(fromStored(value)),
+  system: 'US',
+  fromStored,
+  read: (text) => withoutBinaryNoise(toStored(Number(text))),
+  write: (value) => exportNumber(fromStored(value)),
 });
 const single = (name: string): ColumnVariant[] => [stored(name)];
 const positive: CellRule = { kind: 'number', min: 0, minExclusive: true };
@@ -143,16 +164,16 @@ export const COLUMNS: readonly ColumnSpec[] = [
   {
     field: 'tempMinC',
     rule: { kind: 'number', min: MOUNT_LIMITS.temperatureC.min, max: MOUNT_LIMITS.temperatureC.max },
-    variants: single('temp_min_c'),
+    variants: [stored('temp_min_c'), customary('temp_min_f', fToC, cToF)],
     required: false,
   },
   {
     field: 'tempMaxC',
     rule: { kind: 'number', min: MOUNT_LIMITS.temperatureC.min, max: MOUNT_LIMITS.temperatureC.max },
-    variants: single('temp_max_c'),
+    variants: [stored('temp_max_c'), customary('temp_max_f', fToC, cToF)],
     required: false,
   },
-  { field: 'heightMm', rule: positive, variants: single('height_mm'), required: false },
+  { field: 'heightMm', rule: positive, variants: [stored('height_mm'), customary('height_in', inToMm, mmToIn)], required: false },
   {
     field: 'restraintCapacityN',
     rule: positive,
@@ -178,8 +199,21 @@ export const COLUMNS: readonly ColumnSpec[] = [
 /** Every known header name, in the order of the format. */
 export const KNOWN_COLUMN_NAMES: readonly string[] = COLUMNS.flatMap((column) => column.variants.map((v) => v.name));
 
-/** The header the export writes: the SI variant of every column. */
+/** The header of an SI export: the SI variant of every column. */
 export const EXPORT_HEADER: readonly string[] = COLUMNS.map((column) => column.variants[0].name);
+
+/** Which columns an export writes: the SI ones, the US customary ones (where a quantity has them), or both. */
+export type ExportUnits = UnitSystem | 'both';
+export const EXPORT_UNITS: readonly ExportUnits[] = ['SI', 'US', 'both'];
+
+/** The columns of an export in `units`, in the order of the format (both: the SI column, then the US one). */
+export function exportColumns(units: ExportUnits): { spec: ColumnSpec; variant: ColumnVariant }[] {
+  return COLUMNS.flatMap((spec) => {
+    const us = spec.variants.find((v) => v.system === 'US');
+    const chosen = units === 'SI' || !us ? [spec.variants[0]] : units === 'US' ? [us] : [spec.variants[0], us];
+    return chosen.map((variant) => ({ spec, variant }));
+  });
+}
 
 /** The column spec of a field. */
 export const columnOf = (field: MountField): ColumnSpec => {

@@ -50,9 +50,12 @@ describe('mapHeader', () => {
     expect(mapHeader(names).problems).toEqual([]);
   });
 
-  it('refuses both units of one quantity, on the header', () => {
-    const { problems } = mapHeader([...REQUIRED_SI, 'rated_load_lbf']);
-    expect(problems).toEqual([{ column: 'rated_load_lbf', message: 'give rated_load_n or rated_load_lbf, not both' }]);
+  it('accepts both units of one quantity (the rows must then agree), naming the first', () => {
+    const { header, problems } = mapHeader([...REQUIRED_SI, 'rated_load_lbf', 'temp_min_f', 'temp_min_c', 'height_in']);
+    expect(problems).toEqual([]);
+    expect(header?.nameOf.ratedLoadN).toBe('rated_load_n');
+    expect(header?.nameOf.tempMinC).toBe('temp_min_f');
+    expect(header?.nameOf.heightMm).toBe('height_in');
   });
 
   it('reports unknown and repeated columns by name and position', () => {

@@ -35,8 +35,9 @@ const orList = (names: readonly string[]): string => names.join(' or ');
 
 /**
  * Maps the header row (row 1) to the format's columns. Names are matched case-insensitively,
- * in any order. Reports unknown and repeated names, both units of one quantity, and missing
- * required columns; `header` is null when there is any problem.
+ * in any order. Reports unknown and repeated names and missing required columns; `header` is null
+ * when there is any problem. Both units of one quantity may be given (the rows must agree:
+ * row-validator.ts); `nameOf` names the first.
  */
 export function mapHeader(fields: readonly string[]): { header: HeaderMap | null; problems: CellProblem[] } {
   if (fields.length > MAX_HEADER_COLUMNS) {
@@ -74,11 +75,8 @@ export function mapHeader(fields: readonly string[]): { header: HeaderMap | null
       problems.push({ column: name, message: `appears twice in the header (columns ${earlier + 1} and ${index + 1})` });
     } else if (!mapped) {
       problems.push({ column: name, message: `unknown column; the known columns are ${KNOWN_COLUMN_NAMES.join(', ')}` });
-    } else if (nameOf[mapped.spec.field] !== undefined) {
-      const pair = mapped.spec.variants.map((v) => v.name);
-      problems.push({ column: name, message: `give ${orList(pair)}, not both` });
     } else {
-      nameOf[mapped.spec.field] = key;
+      nameOf[mapped.spec.field] ??= key;
     }
     positionOf.set(key, positionOf.get(key) ?? index);
     columns.push(mapped ?? null);

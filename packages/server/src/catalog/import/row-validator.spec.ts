@@ -103,12 +103,61 @@ describe('validateRow', () => {
     const { values, problems } = validateRow(['S', 'P', 'wire_rope', '1', '1', '2', '0.2', '1', '1000', '0.5'], us);
     expect(problems).toEqual([]);
     expect(values?.ratedLoadN).toBe(4.4482216152605);
-    expect(values?.verticalStiffnessNPerM).toBe(4.4482216152605 / 0.0254);
+    // stored to 15 significant digits, without the binary noise of the division (4.4482216152605 / 0.0254 = 175.12683524647637…)
+    expect(values?.verticalStiffnessNPerM).toBe(175.126835246476);
     expect(values?.verticalStiffnessNPerM).toBeCloseTo(175.126835246476, 9);
     expect(values?.horizontalStiffnessNPerM).toBeCloseTo(350.253670492952, 9);
     expect(values?.maxDeflectionMm).toBe(25.4);
     expect(values?.restraintCapacityN).toBe(1000 * 4.4482216152605);
     expect(values?.upliftCapacityN).toBe(0.5 * 4.4482216152605);
+  });
+
+  it('reads temperatures in °F and heights in inches (°C = (°F − 32)/1.8; 1 in = 25.4 mm, NIST SP 811)', () => {
+    const us = headerOf([
+      'supplier',
+      'part_number',
+      'mount_type',
+      'rated_load_lbf',
+      'vertical_stiffness_lbf_per_in',
+      'loss_factor',
+      'temp_min_f',
+      'temp_max_f',
+      'height_in',
+    ]);
+    const { values, problems } = validateRow(['S', 'P', 'wire_rope', '1', '1', '0.2', '-40', '212', '4.33'], us);
+    expect(problems).toEqual([]);
+    expect(values?.tempMinC).toBe(-40);
+    expect(values?.tempMaxC).toBe(100);
+    expect(values?.heightMm).toBe(109.982); // 4.33 × 25.4, without binary noise
+    // the limits −80…250 °C are named in °F for a °F column
+    expect(validateRow(['S', 'P', 'wire_rope', '1', '1', '0.2', '-120', '212', ''], us).problems).toEqual([
+      { column: 'temp_min_f', message: 'must be a number from -112 to 482 (got "-120")' },
+    ]);
+  });
+
+  it('accepts both units of a quantity when they agree to the digits written, keeping the SI figure', () => {
+    const both = headerOf([...SI_HEADER, 'rated_load_lbf', 'temp_max_f', 'height_in']);
+    // 1200 N = 269.77 lbf; 120 °C = 248 °F; 110 mm = 4.331 in
+    const agree = validateRow([...row(), '269.8', '248', '4.33'], both);
+    expect(agree.problems).toEqual([]);
+    expect(agree.values).toMatchObject({ ratedLoadN: 1200, tempMaxC: 120, heightMm: 110 });
+    // one of the pair left empty: the other is read
+    expect(validateRow([...row({ rated_load_n: '' }), '269.8', '', ''], both).values?.ratedLoadN).toBeCloseTo(269.8 * 4.4482216152605, 9);
+  });
+
+  it('reports both units of a quantity that disagree, in words, and a required pair left empty', () => {
+    const both = headerOf([...SI_HEADER, 'rated_load_lbf', 'temp_max_f']);
+    expect(validateRow([...row(), '300', '248'], both).problems).toEqual([
+      {
+        column: 'rated_load_lbf',
+        message:
+          'disagrees with rated_load_n: 300 is 1334.47 in the unit of rated_load_n, which says 1200; give one of them, or make them agree',
+      },
+    ]);
+    expect(validateRow([...row(), '269.8', '250'], both).problems[0]?.column).toBe('temp_max_f');
+    expect(validateRow([...row({ rated_load_n: '' }), '', ''], both).problems).toEqual([
+      { column: 'rated_load_n', message: 'is required' },
+    ]);
   });
 
   it('applies the defaults: currency USD, optional fields (the dynamic stiffness ratio among them) null', () => {

@@ -1,5 +1,6 @@
 import { CURRENCY_PATTERN, MOUNT_LIMITS, MOUNT_TYPES, crossFieldProblems, type MountType } from '../mount-rules.js';
-import { columnOf, type CellRule, type MountField, type MountValues } from './catalog-columns.js';
+import { exportNumber } from '@tacet/vibration';
+import { columnOf, type CellRule, type ColumnVariant, type MountField, type MountValues } from './catalog-columns.js';
 import type { CellProblem, HeaderMap } from './header-mapper.js';
 
 /** A plain decimal with `.` (an exponent is allowed, as number formatters write one). */
@@ -40,8 +41,17 @@ function inRange(value: number, rule: Extract<CellRule, { kind: 'number' }>): bo
 
 type CellValue = string | number | null;
 
+/** The rule's limits in a US customary column's own unit (for its message): −80…250 °C reads −112…482 for °F. */
+function inColumnUnit(rule: Extract<CellRule, { kind: 'number' }>, variant: ColumnVariant): Extract<CellRule, { kind: 'number' }> {
+  const own = variant.fromStored;
+  if (!own) return rule;
+  const limit = (v: number | undefined) => (v === undefined ? undefined : Number(exportNumber(own(v))));
+  return { ...rule, min: limit(rule.min), max: limit(rule.max) };
+}
+
 /** Reads one non-empty cell by its rule: the stored value, or a problem message. */
-function readCell(raw: string, rule: CellRule, read: (text: string) => number): { value?: CellValue; problem?: string } {
+function readCell(raw: string, rule: CellRule, variant: ColumnVariant): { value?: CellValue; problem?: string } {
+  const read = variant.read;
   const text = raw.trim();
   switch (rule.kind) {
     case 'text': {
@@ -65,10 +75,44 @@ function readCell(raw: string, rule: CellRule, read: (text: string) => number): 
       }
       const value = read(text);
       if (!Number.isFinite(value)) return { problem: `is too large (got "${shown(raw)}")` };
-      if (!inRange(value, rule)) return { problem: `${describeRange(rule)} (got "${shown(raw)}")` };
+      if (!inRange(value, rule)) return { problem: `${describeRange(inColumnUnit(rule, variant))} (got "${shown(raw)}")` };
       return { value };
     }
   }
+}
+
+/** One cell read: its column, text, unit and stored value. */
+interface Reading {
+  column: string;
+  text: string;
+  variant: ColumnVariant;
+  value: CellValue;
+}
+
+/** Half a unit of the last digit written, in the cell's own unit: "539.5" → 0.05. */
+function halfLastDigit(text: string): number {
+  const match = /^[+-]?(\d*)(?:\.(\d*))?(?:[eE]([+-]?\d+))?$/.exec(text);
+  const decimals = (match?.[2]?.length ?? 0) - Number(match?.[3] ?? 0);
+  return 0.5 * 10 ** -decimals;
+}
+
+/**
+ * One quantity given in both units: they agree when they differ by no more than the rounding of
+ * what is written (half a unit of the last digit of each cell, in stored units). The SI cell is
+ * kept; disagreeing cells are a problem in words.
+ */
+function agreeing(cells: readonly Reading[]): Reading | string {
+  if (cells.length === 1 || typeof cells[0].value !== 'number' || typeof cells[1].value !== 'number') return cells[0];
+  const [si, us] = cells[0].variant.system === 'SI' ? cells : [cells[1], cells[0]];
+  const a = si.value as number;
+  const b = us.value as number;
+  const slack = (cell: Reading, value: number) => {
+    const x = Number(cell.text);
+    return Math.abs(cell.variant.read(String(x + halfLastDigit(cell.text))) - value);
+  };
+  if (Math.abs(a - b) <= slack(si, a) + slack(us, b) + Math.abs(a) * 1e-12) return si;
+  const inSiUnit = Number(Number(si.variant.write(b)).toPrecision(6));
+  return `disagrees with ${si.column}: ${us.text} is ${inSiUnit} in the unit of ${si.column}, which says ${si.text}; give one of them, or make them agree`;
 }
 
 /** The result of one row: its values when it has no problem. */
@@ -94,6 +138,11 @@ export function validateRow(fields: readonly string[], header: HeaderMap): RowRe
 
   const problems: CellProblem[] = [];
   const read: Partial<Record<MountField, CellValue>> = {};
+  /** The cells read per field: one, or two when the file gives both units of a quantity. */
+  const readings = new Map<MountField, Reading[]>();
+  /** Fields with a value in some column (a required one given in the other unit is not missing). */
+  const filled = new Set(header.columns.flatMap((mapped, index) => (mapped && !isBlank(fields[index]) ? [mapped.spec.field] : [])));
+  const missing = new Set<MountField>();
   header.columns.forEach((mapped, index) => {
     const raw = fields[index];
     if (!mapped) {
@@ -101,15 +150,24 @@ export function validateRow(fields: readonly string[], header: HeaderMap): RowRe
       return;
     }
     const column = header.names[index].toLowerCase();
+    const field = mapped.spec.field;
+    read[field] ??= null;
     if (isBlank(raw)) {
-      if (mapped.spec.required) problems.push({ column, message: 'is required' });
-      read[mapped.spec.field] = null;
+      if (mapped.spec.required && !filled.has(field) && !missing.has(field)) {
+        missing.add(field);
+        problems.push({ column, message: 'is required' });
+      }
       return;
     }
-    const { value, problem } = readCell(raw, mapped.spec.rule, mapped.variant.read);
+    const { value, problem } = readCell(raw, mapped.spec.rule, mapped.variant);
     if (problem !== undefined) problems.push({ column, message: problem });
-    else read[mapped.spec.field] = value ?? null;
+    else readings.set(field, [...(readings.get(field) ?? []), { column, text: raw.trim(), variant: mapped.variant, value: value ?? null }]);
   });
+  for (const [field, cells] of readings) {
+    const agreed = agreeing(cells);
+    if (typeof agreed === 'string') problems.push({ column: cells[cells.length - 1].column, message: agreed });
+    else read[field] = agreed.value;
+  }
 
   const numberOf = (field: MountField): number | null => (typeof read[field] === 'number' ? (read[field] as number) : null);
   const columnName = (field: MountField): string => header.nameOf[field] ?? columnOf(field).variants[0].name;

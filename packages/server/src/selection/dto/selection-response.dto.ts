@@ -15,7 +15,14 @@ export class CandidatePointDto {
   @ApiProperty() mountId: number;
   @ApiProperty() partNumber: string;
   @ApiProperty({ description: 'N' }) loadN: number;
-  @ApiProperty({ description: 'load / rated load' }) utilization: number;
+  @ApiProperty({ description: 'load / rated load, without the weight margin (the basis of the lower utilisation check)' })
+  utilization: number;
+  @ApiPropertyOptional({
+    description:
+      'load × (1 + weightMarginPct/100) / rated load: the basis of the upper utilisation check, the figure to show beside the ' +
+      'allowed window (equal to utilization without a margin; absent on candidates stored before it was given)',
+  })
+  utilizationWithMargin?: number;
   @ApiProperty({ description: "the mount's own static deflection, mm" }) staticDeflectionMm: number;
   @ApiPropertyOptional({ description: 'deflection of the flexible support under the point, mm (where supportStiffnessNPerMm is given)' })
   supportDeflectionMm?: number;

@@ -5,6 +5,7 @@
  * lists the assumption in words (`assumptionsFor`). A candidate with assumptions ranks below an
  * otherwise equal one with full data (ranking.ts `candidateOrder`).
  */
+import { measure } from '../../common/units/reader-words.js';
 import type { MountType } from '../../catalog/mount-rules.js';
 import { formatNumber } from '../selection-format.js';
 import type { CandidateStore } from './candidate-store.js';
@@ -78,7 +79,7 @@ export function catalogAssumptionsFor(store: CandidateStore, c: number): string[
     if (a & ASSUMED.travel) {
       const mm = (store.rated[r] / store.kv[r]) * 1000;
       out.push(
-        `${part}: the catalog gives no maximum deflection; the deflection at the rated load (${formatNumber(mm, 1)} mm) is taken ` +
+        `${part}: the catalog gives no maximum deflection; the deflection at the rated load (${measure('deflection', mm / 1000)}) is taken ` +
           'as the travel, the least a mount rated for that load must allow' +
           (SPRING_TYPES.has(store.mountType[r] ?? '')
             ? `, and the reserve travel (${SPRING_RESERVE * 100} % of the static deflection) is checked against it.`

@@ -44,6 +44,7 @@ export function describeCandidate(
       partNumber: m.partNumber,
       loadN: m.loadN,
       utilization: m.loadN / m.ratedLoadN,
+      utilizationWithMargin: (m.loadN / m.ratedLoadN) * problem.marginFactor, // as the check computes it (evaluate-uniform.ts)
       staticDeflectionMm: (m.loadN / m.verticalStiffnessNPerM) * 1000,
       ...(problem.supportCompliance[i] > 0 ? { supportDeflectionMm: m.loadN * problem.supportCompliance[i] * 1000 } : {}),
     };

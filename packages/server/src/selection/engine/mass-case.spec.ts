@@ -1,3 +1,4 @@
+import { wordsInReaderUnits } from '../../common/units/reader-words.js';
 import { prepareProblem, type SelectionInput } from '../selection-problem.js';
 import { toCatalogTuple, type CatalogRow } from './catalog-tuple.js';
 import { SelectionEvaluation } from './selection-evaluation.js';
@@ -45,7 +46,7 @@ function judged(input: Partial<SelectionInput>, row: CatalogRow = elastomer) {
   });
   const evaluation = new SelectionEvaluation(problem, [toCatalogTuple(row, true)]);
   evaluation.checkFinalist(0);
-  return evaluation.describe(0, names);
+  return wordsInReaderUnits(evaluation.describe(0, names), 'SI');
 }
 
 describe('second mass case (selection.md §18)', () => {

@@ -2,13 +2,15 @@
  * The words of the selection: for each failed check (a bit of the fail mask, checks.ts) the
  * sentences that say why, with the figures that decide it, and the notes on what the engine
  * assumed. Runs only for the candidates shown. Numbers in the words are rounded for reading
- * (selection-format.ts); the figures of the answer stay unrounded.
+ * (selection-format.ts); the figures of the answer stay unrounded. A figure with a unit is a
+ * `measure(…)` mark, written in each reader's units when the words go out (common/units/reader-words.ts).
  *
  * To word a new check: a function (context → sentences) and its row in REASONS, placed where its
  * sentence should come in the list.
  */
 import { describeModeMotion, isolationEfficiencyPct } from '@tacet/vibration';
-import { formatHz, formatMm, formatNumber, formatPct, formatPctValue } from '../selection-format.js';
+import { measure } from '../../common/units/reader-words.js';
+import { formatHz, formatNumber, formatPct, formatPctValue } from '../selection-format.js';
 import type { SelectionProblem } from '../selection-problem.js';
 import type { CandidateAltMassCase, CandidatePoint, CandidateRestraint, RestraintPoint } from '../selection.types.js';
 import type { CandidateStore, PointMount } from './candidate-store.js';
@@ -103,7 +105,7 @@ export function notesFor(x: WordingContext): string[] {
   }
   if (!store.isUniform(c) && store.levelErrorM[c] > 0) {
     notes.push(
-      `Sizes picked per point for a level skid; the remaining level error of ${formatMm(store.levelErrorM[c] * 1000)} is trimmed with shims or levelling bolts.`,
+      `Sizes picked per point for a level skid; the remaining level error of ${measure('deflection', store.levelErrorM[c])} is trimmed with shims or levelling bolts.`,
     );
   }
   return notes;
@@ -160,7 +162,7 @@ function supportNotes({ problem, points }: WordingContext): string[] {
 
 function cgOutside({ problem }: WordingContext): string[] {
   return [
-    `The centre of gravity (x ${formatNumber(problem.cg.x, 3)} m, y ${formatNumber(problem.cg.y, 3)} m) lies outside ` +
+    `The centre of gravity (x ${measure('position', problem.cg.x)}, y ${measure('position', problem.cg.y)}) lies outside ` +
       'the polygon of the mount points: the machine would tip. Move the mount points or the equipment.',
   ];
 }
@@ -258,7 +260,7 @@ function utilization({ problem, perPoint }: WordingContext): string[] {
   const { criteria } = problem;
   const reasons: string[] = [];
   for (const p of perPoint.filter((q) => q.loadN < 0)) {
-    reasons.push(`Point ${p.label} would lift off (it would need to pull ${formatNumber(-p.loadN, 0)} N).`);
+    reasons.push(`Point ${p.label} would lift off (it would need to pull ${measure('force', -p.loadN)}).`);
   }
   const over = (p: CandidatePoint) => p.utilization * problem.marginFactor > criteria.maxUtilization;
   const outside = perPoint.filter((p) => p.loadN >= 0 && (over(p) || p.utilization < criteria.minUtilization));
@@ -278,8 +280,8 @@ function deflection({ problem, points, perPoint }: WordingContext): string[] {
     const maxMm = points[i].maxDeflectionM * 1000;
     if (p.staticDeflectionMm * problem.marginFactor > maxMm) {
       reasons.push(
-        `Static deflection at point ${p.label} (${formatMm(p.staticDeflectionMm * problem.marginFactor)}${marginNote(problem)}) exceeds ` +
-          `the ${formatMm(maxMm)} the mount ${p.partNumber} allows.`,
+        `Static deflection at point ${p.label} (${measure('deflection', (p.staticDeflectionMm * problem.marginFactor) / 1000)}${marginNote(problem)}) exceeds ` +
+          `the ${measure('deflection', maxMm / 1000)} the mount ${p.partNumber} allows.`,
       );
     }
   });
@@ -295,8 +297,8 @@ function reserveTravel({ problem, points, perPoint }: WordingContext): string[] 
     // beyond the travel itself the deflection reason says it already
     if (staticMm * (1 + SPRING_RESERVE) > maxMm && staticMm <= maxMm) {
       reasons.push(
-        `Spring ${p.partNumber} at point ${p.label}: ${formatMm(Math.max(0, maxMm - staticMm))} of travel left beyond the static ` +
-          `deflection of ${formatMm(staticMm)}${marginNote(problem)}; at least ${SPRING_RESERVE * 100} % of it (${formatMm(staticMm * SPRING_RESERVE)}) ` +
+        `Spring ${p.partNumber} at point ${p.label}: ${measure('deflection', Math.max(0, maxMm - staticMm) / 1000)} of travel left beyond the static ` +
+          `deflection of ${measure('deflection', staticMm / 1000)}${marginNote(problem)}; at least ${SPRING_RESERVE * 100} % of it (${measure('deflection', (staticMm * SPRING_RESERVE) / 1000)}) ` +
           'is kept in reserve (common practice) so the spring does not go solid.',
       );
     }
@@ -331,7 +333,7 @@ function springStability({ store, c }: WordingContext): string[] {
 /** What fails in the second mass case (selection.md §18). */
 function massCase({ problem, store, points, altMassCase: alt, wholeMachine: w }: WordingContext): string[] {
   if (!alt || !problem.alt) return [];
-  const head = `In the second mass case (${formatNumber(alt.massKg, 0)} kg, CG x ${formatNumber(alt.cg.x, 3)} m, y ${formatNumber(alt.cg.y, 3)} m)`;
+  const head = `In the second mass case (${measure('mass', alt.massKg)}, CG x ${measure('position', alt.cg.x)}, y ${measure('position', alt.cg.y)})`;
   const reasons: string[] = [];
   if (!problem.alt.cgInside)
     reasons.push(`${head} the centre of gravity lies outside the polygon of the mount points: the machine would tip.`);
@@ -352,7 +354,7 @@ function massCase({ problem, store, points, altMassCase: alt, wholeMachine: w }:
   if (bad.length > 0) {
     reasons.push(
       `${head} the loads leave the allowed ${formatPct(minUtilization)}–${formatPct(maxUtilization)} of the rated load, the light case of ` +
-        `the springs or their travel at ${bad.map((p) => `point ${p.label} (${formatPct(p.utilization)}, ${formatMm(p.staticDeflectionMm)})`).join(', ')}.`,
+        `the springs or their travel at ${bad.map((p) => `point ${p.label} (${formatPct(p.utilization)}, ${measure('deflection', p.staticDeflectionMm / 1000)})`).join(', ')}.`,
     );
   }
   const required = `${formatNumber(problem.criteria.minIsolationPct, 1)} %`;
@@ -385,7 +387,7 @@ function temperature({ problem, store, c }: WordingContext): string[] {
     .filter((r) => store.rowFail[r] & FAIL.temperature)
     .map(
       (r) =>
-        `The ambient temperature ${formatNumber(problem.criteria.ambientTempC ?? 0, 1)} °C is outside the range of ${store.partNumberOf(r)} ` +
+        `The ambient temperature ${measure('temperature', problem.criteria.ambientTempC ?? 0)} is outside the range of ${store.partNumberOf(r)} ` +
         `(${rangeText(store.tempMin[r], store.tempMax[r])}).`,
     );
 }
@@ -413,7 +415,7 @@ function modeConflict(conflict: ModeConflict): string {
 function restraint({ restraint: figures }: WordingContext): string[] {
   if (!figures) return [];
   const reasons: string[] = [];
-  const n = (value: number) => `${formatNumber(value, 0)} N`;
+  const n = (value: number) => measure('force', value);
   const grouped = (points: readonly RestraintPoint[]) => {
     const byPart = new Map<string, RestraintPoint[]>();
     for (const p of points) byPart.set(p.partNumber, [...(byPart.get(p.partNumber) ?? []), p]);
@@ -478,7 +480,7 @@ function labelSuffix(label: string | undefined): string {
 }
 
 function rangeText(min: number, max: number): string {
-  const lo = Number.isNaN(min) ? 'no lower limit' : `${formatNumber(min, 1)} °C`;
-  const hi = Number.isNaN(max) ? 'no upper limit' : `${formatNumber(max, 1)} °C`;
+  const lo = Number.isNaN(min) ? 'no lower limit' : measure('temperature', min);
+  const hi = Number.isNaN(max) ? 'no upper limit' : measure('temperature', max);
   return `${lo} to ${hi}`;
 }

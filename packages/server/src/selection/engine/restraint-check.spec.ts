@@ -3,6 +3,10 @@ import { prepareProblem } from '../selection-problem.js';
 import { toCatalogTuple, type CatalogRow, type DetailsLoader } from './catalog-tuple.js';
 import { FAIL } from './checks.js';
 import { SelectionEvaluation } from './selection-evaluation.js';
+import { wordsInReaderUnits } from '../../common/units/reader-words.js';
+
+/** A candidate's words as a metric reader reads them. */
+const metric = <T>(value: T): T => wordsInReaderUnits(value, 'SI');
 
 /**
  * The restraint check in the engine (docs/engineering/seismic-restraint.md §9) over invented rows:
@@ -71,11 +75,11 @@ describe('restraint check in the engine', () => {
     const cheap = Array.from({ length: 30 }, () => row({ unitPrice: 10 }));
     const evaluation = evaluate([...cheap, rated]);
     const ranked = await evaluation.rank(1, noLoader);
-    const best = evaluation.describe(ranked[0]!, names);
+    const best = metric(evaluation.describe(ranked[0]!, names));
     expect(best.mountId).toBe(rated.id);
     expect(best.passes).toBe(true);
     expect(best.restraint?.passes).toBe(true);
-    const unrated = evaluation.describe(ranked[1]!, names);
+    const unrated = metric(evaluation.describe(ranked[1]!, names));
     expect(unrated.passes).toBe(false);
     expect(unrated.reasons).toContain(
       `Seismic restraint: ${unrated.perPoint[0]!.partNumber} has no horizontal restraint rating (points A, B, C, D); ` +
@@ -109,7 +113,7 @@ describe('restraint check in the engine', () => {
     expect(c).toBeGreaterThanOrEqual(0);
     await evaluation.ensureDetails([c], noLoader);
     evaluation.checkFinalist(c);
-    const candidate = evaluation.describe(c, names);
+    const candidate = metric(evaluation.describe(c, names));
     const kv = candidate.perPoint.map((p) => sizes.find((s) => s.id === p.mountId)!.verticalStiffnessNPerM);
     const kh = candidate.perPoint.map((p) => sizes.find((s) => s.id === p.mountId)!.horizontalStiffnessNPerM!);
     expect(new Set(kv).size).toBe(2); // sizes differ between points
@@ -140,11 +144,11 @@ describe('restraint check in the engine', () => {
     const evaluation = evaluate([...series, weakUplift]);
     const s = evaluation.findSeries('1:S');
     await evaluation.ensureDetails([s], noLoader);
-    const described = evaluation.describe(s, names);
+    const described = metric(evaluation.describe(s, names));
     expect(described.passes).toBe(false);
     expect(described.reasons.some((r) => /has no horizontal restraint rating/.test(r))).toBe(true);
     const u = evaluation.findUniform(weakUplift.id);
-    const uplift = evaluation.describe(u, names);
+    const uplift = metric(evaluation.describe(u, names));
     expect(uplift.passes).toBe(false);
     expect(uplift.reasons.some((r) => /Seismic restraint at point [ABCD]: the uplift \d+ N exceeds the uplift rating 1 N/.test(r))).toBe(
       true,
@@ -156,7 +160,7 @@ describe('restraint check in the engine', () => {
     const plain = row({});
     const evaluation = evaluate([plain], null);
     const ranked = await evaluation.rank(5, noLoader);
-    const candidate = evaluation.describe(ranked[0]!, names);
+    const candidate = metric(evaluation.describe(ranked[0]!, names));
     expect(candidate.restraint).toBeUndefined();
     expect(candidate.passes).toBe(true);
     expect(FAIL.restraint).toBeGreaterThan(0);

@@ -1,3 +1,4 @@
+import { wordsInReaderUnits } from '../../common/units/reader-words.js';
 import { massProperties, rigidBodyModes } from '@tacet/vibration';
 import { prepareProblem, type SelectionInput } from '../selection-problem.js';
 import { toCatalogTuple, type CatalogRow, type DetailsLoader } from './catalog-tuple.js';
@@ -66,7 +67,7 @@ const evaluate = (p: ReturnType<typeof problem>, rows: CatalogRow[]) =>
 function judged(p: ReturnType<typeof problem>, r: CatalogRow) {
   const evaluation = evaluate(p, [r]);
   evaluation.checkFinalist(0);
-  return evaluation.describe(0, names);
+  return wordsInReaderUnits(evaluation.describe(0, names), 'SI');
 }
 
 describe('assumed catalog values (selection.md §14)', () => {

@@ -8,6 +8,10 @@ import {
   type MountDetails,
 } from './catalog-tuple.js';
 import { SelectionEvaluation } from './selection-evaluation.js';
+import { wordsInReaderUnits } from '../../common/units/reader-words.js';
+
+/** A candidate's words as a metric reader reads them. */
+const metric = <T>(value: T): T => wordsInReaderUnits(value, 'SI');
 
 /**
  * Engine tests over invented rows (no database). Closed forms: docs/engineering/transmissibility.md
@@ -85,7 +89,7 @@ describe('SelectionEvaluation', () => {
       mountType: 'elastomer_mount',
     });
     const evaluation = evaluate(problem({ frequencies: [{ frequencyHz: 30 }] }), [elastomer]);
-    const c = evaluation.describe(evaluation.findUniform(elastomer.id), names);
+    const c = metric(evaluation.describe(evaluation.findUniform(elastomer.id), names));
     expect(c.verticalNaturalFrequencyHz.toFixed(3)).toBe('8.340');
     expect(c.perPoint[0].staticDeflectionMm).toBeCloseTo(5, 10);
     const r = 30 / c.verticalNaturalFrequencyHz;
@@ -104,12 +108,12 @@ describe('SelectionEvaluation', () => {
     ];
     const evaluation = evaluate(problem(), rows);
     expect(evaluation.considered).toBe(4);
-    const ranked = (await evaluation.rank(1, noLoader)).map((c) => evaluation.describe(c, names));
+    const ranked = (await evaluation.rank(1, noLoader)).map((c) => metric(evaluation.describe(c, names)));
     expect(ranked.map((c) => [c.mountId, c.passes])).toEqual([
       [rows[1].id, true],
       [expect.any(Number), false],
     ]);
-    const all = (await evaluation.rank(10, noLoader)).map((c) => evaluation.describe(c, names));
+    const all = (await evaluation.rank(10, noLoader)).map((c) => metric(evaluation.describe(c, names)));
     expect(all.map((c) => c.passes)).toEqual([true, true, false, false]);
     // the price reference is the cheapest passing candidate, not the failing 1-unit one
     expect(all[0].scoreTerms.price).toBeCloseTo(0.15, 15);
@@ -135,7 +139,7 @@ describe('SelectionEvaluation', () => {
     expect(evaluation.findSeries('1:F')).toBeGreaterThanOrEqual(0);
     expect(evaluation.findSeries('2:C')).toBe(-1);
     expect(evaluation.considered).toBe(fine.length + coarse.length + 1);
-    const series = evaluation.describe(evaluation.findSeries('1:F'), names);
+    const series = metric(evaluation.describe(evaluation.findSeries('1:F'), names));
     expect(series.kind).toBe('series');
     expect(series.seriesId).toBe('1:F');
     expect(series.levelErrorMm).toBeLessThan(1);
@@ -157,7 +161,7 @@ describe('SelectionEvaluation', () => {
     });
     const mount = row({ partNumber: 'HOT-1', tempMinC: -20, tempMaxC: 70, maxDeflectionMm: 20 });
     const evaluation = evaluate(p, [mount]);
-    const c = evaluation.describe(0, names);
+    const c = metric(evaluation.describe(0, names));
     expect(c.passes).toBe(false);
     // the default 10 % weight margin (selection.md §17): 24.5 mm × 1.1 = 27 mm
     expect(c.reasons).toEqual([
@@ -171,10 +175,40 @@ describe('SelectionEvaluation', () => {
     ]);
   });
 
+  it('words the same failures in inches and °F for a US customary reader (1 in = 25.4 mm; °F = 1.8 °C + 32)', () => {
+    const p = problem({ criteria: { minIsolationPct: 90, minUtilization: 0.5, maxUtilization: 1.0, ambientTempC: 90 } });
+    const evaluation = evaluate(p, [row({ partNumber: 'HOT-1', tempMinC: -20, tempMaxC: 70, maxDeflectionMm: 20 })]);
+    const c = wordsInReaderUnits(evaluation.describe(0, names), 'US');
+    // 24.52 mm × 1.1 (the default 10 % weight margin) = 26.97 mm = 1.062 in, 20 mm = 0.787 in; 90 °C = 194 °F, −20 °C = −4 °F, 70 °C = 158 °F
+    expect(c.reasons).toContain(
+      'Static deflection at point A (1.06 in with the 10 % weight margin) exceeds the 0.79 in the mount HOT-1 allows.',
+    );
+    expect(c.reasons).toContain('The ambient temperature 194 °F is outside the range of HOT-1 (-4 °F to 158 °F).');
+    expect(c.reasons.join(' ')).not.toMatch(/mm|°C/);
+    expect(c.perPoint[0].staticDeflectionMm).toBe(metric(evaluation.describe(0, names)).perPoint[0].staticDeflectionMm); // figures stay SI
+  });
+
+  it('states utilisation on the check’s basis: utilizationWithMargin is what the upper check compares (docs/engineering/selection.md)', () => {
+    // W/4 = 2451.66 N on a 2600 N rating: 0.943 bare, × 1.1 = 1.037 > 1.0 with a 10 % margin (fails); 0.943 alone would pass
+    const p = problem({ criteria: { minIsolationPct: 90, minUtilization: 0.5, maxUtilization: 1.0, weightMarginPct: 10 } });
+    const c = metric(evaluate(p, [row({ ratedLoadN: 2600 })]).describe(0, names));
+    expect(c.perPoint[0].utilization).toBeCloseTo(W4 / 2600, 12);
+    expect(c.perPoint[0].utilizationWithMargin).toBeCloseTo((W4 * 1.1) / 2600, 12);
+    expect(c.passes).toBe(false);
+    expect(c.reasons[0]).toContain('with the 10 % weight margin at point A (104 %)');
+    const none = metric(
+      evaluate(problem({ criteria: { minIsolationPct: 90, minUtilization: 0.5, maxUtilization: 1.0, weightMarginPct: 0 } }), [
+        row({ ratedLoadN: 2600 }),
+      ]).describe(0, names),
+    );
+    expect(none.perPoint[0].utilizationWithMargin).toBe(none.perPoint[0].utilization);
+    expect(none.passes).toBe(true);
+  });
+
   it('a machine of one point mass: no modes, and the candidate says so among its assumptions (selection.md §14)', () => {
     const pointMass = evaluate(problem({ components: [{ name: 'M', massKg: 1000, cg: { x: 0, y: 0, z: 0.3 } }] }), [row({})]);
     pointMass.checkFinalist(0);
-    const c = pointMass.describe(0, names);
+    const c = metric(pointMass.describe(0, names));
     expect(c.modes).toBeUndefined();
     expect(c.passes).toBe(true);
     expect(c.notes.some((n) => /^Rigid-body modes not computed/.test(n))).toBe(true);
@@ -208,7 +242,7 @@ describe('SelectionEvaluation with rows as the prefilter reads them (no details)
       p,
       [cool, hot, unused].map((r) => toCatalogTuple(r)),
     );
-    const ranked = (await evaluation.rank(1, loader)).map((c) => evaluation.describe(c, names));
+    const ranked = (await evaluation.rank(1, loader)).map((c) => metric(evaluation.describe(c, names)));
     // COOL-1 scored best, but its range stops at 40 °C: it fails once its details are known
     expect(ranked.map((c) => [c.label, c.passes])).toEqual([
       ['HOT-2', true],

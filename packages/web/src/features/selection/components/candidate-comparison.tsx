@@ -152,7 +152,7 @@ export function CandidateComparison({
     },
     {
       label: 'Level error',
-      cells: candidates.map((c) => units.format('deflection', c.levelErrorMm / 1000)),
+      cells: candidates.map((c) => units.measure('deflection', c.levelErrorMm / 1000)),
       values: candidates.map((c) => c.levelErrorMm),
       better: 'low',
       round: toSignificant(3),

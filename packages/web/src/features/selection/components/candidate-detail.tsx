@@ -155,7 +155,7 @@ export function CandidateDetail({
         <dt>Resonance amplification</dt>
         <dd>{formatRatio(candidate.resonanceAmplification)}</dd>
         <dt>Level error</dt>
-        <dd>{units.format('deflection', candidate.levelErrorMm / 1000)}</dd>
+        <dd>{units.measure('deflection', candidate.levelErrorMm / 1000)}</dd>
         <dt>Price, all points</dt>
         <dd>{formatMoney(candidate.totalPrice, candidate.currency)}</dd>
         <dt>Longest lead time</dt>

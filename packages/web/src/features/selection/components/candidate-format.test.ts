@@ -42,6 +42,12 @@ describe('candidate figures', () => {
     expect(formatUtilizationRange(old)).toBe('0.68–0.85');
   });
 
+  it('takes the server’s utilizationWithMargin when it states it', () => {
+    const spring = demoCandidates()[0]!;
+    const stated = { ...spring, perPoint: spring.perPoint.map((p) => ({ ...p, utilizationWithMargin: p.utilization * 1.2 })) };
+    expect(utilizationRange(stated)[1]).toBeCloseTo((2717.3 / 3200) * 1.2, 12);
+  });
+
   it('finds the governing isolation row', () => {
     const [spring] = demoCandidates();
     expect(governingIsolation(spring!)?.frequencyHz).toBeCloseTo(1480 / 60, 12);

@@ -90,7 +90,9 @@ export function utilizationWithMargin(candidate: Candidate, utilization: number)
  */
 export function utilizationRange(candidate: Candidate): [number, number] {
   const values = candidate.perPoint.map((p) => p.utilization);
-  return values.length === 0 ? [NaN, NaN] : [Math.min(...values), utilizationWithMargin(candidate, Math.max(...values))];
+  // the server states the upper check's basis per point (utilizationWithMargin); older stored candidates lack it
+  const upper = candidate.perPoint.map((p) => p.utilizationWithMargin ?? utilizationWithMargin(candidate, p.utilization));
+  return values.length === 0 ? [NaN, NaN] : [Math.min(...values), Math.max(...upper)];
 }
 
 export function formatUtilizationRange(candidate: Candidate): string {

@@ -131,6 +131,8 @@ describe('Mount selection', () => {
     expect(within(modes).getAllByRole('row')).toHaveLength(7);
     expect(modes).toHaveTextContent('bounce — vertical');
     expect(within(detail).getByTestId('candidate-notes')).toHaveTextContent('Level error 2.7 mm: shim the low corner');
+    // the figure beside the note reads as the note does (the sentence precision of @tacet/vibration formatMeasure)
+    expect(within(detail).getByText('Level error').nextElementSibling).toHaveTextContent(/^2\.7 mm$/);
     expect(within(detail).queryByTestId('candidate-reasons')).not.toBeInTheDocument();
     expect(screen.getByRole('complementary', { name: 'Cautions' })).toHaveTextContent('licensed engineer');
   });
