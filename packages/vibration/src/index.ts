@@ -19,3 +19,4 @@ export * from './modes/index.js';
 export * from './identification/index.js';
 export * from './tap-test/index.js';
 export * from './restraint/index.js';
+export * from './glossary/index.js';
