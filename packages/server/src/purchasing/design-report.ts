@@ -1,17 +1,26 @@
 import { createRequire } from 'node:module';
-import { describeModeMotion, hystereticDamping, logSpace, transmissibility, viscousDamping, type Damping } from '@tacet/vibration';
+import {
+  DESIGN_SECTIONS,
+  INPUT_LABELS,
+  RESULT_LABELS,
+  cautionsFor,
+  describeModeMotion,
+  designStateWords,
+  formatMoney,
+  formatUtilisation,
+  hystereticDamping,
+  logSpace,
+  mountTypeLabel,
+  transmissibility,
+  viscousDamping,
+  type Damping,
+} from '@tacet/vibration';
 import PDFDocument from 'pdfkit';
 import type { Design } from '../designs/design.entity.js';
 import type { CandidateMode, LabelledFrequency, MountSnapshot } from '../selection/selection.types.js';
 import type { Verification } from '../verifications/verification.entity.js';
 import { bomTotals } from './bom-export.js';
 import { restraintReportLines } from './report-restraint.js';
-
-/** The caution every report carries (PRODUCT.md, "Cautions the product shows"). */
-export const REPORT_CAUTION =
-  'The model assumes a rigid machine on linear mounts over a rigid support. Results are for preliminary sizing: ' +
-  'seismic and wind restraint, snubbers, flexible pipe and cable connections, flexible floors and guarding follow ' +
-  'local codes and need review by a qualified, licensed engineer.';
 
 interface ReportFonts {
   regular: string;
@@ -101,14 +110,18 @@ export function designReportPdf(design: Design, options: ReportOptions): Promise
 
   doc.font('heading').fontSize(18).text('Mount selection — calculation report');
   doc.font('body').fontSize(11).text(`Project: ${design.project.name}`);
-  doc.text(`Design: ${design.name}, revision ${design.revision} (${design.status.replace('_', ' ')})`);
+  doc.text(`Design: ${design.name}, revision ${design.revision} (${designStateWords(design.status)})`);
   doc.text(`Author: ${design.author.name}    Checked and released by: ${design.checker?.name ?? '—'}`);
   if (options.releasedAt) doc.text(`Released: ${options.releasedAt.toISOString().slice(0, 10)}`);
   if (options.releaseNotes) doc.text(`Release notes: ${options.releaseNotes}`);
   if (draft) doc.font('heading').fillColor('#c00000').text('DRAFT — not checked or released; not for purchasing or construction.');
 
-  heading('Cautions');
-  body(REPORT_CAUTION);
+  const cautions = cautionsFor('design', { restraint: !!design.input.restraint });
+  const cautionSection = () => {
+    heading('Cautions');
+    for (const caution of cautions) body(`${caution.title}: ${caution.text}`);
+  };
+  cautionSection();
 
   const snapshot = design.snapshot;
   heading('Equipment');
@@ -129,43 +142,46 @@ export function designReportPdf(design: Design, options: ReportOptions): Promise
 
   const operating = design.input.operating;
   if (operating) {
-    heading('Operating conditions');
+    heading(DESIGN_SECTIONS.running);
     if (operating.speedRangeRpm)
-      body(`Speed range ${fmt(operating.speedRangeRpm.min, 0)}–${fmt(operating.speedRangeRpm.max, 0)} rpm (the lowest speed governs)`);
-    else if (operating.speedRpm !== undefined) body(`Speed ${fmt(operating.speedRpm, 0)} rpm`);
-    body(`Orders: ${(operating.orders ?? []).map((o) => `${o}×`).join(', ') || '—'}`);
-    if (operating.vaneCount) body(`Vanes or blades: ${operating.vaneCount}`);
-    if (operating.lineFrequencyHz) body(`Electrical line frequency: ${fmt(operating.lineFrequencyHz, 0)} Hz`);
+      body(
+        `${INPUT_LABELS.speedRange} ${fmt(operating.speedRangeRpm.min, 0)}–${fmt(operating.speedRangeRpm.max, 0)} rpm (the lowest speed governs)`,
+      );
+    else if (operating.speedRpm !== undefined) body(`${INPUT_LABELS.speed} ${fmt(operating.speedRpm, 0)} rpm`);
+    body(`${INPUT_LABELS.orders}: ${(operating.orders ?? []).map((o) => `${o}×`).join(', ') || '—'}`);
+    if (operating.vaneCount) body(`${INPUT_LABELS.vaneCount}: ${operating.vaneCount}`);
+    if (operating.lineFrequencyHz) body(`${INPUT_LABELS.supplyFrequency}: ${fmt(operating.lineFrequencyHz, 0)} Hz`);
   }
 
   const criteria = design.input.criteria;
   if (criteria) {
-    heading('Criteria');
-    body(`Minimum isolation ${fmt(criteria.minIsolationPct, 1)} % at every disturbing frequency`);
+    heading(DESIGN_SECTIONS.requirements);
+    body(`${INPUT_LABELS.minIsolation} ${fmt(criteria.minIsolationPct, 1)} % at every disturbing frequency`);
     body(
-      `Load utilisation between ${fmt(criteria.minUtilization * 100, 0)} % and ${fmt(criteria.maxUtilization * 100, 0)} % of the rated load`,
+      `${INPUT_LABELS.utilisation} between ${formatUtilisation(criteria.minUtilization)} and ${formatUtilisation(criteria.maxUtilization)} of the rated load`,
     );
-    if (criteria.ambientTempC !== undefined) body(`Ambient temperature ${fmt(criteria.ambientTempC, 0)} °C`);
-    if (criteria.mountTypes?.length) body(`Mount types: ${criteria.mountTypes.map((t) => t.replace(/_/g, ' ')).join(', ')}`);
+    if (criteria.ambientTempC !== undefined) body(`${INPUT_LABELS.ambientTemperature} ${fmt(criteria.ambientTempC, 0)} °C`);
+    if (criteria.mountTypes?.length)
+      body(`${INPUT_LABELS.mountTypes}: ${criteria.mountTypes.map((t) => mountTypeLabel(t).toLowerCase()).join(', ')}`);
   }
 
-  heading('Disturbing frequencies');
+  heading(INPUT_LABELS.disturbingFrequencies);
   for (const frequency of options.disturbingFrequencies) body(`${fmt(frequency.frequencyHz, 2)} Hz — ${frequency.label}`);
 
   const candidate = snapshot?.candidate ?? design.chosen;
-  heading('Chosen mounts');
+  heading(RESULT_LABELS.chosenMounts);
   if (!candidate) {
     body('No mounts chosen yet.');
   } else {
     body(`${candidate.label} (${candidate.supplier.name})`);
     body(`Vertical natural frequency (uncoupled bounce estimate): ${fmt(candidate.verticalNaturalFrequencyHz, 2)} Hz`);
     body(
-      `Transmissibility at resonance: ${fmt(candidate.resonanceAmplification, 1)}; level difference between points: ${fmt(candidate.levelErrorMm, 2)} mm`,
+      `${RESULT_LABELS.resonance}: ${fmt(candidate.resonanceAmplification, 1)}; ${RESULT_LABELS.levelError.toLowerCase()} between points: ${fmt(candidate.levelErrorMm, 2)} mm`,
     );
     heading('Mount points');
     for (const point of candidate.perPoint) {
       body(
-        `${point.label}: ${point.partNumber}, load ${fmt(point.loadN, 0)} N, utilisation ${fmt(point.utilization * 100, 0)} %, static deflection ${fmt(point.staticDeflectionMm, 2)} mm`,
+        `${point.label}: ${point.partNumber}, load ${fmt(point.loadN, 0)} N, utilisation ${formatUtilisation(point.utilization)}, static deflection ${fmt(point.staticDeflectionMm, 2)} mm`,
       );
     }
     heading('Isolation at each disturbing frequency');
@@ -180,14 +196,14 @@ export function designReportPdf(design: Design, options: ReportOptions): Promise
     }
     const mounts = snapshot?.mounts ?? [];
     if (mounts.length) {
-      heading('Chosen mounts — catalog data as frozen');
+      heading(`${RESULT_LABELS.chosenMounts} — catalog data as frozen`);
       for (const mount of mounts) body(mountLine(mount));
     }
     const damping = mounts.length ? dampingOf(mounts[0]) : undefined;
     heading('Transmissibility');
     transmissibilityChart(doc, candidate.verticalNaturalFrequencyHz, damping, options.disturbingFrequencies, criteria?.minIsolationPct);
     if (candidate.reasons.length) {
-      heading('Checks not met');
+      heading(RESULT_LABELS.checksNotMet);
       for (const reason of candidate.reasons) body(`• ${reason}`);
     }
   }
@@ -199,7 +215,7 @@ export function designReportPdf(design: Design, options: ReportOptions): Promise
   if (options.verifications?.length) asBuiltSection(doc, options.verifications, heading, body);
 
   doc.addPage();
-  doc.font('heading').fontSize(16).fillColor('black').text('Bill of materials');
+  doc.font('heading').fontSize(16).fillColor('black').text(RESULT_LABELS.billOfMaterials);
   const lines = design.bom ?? [];
   if (lines.length === 0) body('No mounts chosen yet.');
   const withPrices = options.prices ?? true;
@@ -211,7 +227,7 @@ export function designReportPdf(design: Design, options: ReportOptions): Promise
     for (const line of lines) {
       body(
         `${line.supplier.name} ${line.partNumber} × ${line.quantity} (points ${line.mountPoints.join(', ')}): ` +
-          `${line.unitPrice === null ? 'price on request' : `${line.unitPrice.toFixed(2)} ${line.currency} each, ${line.extendedPrice?.toFixed(2)} ${line.currency}`}` +
+          `${line.unitPrice === null ? 'price on request' : `${formatMoney(line.unitPrice, line.currency)} each, ${formatMoney(line.extendedPrice ?? 0, line.currency)}`}` +
           `${line.leadTimeDays === null ? '' : `, lead time ${line.leadTimeDays} days`}`,
       );
     }
@@ -220,7 +236,7 @@ export function designReportPdf(design: Design, options: ReportOptions): Promise
         .font('heading')
         .fontSize(10)
         .text(
-          `Total: ${total.quantity} mounts, ${total.amount.toFixed(2)} ${total.currency}${total.unpricedLines ? ` (${total.unpricedLines} line(s) without a price)` : ''}`,
+          `Total: ${total.quantity} mounts, ${formatMoney(total.amount, total.currency)}${total.unpricedLines ? ` (${total.unpricedLines} line(s) without a price)` : ''}`,
         );
     }
   }
@@ -230,8 +246,7 @@ export function designReportPdf(design: Design, options: ReportOptions): Promise
       `Mount data and every figure above were frozen on ${snapshot.takenAt.slice(0, 10)} when the mounts were chosen; later catalog changes do not alter them.`,
     );
   }
-  heading('Cautions');
-  body(REPORT_CAUTION);
+  cautionSection();
 
   pageFooters(doc, `${design.project.name} — ${design.name}, revision ${design.revision}`, watermark);
   doc.end();
@@ -297,7 +312,7 @@ function dampingOf(mount: MountSnapshot): Damping | undefined {
 function mountLine(m: MountSnapshot): string {
   const damping = m.dampingModel === 'hysteretic' ? `loss factor ${m.lossFactor}` : `damping ratio ${m.dampingRatio}`;
   return (
-    `${m.supplier.name} ${m.partNumber} (${m.mountType.replace(/_/g, ' ')}${m.series ? `, series ${m.series}` : ''}): ` +
+    `${m.supplier.name} ${m.partNumber} (${mountTypeLabel(m.mountType).toLowerCase()}${m.series ? `, series ${m.series}` : ''}): ` +
     `rated load ${fmt(m.ratedLoadN, 0)} N, vertical stiffness ${fmt(m.verticalStiffnessNPerM / 1000, 1)} N/mm` +
     `${m.horizontalStiffnessNPerM === null ? '' : `, horizontal ${fmt(m.horizontalStiffnessNPerM / 1000, 1)} N/mm`}` +
     `, dynamic-to-static ratio ${m.dynamicStiffnessRatio}, ${damping}` +

@@ -114,7 +114,7 @@ export function parseSeriesId(seriesId: string): { supplierId: number; series: s
   if (!match) {
     throw new BadRequestException({
       message: 'Validation failed',
-      errors: [{ field: 'chosenSeriesId', message: 'chosenSeriesId must look like "<supplierId>:<series>"' }],
+      errors: [{ field: 'chosenSeriesId', message: 'The chosen series must be given as the supplier number, a colon and the series name' }],
     });
   }
   return { supplierId: Number(match[1]), series: match[2] };

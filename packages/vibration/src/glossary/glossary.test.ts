@@ -3,6 +3,8 @@ import {
   DESIGN_STATE_LABELS,
   MOUNT_TYPE_LABELS,
   designStateWords,
+  fieldName,
+  fieldPlace,
   fieldWords,
   formatMoney,
   formatUtilisation,
@@ -34,6 +36,18 @@ describe('glossary', () => {
     expect(fieldWords('staticDeflectionMm')).toBe('Static deflection');
     expect(fieldWords('part_number')).toBe('Part number');
     expect(fieldWords('x')).toBe('x');
+  });
+
+  it('reads a field path as a name and a place in a list', () => {
+    expect(fieldName('components.0.massKg')).toBe('Mass');
+    expect(fieldPlace('components.0.massKg')).toBe('component 1');
+    expect(fieldPlace('input.mountPoints.2.x')).toBe('mount point 3');
+    expect(fieldName('input.mountPoints.2.x')).toBe('x');
+    expect(fieldPlace('components[Motor].massKg')).toBe('component Motor');
+    expect(fieldPlace('operating.extraFrequenciesHz.1')).toBe('further frequency 2');
+    expect(fieldName('operating.extraFrequenciesHz.1')).toBe('Further frequencies');
+    expect(fieldPlace('operating.speedRpm')).toBe('');
+    expect(fieldName('operating.speedRpm')).toBe('Speed');
   });
 
   it('formats money one way: code, thousands, two decimals', () => {

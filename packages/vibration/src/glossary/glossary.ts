@@ -171,6 +171,40 @@ export function fieldWords(property: string): string {
   return words.charAt(0).toUpperCase() + words.slice(1);
 }
 
+/** The parts of a field path: `input.mountPoints.2.x` or `mountPoints[2].x` → input, mountPoints, 2, x. */
+function pathParts(path: string): string[] {
+  return path
+    .replace(/\[([^\]]*)\]/g, '.$1')
+    .split('.')
+    .filter(Boolean);
+}
+
+const singular = (words: string): string => (/ies$/.test(words) ? words.replace(/ies$/, 'y') : words.replace(/([^s])s$/, '$1'));
+
+/**
+ * Where in a list a field path points, in words: `components.0.massKg` → "component 1",
+ * `input.mountPoints.2.x` → "mount point 3", `components[Motor].massKg` → "component Motor";
+ * "" when the path has no list index.
+ */
+export function fieldPlace(path: string): string {
+  const parts = pathParts(path);
+  const places: string[] = [];
+  for (let i = 1; i < parts.length; i++) {
+    if (/^[a-z][A-Za-z]*$/.test(parts[i]) && !/^\d+$/.test(parts[i])) continue;
+    const collection = parts[i - 1];
+    if (/^\d+$/.test(collection)) continue;
+    const index = /^\d+$/.test(parts[i]) ? String(Number(parts[i]) + 1) : parts[i];
+    places.push(`${singular(fieldWords(collection).toLowerCase())} ${index}`);
+  }
+  return places.join(', ');
+}
+
+/** The last named property of a field path in words: `components.0.massKg` → "Mass". */
+export function fieldName(path: string): string {
+  const named = pathParts(path).filter((part) => !/^\d+$/.test(part));
+  return fieldWords(named[named.length - 1] ?? path);
+}
+
 /** Money as every screen and file shows it: ISO code, thousands separated, two decimals ("USD 1,240.50"). */
 export function formatMoney(amount: number, currency: string): string {
   const [whole, cents] = Math.abs(amount).toFixed(2).split('.');

@@ -7,7 +7,7 @@
  * To word a new check: a function (context → sentences) and its row in REASONS, placed where its
  * sentence should come in the list.
  */
-import { describeModeMotion, isolationEfficiencyPct } from '@tacet/vibration';
+import { describeModeMotion, isolationEfficiencyPct, mountTypeLabel } from '@tacet/vibration';
 import { formatHz, formatMm, formatNumber, formatPct, formatPctValue } from '../selection-format.js';
 import type { SelectionProblem } from '../selection-problem.js';
 import type { CandidatePoint, CandidateRestraint, RestraintPoint } from '../selection.types.js';
@@ -229,7 +229,7 @@ function mountType({ store, c }: WordingContext): string[] {
         .map((r) => store.mountType[r]),
     ),
   ];
-  return [`Mount type ${types.join(', ')} is not among the allowed types.`];
+  return [`The mount type ${types.map((t) => mountTypeLabel(t).toLowerCase()).join(', ')} is not among the allowed types.`];
 }
 
 function supplier({ supplierName }: WordingContext): string[] {
