@@ -14,6 +14,8 @@ const PHRASES: Array<[RegExp, string]> = [
   [/ must be a boolean value/, ' must be true or false'],
   [/ must be shorter than or equal to (\d+) characters/, ' must be at most $1 characters long'],
   [/ must be longer than or equal to (\d+) characters/, ' must be at least $1 characters long'],
+  [/ must contain no more than 1 elements/, ' must have at most one item'],
+  [/ must contain at least 1 elements/, ' must have at least one item'],
   [/ must contain no more than (\d+) elements/, ' must have at most $1 items'],
   [/ must contain at least (\d+) elements/, ' must have at least $1 items'],
   [/ must not be greater than /, ' must be at most '],
@@ -40,6 +42,10 @@ export function messageInWords(message: string, path?: string): string {
   let text = message;
   const unknown = /^property (\S+) should not exist$/.exec(text);
   if (unknown) return `${fieldWords(unknown[1])} is not expected here`;
+  text = text.replace(
+    /^each value in nested property (\S+) must be either object or array$/,
+    (_m, p: string) => `Each item of ${fieldWords(p).toLowerCase()} must be an object`,
+  );
   text = text.replace(
     /^nested property (\S+) must be either object or array$/,
     (_m, p: string) => `${fieldWords(p)} must be an object or a list`,

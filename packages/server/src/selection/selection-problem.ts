@@ -1,7 +1,7 @@
 import { BadRequestException } from '@nestjs/common';
 import {
   disturbingFrequencies,
-  fieldName,
+  inputProblemWords,
   isInsideConvexHull,
   isolationDb,
   isVibrationInputError,
@@ -109,9 +109,7 @@ function apiField(field: string): string {
 export function vibrationInputToBadRequest(error: VibrationInputError, prefix = ''): BadRequestException {
   const own = error.message.startsWith(`${error.field}: `) ? error.message.slice(error.field.length + 2) : error.message;
   const field = prefix ? `${prefix}.${apiField(error.field)}` : apiField(error.field);
-  // "must be a finite number > 0" reads after the field's name; "mounts are collinear..." stands alone.
-  const predicate = /^(must|is|are|gives?|needs?|has|have|should|cannot)\b/.test(own);
-  const errors: FieldError[] = [{ field, message: messageInWords(predicate ? `${fieldName(field)} ${own}` : own) }];
+  const errors: FieldError[] = [{ field, message: messageInWords(inputProblemWords(field, own)) }];
   return new BadRequestException({ message: 'Validation failed', errors });
 }
 

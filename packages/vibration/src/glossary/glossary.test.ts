@@ -9,6 +9,7 @@ import {
   formatMoney,
   formatUtilisation,
   identifiersIn,
+  inputProblemWords,
   mountTypeLabel,
 } from './glossary.js';
 import { CAUTIONS, GENERAL_CAUTION, cautionLines, cautionsFor } from './cautions.js';
@@ -48,6 +49,14 @@ describe('glossary', () => {
     expect(fieldName('operating.extraFrequenciesHz.1')).toBe('Further frequencies');
     expect(fieldPlace('operating.speedRpm')).toBe('');
     expect(fieldName('operating.speedRpm')).toBe('Speed');
+  });
+
+  it('reads a calculation refusal in words', () => {
+    expect(inputProblemWords('massKg', 'massKg: must be a finite number > 0')).toBe('Mass must be a finite number > 0');
+    expect(inputProblemWords('points', 'points: mounts are collinear (or coincide): the frame would tip')).toBe(
+      'Mounts are collinear (or coincide): the frame would tip',
+    );
+    expect(inputProblemWords('points[2].x', 'points[2].x: must be a finite number')).toBe('x must be a finite number');
   });
 
   it('formats money one way: code, thousands, two decimals', () => {

@@ -93,7 +93,7 @@ export const RESULT_LABELS = Object.freeze({
   chosenMounts: 'Chosen mounts',
   naturalFrequency: 'Natural frequency',
   resonance: 'Transmissibility at resonance',
-  levelError: 'Level difference',
+  levelError: 'Level error',
   checksNotMet: 'Checks not met',
   billOfMaterials: 'Bill of materials',
 });
@@ -147,6 +147,10 @@ export const FIELD_WORDS: Readonly<Record<string, string>> = Object.freeze({
   partNumber: 'Part number',
   mountType: 'Mount type',
   unitSystem: 'Unit system',
+  lx: 'Length (x)',
+  ly: 'Width (y)',
+  lz: 'Height (z)',
+  to: 'The new state',
   x: 'x',
   y: 'y',
   z: 'z',
@@ -203,6 +207,17 @@ export function fieldPlace(path: string): string {
 export function fieldName(path: string): string {
   const named = pathParts(path).filter((part) => !/^\d+$/.test(part));
   return fieldWords(named[named.length - 1] ?? path);
+}
+
+/**
+ * A calculation refusal (`VibrationInputError`: `field` and `message` "massKg: must be ...") in
+ * words: "Mass must be a finite number > 0", "Mounts are collinear (or coincide): ...".
+ */
+export function inputProblemWords(field: string, message: string): string {
+  const own = message.startsWith(`${field}: `) ? message.slice(field.length + 2) : message;
+  const predicate = /^(must|is|are|gives?|needs?|has|have|should|cannot)\b/.test(own);
+  const text = predicate ? `${fieldName(field)} ${own}` : own;
+  return text.charAt(0).toUpperCase() + text.slice(1);
 }
 
 /** Money as every screen and file shows it: ISO code, thousands separated, two decimals ("USD 1,240.50"). */

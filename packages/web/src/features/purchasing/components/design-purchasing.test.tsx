@@ -108,7 +108,7 @@ describe('Design purchasing view', () => {
     const machines = within(section).getByLabelText('Identical machines');
     await user.clear(machines);
     await user.type(machines, '3');
-    await user.click(within(section).getByRole('button', { name: 'Review request for quotation' }));
+    await user.click(within(section).getByRole('button', { name: 'Preview request for quotation' }));
 
     // a confirmation first: recipient, quantities for three machines, attachments; nothing sent yet
     const confirm = await screen.findByRole('dialog', { name: 'Send this request to Stillmoor Isolation?' });
@@ -137,7 +137,7 @@ describe('Design purchasing view', () => {
     });
     await waitForView();
     const section = await screen.findByRole('region', { name: /Quellbrook Mounts/ });
-    await user.click(within(section).getByRole('button', { name: 'Review request for quotation' }));
+    await user.click(within(section).getByRole('button', { name: 'Preview request for quotation' }));
     expect(await within(section).findByRole('alert')).toHaveTextContent('Supplier Quellbrook Mounts has no contact e-mail.');
     expect(fake.calls('post', '/designs/:id/rfqs/preview')[0]!.body).toEqual({ supplierId: QUELLBROOK.id, machineCount: 1 });
     expect(fake.calls('post', '/designs/:id/rfqs')).toHaveLength(0);
@@ -231,7 +231,7 @@ describe('Design purchasing view', () => {
     openView(releasedDesign({ status: 'in_review', checker: null }));
     await waitForView();
     expect(screen.getByText('Purchasing starts once a second engineer has released this design.')).toBeInTheDocument();
-    expect(screen.queryByRole('button', { name: 'Review request for quotation' })).not.toBeInTheDocument();
+    expect(screen.queryByRole('button', { name: 'Preview request for quotation' })).not.toBeInTheDocument();
     expect(screen.queryByRole('button', { name: 'BOM (CSV)' })).not.toBeInTheDocument();
   });
 });

@@ -141,7 +141,7 @@ describe('Mount selection', () => {
     await user.click(screen.getByRole('button', { name: 'QB-EP-40 elastomer pad' }));
     const detail = await screen.findByRole('region', { name: 'Candidate 3' });
     const reasons = within(detail).getByTestId('candidate-reasons');
-    expect(reasons).toHaveTextContent('Why it fails');
+    expect(reasons).toHaveTextContent('Checks not met');
     expect(reasons).toHaveTextContent('Utilisation 1.13 at point A exceeds 1.00');
   });
 
@@ -300,8 +300,8 @@ describe('Mount selection', () => {
     expect(fn[0]).toHaveTextContent('3.15 Hz (best)');
     expect(fn[1]).not.toHaveClass('tc-best');
     expect(within(row('Price, all points')).getAllByRole('cell')[1]).toHaveClass('tc-best');
-    expect(row('Why it fails')).toHaveTextContent('Meets every requirement');
-    expect(row('Why it fails')).toHaveTextContent('Utilisation 1.13 at point A exceeds 1.00');
+    expect(row('Checks not met')).toHaveTextContent('Meets every requirement');
+    expect(row('Checks not met')).toHaveTextContent('Utilisation 1.13 at point A exceeds 1.00');
     expect(row('Isolation at 24.7 Hz')).toHaveTextContent('1× shaft at 1480 rpm');
 
     const chart = within(comparison).getByTestId('comparison-chart');
