@@ -42,9 +42,8 @@ describe('BOM exports', () => {
     expect(rows.slice(2).map((row) => row[0])).toEqual(withRestraint);
     expect(withRestraint.join(' ')).toMatch(/does not size anchorage/);
     const book = new ExcelJS.Workbook();
-    await book.xlsx.load(
-      await bomXlsx([line({})], { projectName: 'P', designName: 'D', revision: 1, draft: false, cautions: withRestraint }),
-    );
+    const xlsx = await bomXlsx([line({})], { projectName: 'P', designName: 'D', revision: 1, draft: false, cautions: withRestraint });
+    await book.xlsx.load(xlsx as unknown as ArrayBuffer);
     const texts = book.worksheets[0].getColumn(1).values.filter((v): v is string => typeof v === 'string');
     expect(texts).toEqual(expect.arrayContaining(withRestraint));
     const quote = parse(quoteBomCsv([{ supplierName: 'S', partNumber: 'P', quantity: 2, quantityPerMachine: 1, mountPoints: ['A'] }], 2), {
