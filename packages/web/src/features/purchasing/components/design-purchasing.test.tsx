@@ -57,7 +57,9 @@ describe('Design purchasing view', () => {
     expect(screen.getByTestId('bom-total-quantity')).toHaveTextContent('8');
     expect(screen.getByTestId('bom-total-price')).toHaveTextContent('USD 644.00');
     expect(screen.getByTestId('bom-longest-lead-time')).toHaveTextContent('longest 35 days');
-    expect(screen.getByText(/review of a licensed engineer/)).toBeInTheDocument();
+    // the cautions a supplier's files carry, from the one source
+    expect(screen.getByTestId('cautions')).toHaveTextContent(/qualified, licensed engineer/);
+    expect(screen.getByTestId('cautions')).toHaveTextContent(/confirmed with the supplier before purchase/);
   });
 
   it('downloads the BOM as CSV and Excel and the report as PDF from their addresses', async () => {

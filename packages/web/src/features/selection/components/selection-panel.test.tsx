@@ -56,8 +56,8 @@ describe('Mount selection', () => {
       // CV-13 with ζ = 0.05: T = 0.02108 at 24.67 Hz → 97.9 % (docs/engineering/check-values.md CV-13).
       '97.9 %at 24.7 Hz',
       '3.15 Hz',
-      '0.68–0.85',
-      '$368',
+      '68–85 %',
+      'USD 368.00',
       '21 days',
       'Level error 2.7 mm: shim the low corner',
     ]);
@@ -114,7 +114,7 @@ describe('Mount selection', () => {
     const loads = within(detail).getByRole('table', { name: 'Loads per point' });
     expect(within(loads).getAllByRole('row')[1]).toHaveTextContent('A');
     expect(within(loads).getAllByRole('row')[1]).toHaveTextContent('2,717 N');
-    expect(within(loads).getAllByRole('row')[1]).toHaveTextContent('0.85');
+    expect(within(loads).getAllByRole('row')[1]).toHaveTextContent('85 %');
     expect(within(loads).getAllByRole('row')[1]).toHaveTextContent('25.0 mm');
 
     const isolation = within(detail).getByRole('table', { name: 'Isolation per frequency' });
@@ -348,7 +348,7 @@ describe('Mount selection', () => {
     const { user } = renderApp({ signedInAs: 'engineer', path: `/designs/${DESIGN_ID}?tab=selection` });
     const table = await findMounts(user);
     // CV-15 loads on 3200 N mounts: 2186.1/3200 = 0.683 lightest; 2717.3/3200 × 1.10 = 0.934 heaviest with the margin
-    expect(tableRows(table)[0]![4]).toBe('0.68–0.93');
+    expect(tableRows(table)[0]![4]).toBe('68–93 %');
     expect(within(table).getByRole('columnheader', { name: /Utilisation/ })).toHaveTextContent('Utilisation+10 % weight');
 
     await user.click(within(table).getByRole('button', { name: 'QB-HS-300 housed spring' }));
