@@ -40,7 +40,7 @@ describe('candidate figures', () => {
     expect(utilizationBasis(spring)).toContain('with the 10 % weight margin');
     // a candidate kept from before the margin travelled with it: none assumed
     const old = { ...spring, weightMarginPct: undefined };
-    expect(formatUtilizationRange(old)).toBe('0.68–0.85');
+    expect(formatUtilizationRange(old)).toBe('68–85 %');
   });
 
   it('finds the governing isolation row', () => {
