@@ -56,7 +56,7 @@ describe('glossary', () => {
     expect(inputProblemWords('points', 'points: mounts are collinear (or coincide): the frame would tip')).toBe(
       'Mounts are collinear (or coincide): the frame would tip',
     );
-    expect(inputProblemWords('points[2].x', 'points[2].x: must be a finite number')).toBe('x must be a finite number');
+    expect(inputProblemWords('points[2].x', 'points[2].x: must be a finite number')).toBe('X must be a finite number');
   });
 
   it('formats money one way: code, thousands, two decimals', () => {
