@@ -60,7 +60,7 @@ describe('catalog screens in the browser', () => {
     await confirm.getByRole('button', { name: 'Import the valid rows' }).click();
 
     const done = page.getByRole('region', { name: 'Imported e2e-spring-range.csv' });
-    await done.getByText('1 mount added and 0 mounts updated. 2 rows with problems were skipped.').waitFor();
+    await done.getByText('1 mount added and 0 mounts updated. 2 rejected rows were not imported.').waitFor();
     await done.getByRole('button', { name: 'Download the error report (CSV)' }).waitFor();
     await page.getByRole('table', { name: 'Earlier imports' }).getByText('e2e-spring-range.csv').waitFor();
     await screenshot(page, 'catalog-import-done');

@@ -115,7 +115,7 @@ async function buyerRequestsAndRecordsQuote(browser: Browser): Promise<void> {
   const supplierName = ((await supplier.locator('.tc-supplier-title').textContent()) ?? '').split(' · ')[0]!.trim();
   await supplier.getByLabel('Identical machines').fill('2');
   await supplier.getByLabel('Message to the supplier (optional)').fill('Two identical skids; delivery to site in week 20.');
-  await supplier.getByRole('button', { name: 'Review request for quotation' }).click();
+  await supplier.getByRole('button', { name: 'Preview request for quotation' }).click();
   const confirm = page.getByRole('dialog', { name: `Send this request to ${supplierName}?` });
   await confirm.getByText('2 identical machines', { exact: true }).waitFor();
   const attachments = confirm.getByRole('list', { name: 'Attachments' });

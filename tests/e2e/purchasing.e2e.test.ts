@@ -81,7 +81,7 @@ async function authorSendsForCheck(browser: Browser): Promise<void> {
   await send.getByLabel('Note to the checker (optional)').fill('Ready for check.');
   await send.getByRole('button', { name: 'Send for check' }).click();
   await page.locator('[data-testid="review-stage"][data-status="in_review"]').waitFor();
-  await page.getByText('This revision is in review, so it cannot be changed now.').waitFor();
+  await page.getByText('This revision is in check, so it cannot be changed now.').waitFor();
   // The author may not release their own design, and the page says why.
   await panel.getByText('You wrote this design, so another engineer releases it.').waitFor();
   expect(await panel.getByRole('button', { name: 'Release' }).isDisabled()).toBe(true);
@@ -101,7 +101,7 @@ async function checkerReleases(browser: Browser): Promise<void> {
   await confirm.getByRole('button', { name: 'Release this revision' }).click();
   await page.locator('[data-testid="review-stage"][data-status="released"]').waitFor();
   await panel.getByText('Checked and released by').waitFor();
-  await panel.getByRole('list', { name: 'Check and release record' }).getByText('In review → Released').waitFor();
+  await panel.getByRole('list', { name: 'Check and release record' }).getByText('In check → Released').waitFor();
   await shot(page, 'purchasing-04-checker-released');
   await page.context().close();
 }
@@ -132,7 +132,7 @@ async function purchaserRequestsQuotation(browser: Browser): Promise<void> {
   const supplierName = ((await supplier.locator('.tc-supplier-title').textContent()) ?? '').split(' · ')[0]!.trim();
   expect(supplierName).not.toBe('');
   await supplier.getByLabel('Message to the supplier (optional)').fill('Please quote delivery to site within six weeks.');
-  await supplier.getByRole('button', { name: 'Review request for quotation' }).click();
+  await supplier.getByRole('button', { name: 'Preview request for quotation' }).click();
   await page
     .getByRole('dialog', { name: `Send this request to ${supplierName}?` })
     .getByRole('button', { name: 'Send request' })

@@ -16,7 +16,7 @@ describe('application (e2e)', () => {
 
   it('GET /api/health is public and ok', async () => {
     const response = await t.http().get('/api/health').expect(200);
-    expect(response.body).toEqual({ status: 'ok' });
+    expect(response.body).toEqual({ status: 'ok', demo: true });
   });
 
   it('answers unknown /api routes with a JSON 404', async () => {

@@ -20,3 +20,4 @@ export * from './identification/index.js';
 export * from './tap-test/index.js';
 export * from './restraint/index.js';
 export * from './whole-machine/index.js';
+export * from './glossary/index.js';

@@ -52,7 +52,7 @@ export class MountsService {
    */
   async search(query: SearchMountsQueryDto): Promise<{ items: Mount[]; total: number }> {
     if (query.minLoadN !== undefined && query.maxLoadN !== undefined && query.minLoadN > query.maxLoadN) {
-      throw validationFailed([{ field: 'maxLoadN', message: 'maxLoadN must not be less than minLoadN' }]);
+      throw validationFailed([{ field: 'maxLoadN', message: 'The highest load must not be less than the lowest load' }]);
     }
     const page = query.page ?? 1;
     const pageSize = query.pageSize ?? 50;
@@ -194,7 +194,7 @@ export class MountsService {
 
   private async assertSupplierExists(supplierId: number): Promise<void> {
     if (!(await this.suppliers.existsBy({ id: supplierId }))) {
-      throw validationFailed([{ field: 'supplierId', message: `supplier ${supplierId} does not exist` }]);
+      throw validationFailed([{ field: 'supplierId', message: `Supplier number ${supplierId} does not exist` }]);
     }
   }
 

@@ -16,7 +16,7 @@ import { DesignsService } from './designs.service.js';
 export const DEMO_PROJECT = {
   name: 'North Loop Chilled Water Plant',
   site: 'Harbour Street Energy Centre',
-  client: 'Eastmarch Civic Utilities',
+  client: 'Brellowin Utilities Cooperative',
   description: 'Invented demo project: end-suction chilled-water pumps on steel base frames, isolated from a plant-room slab.',
 } as const;
 

@@ -22,7 +22,7 @@ import type { UpdateDesignDto } from './dto/update-design.dto.js';
 
 export const STALE_VERSION = 'This design was changed by someone else; reload it';
 export const FROZEN = 'Released designs are frozen; start a new revision';
-export const IN_REVIEW = 'This design is in review; it can be changed again once it is back in draft';
+export const IN_REVIEW = 'This design is in check; it can be changed again once it is back in draft';
 const DUPLICATE_NAME = 'A design with this name and revision already exists in this project';
 
 /** A DTO instance as the plain JSON that is stored (drops undefined fields and class prototypes). */
@@ -224,7 +224,9 @@ function choiceOf(dto: UpdateDesignDto): CandidateChoice | null {
     if (!/^\d+:.+$/.test(dto.chosenSeriesId)) {
       throw new BadRequestException({
         message: 'Validation failed',
-        errors: [{ field: 'chosenSeriesId', message: 'chosenSeriesId must look like "<supplierId>:<series>"' }],
+        errors: [
+          { field: 'chosenSeriesId', message: 'The chosen series must be given as the supplier number, a colon and the series name' },
+        ],
       });
     }
     return { seriesId: dto.chosenSeriesId };

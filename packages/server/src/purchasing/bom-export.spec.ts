@@ -2,7 +2,8 @@ import { describe, expect, it } from '@jest/globals';
 import { parse } from 'csv-parse/sync';
 import ExcelJS from 'exceljs';
 import type { BomLine } from '../selection/selection.types.js';
-import { BOM_CSV_COLUMNS, DRAFT_MARK, bomCsv, bomTotals, bomXlsx, exportFileName } from './bom-export.js';
+import { cautionLines } from '@tacet/vibration';
+import { BOM_CSV_COLUMNS, DRAFT_MARK, bomCsv, bomTotals, bomXlsx, exportFileName, quoteBomCsv } from './bom-export.js';
 
 const line = (fields: Partial<BomLine>): BomLine => ({
   supplier: { id: 1, name: 'Invented Springs' },
@@ -27,10 +28,28 @@ describe('BOM exports', () => {
         ],
         false,
       ),
+      { relax_column_count: true },
     ) as string[][];
     expect(rows[0]).toEqual([...BOM_CSV_COLUMNS]);
     expect(rows[1]).toEqual(['Invented Springs', 'IS-100', '2', 'A B', '10.25', '20.5', 'USD', '14']);
     expect(rows[2]).toEqual(['Invented Springs', 'IS-200', '1', 'C', '', '', 'USD', '']);
+    expect(rows.slice(3)).toEqual(cautionLines('design').map((caution) => [caution]));
+  });
+
+  it('CSV and XLSX end with the cautions of the design, the seismic one when the design asks for it', async () => {
+    const withRestraint = cautionLines('design', { restraint: true });
+    const rows = parse(bomCsv([line({})], false, withRestraint), { relax_column_count: true }) as string[][];
+    expect(rows.slice(2).map((row) => row[0])).toEqual(withRestraint);
+    expect(withRestraint.join(' ')).toMatch(/does not size anchorage/);
+    const book = new ExcelJS.Workbook();
+    const xlsx = await bomXlsx([line({})], { projectName: 'P', designName: 'D', revision: 1, draft: false, cautions: withRestraint });
+    await book.xlsx.load(xlsx as unknown as ArrayBuffer);
+    const texts = book.worksheets[0].getColumn(1).values.filter((v): v is string => typeof v === 'string');
+    expect(texts).toEqual(expect.arrayContaining(withRestraint));
+    const quote = parse(quoteBomCsv([{ supplierName: 'S', partNumber: 'P', quantity: 2, quantityPerMachine: 1, mountPoints: ['A'] }], 2), {
+      relax_column_count: true,
+    }) as string[][];
+    expect(quote.slice(2).map((row) => row[0])).toEqual(cautionLines('supplier'));
   });
 
   it('CSV: numbers without binary noise (a price converted or summed in floating point)', () => {
@@ -41,7 +60,7 @@ describe('BOM exports', () => {
 
   it('CSV: text a spreadsheet would run as a formula is neutralised (OWASP CSV injection)', () => {
     const hostile = bomCsv([line({ supplier: { id: 1, name: '=HYPERLINK("http://x")' }, partNumber: '+1-2', mountPoints: ['@A'] })], false);
-    const [, row] = parse(hostile) as string[][];
+    const [, row] = parse(hostile, { relax_column_count: true }) as string[][];
     expect(row[0]).toBe(`'=HYPERLINK("http://x")`);
     expect(row[1]).toBe(`'+1-2`);
     expect(row[3]).toBe(`'@A`);

@@ -1,6 +1,7 @@
 import { stringify } from 'csv-stringify/sync';
 import { exportNumber } from '@tacet/vibration';
 import ExcelJS from 'exceljs';
+import { cautionLines } from '@tacet/vibration';
 import type { BomLine } from '../selection/selection.types.js';
 
 /** Column names of the BOM CSV (our own; documented in the contract and DEVELOPERS.md). */
@@ -22,6 +23,8 @@ export interface BomHeading {
   revision: number;
   /** Not released: the export is marked DRAFT. */
   draft: boolean;
+  /** The caution lines the file ends with (the glossary's; a design's by default). */
+  cautions?: readonly string[];
 }
 
 export const DRAFT_MARK = 'DRAFT - not released; do not order from this bill of materials';
@@ -61,9 +64,10 @@ export function bomTotals(lines: readonly BomLine[]): BomTotal[] {
 /**
  * The BOM as CSV: a header of BOM_CSV_COLUMNS, one row per line. Text that a spreadsheet would
  * read as a formula (= + - @, tab, CR) is prefixed with a quote (csv-stringify `escape_formulas`).
- * A draft gets one marking line before the header. Numbers are written without binary noise (exportNumber).
+ * A draft gets one marking line before the header; the cautions (one cell each) follow the lines.
+ * Numbers are written without binary noise (exportNumber).
  */
-export function bomCsv(lines: readonly BomLine[], draft: boolean): string {
+export function bomCsv(lines: readonly BomLine[], draft: boolean, cautions: readonly string[] = cautionLines('design')): string {
   const rows = lines.map((line) => [
     line.supplier.name,
     line.partNumber,
@@ -75,7 +79,24 @@ export function bomCsv(lines: readonly BomLine[], draft: boolean): string {
     line.leadTimeDays ?? '',
   ]);
   const body = stringify(rows, { header: true, columns: [...BOM_CSV_COLUMNS], escape_formulas: true });
-  return draft ? `${stringify([[DRAFT_MARK]])}${body}` : body;
+  return `${draft ? stringify([[DRAFT_MARK]]) : ''}${body}${cautionRows(cautions)}`;
+}
+
+/** The cautions as one-cell CSV rows. */
+function cautionRows(cautions: readonly string[]): string {
+  return cautions.length
+    ? stringify(
+        cautions.map((caution) => [caution]),
+        { escape_formulas: true },
+      )
+    : '';
+}
+
+/** The cautions under a sheet's table, after an empty row. */
+function addCautionRows(sheet: ExcelJS.Worksheet, cautions: readonly string[]): void {
+  if (cautions.length === 0) return;
+  sheet.addRow([]);
+  for (const caution of cautions) sheet.addRow([caution]).font = { italic: true };
 }
 
 /** Headers of the XLSX sheet, with units. */
@@ -115,6 +136,7 @@ export async function bomXlsx(lines: readonly BomLine[], heading: BomHeading): P
     const row = sheet.addRow([`Total (${total.currency})`, null, total.quantity, null, null, total.amount, total.currency, null]);
     row.font = { bold: true };
   }
+  addCautionRows(sheet, heading.cautions ?? cautionLines('design'));
   sheet.getColumn(5).numFmt = '#,##0.00';
   sheet.getColumn(6).numFmt = '#,##0.00';
   [28, 18, 14, 18, 12, 14, 10, 16].forEach((width, index) => (sheet.getColumn(index + 1).width = width));
@@ -134,6 +156,7 @@ export interface QuoteLine {
 /** Columns of the BOM for quoting sent to a supplier (our own): part, quantity, placement — never a price. */
 export const QUOTE_CSV_COLUMNS = ['supplier', 'part_number', 'quantity', 'quantity_per_machine', 'machines', 'mount_points'] as const;
 
+/** The list for quoting as CSV; it ends with the cautions a supplier gets. */
 export function quoteBomCsv(lines: readonly QuoteLine[], machineCount: number): string {
   const rows = lines.map((line) => [
     line.supplierName,
@@ -143,7 +166,7 @@ export function quoteBomCsv(lines: readonly QuoteLine[], machineCount: number): 
     machineCount,
     line.mountPoints.join(' '),
   ]);
-  return stringify(rows, { header: true, columns: [...QUOTE_CSV_COLUMNS], escape_formulas: true });
+  return `${stringify(rows, { header: true, columns: [...QUOTE_CSV_COLUMNS], escape_formulas: true })}${cautionRows(cautionLines('supplier'))}`;
 }
 
 export async function quoteBomXlsx(lines: readonly QuoteLine[], heading: BomHeading, machineCount: number): Promise<Buffer> {
@@ -161,6 +184,7 @@ export async function quoteBomXlsx(lines: readonly QuoteLine[], heading: BomHead
   for (const line of lines) {
     sheet.addRow([line.supplierName, line.partNumber, line.quantity, line.quantityPerMachine, machineCount, line.mountPoints.join(' ')]);
   }
+  addCautionRows(sheet, cautionLines('supplier'));
   [28, 18, 14, 16, 10, 28].forEach((width, index) => (sheet.getColumn(index + 1).width = width));
   return Buffer.from(await workbook.xlsx.writeBuffer());
 }

@@ -1,10 +1,18 @@
 import { createRequire } from 'node:module';
 import {
+  DESIGN_SECTIONS,
+  INPUT_LABELS,
+  RESULT_LABELS,
+  cautionsFor,
   describeModeMotion,
+  designStateWords,
   formatDecimal,
   formatMeasure,
+  formatMoney,
+  formatUtilisation,
   hystereticDamping,
   logSpace,
+  mountTypeLabel,
   SENTENCE_DECIMALS,
   toDisplay,
   transmissibility,
@@ -24,12 +32,6 @@ import { restraintReportLines } from './report-restraint.js';
 import { speedChart, wholeMachineReportLines } from './report-whole-machine.js';
 import { verdictReportLines } from './report-verdict.js';
 import { DEFAULT_WEIGHT_MARGIN_PCT } from '../selection/selection-problem.js';
-
-/** The caution every report carries (PRODUCT.md, "Cautions the product shows"). */
-export const REPORT_CAUTION =
-  'The model assumes a rigid machine on linear mounts over a rigid support (or a support of the stiffness given, as a spring). Results are for preliminary sizing: ' +
-  'seismic and wind restraint, snubbers, flexible pipe and cable connections, flexible floors and guarding follow ' +
-  'local codes and need review by a qualified, licensed engineer.';
 
 interface ReportFonts {
   regular: string;
@@ -137,14 +139,18 @@ export function designReportPdf(design: Design, options: ReportOptions): Promise
 
   doc.font('heading').fontSize(18).text('Mount selection — calculation report');
   doc.font('body').fontSize(11).text(`Project: ${design.project.name}`);
-  doc.text(`Design: ${design.name}, revision ${design.revision} (${design.status.replace('_', ' ')})`);
+  doc.text(`Design: ${design.name}, revision ${design.revision} (${designStateWords(design.status)})`);
   doc.text(`Author: ${design.author.name}    Checked and released by: ${design.checker?.name ?? '—'}`);
   if (options.releasedAt) doc.text(`Released: ${options.releasedAt.toISOString().slice(0, 10)}`);
   if (options.releaseNotes) doc.text(`Release notes: ${options.releaseNotes}`);
   if (draft) doc.font('heading').fillColor('#c00000').text('DRAFT — not checked or released; not for purchasing or construction.');
 
-  heading('Cautions');
-  body(REPORT_CAUTION);
+  const cautions = cautionsFor('design', { restraint: !!design.input.restraint });
+  const cautionSection = () => {
+    heading('Cautions');
+    for (const caution of cautions) body(`${caution.title}: ${caution.text}`);
+  };
+  cautionSection();
 
   const snapshot = design.snapshot;
   heading('Equipment');
@@ -163,13 +169,15 @@ export function designReportPdf(design: Design, options: ReportOptions): Promise
 
   const operating = design.input.operating;
   if (operating) {
-    heading('Operating conditions');
+    heading(DESIGN_SECTIONS.running);
     if (operating.speedRangeRpm)
-      body(`Speed range ${fmt(operating.speedRangeRpm.min, 0)}–${fmt(operating.speedRangeRpm.max, 0)} rpm (the lowest speed governs)`);
-    else if (operating.speedRpm !== undefined) body(`Speed ${fmt(operating.speedRpm, 0)} rpm`);
-    body(`Orders: ${(operating.orders ?? []).map((o) => `${o}×`).join(', ') || '—'}`);
-    if (operating.vaneCount) body(`Vanes or blades: ${operating.vaneCount}`);
-    if (operating.lineFrequencyHz) body(`Electrical line frequency: ${fmt(operating.lineFrequencyHz, 0)} Hz`);
+      body(
+        `${INPUT_LABELS.speedRange} ${fmt(operating.speedRangeRpm.min, 0)}–${fmt(operating.speedRangeRpm.max, 0)} rpm (the lowest speed governs)`,
+      );
+    else if (operating.speedRpm !== undefined) body(`${INPUT_LABELS.speed} ${fmt(operating.speedRpm, 0)} rpm`);
+    body(`${INPUT_LABELS.orders}: ${(operating.orders ?? []).map((o) => `${o}×`).join(', ') || '—'}`);
+    if (operating.vaneCount) body(`${INPUT_LABELS.vaneCount}: ${operating.vaneCount}`);
+    if (operating.lineFrequencyHz) body(`${INPUT_LABELS.supplyFrequency}: ${fmt(operating.lineFrequencyHz, 0)} Hz`);
     if (operating.skipBandsRpm?.length)
       body(`Skip bands: ${operating.skipBandsRpm.map((b) => `${fmt(b.min, 0)}–${fmt(b.max, 0)} rpm`).join(', ')}`);
     if (operating.motorPoles !== undefined) body(`Motor poles: ${operating.motorPoles}`);
@@ -178,35 +186,36 @@ export function designReportPdf(design: Design, options: ReportOptions): Promise
 
   const criteria = design.input.criteria;
   if (criteria) {
-    heading('Criteria');
-    body(`Minimum isolation ${fmt(criteria.minIsolationPct, 1)} % of the whole machine over the running range`);
+    heading(DESIGN_SECTIONS.requirements);
+    body(`${INPUT_LABELS.minIsolation} ${fmt(criteria.minIsolationPct, 1)} % of the whole machine over the running range`);
     if (criteria.stiffnessTolerancePct !== undefined) body(`Stiffness tolerance ±${fmt(criteria.stiffnessTolerancePct, 1)} %`);
     if (criteria.maxResonantMotionMm !== undefined)
-      body(`Largest motion passing a mode on start-up ${fmt(criteria.maxResonantMotionMm, 1)} mm`);
+      body(`Largest motion passing a mode on start-up ${q('deflection', criteria.maxResonantMotionMm / 1000)}`);
     body(
-      `Load utilisation between ${fmt(criteria.minUtilization * 100, 0)} % and ${fmt(criteria.maxUtilization * 100, 0)} % of the rated load` +
+      `${INPUT_LABELS.utilisation} between ${formatUtilisation(criteria.minUtilization)} and ${formatUtilisation(criteria.maxUtilization)} of the rated load` +
         `${criteria.weightMarginPct ? `, the upper limit with the ${formatDecimal(criteria.weightMarginPct, 1)} % weight margin on the load` : ''}`,
     );
     const margin = criteria.weightMarginPct;
     body(
-      `Weight margin ${fmt(margin ?? DEFAULT_WEIGHT_MARGIN_PCT, 0)} %${margin === undefined ? ' (the default for weights not yet final)' : ''}`,
+      `${INPUT_LABELS.weightMargin} ${fmt(margin ?? DEFAULT_WEIGHT_MARGIN_PCT, 0)} %${margin === undefined ? ' (the default for weights not yet final)' : ''}`,
     );
-    if (criteria.ambientTempC !== undefined) body(`Ambient temperature ${q('temperature', criteria.ambientTempC)}`);
-    if (criteria.mountTypes?.length) body(`Mount types: ${criteria.mountTypes.map((t) => t.replace(/_/g, ' ')).join(', ')}`);
+    if (criteria.ambientTempC !== undefined) body(`${INPUT_LABELS.ambientTemperature} ${q('temperature', criteria.ambientTempC)}`);
+    if (criteria.mountTypes?.length)
+      body(`${INPUT_LABELS.mountTypes}: ${criteria.mountTypes.map((t) => mountTypeLabel(t).toLowerCase()).join(', ')}`);
   }
 
-  heading('Disturbing frequencies');
+  heading(INPUT_LABELS.disturbingFrequencies);
   for (const frequency of options.disturbingFrequencies) body(`${fmt(frequency.frequencyHz, 2)} Hz — ${frequency.label}`);
 
   const candidate = snapshot?.candidate ?? design.chosen;
-  heading('Chosen mounts');
+  heading(RESULT_LABELS.chosenMounts);
   if (!candidate) {
     body('No mounts chosen yet.');
   } else {
     body(`${candidate.label} (${candidate.supplier.name})`);
     body(`Vertical natural frequency (uncoupled bounce estimate): ${fmt(candidate.verticalNaturalFrequencyHz, 2)} Hz`);
     body(
-      `Transmissibility at resonance: ${fmt(candidate.resonanceAmplification, 1)}; level difference between points: ${q('deflection', candidate.levelErrorMm / 1000)}`,
+      `${RESULT_LABELS.resonance}: ${fmt(candidate.resonanceAmplification, 1)}; ${RESULT_LABELS.levelError.toLowerCase()} between points: ${q('deflection', candidate.levelErrorMm / 1000)}`,
     );
     heading('Mount points');
     for (const point of candidate.perPoint) {
@@ -232,7 +241,7 @@ export function designReportPdf(design: Design, options: ReportOptions): Promise
     for (const line of passageReportLines(snapshot?.wholeMachine, candidate)) body(inReaderUnits(line, units));
     const mounts = snapshot?.mounts ?? [];
     if (mounts.length) {
-      heading('Chosen mounts — catalog data as frozen');
+      heading(`${RESULT_LABELS.chosenMounts} — catalog data as frozen`);
       for (const mount of mounts) body(mountLine(mount, units));
     }
     const damping = mounts.length ? dampingOf(mounts[0]) : undefined;
@@ -250,7 +259,7 @@ export function designReportPdf(design: Design, options: ReportOptions): Promise
   if (options.verifications?.length) asBuiltSection(doc, options.verifications, heading, body, units);
 
   doc.addPage();
-  doc.font('heading').fontSize(16).fillColor('black').text('Bill of materials');
+  doc.font('heading').fontSize(16).fillColor('black').text(RESULT_LABELS.billOfMaterials);
   const lines = design.bom ?? [];
   if (lines.length === 0) body('No mounts chosen yet.');
   const withPrices = options.prices ?? true;
@@ -262,7 +271,7 @@ export function designReportPdf(design: Design, options: ReportOptions): Promise
     for (const line of lines) {
       body(
         `${line.supplier.name} ${line.partNumber} × ${line.quantity} (points ${line.mountPoints.join(', ')}): ` +
-          `${line.unitPrice === null ? 'price on request' : `${line.unitPrice.toFixed(2)} ${line.currency} each, ${line.extendedPrice?.toFixed(2)} ${line.currency}`}` +
+          `${line.unitPrice === null ? 'price on request' : `${formatMoney(line.unitPrice, line.currency)} each, ${formatMoney(line.extendedPrice ?? 0, line.currency)}`}` +
           `${line.leadTimeDays === null ? '' : `, lead time ${line.leadTimeDays} days`}`,
       );
     }
@@ -271,7 +280,7 @@ export function designReportPdf(design: Design, options: ReportOptions): Promise
         .font('heading')
         .fontSize(10)
         .text(
-          `Total: ${total.quantity} mounts, ${total.amount.toFixed(2)} ${total.currency}${total.unpricedLines ? ` (${total.unpricedLines} line(s) without a price)` : ''}`,
+          `Total: ${total.quantity} mounts, ${formatMoney(total.amount, total.currency)}${total.unpricedLines ? ` (${total.unpricedLines} line(s) without a price)` : ''}`,
         );
     }
   }
@@ -281,8 +290,7 @@ export function designReportPdf(design: Design, options: ReportOptions): Promise
       `Mount data and every figure above were frozen on ${snapshot.takenAt.slice(0, 10)} when the mounts were chosen; later catalog changes do not alter them.`,
     );
   }
-  heading('Cautions');
-  body(REPORT_CAUTION);
+  cautionSection();
 
   pageFooters(doc, `${design.project.name} — ${design.name}, revision ${design.revision}`, watermark);
   doc.end();
@@ -350,7 +358,7 @@ function mountLine(m: MountSnapshot, units: UnitSystem): string {
   const q = (quantity: Parameters<typeof formatMeasure>[0], si: number) => formatMeasure(quantity, si, units);
   const damping = m.dampingModel === 'hysteretic' ? `loss factor ${m.lossFactor}` : `damping ratio ${m.dampingRatio}`;
   return (
-    `${m.supplier.name} ${m.partNumber} (${m.mountType.replace(/_/g, ' ')}${m.series ? `, series ${m.series}` : ''}): ` +
+    `${m.supplier.name} ${m.partNumber} (${mountTypeLabel(m.mountType).toLowerCase()}${m.series ? `, series ${m.series}` : ''}): ` +
     `rated load ${q('force', m.ratedLoadN)}, vertical stiffness ${q('stiffness', m.verticalStiffnessNPerM)}` +
     `${m.horizontalStiffnessNPerM === null ? '' : `, horizontal ${q('stiffness', m.horizontalStiffnessNPerM)}`}` +
     `, dynamic-to-static ratio ${m.dynamicStiffnessRatio ?? 'not given'}, ${damping}` +

@@ -1,6 +1,6 @@
 import { ConflictException, ForbiddenException, Injectable } from '@nestjs/common';
 import { InjectRepository } from '@nestjs/typeorm';
-import { isVibrationInputError, type UnitSystem } from '@tacet/vibration';
+import { cautionLines, isVibrationInputError, type UnitSystem } from '@tacet/vibration';
 import { In, type Repository } from 'typeorm';
 import { PURCHASER_VISIBLE_STATUSES } from '../designs/design-status.js';
 import { Design } from '../designs/design.entity.js';
@@ -29,6 +29,9 @@ export interface ExportFile {
   content: Buffer;
 }
 
+/** The caution lines of a design's files (the seismic one when it asks for a restraint check). */
+const designCautions = (design: Pick<Design, 'input'>) => cautionLines('design', { restraint: !!design.input.restraint });
+
 const isReleased = (design: Pick<Design, 'status'>) => PURCHASER_VISIBLE_STATUSES.includes(design.status);
 
 /** Bills of materials, calculation reports and the purchasing queue of released designs. */
@@ -48,7 +51,7 @@ export class PurchasingService {
     return {
       fileName: exportFileName(heading, 'bom.csv'),
       contentType: 'text/csv; charset=utf-8',
-      content: Buffer.from(bomCsv(design.bom ?? [], heading.draft), 'utf8'),
+      content: Buffer.from(bomCsv(design.bom ?? [], heading.draft, designCautions(design)), 'utf8'),
     };
   }
 
@@ -57,7 +60,7 @@ export class PurchasingService {
     return {
       fileName: exportFileName(heading, 'bom.xlsx'),
       contentType: 'application/vnd.openxmlformats-officedocument.spreadsheetml.sheet',
-      content: await bomXlsx(design.bom ?? [], heading),
+      content: await bomXlsx(design.bom ?? [], { ...heading, cautions: designCautions(design) }),
     };
   }
 

@@ -1,3 +1,4 @@
+import { cautionLines } from '@tacet/vibration';
 import type { QuoteLine } from './bom-export.js';
 
 /**
@@ -31,6 +32,8 @@ export function rfqNotice(args: {
     'Please give a unit price and a lead time for each line, and how long your quote holds.',
     'The list is attached as CSV and Excel files, with the calculation report.',
     `Please reply to ${args.sender.name} <${args.sender.email}>, quoting reference ${reference}.`,
+    '',
+    ...cautionLines('supplier'),
   ].join('\n');
   return { subject: `Request for quotation: ${design.name} rev ${design.revision} (${design.projectName})`, text };
 }

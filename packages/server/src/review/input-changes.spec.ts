@@ -46,7 +46,7 @@ describe('inputChanges (what changed between two submissions)', () => {
     expect(byField['operating.speedRpm']).toMatchObject({ label: 'Running speed', quantity: 'speed' });
     expect(byField['operating.speedRpm'].after).toBeCloseTo(1780 / 60, 12); // rpm → Hz (SI)
     expect(byField['criteria.minUtilization']).toMatchObject({
-      label: 'Lowest load utilisation',
+      label: 'Lowest utilisation',
       quantity: 'percent',
       before: 50,
       after: 60,

@@ -1,4 +1,14 @@
-import { KG_PER_LB, M_PER_IN, rpmToHz, toDisplay, unitLabel, type Quantity, type UnitSystem } from '@tacet/vibration';
+import {
+  INPUT_LABELS,
+  KG_PER_LB,
+  M_PER_IN,
+  mountTypeLabel,
+  rpmToHz,
+  toDisplay,
+  unitLabel,
+  type Quantity,
+  type UnitSystem,
+} from '@tacet/vibration';
 
 /**
  * What changed in a design's input between two submissions for check, field by field. The
@@ -77,10 +87,10 @@ const RULES: Record<string, LeafRule> = {
         .map((o) => `${o}×`)
         .join(', '),
   },
-  'operating.vaneCount': { label: 'Vanes or blades', quantity: 'count' },
-  'operating.lineFrequencyHz': { label: 'Supply frequency', quantity: 'frequency' },
+  'operating.vaneCount': { label: INPUT_LABELS.vaneCount, quantity: 'count' },
+  'operating.lineFrequencyHz': { label: INPUT_LABELS.supplyFrequency, quantity: 'frequency' },
   'operating.extraFrequenciesHz': {
-    label: 'Other disturbing frequencies',
+    label: INPUT_LABELS.furtherFrequencies,
     quantity: null,
     words: (v) =>
       list(v)
@@ -107,22 +117,22 @@ const RULES: Record<string, LeafRule> = {
   'operating.sources.amplitudeN': { label: 'amplitude', quantity: 'force' },
   'operating.sources.frequencyHz': { label: 'frequency', quantity: 'frequency' },
   'criteria.stiffnessTolerancePct': { label: 'Stiffness tolerance', quantity: 'percent' },
-  'criteria.minIsolationPct': { label: 'Minimum isolation', quantity: 'percent' },
-  'criteria.minUtilization': { label: 'Lowest load utilisation', quantity: 'percent', scale: (u) => u * 100 },
-  'criteria.maxUtilization': { label: 'Highest load utilisation', quantity: 'percent', scale: (u) => u * 100 },
-  'criteria.ambientTempC': { label: 'Ambient temperature', quantity: 'temperature' },
-  'criteria.weightMarginPct': { label: 'Weight margin', quantity: 'percent' },
+  'criteria.minIsolationPct': { label: INPUT_LABELS.minIsolation, quantity: 'percent' },
+  'criteria.minUtilization': { label: 'Lowest utilisation', quantity: 'percent', scale: (u) => u * 100 },
+  'criteria.maxUtilization': { label: 'Highest utilisation', quantity: 'percent', scale: (u) => u * 100 },
+  'criteria.ambientTempC': { label: INPUT_LABELS.ambientTemperature, quantity: 'temperature' },
+  'criteria.weightMarginPct': { label: INPUT_LABELS.weightMargin, quantity: 'percent' },
   'criteria.maxResonantMotionMm': { label: 'Largest motion on start-up', quantity: 'deflection', scale: (mm) => mm / 1000 },
   'criteria.mountTypes': {
-    label: 'Mount types allowed',
+    label: INPUT_LABELS.mountTypes,
     quantity: null,
     words: (v) =>
       list(v)
-        .map((t) => String(t).replace(/_/g, ' '))
+        .map((t) => mountTypeLabel(String(t)).toLowerCase())
         .join(', '),
   },
   'criteria.supplierIds': {
-    label: 'Suppliers',
+    label: INPUT_LABELS.suppliers,
     quantity: null,
     words: (v, context) =>
       list(v)

@@ -1,3 +1,4 @@
+import { designStateWords } from '@tacet/vibration';
 import type { DesignStatus } from '../designs/design-status.js';
 import type { User } from '../users/user.entity.js';
 
@@ -14,12 +15,12 @@ export const REVIEW_MESSAGES = {
   checkerNotAllowed: 'Ask an active engineer other than the author of this design to check it',
 } as const;
 
-/** The states in words (messages never show `in_review`). */
+/** The states in words, from the glossary (messages never show `in_review`). */
 export const STATE_WORDS: Record<DesignStatus, string> = {
-  draft: 'draft',
-  in_review: 'in check',
-  released: 'released',
-  superseded: 'superseded',
+  draft: designStateWords('draft'),
+  in_review: designStateWords('in_review'),
+  released: designStateWords('released'),
+  superseded: designStateWords('superseded'),
 };
 
 /** Fields of a transition that belong to another move: a note and a named checker go only with sending for check. */

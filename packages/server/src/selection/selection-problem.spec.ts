@@ -27,7 +27,7 @@ describe('designFrequencies', () => {
   it('evaluates a speed range at both ends and adds the extra frequencies', () => {
     const list = designFrequencies({ speedRangeRpm: { min: 900, max: 1500 }, orders: [1], extraFrequenciesHz: [7.5] });
     expect(list.map((f) => f.frequencyHz)).toEqual([7.5, 15, 25]);
-    expect(list[0].label).toBe('extra 7.5 Hz');
+    expect(list[0].label).toBe('further 7.5 Hz');
     expect(list[1].label).toBe('1× shaft at 900 rpm (minimum speed)');
   });
 
@@ -86,7 +86,7 @@ describe('prepareProblem', () => {
     expect(error).toBeInstanceOf(BadRequestException);
     expect(error.getResponse()).toEqual({
       message: 'Validation failed',
-      errors: [{ field: 'input.mountPoints', message: expect.stringMatching(/^input\.mountPoints: mounts are collinear/) }],
+      errors: [{ field: 'input.mountPoints', message: expect.stringMatching(/^Mounts are collinear/) }],
     });
     expect(() =>
       withInputErrors(() => {

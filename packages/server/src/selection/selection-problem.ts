@@ -1,6 +1,7 @@
 import { BadRequestException } from '@nestjs/common';
 import {
   disturbingFrequencies,
+  inputProblemWords,
   isInsideConvexHull,
   isolationDb,
   isVibrationInputError,
@@ -18,6 +19,7 @@ import {
   type ResolvedOperating,
 } from '@tacet/vibration';
 import type { FieldError } from '../common/filters/all-exceptions.filter.js';
+import { messageInWords } from '../common/words.js';
 import type { MountType } from '../catalog/mount-rules.js';
 import {
   SELECTION_LIMITS,
@@ -144,7 +146,7 @@ function apiField(field: string): string {
 export function vibrationInputToBadRequest(error: VibrationInputError, prefix = ''): BadRequestException {
   const own = error.message.startsWith(`${error.field}: `) ? error.message.slice(error.field.length + 2) : error.message;
   const field = prefix ? `${prefix}.${apiField(error.field)}` : apiField(error.field);
-  const errors: FieldError[] = [{ field, message: `${field}: ${own}` }];
+  const errors: FieldError[] = [{ field, message: messageInWords(inputProblemWords(field, own)) }];
   return new BadRequestException({ message: 'Validation failed', errors });
 }
 
@@ -296,12 +298,15 @@ export function designFrequencies(operating: OperatingConditions): LabelledFrequ
   } catch (error) {
     if (isVibrationInputError(error) && !error.field.startsWith('operating')) {
       const field = error.field === 'machine' ? 'operating' : `operating.${error.field}`;
-      const own = error.message.slice(error.field.length + 2);
+      const own =
+        error.field === 'machine'
+          ? error.message.slice(error.field.length + 2).replace(/^gives /, 'give ')
+          : error.message.slice(error.field.length + 2);
       throw new VibrationInputError(field, own, error.code);
     }
     throw error;
   }
-  for (const hz of operating.extraFrequenciesHz ?? []) list.push({ frequencyHz: hz, label: `extra ${formatHz(hz)}` });
+  for (const hz of operating.extraFrequenciesHz ?? []) list.push({ frequencyHz: hz, label: `further ${formatHz(hz)}` });
   for (const source of sources) {
     const hz = source.frequencyHz;
     if (hz !== undefined && !list.some((f) => f.frequencyHz === hz))
@@ -310,12 +315,12 @@ export function designFrequencies(operating: OperatingConditions): LabelledFrequ
   if (list.length === 0) {
     throw new VibrationInputError(
       'operating',
-      'gives no disturbing frequency: set a speed, a line frequency or extra frequencies',
+      'give no disturbing frequency: set a speed, a supply frequency or further frequencies',
       'empty',
     );
   }
   if (list.length > SELECTION_LIMITS.frequencies) {
-    throw new VibrationInputError('operating', `gives ${list.length} disturbing frequencies; at most ${SELECTION_LIMITS.frequencies}`);
+    throw new VibrationInputError('operating', `give ${list.length} disturbing frequencies; at most ${SELECTION_LIMITS.frequencies}`);
   }
   return list.sort((a, b) => a.frequencyHz - b.frequencyHz);
 }

@@ -192,7 +192,7 @@ export function parseSeriesId(seriesId: string, field = 'chosenSeriesId'): { sup
   if (!match) {
     throw new BadRequestException({
       message: 'Validation failed',
-      errors: [{ field, message: `${field} must look like "<supplierId>:<series>"` }],
+      errors: [{ field, message: 'The chosen series must be given as the supplier number, a colon and the series name' }],
     });
   }
   return { supplierId: Number(match[1]), series: match[2] };

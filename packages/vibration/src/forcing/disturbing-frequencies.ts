@@ -148,7 +148,7 @@ export function disturbingFrequencies(machine: MachineForcingData): DisturbingFr
     out.push({ frequencyHz: 2 * line, label: `2× line (${formatHz(line)} Hz supply)`, source: 'electrical', order: 2 });
   }
   if (out.length === 0) {
-    throw new VibrationInputError('machine', 'gives no disturbing frequency: set a speed or a line frequency', 'empty');
+    throw new VibrationInputError('machine', 'gives no disturbing frequency: set a speed or a supply frequency', 'empty');
   }
   return out.sort((a, b) => a.frequencyHz - b.frequencyHz);
 }

@@ -5,15 +5,6 @@ import { VibrationInputError } from '../errors/vibration-input-error.js';
 export const SEISMIC_CODE_EDITION = 'ASCE 7-16';
 
 /**
- * The caution that goes with every seismic restraint figure, on screen and in the report (one
- * source for both). docs/engineering/seismic-restraint.md §10.
- */
-export const SEISMIC_RESTRAINT_CAUTION =
-  `The seismic restraint check follows ${SEISMIC_CODE_EDITION} §13.3.1 only and compares the restraints with their catalog ratings; ` +
-  'it does not size anchorage. Anchorage of the restraints to the structure, the structure itself and the other provisions of the ' +
-  'code are the structural engineer of record’s; local codes and their amendments govern, and a licensed engineer reviews the result.';
-
-/**
  * Component amplification a_p and response modification R_p of ASCE 7-16 Table 13.6-1 for
  * vibration-isolated components and systems (spring- or elastomer-isolated, closely restrained by
  * snubbers or resilient stops; internally isolated): a_p = 2.5, R_p = 2.0. Values recalled from

@@ -1162,6 +1162,8 @@ export interface components {
     HealthDto: {
       /** @enum {string} */
       status: "ok";
+      /** @description Demo mode: demo accounts and data; the sign-in page mentions them only then */
+      demo: boolean;
     };
     HistoryEntryDto: {
       id: number;

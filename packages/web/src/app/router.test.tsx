@@ -56,7 +56,8 @@ describe('routing and guards', () => {
     expect(within(areas).getByText(/import the catalog from CSV/)).toBeInTheDocument();
     const cautions = screen.getByRole('region', { name: 'Cautions' });
     expect(cautions).toHaveTextContent('licensed engineer');
-    expect(cautions).toHaveTextContent('Seismic and wind restraint');
+    expect(cautions).toHaveTextContent('seismic and wind restraint');
+    expect(cautions).toHaveTextContent('confirmed with the supplier before purchase');
   });
 
   it('shows who is signed in and signs out', async () => {

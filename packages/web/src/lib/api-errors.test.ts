@@ -8,21 +8,23 @@ function apiError(status: number, data: unknown, code = 'ERR_BAD_REQUEST'): Axio
 }
 
 describe('errorMessage', () => {
-  it('lists every field problem with a readable field name', () => {
+  it('lists every field problem once, in the server’s words, with the list item it is about', () => {
     const error = apiError(400, {
       statusCode: 400,
       message: 'Validation failed',
       errors: [
-        { field: 'email', message: 'email must be an email' },
-        { field: 'password', message: 'password must be longer than or equal to 10 characters' },
-        { field: 'criteria.minIsolationPct', message: 'must not be greater than 100' },
+        { field: 'email', message: 'Email must be an email' },
+        { field: 'input.components.1.massKg', message: 'Mass must be a positive number' },
+        { field: 'input.mountPoints.2.x', message: 'X must be a number' },
+        { field: 'input.mountPoints.2.x', message: 'X must be a number' },
+        { field: 'criteria.minIsolationPct', message: 'Minimum isolation must be at most 100' },
       ],
     });
     expect(errorMessage(error)).toBe(
-      'Some fields need attention — Email: email must be an email; ' +
-        'Password: password must be longer than or equal to 10 characters; ' +
-        'Criteria › min isolation pct: must not be greater than 100.',
+      'Some fields need attention — Email must be an email; Component 2: Mass must be a positive number; ' +
+        'Mount point 3: X must be a number; Minimum isolation must be at most 100.',
     );
+    expect(errorMessage(error)).not.toMatch(/massKg|mountPoints|›/);
   });
 
   it('passes the server’s own sentence through', () => {

@@ -1,5 +1,7 @@
 import axios from 'axios';
 
+import { fieldPlace } from '@tacet/vibration';
+
 import type { ApiSchemas } from '@/api/schema';
 
 /** One field problem as the server reports it; `field` is the dotted property path. */
@@ -42,6 +44,16 @@ function sentence(text: string): string {
 }
 
 /**
+ * One field problem as a person reads it: the server's message (in words, naming the field), with
+ * the list item it is about in front when the path has one ("Component 2: Mass must be ...").
+ */
+function problemText(item: ApiFieldError): string {
+  const place = fieldPlace(item.field);
+  const message = item.message.replace(/[.]$/, '');
+  return place ? `${place.charAt(0).toUpperCase()}${place.slice(1)}: ${message}` : message;
+}
+
+/**
  * The server's field problems keyed by field path (first message per field), ready for
  * Formik's `setErrors`. Empty when the error carries none.
  */
@@ -79,8 +91,7 @@ export function errorMessage(error: unknown): string {
     }
     const fields = body?.errors?.filter((item) => item && typeof item.field === 'string') ?? [];
     if (fields.length > 0) {
-      const details = fields.map((item) => `${fieldLabel(item.field)}: ${item.message}`).join('; ');
-      return `Some fields need attention — ${details}.`;
+      return `Some fields need attention — ${[...new Set(fields.map(problemText))].join('; ')}.`;
     }
     if (body) {
       const messages = Array.isArray(body.message) ? body.message : [body.message];

@@ -27,10 +27,10 @@ describe('bodyShapeProblem', () => {
   it('refuses over-long arrays, over-wide objects and too many values in all', () => {
     expect(bodyShapeProblem({ components: Array(BODY_LIMITS.arrayLength + 1).fill({}) })).toEqual({
       field: 'components',
-      message: `components must contain no more than ${BODY_LIMITS.arrayLength} elements`,
+      message: `A list must have at most ${BODY_LIMITS.arrayLength} items`,
     });
     const wide = Object.fromEntries(Array.from({ length: BODY_LIMITS.objectKeys + 1 }, (_, i) => [`k${i}`, 1]));
-    expect(bodyShapeProblem(wide)?.message).toContain(`no more than ${BODY_LIMITS.objectKeys} properties`);
+    expect(bodyShapeProblem(wide)?.message).toContain(`more than ${BODY_LIMITS.objectKeys} fields`);
     const many = { a: Array.from({ length: 30 }, () => Array(BODY_LIMITS.arrayLength).fill(1)) };
     expect(bodyShapeProblem(many)?.message).toContain(`more than ${BODY_LIMITS.values} values`);
   });
@@ -38,14 +38,14 @@ describe('bodyShapeProblem', () => {
   it('refuses the prototype-pollution keys wherever they are', () => {
     for (const key of ['__proto__', 'constructor', 'prototype']) {
       const body = JSON.parse(`{"input":{"criteria":{"${key}":{"isAdmin":true}}}}`);
-      expect(bodyShapeProblem(body)).toEqual({ field: `input.criteria.${key}`, message: `property ${key} should not exist` });
+      expect(bodyShapeProblem(body)).toEqual({ field: `input.criteria.${key}`, message: 'This field name is not allowed' });
     }
   });
 
   it('refuses lone surrogates in values and keys (paired ones are fine)', () => {
-    expect(bodyShapeProblem(JSON.parse('{"name":"a\\ud800b"}'))).toEqual({ field: 'name', message: 'name must be valid Unicode text' });
+    expect(bodyShapeProblem(JSON.parse('{"name":"a\\ud800b"}'))).toEqual({ field: 'name', message: 'Text must be valid Unicode' });
     expect(bodyShapeProblem(JSON.parse('{"tags":["ok","\\udfff"]}'))?.field).toBe('tags.1');
-    expect(bodyShapeProblem(JSON.parse('{"\\ud800":1}'))?.message).toBe('property names must be valid Unicode text');
+    expect(bodyShapeProblem(JSON.parse('{"\\ud800":1}'))?.message).toBe('Field names must be valid Unicode text');
     expect(bodyShapeProblem(JSON.parse('{"name":"\\ud83d\\ude80"}'))).toBeNull();
   });
 });
@@ -65,7 +65,7 @@ describe('BodyShapePipe', () => {
     expect(refused).toBeInstanceOf(BadRequestException);
     expect((refused as BadRequestException).getResponse()).toEqual({
       message: 'Validation failed',
-      errors: [{ field: 'constructor', message: 'property constructor should not exist' }],
+      errors: [{ field: 'constructor', message: 'This field name is not allowed' }],
     });
     expect(pipe.transform(deep, { type: 'query' })).toBe(deep);
     expect(pipe.transform('42', { type: 'param' })).toBe('42');

@@ -33,17 +33,18 @@ export function bodyShapeProblem(body: unknown): FieldError | null {
   let values = 0;
   while (stack.length > 0) {
     const { value, path, depth } = stack.pop()!;
-    if (++values > BODY_LIMITS.values) return { field: path || 'body', message: `the body holds more than ${BODY_LIMITS.values} values` };
+    if (++values > BODY_LIMITS.values)
+      return { field: path || 'body', message: `The request holds more than ${BODY_LIMITS.values} values` };
     if (typeof value === 'string') {
-      if (LONE_SURROGATE.test(value)) return { field: path || 'body', message: `${path || 'body'} must be valid Unicode text` };
+      if (LONE_SURROGATE.test(value)) return { field: path || 'body', message: 'Text must be valid Unicode' };
       continue;
     }
     if (value === null || typeof value !== 'object') continue;
     const field = path || 'body';
-    if (depth >= BODY_LIMITS.depth) return { field, message: `${field} is nested more than ${BODY_LIMITS.depth} levels deep` };
+    if (depth >= BODY_LIMITS.depth) return { field, message: `The request is nested more than ${BODY_LIMITS.depth} levels deep` };
     if (Array.isArray(value)) {
       if (value.length > BODY_LIMITS.arrayLength) {
-        return { field, message: `${field} must contain no more than ${BODY_LIMITS.arrayLength} elements` };
+        return { field, message: `A list must have at most ${BODY_LIMITS.arrayLength} items` };
       }
       for (let index = value.length - 1; index >= 0; index--) {
         stack.push({ value: value[index], path: pathOf(path, index), depth: depth + 1 });
@@ -52,11 +53,11 @@ export function bodyShapeProblem(body: unknown): FieldError | null {
     }
     const keys = Object.keys(value);
     if (keys.length > BODY_LIMITS.objectKeys)
-      return { field, message: `${field} must have no more than ${BODY_LIMITS.objectKeys} properties` };
+      return { field, message: `A part of the request has more than ${BODY_LIMITS.objectKeys} fields` };
     for (const key of keys) {
       const keyPath = pathOf(path, key);
-      if (FORBIDDEN_KEYS.has(key)) return { field: keyPath, message: `property ${key} should not exist` };
-      if (LONE_SURROGATE.test(key)) return { field: keyPath, message: 'property names must be valid Unicode text' };
+      if (FORBIDDEN_KEYS.has(key)) return { field: keyPath, message: 'This field name is not allowed' };
+      if (LONE_SURROGATE.test(key)) return { field: keyPath, message: 'Field names must be valid Unicode text' };
       stack.push({ value: (value as Record<string, unknown>)[key], path: keyPath, depth: depth + 1 });
     }
   }

@@ -1,11 +1,15 @@
 import { BadRequestException, ValidationPipe, type ValidationError } from '@nestjs/common';
 import type { FieldError } from '../filters/all-exceptions.filter.js';
+import { messageInWords } from '../words.js';
 
-/** Flattens class-validator errors to `[{field, message}]` with dotted property paths. */
+/**
+ * Flattens class-validator errors to `[{field, message}]`: the dotted property path in `field`,
+ * the message in words (`Mass must be a positive number`, never `massKg`).
+ */
 export function toFieldErrors(errors: ValidationError[], parent = ''): FieldError[] {
   return errors.flatMap((error) => {
     const field = parent ? `${parent}.${error.property}` : error.property;
-    const own = Object.values(error.constraints ?? {}).map((message) => ({ field, message }));
+    const own = Object.values(error.constraints ?? {}).map((message) => ({ field, message: messageInWords(message, field) }));
     return [...own, ...toFieldErrors(error.children ?? [], field)];
   });
 }

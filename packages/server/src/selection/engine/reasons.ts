@@ -8,7 +8,7 @@
  * To word a new check: a function (context → sentences) and its row in REASONS, placed where its
  * sentence should come in the list.
  */
-import { describeModeMotion, isolationEfficiencyPct } from '@tacet/vibration';
+import { describeModeMotion, isolationEfficiencyPct, mountTypeLabel } from '@tacet/vibration';
 import { measure } from '../../common/units/reader-words.js';
 import { formatHz, formatNumber, formatPct, formatPctValue } from '../selection-format.js';
 import type { SelectionProblem } from '../selection-problem.js';
@@ -462,7 +462,7 @@ function mountType({ store, c }: WordingContext): string[] {
         .map((r) => store.mountType[r]),
     ),
   ];
-  return [`Mount type ${types.join(', ')} is not among the allowed types.`];
+  return [`The mount type ${types.map((t) => mountTypeLabel(t).toLowerCase()).join(', ')} is not among the allowed types.`];
 }
 
 function supplier({ supplierName }: WordingContext): string[] {

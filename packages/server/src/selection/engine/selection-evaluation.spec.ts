@@ -170,7 +170,7 @@ describe('SelectionEvaluation', () => {
       'Static deflection at point C (27 mm with the 10 % weight margin) exceeds the 20 mm the mount HOT-1 allows.',
       'Static deflection at point D (27 mm with the 10 % weight margin) exceeds the 20 mm the mount HOT-1 allows.',
       'The ambient temperature 90 °C is outside the range of HOT-1 (-20 °C to 70 °C).',
-      'Mount type open_spring is not among the allowed types.',
+      'The mount type open spring is not among the allowed types.',
       'Invented Springs is not among the allowed suppliers.',
     ]);
   });

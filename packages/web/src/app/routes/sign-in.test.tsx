@@ -25,7 +25,7 @@ describe('sign-in page', () => {
     expect(await screen.findByText('Enter your email address')).toBeInTheDocument();
     expect(screen.getByText('Enter your password')).toBeInTheDocument();
     expect(screen.getByLabelText('Email')).toHaveAttribute('aria-invalid', 'true');
-    expect(fake.requests).toHaveLength(0);
+    expect(fake.calls('post', '/auth/login')).toHaveLength(0);
   });
 
   it('rejects an email address that is not one', async () => {
@@ -37,7 +37,7 @@ describe('sign-in page', () => {
     await user.click(screen.getByRole('button', { name: 'Sign in' }));
 
     expect(await screen.findByText(/Enter a valid email address/)).toBeInTheDocument();
-    expect(fake.requests).toHaveLength(0);
+    expect(fake.calls('post', '/auth/login')).toHaveLength(0);
   });
 
   it('signs in, stores the token and goes to the page asked for', async () => {
@@ -105,10 +105,19 @@ describe('sign-in page', () => {
     expect(await screen.findByRole('alert')).toHaveTextContent('Too many attempts');
   });
 
-  it('points to the README for demo accounts without showing any password', async () => {
+  it('in demo mode, points to the README for demo accounts without showing any password', async () => {
+    installFakeApi().on('get', '/health', { status: 200, data: { status: 'ok', demo: true } });
     renderApp({ path: '/sign-in' });
     expect(await screen.findByText('Demo accounts are listed in the README.')).toBeInTheDocument();
     expect(document.body.textContent).not.toMatch(/tacet-demo/);
+  });
+
+  it('outside demo mode, says nothing of demo accounts', async () => {
+    const fake = installFakeApi().on('get', '/health', { status: 200, data: { status: 'ok', demo: false } });
+    renderApp({ path: '/sign-in' });
+    await screen.findByRole('button', { name: 'Sign in' });
+    await waitFor(() => expect(fake.requests.some((r) => r.path === '/health')).toBe(true));
+    expect(screen.queryByText(/demo accounts/i)).not.toBeInTheDocument();
   });
 
   it('sends a signed-in visitor straight on', async () => {

@@ -4,6 +4,7 @@ import { Link, Navigate, useSearchParams } from 'react-router-dom';
 import { PageLoader } from '@/components/page-loader';
 import { SignInForm } from '@/features/auth/components/sign-in-form';
 import { useAuth } from '@/lib/auth';
+import { useDemoMode } from '@/lib/server-mode';
 import { safeNextPath } from '@/lib/session';
 
 import { PasswordPage } from './password-page';
@@ -12,6 +13,7 @@ export function Component() {
   const { status, endReason } = useAuth();
   const [params] = useSearchParams();
   const next = safeNextPath(params.get('next'));
+  const demo = useDemoMode();
 
   if (status === 'signed-in') return <Navigate to={next} replace />;
   if (status === 'loading') return <PageLoader label="Checking your session" />;
@@ -25,7 +27,7 @@ export function Component() {
           <p className="tc-sign-in-note">
             <Link to="/forgot-password">Forgot your password?</Link>
           </p>
-          <p className="tc-sign-in-note">Demo accounts are listed in the README.</p>
+          {demo ? <p className="tc-sign-in-note">Demo accounts are listed in the README.</p> : null}
         </>
       }
     >

@@ -10,7 +10,7 @@ import { areasFor, ROLE_LABELS, type AreaKey, type Role } from '@/lib/authorizat
 const AREA_PURPOSE: Record<Exclude<AreaKey, 'overview'>, Partial<Record<Role, string>> & { default: string }> = {
   projects: {
     default: 'Read projects, their designs and the figures behind each choice of mount.',
-    admin: 'Every project and design, their revisions and their sign-off.',
+    admin: 'Every project and design, their revisions and their check and release.',
     engineer:
       'Create projects and designs, describe the machine and its speeds, run a selection and send the design for check — or check a colleague’s.',
     purchaser: 'Find the released designs you will buy mounts for.',

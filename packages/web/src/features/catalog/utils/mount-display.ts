@@ -1,4 +1,4 @@
-import type { Quantity } from '@tacet/vibration';
+import { formatMoney, type Quantity } from '@tacet/vibration';
 
 import { formatNumber, type Units } from '@/lib/units';
 
@@ -41,22 +41,10 @@ export function temperatureRangeText(units: Units, minC: number | null, maxC: nu
   return `${value(minC)} … ${value(maxC)}${unit}`;
 }
 
-const priceFormats = new Map<string, Intl.NumberFormat>();
-
-/** "USD 48.20"-style price in the mount's own currency (no conversion). */
+/** "USD 48.20"-style price in the mount's own currency (no conversion; the glossary's money format). */
 export function priceText(unitPrice: number | null, currency: string): string {
   if (unitPrice === null || !Number.isFinite(unitPrice)) return NO_VALUE;
-  let format = priceFormats.get(currency);
-  if (!format) {
-    try {
-      format = new Intl.NumberFormat('en-US', { style: 'currency', currency, currencyDisplay: 'code' });
-    } catch {
-      format = new Intl.NumberFormat('en-US', { minimumFractionDigits: 2, maximumFractionDigits: 2 });
-    }
-    priceFormats.set(currency, format);
-  }
-  // "USD 48.20": Intl puts a no-break space after the code; keep it readable in every font.
-  return format.format(unitPrice).replace(/\u00a0/g, ' ');
+  return formatMoney(unitPrice, currency);
 }
 
 export function leadTimeText(days: number | null): string {

@@ -1,4 +1,5 @@
 import { Callout, Checkbox, FormGroup } from '@blueprintjs/core';
+import { MOUNT_TYPE_LABELS as GLOSSARY_MOUNT_TYPES } from '@tacet/vibration';
 import { useFormikContext } from 'formik';
 
 import { useUnits } from '@/lib/units';
@@ -7,15 +8,7 @@ import { MOUNT_TYPES, type SupplierRef } from '@/types/design-api';
 import type { DesignFormValues } from '../schemas/design-form';
 import { QuantityField } from './form-cells';
 
-export const MOUNT_TYPE_LABELS: Record<(typeof MOUNT_TYPES)[number], string> = {
-  elastomer_pad: 'Elastomer pad',
-  elastomer_mount: 'Elastomer mount',
-  open_spring: 'Open spring',
-  housed_spring: 'Housed spring',
-  restrained_spring: 'Restrained spring',
-  air_spring: 'Air spring',
-  wire_rope: 'Wire rope',
-};
+export const MOUNT_TYPE_LABELS: Record<(typeof MOUNT_TYPES)[number], string> = GLOSSARY_MOUNT_TYPES;
 
 export interface CriteriaPanelProps {
   readOnly: boolean;

@@ -1,13 +1,10 @@
 import { Tag } from '@blueprintjs/core';
+import { DESIGN_STATE_LABELS } from '@tacet/vibration';
 
 import type { DesignStatus } from '@/types/design-api';
 
-export const STATUS_LABELS: Record<DesignStatus, string> = {
-  draft: 'Draft',
-  in_review: 'In review',
-  released: 'Released',
-  superseded: 'Superseded',
-};
+/** The states in the glossary's words ("In check"). */
+export const STATUS_LABELS: Record<DesignStatus, string> = DESIGN_STATE_LABELS;
 
 /** A design's life-cycle state in Tacet's own colours (see workspace.css). */
 export function DesignStatusTag({ status }: { status: DesignStatus }) {

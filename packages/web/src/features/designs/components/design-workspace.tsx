@@ -1,11 +1,13 @@
 import { Alert, Button, Callout, Tab, Tabs, Tag } from '@blueprintjs/core';
 import { FloppyDiskIcon, LockIcon, RefreshIcon, UndoIcon } from '@blueprintjs/icons';
+import { DESIGN_SECTIONS } from '@tacet/vibration';
 import { Form, Formik, useFormikContext, type FormikHelpers, type FormikProps } from 'formik';
 import { useCallback, useEffect, useLayoutEffect, useMemo, useRef, useState, type ReactNode } from 'react';
 import { useBlocker } from 'react-router-dom';
 
 import { PageHeader } from '@/components/page-header';
-import { errorMessage } from '@/lib/api-errors';
+import { SafetyCautions } from '@/components/safety-cautions';
+import { errorMessage, fieldErrors } from '@/lib/api-errors';
 import { useUser, type SessionUser } from '@/lib/auth';
 import { canDesign } from '@/lib/authorization';
 import { formatDateTime } from '@/lib/dates';
@@ -19,6 +21,7 @@ import {
   describeErrors,
   designFormSchema,
   sectionsWithErrors,
+  serverErrorsToForm,
   toDesignInput,
   toFormValues,
   type DesignFormValues,
@@ -80,7 +83,7 @@ export function readOnlyReason(design: Design, user: SessionUser): string | null
   if (!canDesign(user.role)) return 'You can read this design; only engineers and administrators change designs.';
   if (design.status !== 'draft') {
     return design.status === 'in_review'
-      ? 'This revision is in review, so it cannot be changed now.'
+      ? 'This revision is in check, so it cannot be changed now.'
       : 'Released designs are frozen; a change starts a new revision.';
   }
   if (user.role !== 'admin' && design.author.id !== user.id) {
@@ -311,34 +314,40 @@ function DesignEditor(props: EditorProps) {
       >
         <Tab
           id="equipment"
-          title={<TabTitle text="Equipment" problems={problems.has('components')} />}
+          title={<TabTitle text={DESIGN_SECTIONS.equipment} problems={problems.has('components')} />}
           panel={<EquipmentPanel readOnly={readOnly} figures={figures} />}
         />
         <Tab
           id="layout"
-          title={<TabTitle text="Mount layout" problems={problems.has('mountPoints')} />}
+          title={<TabTitle text={DESIGN_SECTIONS.layout} problems={problems.has('mountPoints')} />}
           panel={<MountLayoutPanel readOnly={readOnly} figures={figures} />}
         />
         <Tab
           id="running"
-          title={<TabTitle text="Running conditions" problems={problems.has('operating')} />}
+          title={<TabTitle text={DESIGN_SECTIONS.running} problems={problems.has('operating')} />}
           panel={<OperatingPanel readOnly={readOnly} figures={figures} />}
         />
         <Tab
           id="requirements"
-          title={<TabTitle text="Requirements" problems={problems.has('criteria')} />}
+          title={<TabTitle text={DESIGN_SECTIONS.requirements} problems={problems.has('criteria')} />}
           panel={<CriteriaPanel readOnly={readOnly} suppliers={supplierList} />}
         />
         <Tab
           id="restraint"
-          title={<TabTitle text="Seismic restraint" problems={problems.has('restraint')} />}
+          title={<TabTitle text={DESIGN_SECTIONS.restraint} problems={problems.has('restraint')} />}
           panel={<RestraintPanel readOnly={readOnly} figures={figures} />}
         />
-        <Tab id="selection" title={<TabTitle text="Mount selection" problems={false} />} panel={<>{selection}</>} />
+        <Tab id="selection" title={<TabTitle text={DESIGN_SECTIONS.selection} problems={false} />} panel={<>{selection}</>} />
         {renderMeasured ? (
-          <Tab id="measured" title={<TabTitle text="Measured" problems={false} />} panel={<>{renderMeasured()}</>} />
+          <Tab id="measured" title={<TabTitle text={DESIGN_SECTIONS.measured} problems={false} />} panel={<>{renderMeasured()}</>} />
         ) : null}
       </Tabs>
+      {/* The selection tab shows the same cautions beside its results. */}
+      {tab === 'selection' ? null : (
+        <div className="tc-design-cautions">
+          <SafetyCautions restraint={values.restraint.enabled} />
+        </div>
+      )}
       {readOnly ? null : <UnsavedChangesGuard dirty={dirty} />}
     </Form>
   );
@@ -375,7 +384,7 @@ export function DesignWorkspace({
 
   const fail = (error: unknown) => {
     // 409 also answers a frozen or in-review design and a duplicate name: those are said as they are.
-    if (isEditConflict(error) && !/frozen|in review|already exists/i.test(errorMessage(error))) setConflict(true);
+    if (isEditConflict(error) && !/frozen|in check|already exists/i.test(errorMessage(error))) setConflict(true);
     else setFailure(errorMessage(error));
   };
 
@@ -395,7 +404,12 @@ export function DesignWorkspace({
       helpers.resetForm({ values: toFormValues(saved.input, units) });
       return saved;
     } catch (error) {
-      fail(error);
+      // Problems the server found go to their fields, one message each (the list above the tabs names them).
+      const placed = serverErrorsToForm(Object.entries(fieldErrors(error)).map(([field, message]) => ({ field, message })));
+      if (Object.keys(placed).length > 0) {
+        helpers.setErrors(placed);
+        setFailure('The server did not accept some input; the fields are marked.');
+      } else fail(error);
       return null;
     }
   };

@@ -9,6 +9,8 @@ import {
   type DisturbingFrequency,
   type MassProperties,
   type MountLoadsResult,
+  INPUT_LABELS,
+  inputProblemWords,
 } from '@tacet/vibration';
 import { useState } from 'react';
 
@@ -105,7 +107,7 @@ export function toAssemblyComponents(components: readonly DesignComponent[]): As
 }
 
 function problemText(error: unknown): string {
-  if (isVibrationInputError(error)) return error.message;
+  if (isVibrationInputError(error)) return inputProblemWords(error.field, error.message);
   return error instanceof Error ? error.message : 'The figures cannot be computed from this input.';
 }
 
@@ -113,7 +115,7 @@ function problemText(error: unknown): string {
 export function frequenciesOf(operating: OperatingConditions): DisturbingLine[] {
   const extras: DisturbingFrequency[] = (operating.extraFrequenciesHz ?? []).map((frequencyHz) => ({
     frequencyHz,
-    label: 'Given frequency',
+    label: INPUT_LABELS.furtherFrequencies.replace(/ies$/, 'y'),
     source: 'shaft',
     order: 1,
   }));
@@ -187,7 +189,7 @@ export function computeDesignFigures(values: DesignFormValues, units: Units): De
       frequencies = frequenciesOf(operating);
       if (frequencies.length === 0) {
         frequencies = null;
-        frequencyProblem = 'Give a speed or a line frequency to see the disturbing frequencies.';
+        frequencyProblem = 'Give a speed or a supply frequency to see the disturbing frequencies.';
       }
     } catch (error) {
       frequencyProblem = problemText(error);

@@ -3,7 +3,16 @@ import { lbToKg } from '@tacet/vibration';
 import { unitsFor } from '@/lib/units';
 import { demoInput } from '@/testing/design-fakes';
 
-import { describeErrors, designFormSchema, numberText, parseList, toDesignInput, toFormValues, type DesignFormValues } from './design-form';
+import {
+  describeErrors,
+  designFormSchema,
+  numberText,
+  parseList,
+  serverErrorsToForm,
+  toDesignInput,
+  toFormValues,
+  type DesignFormValues,
+} from './design-form';
 
 const SI = unitsFor('SI');
 const US = unitsFor('US');
@@ -150,7 +159,7 @@ describe('design form validation', () => {
   it('needs something to isolate from', () => {
     const values = toFormValues(demoInput(), SI);
     values.operating = { ...values.operating, speedRpm: '', lineFrequencyHz: '', extraFrequenciesHz: '' };
-    expect(errorsOf(values)['operating.speedRpm']).toMatch(/Give a speed or a line frequency/);
+    expect(errorsOf(values)['operating.speedRpm']).toMatch(/Give a speed or a supply frequency/);
   });
 
   it('limits the ambient temperature in the user’s unit', () => {
@@ -166,5 +175,30 @@ describe('design form validation', () => {
       values,
     );
     expect(text).toEqual(['Equipment, row 2 (Motor): The mass must be more than 0', 'Mount layout: Each mount point needs its own label']);
+  });
+});
+
+describe('serverErrorsToForm', () => {
+  it('places the server’s problems at the form’s fields, one message per field', () => {
+    expect(
+      serverErrorsToForm([
+        { field: 'input.components.1.massKg', message: 'Mass must be a positive number' },
+        { field: 'input.components.1.massKg', message: 'Mass must be a number' },
+        { field: 'input.components.0.cg.x', message: 'X must be a number' },
+        { field: 'input.mountPoints', message: 'Mounts are collinear (or coincide): the frame would tip' },
+        { field: 'input.operating.speedRangeRpm.max', message: 'Highest speed must be above the lowest' },
+        { field: 'input.operating.extraFrequenciesHz.2', message: 'Each value in further frequencies must be a positive number' },
+        { field: 'input.criteria.ambientTempC', message: 'Ambient temperature must be at most 400' },
+        { field: 'input.somethingElse', message: 'ignored' },
+      ]),
+    ).toEqual({
+      components: [{ x: 'X must be a number' }, { mass: 'Mass must be a positive number' }],
+      mountPoints: 'Mounts are collinear (or coincide): the frame would tip',
+      operating: {
+        speedMaxRpm: 'Highest speed must be above the lowest',
+        extraFrequenciesHz: 'Each value in further frequencies must be a positive number',
+      },
+      criteria: { ambientTemp: 'Ambient temperature must be at most 400' },
+    });
   });
 });

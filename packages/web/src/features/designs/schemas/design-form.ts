@@ -1,3 +1,4 @@
+import { getIn, setIn, type FormikErrors } from 'formik';
 import * as yup from 'yup';
 
 import type { Units } from '@/lib/units';
@@ -463,17 +464,17 @@ const operatingSchema = yup
       .integer('The vane count is a whole number')
       .min(1, 'The vane count must be at least 1')
       .max(DESIGN_LIMITS.vaneCount, `At most ${DESIGN_LIMITS.vaneCount} vanes`),
-    lineFrequencyHz: optionalNumber('The line frequency').positive('The line frequency must be more than 0'),
+    lineFrequencyHz: optionalNumber('The supply frequency').positive('The supply frequency must be more than 0'),
     extraFrequenciesHz: listOf('Further frequencies', { max: DESIGN_LIMITS.extraFrequencies }),
     ...model2OperatingFields,
   })
-  .test('source', 'Give a speed or a line frequency: there is nothing to isolate from otherwise', function (values) {
+  .test('source', 'Give a speed or a supply frequency: there is nothing to isolate from otherwise', function (values) {
     const hasSpeed = values.speedMode === 'range' ? true : values.speedRpm !== undefined;
     const hasOther = values.lineFrequencyHz !== undefined || (parseList(values.extraFrequenciesHz) ?? []).length > 0;
     if (hasSpeed || hasOther) return true;
     return this.createError({
       path: `${this.path}.speedRpm`,
-      message: 'Give a speed or a line frequency: there is nothing to isolate from otherwise',
+      message: 'Give a speed or a supply frequency: there is nothing to isolate from otherwise',
     });
   });
 
@@ -571,6 +572,47 @@ export function designFormSchema(units: Units) {
 }
 
 // ---- errors in words ----
+
+/** API leaf names whose form field is named otherwise (`massKg` → `mass`). */
+const FORM_FIELD_OF: Record<string, string> = {
+  massKg: 'mass',
+  ambientTempC: 'ambientTemp',
+  snubberGapMm: 'snubberGap',
+  snubberGapM: 'snubberGap',
+};
+
+/**
+ * The server's field problems of a design save, placed at the form's fields
+ * (`input.components.1.massKg` → `components.1.mass`, `input.components.1.cg.x` →
+ * `components.1.x`, `input.operating.extraFrequenciesHz.2` → `operating.extraFrequenciesHz`);
+ * one message per field, the first. Problems the form has no field for are left out.
+ */
+export function serverErrorsToForm(problems: readonly { field: string; message: string }[]): FormikErrors<DesignFormValues> {
+  let errors: FormikErrors<DesignFormValues> = {};
+  for (const problem of problems) {
+    const parts = problem.field
+      .replace(/\[(\w+)\]/g, '.$1')
+      .split('.')
+      .filter(Boolean);
+    if (parts[0] === 'input') parts.shift();
+    const section = parts[0] as keyof DesignFormValues;
+    if (!(section in SECTION_NAMES)) continue;
+    const path =
+      section === 'components' || section === 'mountPoints'
+        ? parts.slice(0, 2).concat(
+            parts
+              .slice(2)
+              .filter((p) => p !== 'cg' && p !== 'box')
+              .slice(-1),
+          )
+        : parts.slice(0, 2).filter((p) => !/^\d+$/.test(p));
+    if (path[path.length - 1] === 'speedRangeRpm') path[path.length - 1] = parts[2] === 'max' ? 'speedMaxRpm' : 'speedMinRpm';
+    path[path.length - 1] = FORM_FIELD_OF[path[path.length - 1]] ?? path[path.length - 1];
+    const at = path.join('.');
+    if (getIn(errors, at) === undefined) errors = setIn(errors, at, problem.message);
+  }
+  return errors;
+}
 
 const SECTION_NAMES: Record<keyof DesignFormValues, string> = {
   components: 'Equipment',

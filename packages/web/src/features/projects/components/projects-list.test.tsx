@@ -129,7 +129,7 @@ describe('Projects page', () => {
     const { fake } = serveProjects(PROJECTS());
     fake.on('post', '/projects', {
       status: 400,
-      data: { statusCode: 400, message: 'Validation failed', errors: [{ field: 'name', message: 'name is too long' }] },
+      data: { statusCode: 400, message: 'Validation failed', errors: [{ field: 'name', message: 'Name is too long' }] },
     });
     const { user } = renderApp({ signedInAs: 'admin', path: '/projects' });
     await screen.findByRole('table', { name: 'Projects' });
@@ -138,7 +138,7 @@ describe('Projects page', () => {
     const dialog = await screen.findByRole('dialog', { name: 'New project' });
     await user.type(within(dialog).getByLabelText('Name'), 'Something');
     await user.click(within(dialog).getByRole('button', { name: 'Create project' }));
-    expect(await within(dialog).findByRole('alert')).toHaveTextContent('Name: name is too long');
+    expect(await within(dialog).findByRole('alert')).toHaveTextContent('Name is too long');
   });
 
   it('says so when there are no projects yet', async () => {

@@ -36,7 +36,7 @@ export function ProjectsList() {
     <>
       <PageHeader
         title="Projects"
-        description="Each project holds the designs for one site or job: the machines, their mounts, revisions and sign-off."
+        description="Each project holds the designs for one site or job: the machines, their mounts, revisions and their check and release."
         actions={
           mayCreate ? <Button intent="primary" icon={<PlusIcon />} text="New project" onClick={() => setCreating(true)} /> : undefined
         }

@@ -1,4 +1,5 @@
 import { HTMLTable, Tag } from '@blueprintjs/core';
+import { designStateWords } from '@tacet/vibration';
 import { Link } from 'react-router-dom';
 
 import { formatDate } from '@/lib/dates';
@@ -7,12 +8,10 @@ import type { Project } from '@/types/design-api';
 const NO_VALUE = '—';
 
 /** The designs by state, in words: "1 in check · 2 released". */
-const STATE_WORDS: [keyof Project['statusCounts'], string][] = [
-  ['draft', 'draft'],
-  ['in_review', 'in check'],
-  ['released', 'released'],
-  ['superseded', 'superseded'],
-];
+const STATE_WORDS: [keyof Project['statusCounts'], string][] = (['draft', 'in_review', 'released', 'superseded'] as const).map((code) => [
+  code,
+  designStateWords(code),
+]);
 
 function DesignStates({ counts }: { counts: Project['statusCounts'] }) {
   const present = STATE_WORDS.filter(([key]) => counts[key] > 0);

@@ -57,7 +57,9 @@ describe('Design purchasing view', () => {
     expect(screen.getByTestId('bom-total-quantity')).toHaveTextContent('8');
     expect(screen.getByTestId('bom-total-price')).toHaveTextContent('USD 644.00');
     expect(screen.getByTestId('bom-longest-lead-time')).toHaveTextContent('longest 35 days');
-    expect(screen.getByText(/review of a licensed engineer/)).toBeInTheDocument();
+    // the cautions a supplier's files carry, from the one source
+    expect(screen.getByTestId('cautions')).toHaveTextContent(/qualified, licensed engineer/);
+    expect(screen.getByTestId('cautions')).toHaveTextContent(/confirmed with the supplier before purchase/);
   });
 
   it('downloads the BOM as CSV and Excel and the report as PDF from their addresses', async () => {
@@ -108,7 +110,7 @@ describe('Design purchasing view', () => {
     const machines = within(section).getByLabelText('Identical machines');
     await user.clear(machines);
     await user.type(machines, '3');
-    await user.click(within(section).getByRole('button', { name: 'Review request for quotation' }));
+    await user.click(within(section).getByRole('button', { name: 'Preview request for quotation' }));
 
     // a confirmation first: recipient, quantities for three machines, attachments; nothing sent yet
     const confirm = await screen.findByRole('dialog', { name: 'Send this request to Stillmoor Isolation?' });
@@ -137,7 +139,7 @@ describe('Design purchasing view', () => {
     });
     await waitForView();
     const section = await screen.findByRole('region', { name: /Quellbrook Mounts/ });
-    await user.click(within(section).getByRole('button', { name: 'Review request for quotation' }));
+    await user.click(within(section).getByRole('button', { name: 'Preview request for quotation' }));
     expect(await within(section).findByRole('alert')).toHaveTextContent('Supplier Quellbrook Mounts has no contact e-mail.');
     expect(fake.calls('post', '/designs/:id/rfqs/preview')[0]!.body).toEqual({ supplierId: QUELLBROOK.id, machineCount: 1 });
     expect(fake.calls('post', '/designs/:id/rfqs')).toHaveLength(0);
@@ -231,7 +233,7 @@ describe('Design purchasing view', () => {
     openView(releasedDesign({ status: 'in_review', checker: null }));
     await waitForView();
     expect(screen.getByText('Purchasing starts once a second engineer has released this design.')).toBeInTheDocument();
-    expect(screen.queryByRole('button', { name: 'Review request for quotation' })).not.toBeInTheDocument();
+    expect(screen.queryByRole('button', { name: 'Preview request for quotation' })).not.toBeInTheDocument();
     expect(screen.queryByRole('button', { name: 'BOM (CSV)' })).not.toBeInTheDocument();
   });
 });

@@ -1,7 +1,9 @@
 import { Button, Callout, Tag } from '@blueprintjs/core';
 import { WarningSignIcon } from '@blueprintjs/icons';
+import { DESIGN_STATE_LABELS } from '@tacet/vibration';
 
 import { PageHeader } from '@/components/page-header';
+import { SafetyCautions } from '@/components/safety-cautions';
 import { errorMessage } from '@/lib/api-errors';
 import type { Design, SupplierRef } from '@/types/design-api';
 
@@ -15,10 +17,8 @@ import { SupplierRequests } from './supplier-requests';
 import './purchasing.css';
 
 const STAGE_WORDS: Record<Design['status'], string> = {
-  draft: 'Draft',
-  in_review: 'In review',
-  released: 'Released',
-  superseded: 'Superseded by a later revision',
+  ...DESIGN_STATE_LABELS,
+  superseded: `${DESIGN_STATE_LABELS.superseded} by a later revision`,
 };
 
 /** The BOM's suppliers in first-seen order, with their line counts. */
@@ -86,8 +86,9 @@ export function DesignPurchasing({ design }: { design: Design }) {
         )}
         <p className="tc-muted tc-purchase-caution">
           Prices and lead times are the catalog’s at release, not a quote. Restraints, snubbers and flexible connections are not in this
-          list; they follow local codes and the review of a licensed engineer.
+          list.
         </p>
+        <SafetyCautions use="supplier" />
       </div>
 
       {readable && suppliers.length > 0 ? (

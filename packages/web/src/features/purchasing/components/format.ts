@@ -1,22 +1,12 @@
+import { formatMoney } from '@tacet/vibration';
+
 const NO_VALUE = '—';
 
 /** A price with its currency code and two decimals, e.g. "USD 1,240.50"; a dash when unknown. */
 export function formatPrice(amount: number | null | undefined, currency: string | null): string {
   if (amount === null || amount === undefined || !Number.isFinite(amount)) return NO_VALUE;
   if (!currency) return amount.toFixed(2);
-  try {
-    return new Intl.NumberFormat('en-US', {
-      style: 'currency',
-      currency,
-      currencyDisplay: 'code',
-      minimumFractionDigits: 2,
-      maximumFractionDigits: 2,
-    })
-      .format(amount)
-      .replace(/\u00a0/g, ' ');
-  } catch {
-    return `${amount.toFixed(2)} ${currency}`;
-  }
+  return formatMoney(amount, currency);
 }
 
 /** Lead time in days, e.g. "21 days"; a dash when unknown. */

@@ -189,7 +189,7 @@ export function SupplierRequests({ designId, supplier, lineCount, currency, rfqs
             type="submit"
             intent="primary"
             icon={<EnvelopeIcon />}
-            text="Review request for quotation"
+            text="Preview request for quotation"
             loading={preview.isPending}
             disabled={tooLong || machineCount === null}
           />

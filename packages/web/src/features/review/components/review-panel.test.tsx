@@ -103,7 +103,7 @@ describe('Check and release panel', () => {
       ),
     );
     // Once in review the input is read only.
-    expect(await screen.findByText('This revision is in review, so it cannot be changed now.')).toBeInTheDocument();
+    expect(await screen.findByText('This revision is in check, so it cannot be changed now.')).toBeInTheDocument();
   });
 
   it('saves unsaved edits before sending for check, so the checker sees them and nothing is lost', async () => {
@@ -126,7 +126,7 @@ describe('Check and release panel', () => {
     const writes = fake.requests.filter((r) => r.method !== 'get').map((r) => r.method);
     expect(writes).toEqual(['put', 'post']); // the save first, then the move
     expect(server.design.input.components[0]!.massKg).toBe(400);
-    expect(await screen.findByText('This revision is in review, so it cannot be changed now.')).toBeInTheDocument();
+    expect(await screen.findByText('This revision is in check, so it cannot be changed now.')).toBeInTheDocument();
     expect(screen.getByLabelText('Mass of Pump')).toHaveValue('400');
   });
 
@@ -238,9 +238,9 @@ describe('Check and release panel', () => {
     const entries = within(record).getAllByRole('listitem');
     expect(entries).toHaveLength(2);
     expect(entries[0]).toHaveTextContent('Erin Engineer');
-    expect(entries[0]).toHaveTextContent('Draft → In review');
+    expect(entries[0]).toHaveTextContent('Draft → In check');
     expect(entries[1]).toHaveTextContent('Chris Checker');
-    expect(entries[1]).toHaveTextContent('In review → Draft');
+    expect(entries[1]).toHaveTextContent('In check → Draft');
     expect(entries[1]).toHaveTextContent('Point C runs at 98 % of its rating; take the next size.');
     expect(entries[1]).toHaveTextContent('9 Jan 2025');
   });

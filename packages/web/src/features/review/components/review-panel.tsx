@@ -1,5 +1,6 @@
 import { Alert, Button, Callout, FormGroup, TextArea } from '@blueprintjs/core';
 import { ConfirmIcon, DuplicateIcon, SendMessageIcon, UndoIcon } from '@blueprintjs/icons';
+import { GENERAL_CAUTION } from '@tacet/vibration';
 import { useState } from 'react';
 
 import { errorMessage, errorStatus } from '@/lib/api-errors';
@@ -228,10 +229,7 @@ export function ReviewPanel({ design, onChanged, onRevisionCreated, unsavedEdits
         >
           <TextArea id="release-notes" fill rows={3} value={releaseNotes} onChange={(event) => setReleaseNotes(event.target.value)} />
         </FormGroup>
-        <p className="tc-muted">
-          Tacet sizes mounts for a rigid machine on linear mounts over a rigid support. Seismic and wind restraint, snubbers, flexible
-          connections and the supporting structure follow local codes and need review by a qualified, licensed engineer.
-        </p>
+        <p className="tc-muted">{GENERAL_CAUTION}</p>
       </Alert>
     </section>
   );

@@ -1,11 +1,9 @@
+import { DESIGN_STATE_LABELS } from '@tacet/vibration';
+
 import type { DesignStatus } from '@/types/design-api';
 
-export const REVIEW_STATE_LABELS: Record<DesignStatus, string> = {
-  draft: 'Draft',
-  in_review: 'In review',
-  released: 'Released',
-  superseded: 'Superseded',
-};
+/** The states in the glossary's words ("In check"). */
+export const REVIEW_STATE_LABELS: Record<DesignStatus, string> = DESIGN_STATE_LABELS;
 
 const TRACK: readonly DesignStatus[] = ['draft', 'in_review', 'released'];
 

@@ -1,5 +1,6 @@
 import { Button, Spinner } from '@blueprintjs/core';
 import { CrossIcon } from '@blueprintjs/icons';
+import { RESULT_LABELS } from '@tacet/vibration';
 import { lazy, Suspense, useMemo, type ReactNode } from 'react';
 
 import { SERIES_COLORS } from '@/components/charts/chart-style';
@@ -139,7 +140,7 @@ export function CandidateComparison({
       round: toSignificant(3),
     },
     {
-      label: 'Resonance amplification',
+      label: RESULT_LABELS.resonance,
       cells: candidates.map((c) => formatRatio(c.resonanceAmplification)),
       values: candidates.map((c) => c.resonanceAmplification),
       better: 'low',
@@ -191,7 +192,7 @@ export function CandidateComparison({
       ),
     },
     {
-      label: 'Why it fails',
+      label: RESULT_LABELS.checksNotMet,
       cells: candidates.map((c) => <RemarkList key="r" items={c.reasons} empty={c.passes ? 'Meets every requirement' : '—'} />),
     },
     { label: 'Notes', cells: candidates.map((c) => <RemarkList key="n" items={c.notes ?? []} empty="None" />) },

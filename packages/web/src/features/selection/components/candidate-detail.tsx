@@ -1,6 +1,6 @@
 import { Button, Callout, HTMLTable, Tag } from '@blueprintjs/core';
 import { TickCircleIcon } from '@blueprintjs/icons';
-import { naturalFrequencyHz, stiffnessForNaturalFrequency } from '@tacet/vibration';
+import { RESULT_LABELS, formatUtilisation, naturalFrequencyHz, stiffnessForNaturalFrequency } from '@tacet/vibration';
 import { useMemo } from 'react';
 
 import type { FrequencyMarker } from '@/components/charts/transmissibility-chart';
@@ -152,7 +152,7 @@ export function CandidateDetail({
             </span>
           ) : null}
         </dd>
-        <dt>Resonance amplification</dt>
+        <dt>{RESULT_LABELS.resonance}</dt>
         <dd>{formatRatio(candidate.resonanceAmplification)}</dd>
         <dt>Level error</dt>
         <dd>{units.measure('deflection', candidate.levelErrorMm / 1000)}</dd>
@@ -165,7 +165,7 @@ export function CandidateDetail({
       {candidate.reasons.length > 0 ? (
         <Callout
           intent={candidate.passes ? 'primary' : 'warning'}
-          title={candidate.passes ? 'Remarks' : 'Why it fails'}
+          title={candidate.passes ? 'Remarks' : RESULT_LABELS.checksNotMet}
           className="tc-note"
           data-testid="candidate-reasons"
         >
@@ -235,8 +235,8 @@ export function CandidateDetail({
                 <td>{point.label}</td>
                 <td>{point.partNumber}</td>
                 <td className="tc-number">{units.format('force', point.loadN)}</td>
-                <td className={`tc-number${point.utilization > 1 ? ' tc-text-danger' : ''}`}>{formatRatio(point.utilization)}</td>
-                {margin > 0 ? <td className={`tc-number${checked > 1 ? ' tc-text-danger' : ''}`}>{formatRatio(checked)}</td> : null}
+                <td className={`tc-number${point.utilization > 1 ? ' tc-text-danger' : ''}`}>{formatUtilisation(point.utilization)}</td>
+                {margin > 0 ? <td className={`tc-number${checked > 1 ? ' tc-text-danger' : ''}`}>{formatUtilisation(checked)}</td> : null}
                 <td className="tc-number">{units.format('deflection', point.staticDeflectionMm / 1000)}</td>
               </tr>
             );

@@ -23,10 +23,11 @@ describe('candidate figures', () => {
   });
 
   it('shows the utilisation range and money', () => {
-    expect(formatUtilizationRange(demoCandidates()[0]!)).toBe('0.68–0.85');
-    expect(formatMoney(368, 'USD')).toBe('$368');
+    // utilisation as a percentage and money in the glossary's one format, as everywhere
+    expect(formatUtilizationRange(demoCandidates()[0]!)).toBe('68–85 %');
+    expect(formatMoney(368, 'USD')).toBe('USD 368.00');
+    expect(formatMoney(1240.5, 'USD')).toBe('USD 1,240.50');
     expect(formatMoney(null, 'USD')).toBe('—');
-    expect(formatMoney(1200, 'not a code')).toBe('1,200 not a code');
   });
 
   it('puts the utilisation on the checks’ basis: the heaviest point with the weight margin, the lightest without', () => {
@@ -35,11 +36,11 @@ describe('candidate figures', () => {
     const [low, high] = utilizationRange(spring);
     expect(low).toBeCloseTo(2186.1 / 3200, 12);
     expect(high).toBeCloseTo((2717.3 / 3200) * 1.1, 12);
-    expect(formatUtilizationRange(spring)).toBe('0.68–0.93');
+    expect(formatUtilizationRange(spring)).toBe('68–93 %');
     expect(utilizationBasis(spring)).toContain('with the 10 % weight margin');
     // a candidate kept from before the margin travelled with it: none assumed
     const old = { ...spring, weightMarginPct: undefined };
-    expect(formatUtilizationRange(old)).toBe('0.68–0.85');
+    expect(formatUtilizationRange(old)).toBe('68–85 %');
   });
 
   it('takes the server’s utilizationWithMargin when it states it', () => {

@@ -1,3 +1,5 @@
+import { formatMoney as glossaryMoney, formatUtilisation } from '@tacet/vibration';
+
 import type { Candidate } from '@/types/design-api';
 import type { Model2Candidate } from '@/types/model2-api';
 
@@ -30,13 +32,10 @@ export function formatTransmissibility(value: number): string {
   return Number.isFinite(value) ? t3.format(value) : NO_VALUE;
 }
 
+/** Money in the glossary's one format ("USD 1,240.50"); a dash when unknown. */
 export function formatMoney(amount: number | null, currency: string): string {
   if (amount === null || !Number.isFinite(amount)) return NO_VALUE;
-  try {
-    return new Intl.NumberFormat('en-US', { style: 'currency', currency, maximumFractionDigits: 0 }).format(amount);
-  } catch {
-    return `${Math.round(amount).toLocaleString('en-US')} ${currency}`;
-  }
+  return glossaryMoney(amount, currency);
 }
 
 export function formatDays(days: number | null): string {
@@ -98,7 +97,9 @@ export function utilizationRange(candidate: Candidate): [number, number] {
 export function formatUtilizationRange(candidate: Candidate): string {
   const [low, high] = utilizationRange(candidate);
   if (!Number.isFinite(low)) return NO_VALUE;
-  return low.toFixed(2) === high.toFixed(2) ? two.format(low) : `${two.format(low)}–${two.format(high)}`;
+  // Percent, as everywhere (glossary): "73 %" or "73–97 %".
+  const [lowPct, highPct] = [formatUtilisation(low), formatUtilisation(high)];
+  return lowPct === highPct ? lowPct : `${lowPct.replace(' %', '')}–${highPct}`;
 }
 
 /** A weight margin in % as written in sentences: 10, 7.5. */

@@ -1,18 +1,11 @@
-import { describeModeMotion } from '@tacet/vibration';
+import { MODE_NAMES as GLOSSARY_MODE_NAMES, describeModeMotion } from '@tacet/vibration';
 
 import type { Candidate, ModeName } from '@/types/design-api';
 
 type CandidateMode = NonNullable<Candidate['modes']>[number];
 
 /** A coordinate of the rigid body in words. */
-export const MODE_NAMES: Record<ModeName, string> = {
-  surge: 'surge — along x',
-  sway: 'sway — along y',
-  bounce: 'bounce — vertical',
-  roll: 'roll — about x',
-  pitch: 'pitch — about y',
-  yaw: 'yaw — about z',
-};
+export const MODE_NAMES: Record<ModeName, string> = GLOSSARY_MODE_NAMES;
 
 const pct0 = new Intl.NumberFormat('en-US', { maximumFractionDigits: 0 });
 const pct1 = new Intl.NumberFormat('en-US', { minimumFractionDigits: 1, maximumFractionDigits: 1 });

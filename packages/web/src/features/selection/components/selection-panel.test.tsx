@@ -56,8 +56,8 @@ describe('Mount selection', () => {
       // CV-13 with ζ = 0.05: T = 0.02108 at 24.67 Hz → 97.9 % (docs/engineering/check-values.md CV-13).
       '97.9 %at 24.7 Hz',
       '3.15 Hz',
-      '0.68–0.85',
-      '$368',
+      '68–85 %',
+      'USD 368.00',
       '21 days',
       'Level error 2.7 mm: shim the low corner',
     ]);
@@ -114,7 +114,7 @@ describe('Mount selection', () => {
     const loads = within(detail).getByRole('table', { name: 'Loads per point' });
     expect(within(loads).getAllByRole('row')[1]).toHaveTextContent('A');
     expect(within(loads).getAllByRole('row')[1]).toHaveTextContent('2,717 N');
-    expect(within(loads).getAllByRole('row')[1]).toHaveTextContent('0.85');
+    expect(within(loads).getAllByRole('row')[1]).toHaveTextContent('85 %');
     expect(within(loads).getAllByRole('row')[1]).toHaveTextContent('25.0 mm');
 
     const isolation = within(detail).getByRole('table', { name: 'Isolation per frequency' });
@@ -143,7 +143,7 @@ describe('Mount selection', () => {
     await user.click(screen.getByRole('button', { name: 'QB-EP-40 elastomer pad' }));
     const detail = await screen.findByRole('region', { name: 'Candidate 3' });
     const reasons = within(detail).getByTestId('candidate-reasons');
-    expect(reasons).toHaveTextContent('Why it fails');
+    expect(reasons).toHaveTextContent('Checks not met');
     expect(reasons).toHaveTextContent('Utilisation 1.13 at point A exceeds 1.00');
   });
 
@@ -302,8 +302,8 @@ describe('Mount selection', () => {
     expect(fn[0]).toHaveTextContent('3.15 Hz (best)');
     expect(fn[1]).not.toHaveClass('tc-best');
     expect(within(row('Price, all points')).getAllByRole('cell')[1]).toHaveClass('tc-best');
-    expect(row('Why it fails')).toHaveTextContent('Meets every requirement');
-    expect(row('Why it fails')).toHaveTextContent('Utilisation 1.13 at point A exceeds 1.00');
+    expect(row('Checks not met')).toHaveTextContent('Meets every requirement');
+    expect(row('Checks not met')).toHaveTextContent('Utilisation 1.13 at point A exceeds 1.00');
     expect(row('Isolation at 24.7 Hz')).toHaveTextContent('1× shaft at 1480 rpm');
 
     const chart = within(comparison).getByTestId('comparison-chart');
@@ -350,14 +350,14 @@ describe('Mount selection', () => {
     const { user } = renderApp({ signedInAs: 'engineer', path: `/designs/${DESIGN_ID}?tab=selection` });
     const table = await findMounts(user);
     // CV-15 loads on 3200 N mounts: 2186.1/3200 = 0.683 lightest; 2717.3/3200 × 1.10 = 0.934 heaviest with the margin
-    expect(tableRows(table)[0]![4]).toBe('0.68–0.93');
+    expect(tableRows(table)[0]![4]).toBe('68–93 %');
     expect(within(table).getByRole('columnheader', { name: /Utilisation/ })).toHaveTextContent('Utilisation+10 % weight');
 
     await user.click(within(table).getByRole('button', { name: 'QB-HS-300 housed spring' }));
     const detail = await screen.findByRole('region', { name: 'Candidate 1' });
     const loads = within(detail).getByRole('table', { name: 'Loads per point' });
     expect(within(loads).getByRole('columnheader', { name: 'With the 10 % weight margin' })).toBeInTheDocument();
-    expect(within(loads).getAllByRole('row')[1]).toHaveTextContent(/0\.85\s*0\.93/);
+    expect(within(loads).getAllByRole('row')[1]).toHaveTextContent(/85 %\s*93 %/);
   });
 
   it('names mixed modes by the motions that carry them, with their shares', async () => {

@@ -138,7 +138,7 @@ describe('People page', () => {
       data: {
         statusCode: 400,
         message: 'Validation failed',
-        errors: [{ field: 'email', message: 'email must be an email' }],
+        errors: [{ field: 'email', message: 'Email must be an email' }],
       },
     });
     const { user } = renderApp({ signedInAs: 'admin', path: '/admin/users' });
@@ -151,8 +151,8 @@ describe('People page', () => {
     await user.type(within(dialog).getByLabelText('Initial password'), 'a long enough one');
     await user.click(within(dialog).getByRole('button', { name: 'Add person' }));
 
-    expect(await within(dialog).findByRole('alert')).toHaveTextContent('Email: email must be an email');
-    expect(within(dialog).getByText('email must be an email')).toBeInTheDocument();
+    expect(await within(dialog).findByRole('alert')).toHaveTextContent('Email must be an email');
+    expect(within(dialog).getByText('Email must be an email')).toBeInTheDocument();
   });
 
   it('changes a role and sends only what changed', async () => {

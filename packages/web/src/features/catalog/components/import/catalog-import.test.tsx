@@ -159,9 +159,9 @@ describe('Catalog import page', () => {
     await waitFor(() => expect(importCalls(fake)).toHaveLength(2));
     expect(importCalls(fake)[1]!.query).toEqual({ onInvalid: 'skip' });
     const done = await screen.findByRole('region', { name: 'Imported spring-range.csv' });
-    expect(done).toHaveTextContent('1 mount added and 1 mount updated. 2 rows with problems were skipped.');
+    expect(done).toHaveTextContent('1 mount added and 1 mount updated. 2 rejected rows were not imported.');
     expect(within(done).getByText('Added').nextElementSibling).toHaveTextContent('1');
-    expect(within(done).getByText('Skipped').nextElementSibling).toHaveTextContent('2');
+    expect(within(done).getByText('Rejected').nextElementSibling).toHaveTextContent('2');
 
     await user.click(within(done).getByRole('button', { name: 'Download the error report (CSV)' }));
     await waitFor(() => expect(downloads).toEqual(['tacet-import-7-errors.csv']));

@@ -1,5 +1,6 @@
 import { Alert, Button, Callout, FileInput, FormGroup, Tab, Tabs, type TabId } from '@blueprintjs/core';
 import { DownloadIcon, ImportIcon, TickCircleIcon, UploadIcon } from '@blueprintjs/icons';
+import { IMPORT_ROW_LABELS } from '@tacet/vibration';
 import { useState, type ChangeEvent } from 'react';
 
 import { PageHeader } from '@/components/page-header';
@@ -55,12 +56,12 @@ function Counts({ outcome }: { outcome: ImportOutcome }) {
     ? [
         ['To add', created, 'tc-import-count--add'],
         ['To update', updated, 'tc-import-count--update'],
-        ['Rejected', rejected, 'tc-import-count--rejected'],
+        [IMPORT_ROW_LABELS.rejected, rejected, 'tc-import-count--rejected'],
       ]
     : [
         ['Added', created, 'tc-import-count--add'],
         ['Updated', updated, 'tc-import-count--update'],
-        ['Skipped', rejected, 'tc-import-count--rejected'],
+        [IMPORT_ROW_LABELS.rejected, rejected, 'tc-import-count--rejected'],
       ];
   return (
     <dl className="tc-import-counts" aria-label={preview ? 'What the import would do' : 'What the import did'}>
@@ -222,11 +223,11 @@ export function CatalogImport({ onImported }: CatalogImportProps) {
       {check && result && !isFileProblem(check) ? (
         <section className="tc-panel tc-import-step" aria-labelledby="import-report-title">
           <h2 className="tc-section-title" id="import-report-title">
-            2. Review {check.fileName}
+            2. What {check.fileName} holds
           </h2>
           <p className="tc-import-summary">
             {rows(result.accepted + result.rejected)} read: {rows(result.accepted)} valid
-            {hasProblems ? `, ${rows(result.rejected)} with problems` : ''}.
+            {hasProblems ? `, ${rows(result.rejected)} ${IMPORT_ROW_LABELS.rejected.toLowerCase()}` : ''}.
           </p>
           <Counts outcome={check} />
           <NewSuppliers suppliers={result.newSuppliers} preview={check.mode === 'dry-run' || check.status !== 200} />
@@ -303,7 +304,7 @@ export function CatalogImport({ onImported }: CatalogImportProps) {
             <p>
               {mounts(done.result.created)} added and {mounts(done.result.updated)} updated.
               {done.result.rejected > 0
-                ? ` ${rows(done.result.rejected)} with problems ${done.result.rejected === 1 ? 'was' : 'were'} skipped.`
+                ? ` ${done.result.rejected === 1 ? `1 ${IMPORT_ROW_LABELS.rejectedRows.replace(/s$/, '')} was` : `${formatNumber(done.result.rejected, 0)} ${IMPORT_ROW_LABELS.rejectedRows} were`} not imported.`
                 : ''}
             </p>
             {done.result.rejected > 0 && done.result.importId !== null ? (

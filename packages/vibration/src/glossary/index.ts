@@ -1,0 +1,2 @@
+export * from './glossary.js';
+export * from './cautions.js';
