@@ -723,6 +723,20 @@ export interface components {
        */
       lz: number;
     };
+    CandidateAltMassCaseDto: {
+      /** @description kg */
+      massKg: number;
+      cg: components["schemas"]["Vec3Dto"];
+      /** @description bounce estimate with the second mass, Hz */
+      verticalNaturalFrequencyHz: number;
+      perPoint: components["schemas"]["AltCasePointDto"][];
+      /** @description bounce estimate at the disturbing frequencies with the second mass */
+      isolation: components["schemas"]["AltCaseIsolationDto"][];
+      /** @description the whole-machine worst point with the second mass (absent when the inertia is unknown) */
+      wholeMachineWorst?: components["schemas"]["WholeMachineWorstDto"];
+      /** @description the second mass case meets every check */
+      passes: boolean;
+    };
     CandidateCrossingDto: {
       /** @description the mode by its motion, e.g. "pitch" or "roll + sway (mixed)" */
       mode: string;
@@ -761,11 +775,13 @@ export interface components {
       wholeMachine?: components["schemas"]["CandidateWholeMachineDto"];
       /** @description crossings of the source orders with the modes inside the running range */
       crossings?: components["schemas"]["CandidateCrossingDto"][];
+      /** @description the second mass case (components[].altMassKg), when given; the verdict covers it */
+      altMassCase?: components["schemas"]["CandidateAltMassCaseDto"];
       /** @description start-up and coast-down: each rigid-body mode an unbalance source crosses below the lowest running speed, lowest speed first ([] when nothing is passed or there is no unbalance; absent without the whole-machine verdict) */
       passage?: components["schemas"]["CandidatePassageDto"][];
       /** @description the largest motion the passage is checked against, mm (the criteria’s maxResonantMotionMm or the default) */
       passageLimitMm?: number;
-      /** @description follows the whole-machine verdict, with the load, deflection, mode and restraint checks */
+      /** @description follows the whole-machine verdict (both mass cases), with the load, deflection, mode and restraint checks */
       passes: boolean;
       reasons: string[];
       /** @description remarks and warnings that do not fail the candidate */
@@ -809,6 +825,8 @@ export interface components {
       loadN: number;
       /** @description load / rated load, without the weight margin (the basis of the lower utilisation check) */
       utilization: number;
+      /** @description load × (1 + weightMarginPct/100) / rated load: the basis of the upper utilisation check, the figure to show beside the allowed window (equal to utilization without a margin; absent on candidates stored before it was given) */
+      utilizationWithMargin?: number;
       /** @description the mount's own static deflection, mm */
       staticDeflectionMm: number;
       /** @description deflection of the flexible support under the point, mm (where supportStiffnessNPerMm is given) */
@@ -852,6 +870,8 @@ export interface components {
       /** @description per source: at the fixed frequency, or at the range ends, each crossing and the worst point (governing stiffness) */
       perFrequency: components["schemas"]["WholeMachineFrequencyDto"][];
     };
+    /** @enum {string} */
+    CatalogExportUnits: "SI" | "US" | "both";
     CatalogImportDto: {
       id: number;
       /** @example spring-mounts-2026.csv */
