@@ -532,7 +532,7 @@ describe('catalog (e2e)', () => {
       expect(await figures()).toEqual(stored); // both columns agree; the SI one is kept, exactly
 
       const refused = await t.http().get('/api/mounts/export.csv?units=metric').set(as(viewer)).expect(400);
-      expect(JSON.stringify(refused.body)).toContain('units must be SI, US or both');
+      expect(JSON.stringify(refused.body)).toContain('Units must be SI, US or both');
     });
 
     it('round-trips the restraint ratings given in N and in lbf (exact factor 1 lbf = 4.4482216152605 N, NIST SP 811)', async () => {

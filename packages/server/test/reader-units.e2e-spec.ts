@@ -43,6 +43,7 @@ describe('reasons and notes in the reader’s units (e2e)', () => {
     minIsolationPct: 50,
     minUtilization: 0.3,
     maxUtilization: 1.0,
+    weightMarginPct: 0, // the weights are known: the figures below are without a margin
     ambientTempC,
     supplierIds: [supplier.id],
   });

@@ -53,7 +53,9 @@ describe('BOM exports', () => {
   });
 
   it('CSV: numbers without binary noise (a price converted or summed in floating point)', () => {
-    const [, row] = parse(bomCsv([line({ unitPrice: 0.1 + 0.2, extendedPrice: 3 * 1.1 })], false)) as string[][];
+    const [, row] = parse(bomCsv([line({ unitPrice: 0.1 + 0.2, extendedPrice: 3 * 1.1 })], false), {
+      relax_column_count: true,
+    }) as string[][];
     expect(String(0.1 + 0.2)).toBe('0.30000000000000004');
     expect(row.slice(4, 6)).toEqual(['0.3', '3.3']);
   });

@@ -236,7 +236,7 @@ describe('designReportPdf: the whole machine (docs/engineering/selection.md §19
       'Machine: 1000 lb, centre of gravity (10, 0, 20) in',
       'A: x 30 in, y 10 in, z 0 in',
       'Ambient temperature 104 °F',
-      'level difference between points: 0.26 in',
+      'level error between points: 0.26 in',
       'load 500 lbf',
       'static deflection 1 in',
       'Static deflection at point A (1 in) exceeds the 0.79 in the mount IS-100 allows.',
@@ -250,7 +250,7 @@ describe('designReportPdf: the whole machine (docs/engineering/selection.md §19
     const pdf = await designReportPdf(chosenDesign(), { disturbingFrequencies: [], releasedAt: null, compress: false, units: 'SI' });
     const wanted = [
       'Machine: 453.6 kg, centre of gravity (0.254, 0, 0.508) m',
-      'level difference between points: 6.6 mm',
+      'level error between points: 6.6 mm',
       'load 2224 N',
       'utilisation 88 % with the 10 % weight margin (80 % without)',
       'static deflection 25.4 mm',
