@@ -37,7 +37,7 @@ export interface Caution {
 }
 
 export const CAUTIONS: Readonly<Record<Caution['id'], Caution>> = Object.freeze({
-  general: { id: 'general', title: 'Results are for preliminary sizing', text: GENERAL_CAUTION },
+  general: { id: 'general', title: 'What the model covers', text: GENERAL_CAUTION },
   'speed-range': { id: 'speed-range', title: 'Run-up and coast-down', text: SPEED_RANGE_CAUTION },
   'supplier-ratings': { id: 'supplier-ratings', title: 'Supplier ratings', text: SUPPLIER_RATINGS_CAUTION },
   'seismic-restraint': { id: 'seismic-restraint', title: `Seismic restraint (${SEISMIC_CODE_EDITION})`, text: SEISMIC_RESTRAINT_CAUTION },
