@@ -1,5 +1,6 @@
 import { Button, HTMLTable } from '@blueprintjs/core';
 import { PlusIcon, TrashIcon } from '@blueprintjs/icons';
+import { INPUT_LABELS } from '@tacet/vibration';
 import { FieldArray, useFormikContext } from 'formik';
 
 import { useUnits } from '@/lib/units';
@@ -25,11 +26,15 @@ export interface MountPointsTableProps {
   loadsN: readonly number[] | null;
 }
 
-/** Where the mounts sit (plan position and height of their elastic centre) and the load each takes. */
+/** What the support stiffness is, under the table. */
+export const SUPPORT_STIFFNESS_HELP = 'stiffness of the floor or steel under the point; leave it empty for a rigid floor.';
+
+/** Where the mounts sit (plan position and height of their elastic centre), how stiff the support under each is, and the load each takes. */
 export function MountPointsTable({ readOnly, loadsN }: MountPointsTableProps) {
   const { values } = useFormikContext<DesignFormValues>();
   const units = useUnits();
   const m = units.label('position');
+  const stiffnessUnit = units.label('stiffness');
 
   return (
     <FieldArray name="mountPoints">
@@ -42,6 +47,9 @@ export function MountPointsTable({ readOnly, loadsN }: MountPointsTableProps) {
                 <th scope="col">x ({m})</th>
                 <th scope="col">y ({m})</th>
                 <th scope="col">z ({m})</th>
+                <th scope="col">
+                  {INPUT_LABELS.supportStiffness} ({stiffnessUnit}, optional)
+                </th>
                 <th scope="col" className="tc-number">
                   Load, equal mounts
                 </th>
@@ -67,6 +75,15 @@ export function MountPointsTable({ readOnly, loadsN }: MountPointsTableProps) {
                         <CellInput name={field(axis)} label={`${axis} of point ${name}`} readOnly={readOnly} numeric />
                       </td>
                     ))}
+                    <td>
+                      <CellInput
+                        name={field('supportStiffness')}
+                        label={`${INPUT_LABELS.supportStiffness} under point ${name}`}
+                        readOnly={readOnly}
+                        numeric
+                        placeholder="rigid"
+                      />
+                    </td>
                     <td className={`tc-number${load !== undefined && load < 0 ? ' tc-text-danger' : ''}`}>
                       {load === undefined ? '—' : units.format('force', load)}
                     </td>
@@ -88,6 +105,9 @@ export function MountPointsTable({ readOnly, loadsN }: MountPointsTableProps) {
               })}
             </tbody>
           </HTMLTable>
+          <p className="tc-muted tc-note" data-testid="support-stiffness-help">
+            {INPUT_LABELS.supportStiffness}: {SUPPORT_STIFFNESS_HELP}
+          </p>
           <ListError name="mountPoints" />
           {readOnly ? null : (
             <Button
