@@ -13,7 +13,8 @@ function rowName(name: string, index: number): string {
 }
 
 /** What the second mass is, under the table. */
-export const SECOND_MASS_HELP = 'drained, empty or without its liquid; the verdict covers both. Leave it empty when the mass does not change.';
+export const SECOND_MASS_HELP =
+  'drained, empty or without its liquid; the verdict covers both. Leave it empty when the mass does not change.';
 
 /** The parts of the machine with their operating mass, optional second mass, centre of gravity and optional box size. */
 export function EquipmentTable({ readOnly }: { readOnly: boolean }) {

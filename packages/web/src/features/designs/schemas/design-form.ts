@@ -184,7 +184,8 @@ export function toFormValues(input: DesignInput, units: Units): DesignFormValues
       y: position(p.y),
       z: position(p.z),
       // The API takes N/mm; the units convert from N/m.
-      supportStiffness: p.supportStiffnessNPerMm === undefined ? '' : numberText(units.toDisplay('stiffness', p.supportStiffnessNPerMm * 1000)),
+      supportStiffness:
+        p.supportStiffnessNPerMm === undefined ? '' : numberText(units.toDisplay('stiffness', p.supportStiffnessNPerMm * 1000)),
     })),
     operating: {
       speedMode: operating.speedRangeRpm ? 'range' : 'fixed',

@@ -60,8 +60,8 @@ export function CandidateAltMass({ altCase }: { altCase: AltMassCase }) {
         ) : null}
       </dl>
       <p className="tc-muted tc-note">
-        The machine with the second mass of its components (drained, empty or without its liquid), the centre of gravity moving with
-        it. The verdict above covers both cases.
+        The machine with the second mass of its components (drained, empty or without its liquid), the centre of gravity moving with it. The
+        verdict above covers both cases.
       </p>
     </section>
   );
