@@ -38,7 +38,7 @@ export function EquipmentTable({ readOnly }: { readOnly: boolean }) {
                     Mass ({kg})
                   </th>
                   <th scope="col" rowSpan={2} className="tc-number">
-                    {INPUT_LABELS.secondMass} ({kg}, optional)
+                    {INPUT_LABELS.secondMass} <br />({kg}, optional)
                   </th>
                   <th scope="colgroup" colSpan={3} className="tc-group-head">
                     Centre of gravity ({m})

@@ -45,20 +45,20 @@ export function CandidateAltMass({ altCase }: { altCase: AltMassCase }) {
             </dd>
           </>
         ) : null}
-        {worst ? (
-          <>
-            <dt>Whole machine, worst point</dt>
-            <dd data-testid="alt-mass-worst">
-              {worst.transmissibility > 1
-                ? `no isolation (transmissibility ${formatTransmissibility(worst.transmissibility)})`
-                : `isolation ${formatPct(worst.efficiencyPct)}`}{' '}
-              at {typeof worst.speedRpm === 'number' ? `${rpm.format(worst.speedRpm)} rpm, ` : ''}
-              {formatFrequency(worst.frequencyHz)}, from {worst.source}
-              {bandEnd ? `, at ${bandEnd}` : ''}
-            </dd>
-          </>
-        ) : null}
       </dl>
+      {worst ? (
+        <p className="tc-whole-machine-worst" data-testid="alt-mass-worst">
+          Whole machine, worst point:{' '}
+          <strong>
+            {worst.transmissibility > 1
+              ? `no isolation (transmissibility ${formatTransmissibility(worst.transmissibility)})`
+              : `isolation ${formatPct(worst.efficiencyPct)}`}
+          </strong>{' '}
+          at {typeof worst.speedRpm === 'number' ? `${rpm.format(worst.speedRpm)} rpm, ` : ''}
+          {formatFrequency(worst.frequencyHz)}, from {worst.source}
+          {bandEnd ? `, at ${bandEnd}` : ''}.
+        </p>
+      ) : null}
       <p className="tc-muted tc-note">
         The machine with the second mass of its components (drained, empty or without its liquid), the centre of gravity moving with it. The
         verdict above covers both cases.

@@ -210,53 +210,57 @@ export function CandidateDetail({
       {candidate.altMassCase ? <CandidateAltMass altCase={candidate.altMassCase} /> : null}
 
       <h4 className="tc-subsection-title">Per mount point</h4>
-      <HTMLTable compact striped className="tc-table" aria-label="Loads per point">
-        <thead>
-          <tr>
-            <th scope="col">Point</th>
-            <th scope="col">Part number</th>
-            <th scope="col" className="tc-number">
-              Load
-            </th>
-            <th scope="col" className="tc-number">
-              Utilisation
-            </th>
-            {margin > 0 ? (
+      <div className="tc-table-scroll">
+        <HTMLTable compact striped className="tc-table" aria-label="Loads per point">
+          <thead>
+            <tr>
+              <th scope="col">Point</th>
+              <th scope="col">Part number</th>
               <th scope="col" className="tc-number">
-                With the {formatMargin(margin)} % weight margin
+                Load
               </th>
-            ) : null}
-            <th scope="col" className="tc-number">
-              Static deflection
-            </th>
-            {supportGiven ? (
               <th scope="col" className="tc-number">
-                Support deflection
+                Utilisation
               </th>
-            ) : null}
-          </tr>
-        </thead>
-        <tbody>
-          {candidate.perPoint.map((point) => {
-            const checked = utilizationWithMargin(candidate, point.utilization);
-            return (
-              <tr key={point.label}>
-                <td>{point.label}</td>
-                <td>{point.partNumber}</td>
-                <td className="tc-number">{units.format('force', point.loadN)}</td>
-                <td className={`tc-number${point.utilization > 1 ? ' tc-text-danger' : ''}`}>{formatUtilisation(point.utilization)}</td>
-                {margin > 0 ? <td className={`tc-number${checked > 1 ? ' tc-text-danger' : ''}`}>{formatUtilisation(checked)}</td> : null}
-                <td className="tc-number">{units.format('deflection', point.staticDeflectionMm / 1000)}</td>
-                {supportGiven ? (
-                  <td className="tc-number">
-                    {point.supportDeflectionMm === undefined ? 'rigid' : units.format('deflection', point.supportDeflectionMm / 1000)}
-                  </td>
-                ) : null}
-              </tr>
-            );
-          })}
-        </tbody>
-      </HTMLTable>
+              {margin > 0 ? (
+                <th scope="col" className="tc-number">
+                  With the {formatMargin(margin)} % <br />
+                  weight margin
+                </th>
+              ) : null}
+              <th scope="col" className="tc-number">
+                Static deflection
+              </th>
+              {supportGiven ? (
+                <th scope="col" className="tc-number">
+                  Support <br />
+                  deflection
+                </th>
+              ) : null}
+            </tr>
+          </thead>
+          <tbody>
+            {candidate.perPoint.map((point) => {
+              const checked = utilizationWithMargin(candidate, point.utilization);
+              return (
+                <tr key={point.label}>
+                  <td>{point.label}</td>
+                  <td>{point.partNumber}</td>
+                  <td className="tc-number">{units.format('force', point.loadN)}</td>
+                  <td className={`tc-number${point.utilization > 1 ? ' tc-text-danger' : ''}`}>{formatUtilisation(point.utilization)}</td>
+                  {margin > 0 ? <td className={`tc-number${checked > 1 ? ' tc-text-danger' : ''}`}>{formatUtilisation(checked)}</td> : null}
+                  <td className="tc-number">{units.format('deflection', point.staticDeflectionMm / 1000)}</td>
+                  {supportGiven ? (
+                    <td className="tc-number">
+                      {point.supportDeflectionMm === undefined ? 'rigid' : units.format('deflection', point.supportDeflectionMm / 1000)}
+                    </td>
+                  ) : null}
+                </tr>
+              );
+            })}
+          </tbody>
+        </HTMLTable>
+      </div>
       <p className="tc-muted tc-note">
         Utilisation is load ÷ rated load.{' '}
         {margin > 0
