@@ -32,6 +32,8 @@ describe('glossary', () => {
 
   it('reads property names as words: known ones from the list, others by splitting and dropping the unit', () => {
     expect(fieldWords('massKg')).toBe('Mass');
+    expect(fieldWords('altMassKg')).toBe('Second mass');
+    expect(fieldWords('supportStiffnessNPerMm')).toBe('Support stiffness');
     expect(fieldWords('lineFrequencyHz')).toBe('Supply frequency');
     expect(fieldWords('contactEmail')).toBe('Contact email');
     expect(fieldWords('staticDeflectionMm')).toBe('Static deflection');

@@ -86,6 +86,8 @@ export const INPUT_LABELS = Object.freeze({
   ambientTemperature: 'Ambient temperature',
   mountTypes: 'Mount types',
   suppliers: 'Suppliers',
+  secondMass: 'Second mass',
+  supportStiffness: 'Support stiffness',
 });
 
 /** Words of the results, the same in the table, the comparison and the report. */
@@ -113,6 +115,8 @@ export const IMPORT_ROW_LABELS = Object.freeze({
  */
 export const FIELD_WORDS: Readonly<Record<string, string>> = Object.freeze({
   massKg: 'Mass',
+  altMassKg: INPUT_LABELS.secondMass,
+  supportStiffnessNPerMm: INPUT_LABELS.supportStiffness,
   cg: 'Centre of gravity',
   mountPoints: 'Mount points',
   speedRpm: INPUT_LABELS.speed,

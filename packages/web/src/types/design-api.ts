@@ -40,6 +40,8 @@ export type ModeName = ApiSchemas['RigidBodyMode'];
 export type CandidatePoint = ApiSchemas['CandidatePointDto'];
 export type CandidateIsolation = ApiSchemas['CandidateIsolationDto'];
 export type Candidate = ApiSchemas['CandidateDto'];
+/** The second mass case of a candidate (components[].altMassKg given). */
+export type CandidateAltMassCase = ApiSchemas['CandidateAltMassCaseDto'];
 /** A candidate's seismic restraint figures (N, degrees). */
 export type CandidateRestraint = ApiSchemas['CandidateRestraintDto'];
 export type RestraintPoint = ApiSchemas['RestraintPointDto'];

@@ -1,5 +1,6 @@
 import { Button, HTMLTable } from '@blueprintjs/core';
 import { PlusIcon, TrashIcon } from '@blueprintjs/icons';
+import { INPUT_LABELS } from '@tacet/vibration';
 import { FieldArray, useFormikContext } from 'formik';
 
 import { useUnits } from '@/lib/units';
@@ -11,7 +12,11 @@ function rowName(name: string, index: number): string {
   return name.trim() || `component ${index + 1}`;
 }
 
-/** The parts of the machine with their operating mass, centre of gravity and optional box size. */
+/** What the second mass is, under the table. */
+export const SECOND_MASS_HELP =
+  'drained, empty or without its liquid; the verdict covers both. Leave it empty when the mass does not change.';
+
+/** The parts of the machine with their operating mass, optional second mass, centre of gravity and optional box size. */
 export function EquipmentTable({ readOnly }: { readOnly: boolean }) {
   const { values } = useFormikContext<DesignFormValues>();
   const units = useUnits();
@@ -31,6 +36,9 @@ export function EquipmentTable({ readOnly }: { readOnly: boolean }) {
                   </th>
                   <th scope="col" rowSpan={2} className="tc-number">
                     Mass ({kg})
+                  </th>
+                  <th scope="col" rowSpan={2} className="tc-number">
+                    {INPUT_LABELS.secondMass} <br />({kg}, optional)
                   </th>
                   <th scope="colgroup" colSpan={3} className="tc-group-head">
                     Centre of gravity ({m})
@@ -64,6 +72,15 @@ export function EquipmentTable({ readOnly }: { readOnly: boolean }) {
                       </td>
                       <td>
                         <CellInput name={field('mass')} label={`Mass of ${name}`} readOnly={readOnly} numeric />
+                      </td>
+                      <td>
+                        <CellInput
+                          name={field('altMass')}
+                          label={`${INPUT_LABELS.secondMass} of ${name}`}
+                          readOnly={readOnly}
+                          numeric
+                          placeholder="—"
+                        />
                       </td>
                       {(['x', 'y', 'z'] as const).map((axis) => (
                         <td key={axis}>
@@ -100,6 +117,9 @@ export function EquipmentTable({ readOnly }: { readOnly: boolean }) {
               </tbody>
             </HTMLTable>
           </div>
+          <p className="tc-muted tc-note" data-testid="second-mass-help">
+            {INPUT_LABELS.secondMass}: {SECOND_MASS_HELP}
+          </p>
           <ListError name="components" />
           {readOnly ? null : (
             <Button

@@ -1,5 +1,6 @@
 import { Button, HTMLTable } from '@blueprintjs/core';
 import { PlusIcon, TrashIcon } from '@blueprintjs/icons';
+import { INPUT_LABELS } from '@tacet/vibration';
 import { FieldArray, useFormikContext } from 'formik';
 
 import { useUnits } from '@/lib/units';
@@ -25,69 +26,91 @@ export interface MountPointsTableProps {
   loadsN: readonly number[] | null;
 }
 
-/** Where the mounts sit (plan position and height of their elastic centre) and the load each takes. */
+/** What the support stiffness is, under the table. */
+export const SUPPORT_STIFFNESS_HELP = 'stiffness of the floor or steel under the point; leave it empty for a rigid floor.';
+
+/** Where the mounts sit (plan position and height of their elastic centre), how stiff the support under each is, and the load each takes. */
 export function MountPointsTable({ readOnly, loadsN }: MountPointsTableProps) {
   const { values } = useFormikContext<DesignFormValues>();
   const units = useUnits();
   const m = units.label('position');
+  const stiffnessUnit = units.label('stiffness');
 
   return (
     <FieldArray name="mountPoints">
       {({ push, remove }) => (
         <>
-          <HTMLTable compact className="tc-table tc-edit-table" aria-label="Mount points">
-            <thead>
-              <tr>
-                <th scope="col">Label</th>
-                <th scope="col">x ({m})</th>
-                <th scope="col">y ({m})</th>
-                <th scope="col">z ({m})</th>
-                <th scope="col" className="tc-number">
-                  Load, equal mounts
-                </th>
-                {readOnly ? null : (
+          <div className="tc-table-scroll">
+            <HTMLTable compact className="tc-table tc-edit-table" aria-label="Mount points">
+              <thead>
+                <tr>
+                  <th scope="col">Label</th>
+                  <th scope="col">x ({m})</th>
+                  <th scope="col">y ({m})</th>
+                  <th scope="col">z ({m})</th>
                   <th scope="col">
-                    <span className="tc-visually-hidden">Actions</span>
+                    {INPUT_LABELS.supportStiffness} <br />({stiffnessUnit}, optional)
                   </th>
-                )}
-              </tr>
-            </thead>
-            <tbody>
-              {values.mountPoints.map((row, index) => {
-                const name = row.label.trim() || `point ${index + 1}`;
-                const field = (key: string) => `mountPoints[${index}].${key}`;
-                const load = loadsN?.[index];
-                return (
-                  <tr key={index}>
-                    <td className="tc-cell-label">
-                      <CellInput name={field('label')} label={`Label of mount point ${index + 1}`} readOnly={readOnly} />
-                    </td>
-                    {(['x', 'y', 'z'] as const).map((axis) => (
-                      <td key={axis}>
-                        <CellInput name={field(axis)} label={`${axis} of point ${name}`} readOnly={readOnly} numeric />
+                  <th scope="col" className="tc-number">
+                    Load, <br />
+                    equal mounts
+                  </th>
+                  {readOnly ? null : (
+                    <th scope="col">
+                      <span className="tc-visually-hidden">Actions</span>
+                    </th>
+                  )}
+                </tr>
+              </thead>
+              <tbody>
+                {values.mountPoints.map((row, index) => {
+                  const name = row.label.trim() || `point ${index + 1}`;
+                  const field = (key: string) => `mountPoints[${index}].${key}`;
+                  const load = loadsN?.[index];
+                  return (
+                    <tr key={index}>
+                      <td className="tc-cell-label">
+                        <CellInput name={field('label')} label={`Label of mount point ${index + 1}`} readOnly={readOnly} />
                       </td>
-                    ))}
-                    <td className={`tc-number${load !== undefined && load < 0 ? ' tc-text-danger' : ''}`}>
-                      {load === undefined ? '—' : units.format('force', load)}
-                    </td>
-                    {readOnly ? null : (
-                      <td className="tc-table-actions">
-                        <Button
-                          variant="minimal"
-                          size="small"
-                          icon={<TrashIcon />}
-                          aria-label={`Remove point ${name}`}
-                          title="Remove"
-                          disabled={values.mountPoints.length <= 3}
-                          onClick={() => remove(index)}
+                      {(['x', 'y', 'z'] as const).map((axis) => (
+                        <td key={axis}>
+                          <CellInput name={field(axis)} label={`${axis} of point ${name}`} readOnly={readOnly} numeric />
+                        </td>
+                      ))}
+                      <td>
+                        <CellInput
+                          name={field('supportStiffness')}
+                          label={`${INPUT_LABELS.supportStiffness} under point ${name}`}
+                          readOnly={readOnly}
+                          numeric
+                          placeholder="rigid"
                         />
                       </td>
-                    )}
-                  </tr>
-                );
-              })}
-            </tbody>
-          </HTMLTable>
+                      <td className={`tc-number${load !== undefined && load < 0 ? ' tc-text-danger' : ''}`}>
+                        {load === undefined ? '—' : units.format('force', load)}
+                      </td>
+                      {readOnly ? null : (
+                        <td className="tc-table-actions">
+                          <Button
+                            variant="minimal"
+                            size="small"
+                            icon={<TrashIcon />}
+                            aria-label={`Remove point ${name}`}
+                            title="Remove"
+                            disabled={values.mountPoints.length <= 3}
+                            onClick={() => remove(index)}
+                          />
+                        </td>
+                      )}
+                    </tr>
+                  );
+                })}
+              </tbody>
+            </HTMLTable>
+          </div>
+          <p className="tc-muted tc-note" data-testid="support-stiffness-help">
+            {INPUT_LABELS.supportStiffness}: {SUPPORT_STIFFNESS_HELP}
+          </p>
           <ListError name="mountPoints" />
           {readOnly ? null : (
             <Button

@@ -57,6 +57,8 @@ export interface ComponentValues {
   lx: string;
   ly: string;
   lz: string;
+  /** Optional second operating mass (drained, empty, without its liquid); blank: none. */
+  altMass: string;
   /** Own inertia from the saved input, kept unchanged (kg·m²); not edited on this screen. */
   inertia?: DesignComponent['inertia'];
 }
@@ -66,6 +68,8 @@ export interface MountPointValues {
   x: string;
   y: string;
   z: string;
+  /** Vertical stiffness of the floor or steel under the point, in the user's stiffness unit; blank: rigid. */
+  supportStiffness: string;
 }
 
 export type SpeedMode = 'fixed' | 'range';
@@ -149,11 +153,11 @@ function listText(values: readonly number[] | undefined): string {
 }
 
 export function blankComponent(): ComponentValues {
-  return { name: '', mass: '', x: '', y: '', z: '', lx: '', ly: '', lz: '' };
+  return { name: '', mass: '', x: '', y: '', z: '', lx: '', ly: '', lz: '', altMass: '' };
 }
 
 export function blankMountPoint(label = ''): MountPointValues {
-  return { label, x: '', y: '', z: '' };
+  return { label, x: '', y: '', z: '', supportStiffness: '' };
 }
 
 /** The saved SI input → what the form shows in the user's units. */
@@ -171,9 +175,18 @@ export function toFormValues(input: DesignInput, units: Units): DesignFormValues
       lx: c.box ? position(c.box.lx) : '',
       ly: c.box ? position(c.box.ly) : '',
       lz: c.box ? position(c.box.lz) : '',
+      altMass: c.altMassKg === undefined ? '' : numberText(units.toDisplay('mass', c.altMassKg)),
       ...(c.inertia ? { inertia: c.inertia } : {}),
     })),
-    mountPoints: input.mountPoints.map((p) => ({ label: p.label, x: position(p.x), y: position(p.y), z: position(p.z) })),
+    mountPoints: input.mountPoints.map((p) => ({
+      label: p.label,
+      x: position(p.x),
+      y: position(p.y),
+      z: position(p.z),
+      // The API takes N/mm; the units convert from N/m.
+      supportStiffness:
+        p.supportStiffnessNPerMm === undefined ? '' : numberText(units.toDisplay('stiffness', p.supportStiffnessNPerMm * 1000)),
+    })),
     operating: {
       speedMode: operating.speedRangeRpm ? 'range' : 'fixed',
       speedRpm: numberText(operating.speedRpm),
@@ -258,6 +271,11 @@ export function parseComponents(rows: readonly ComponentValues[], units: Units):
       if (lx === undefined || ly === undefined || lz === undefined) return null;
       component.box = { lx: units.toSi('position', lx), ly: units.toSi('position', ly), lz: units.toSi('position', lz) };
     }
+    if (!isBlank(row.altMass)) {
+      const altMass = parseNumber(row.altMass);
+      if (altMass === undefined) return null;
+      component.altMassKg = units.toSi('mass', altMass);
+    }
     if (row.inertia) component.inertia = row.inertia;
     out.push(component);
   }
@@ -272,12 +290,18 @@ export function parseMountPoints(rows: readonly MountPointValues[], units: Units
     const y = parseNumber(row.y);
     const z = parseNumber(row.z);
     if (x === undefined || y === undefined || z === undefined) return null;
-    out.push({
+    const point: MountPoint = {
       label: row.label.trim(),
       x: units.toSi('position', x),
       y: units.toSi('position', y),
       z: units.toSi('position', z),
-    });
+    };
+    if (!isBlank(row.supportStiffness)) {
+      const stiffness = parseNumber(row.supportStiffness);
+      if (stiffness === undefined) return null;
+      point.supportStiffnessNPerMm = units.toSi('stiffness', stiffness) / 1000;
+    }
+    out.push(point);
   }
   return out;
 }
@@ -417,6 +441,7 @@ const componentSchema = yup
     lx: optionalNumber('Length').min(0, 'Dimensions cannot be negative'),
     ly: optionalNumber('Width').min(0, 'Dimensions cannot be negative'),
     lz: optionalNumber('Height').min(0, 'Dimensions cannot be negative'),
+    altMass: optionalNumber('The second mass').positive('The second mass must be more than 0'),
   })
   .test('box', 'Give all three box dimensions, or none', function (row) {
     const given = [row.lx, row.ly, row.lz].filter((v) => v !== undefined).length;
@@ -434,6 +459,7 @@ const mountPointSchema = yup.object({
   x: requiredNumber('x'),
   y: requiredNumber('y'),
   z: requiredNumber('z'),
+  supportStiffness: optionalNumber('The support stiffness').positive('The support stiffness must be more than 0'),
 });
 
 const operatingSchema = yup
@@ -576,6 +602,8 @@ export function designFormSchema(units: Units) {
 /** API leaf names whose form field is named otherwise (`massKg` → `mass`). */
 const FORM_FIELD_OF: Record<string, string> = {
   massKg: 'mass',
+  altMassKg: 'altMass',
+  supportStiffnessNPerMm: 'supportStiffness',
   ambientTempC: 'ambientTemp',
   snubberGapMm: 'snubberGap',
   snubberGapM: 'snubberGap',

@@ -10,6 +10,7 @@ import type { Model2Candidate } from '@/types/model2-api';
 
 import { useSpeedCurves } from '../api/get-speed-curves';
 import { useCandidateDamping } from '../hooks/use-candidate-damping';
+import { CandidateAltMass } from './candidate-alt-mass';
 import { CandidateCharts } from './candidate-charts';
 import { CandidateRestraintSection, type RestraintPlanLayout } from './candidate-restraint';
 import { CandidateWholeMachine, type WholeMachineContext } from './candidate-whole-machine';
@@ -87,6 +88,7 @@ export function CandidateDetail({
   const assumptions = assumptionsOf(candidate);
   const model2 = candidate as Candidate & Model2Candidate;
   const estimate = model2.wholeMachine ? ' (bounce estimate)' : '';
+  const supportGiven = candidate.perPoint.some((point) => point.supportDeflectionMm !== undefined);
   const speedCurves = useSpeedCurves(curvesInput, candidate, model2.wholeMachine !== undefined && wholeMachineContext?.rangeRpm != null);
 
   // Σk_dyn follows from the server's fn and mass; the live fn re-uses it with the current mass.
@@ -205,44 +207,60 @@ export function CandidateDetail({
         />
       ) : null}
 
+      {candidate.altMassCase ? <CandidateAltMass altCase={candidate.altMassCase} /> : null}
+
       <h4 className="tc-subsection-title">Per mount point</h4>
-      <HTMLTable compact striped className="tc-table" aria-label="Loads per point">
-        <thead>
-          <tr>
-            <th scope="col">Point</th>
-            <th scope="col">Part number</th>
-            <th scope="col" className="tc-number">
-              Load
-            </th>
-            <th scope="col" className="tc-number">
-              Utilisation
-            </th>
-            {margin > 0 ? (
+      <div className="tc-table-scroll">
+        <HTMLTable compact striped className="tc-table" aria-label="Loads per point">
+          <thead>
+            <tr>
+              <th scope="col">Point</th>
+              <th scope="col">Part number</th>
               <th scope="col" className="tc-number">
-                With the {formatMargin(margin)} % weight margin
+                Load
               </th>
-            ) : null}
-            <th scope="col" className="tc-number">
-              Static deflection
-            </th>
-          </tr>
-        </thead>
-        <tbody>
-          {candidate.perPoint.map((point) => {
-            const checked = utilizationWithMargin(candidate, point.utilization);
-            return (
-              <tr key={point.label}>
-                <td>{point.label}</td>
-                <td>{point.partNumber}</td>
-                <td className="tc-number">{units.format('force', point.loadN)}</td>
-                <td className={`tc-number${point.utilization > 1 ? ' tc-text-danger' : ''}`}>{formatUtilisation(point.utilization)}</td>
-                {margin > 0 ? <td className={`tc-number${checked > 1 ? ' tc-text-danger' : ''}`}>{formatUtilisation(checked)}</td> : null}
-                <td className="tc-number">{units.format('deflection', point.staticDeflectionMm / 1000)}</td>
-              </tr>
-            );
-          })}
-        </tbody>
-      </HTMLTable>
+              <th scope="col" className="tc-number">
+                Utilisation
+              </th>
+              {margin > 0 ? (
+                <th scope="col" className="tc-number">
+                  With the {formatMargin(margin)} % <br />
+                  weight margin
+                </th>
+              ) : null}
+              <th scope="col" className="tc-number">
+                Static deflection
+              </th>
+              {supportGiven ? (
+                <th scope="col" className="tc-number">
+                  Support <br />
+                  deflection
+                </th>
+              ) : null}
+            </tr>
+          </thead>
+          <tbody>
+            {candidate.perPoint.map((point) => {
+              const checked = utilizationWithMargin(candidate, point.utilization);
+              return (
+                <tr key={point.label}>
+                  <td>{point.label}</td>
+                  <td>{point.partNumber}</td>
+                  <td className="tc-number">{units.format('force', point.loadN)}</td>
+                  <td className={`tc-number${point.utilization > 1 ? ' tc-text-danger' : ''}`}>{formatUtilisation(point.utilization)}</td>
+                  {margin > 0 ? <td className={`tc-number${checked > 1 ? ' tc-text-danger' : ''}`}>{formatUtilisation(checked)}</td> : null}
+                  <td className="tc-number">{units.format('deflection', point.staticDeflectionMm / 1000)}</td>
+                  {supportGiven ? (
+                    <td className="tc-number">
+                      {point.supportDeflectionMm === undefined ? 'rigid' : units.format('deflection', point.supportDeflectionMm / 1000)}
+                    </td>
+                  ) : null}
+                </tr>
+              );
+            })}
+          </tbody>
+        </HTMLTable>
+      </div>
       <p className="tc-muted tc-note">
         Utilisation is load ÷ rated load.{' '}
         {margin > 0
