@@ -239,7 +239,9 @@ export class WholeMachineCheck implements FinalistCheck {
         speeds.add(min);
         speeds.add(max);
         for (const x of result.crossings) if (x.sourceIndex === s) speeds.add(x.speedRpm);
-        speeds.add(result.worstSpeedBySource[s]);
+        // the worst point, unless it is one of the speeds above but for rounding (n'·√φ at a fixed speed)
+        const worstRpm = result.worstSpeedBySource[s];
+        if (![...speeds].some((n) => Math.abs(n - worstRpm) <= 1e-9 * n)) speeds.add(worstRpm);
       }
       for (const n of [...speeds].sort((a, b) => a - b)) {
         const frequencyHz = sourceFrequencyHz(source, n);
