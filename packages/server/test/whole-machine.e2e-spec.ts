@@ -246,6 +246,23 @@ describe('whole-machine verdict (e2e)', () => {
     );
   });
 
+  it('a fixed speed gives one row per source in the per-frequency figures (the worst point not repeated for a rounding difference)', async () => {
+    // with a ±10 % band, 1480/√1.1·√1.1 = 1480.0000000000002 in floating point (and so for 990 and 2960 rpm)
+    for (const speedRpm of [1480, 990, 2960]) {
+      const response = await post('/api/selection', {
+        components: TALL,
+        mountPoints: TALL_POINTS,
+        operating: { speedRpm, orders: [1, 2], vaneCount: 6, lineFrequencyHz: 50 },
+        criteria: { minIsolationPct: 50, minUtilization: 0.5, maxUtilization: 1.0, supplierIds: [rubber.id], stiffnessTolerancePct: 10 },
+      });
+      expect(response.status).toBe(200);
+      const c = find(response.body.candidates, tallMount.id);
+      const bySource = new Map<string, number>();
+      for (const p of c.wholeMachine!.perFrequency) bySource.set(p.source, (bySource.get(p.source) ?? 0) + 1);
+      expect([...bySource.values()]).toEqual([1, 1, 1, 1]);
+    }
+  });
+
   it('the band: the verdict is the worse end, the one-mass T at the stiff end above resonance (symmetric machine, hysteretic)', async () => {
     const body = {
       components: [{ name: 'Block', massKg: 800, cg: { x: 0, y: 0, z: 0.3 }, box: { lx: 1.0, ly: 0.8, lz: 0.6 } }],

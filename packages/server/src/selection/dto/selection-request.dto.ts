@@ -17,6 +17,7 @@ import {
 } from 'class-validator';
 import { ComponentDto, CriteriaDto, MountPointDto, OperatingConditionsDto, SELECTION_LIMITS } from './design-input.dto.js';
 import { RestraintInputDto } from './restraint.dto.js';
+import { MAX_ID } from '../../common/ids.js';
 import { IsFiniteNumber, NotTogetherWith } from './validators.js';
 
 /** `limit`: passing candidates returned (and up to as many failing ones). */
@@ -95,6 +96,7 @@ export class SelectionCurvesRequestDto extends SelectionRequestDto {
   @NotTogetherWith('seriesId', { message: 'Give either a mount or a series, not both' })
   @IsInt({ message: 'The mount must be given by its number' })
   @IsPositive({ message: 'The mount must be given by its number' })
+  @Max(MAX_ID, { message: 'There is no mount with that number' })
   mountId?: number;
 
   @ApiPropertyOptional({ example: '3:LV', description: 'the series candidate `${supplierId}:${series}`' })

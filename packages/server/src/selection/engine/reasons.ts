@@ -19,6 +19,7 @@ import { catalogAssumptionsFor } from './assumptions.js';
 import { MODE_SEPARATION, type ModeConflict, type ModeFindings } from './mode-check.js';
 import { passageNotes, passageReasons, type PassageFindings } from './passage-check.js';
 import type { WholeMachineFindings } from './whole-machine-check.js';
+import { bandWords, formatRpm, wholeMachine, wholeMachineNotes } from './reasons-whole-machine.js';
 import { SPRING_MIN_HORIZONTAL_RATIO, SPRING_RESERVE } from './spring-checks.js';
 
 /** What the wording reads about one candidate. */
@@ -187,73 +188,6 @@ function isolation({ problem, store, c }: WordingContext): string[] {
       : `Isolation at ${at} is ${formatPctValue(isolationEfficiencyPct(t))}, below the ${formatNumber(problem.criteria.minIsolationPct, 1)} % ` +
         `target (natural frequency ${formatHz(fn)}). Softer mounts are needed.`,
   ];
-}
-
-/** The worst whole-machine point against the requirement, then every crossing inside the running range. */
-function wholeMachine({ problem, wholeMachine: w }: WordingContext): string[] {
-  if (!w) return [];
-  const { worst } = w;
-  const at = worst.speedRpm === null ? formatHz(worst.frequencyHz) : `${formatRpm(worst.speedRpm)}, ${formatHz(worst.frequencyHz)}`;
-  const band = bandWords(worst.stiffnessFactor, w.stiffnessTolerancePct) + assumedRatioWords(w.assumedHorizontalRatio);
-  const required = `${formatNumber(problem.criteria.minIsolationPct, 1)} %`;
-  const reasons = [
-    worst.transmissibility > 1
-      ? `Whole machine, ${worst.source}: at ${at}${band} the mounts amplify the force (transmissibility ` +
-        `${formatNumber(worst.transmissibility, 2)}) instead of isolating it; ${required} isolation is required.`
-      : `Whole machine, ${worst.source}: isolation ${formatPctValue(worst.efficiencyPct)} at ${at}${band}, below the ${required} required.`,
-  ];
-  for (const x of w.crossings) reasons.push(crossingWords(x));
-  return reasons;
-}
-
-function crossingWords(x: { mode: string; modeFrequencyHz: number; source: string; order: number; speedRpm: number }): string {
-  return (
-    `The ${x.mode} mode at ${formatHz(x.modeFrequencyHz)} is crossed by ${x.source} (${formatNumber(x.order, 2)}× shaft speed) ` +
-    `at ${formatRpm(x.speedRpm)}, inside the running range.`
-  );
-}
-
-/** The verdict's basis for a candidate that passes it, crossings that did not fail it, the fallback to the estimate. */
-function wholeMachineNotes({ store, c, wholeMachine: w, modes }: WordingContext): string[] {
-  if (!w) {
-    return modes === undefined
-      ? []
-      : [
-          'Whole-machine verdict not computed (the inertia of the machine is unknown or degenerate): the verdict uses the bounce ' +
-            'estimate at the disturbing frequencies.',
-        ];
-  }
-  const notes: string[] = [];
-  if (!(store.fail[c] & FAIL.wholeMachine)) {
-    const { worst } = w;
-    const at = worst.speedRpm === null ? formatHz(worst.frequencyHz) : `${formatRpm(worst.speedRpm)}, ${formatHz(worst.frequencyHz)}`;
-    notes.push(
-      `Whole machine: worst isolation ${formatPctValue(worst.efficiencyPct)}, ${worst.source} at ${at}` +
-        `${bandWords(worst.stiffnessFactor, w.stiffnessTolerancePct)}${assumedRatioWords(w.assumedHorizontalRatio)}; ` +
-        'the isolation per frequency above is the bounce estimate.',
-    );
-    for (const x of w.crossings) notes.push(`${crossingWords(x)} Its response stays within the requirement.`);
-  }
-  if (!w.toleranceFromCriteria && w.stiffnessTolerancePct > 0) {
-    notes.push(`Stiffness band ±${formatNumber(w.stiffnessTolerancePct, 1)} % (the usual tolerance of this mount type).`);
-  }
-  return notes;
-}
-
-/** Which end of the assumed horizontal ratio governed, when the catalog gives none (selection.md §14). */
-function assumedRatioWords(ratio: number | null): string {
-  return ratio === null ? '' : ` (the horizontal stiffness the catalog does not give taken as ${formatNumber(ratio, 1)}× the vertical)`;
-}
-
-function bandWords(factor: number, tolerancePct: number): string {
-  if (tolerancePct === 0) return '';
-  if (factor === 1) return ' (nominal stiffness)';
-  const pct = formatNumber(Math.abs(factor - 1) * 100, 1);
-  return factor < 1 ? ` (stiffness ${pct} % below nominal)` : ` (stiffness ${pct} % above nominal)`;
-}
-
-function formatRpm(rpm: number): string {
-  return `${formatNumber(rpm, 0)} rpm`;
 }
 
 function utilization({ problem, perPoint }: WordingContext): string[] {

@@ -3,7 +3,7 @@ import { massProperties, prepareWholeMachine, speedSweep, type SpeedSource } fro
 import { prepareProblem } from '../selection-problem.js';
 import { toCatalogTuple, type CatalogRow } from './catalog-tuple.js';
 import { SelectionEvaluation } from './selection-evaluation.js';
-import { bandFactors, governingFactor } from './whole-machine-check.js';
+import { bandFactors, governingFactor } from './stiffness-band.js';
 
 /**
  * The whole-machine verdict over the stiffness band (docs/engineering/selection.md §20): one sweep
