@@ -47,7 +47,7 @@ describe('design workspace', () => {
 
     // Change the pump's mass: the totals follow at once, before anything is saved.
     const massBefore = await text(page, 'total-mass');
-    const pump = page.getByLabel('Mass of End-suction pump');
+    const pump = page.getByLabel('Mass of End-suction pump', { exact: true });
     const pumpBefore = Number(await pump.inputValue());
     const pumpAfter = pumpBefore + 20;
     await pump.fill(String(pumpAfter));
@@ -93,7 +93,7 @@ describe('design workspace', () => {
     await page.getByRole('heading', { name: DRAFT, level: 1 }).waitFor();
     await page.getByTestId('chosen-mounts').waitFor();
     expect(await text(page, 'chosen-mounts')).toBe(label);
-    expect(Number(await page.getByLabel('Mass of End-suction pump').inputValue())).toBe(pumpAfter);
+    expect(Number(await page.getByLabel('Mass of End-suction pump', { exact: true }).inputValue())).toBe(pumpAfter);
     await page.getByRole('tab', { name: 'Mount selection' }).click();
     await page.getByRole('region', { name: 'Chosen mounts' }).waitFor();
     await page.getByTestId('transmissibility-chart').locator('.VictoryContainer svg').first().waitFor();
@@ -110,7 +110,7 @@ describe('design workspace', () => {
     await page.getByRole('heading', { name: RELEASED, level: 1 }).waitFor();
     await page.getByText('Read only', { exact: true }).first().waitFor();
     expect(await page.getByRole('button', { name: 'Save' }).count()).toBe(0);
-    expect(await page.getByLabel('Mass of End-suction pump').getAttribute('readonly')).not.toBeNull();
+    expect(await page.getByLabel('Mass of End-suction pump', { exact: true }).getAttribute('readonly')).not.toBeNull();
     await page.getByRole('tab', { name: 'Mount selection' }).click();
     await page.getByRole('region', { name: 'Chosen mounts' }).waitFor();
     await page.getByTestId('transmissibility-chart').locator('.VictoryContainer svg').first().waitFor();

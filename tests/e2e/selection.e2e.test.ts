@@ -184,7 +184,7 @@ describe('mount selection at desk and narrow widths', () => {
     await page.getByText('Chosen for this design').first().waitFor();
 
     await page.getByRole('tab', { name: 'Equipment' }).click();
-    const pump = page.getByLabel('Mass of End-suction pump');
+    const pump = page.getByLabel('Mass of End-suction pump', { exact: true });
     await pump.fill(String(Number(await pump.inputValue()) + 5));
     await page.getByText('Saving clears the chosen mounts').waitFor();
     await page.getByRole('button', { name: 'Save', exact: true }).click();
