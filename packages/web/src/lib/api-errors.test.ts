@@ -1,6 +1,6 @@
 import { AxiosError, AxiosHeaders } from 'axios';
 
-import { errorMessage, errorStatus, fieldErrors, fieldLabel } from './api-errors';
+import { errorMessage, errorStatus, fieldErrors, fieldLabel, formFailure } from './api-errors';
 
 function apiError(status: number, data: unknown, code = 'ERR_BAD_REQUEST'): AxiosError {
   const config = { headers: new AxiosHeaders() };
@@ -83,6 +83,33 @@ describe('fieldErrors', () => {
   it('is empty for errors without field problems', () => {
     expect(fieldErrors(apiError(409, { statusCode: 409, message: 'taken' }))).toEqual({});
     expect(fieldErrors(new Error('x'))).toEqual({});
+  });
+});
+
+describe('formFailure', () => {
+  const refused = apiError(400, {
+    statusCode: 400,
+    message: 'Validation failed',
+    errors: [
+      { field: 'name', message: 'Name must be at most 120 characters long' },
+      { field: 'name', message: 'Name must be text' },
+      { field: 'owner', message: 'Owner is not expected here' },
+    ],
+  });
+
+  it('puts each problem at its field once and leaves the general message for the rest', () => {
+    const { fields, general } = formFailure(refused, ['name', 'site']);
+    expect(fields).toEqual({ name: 'Name must be at most 120 characters long' });
+    expect(general).toBe('Some fields need attention — Owner is not expected here.');
+  });
+
+  it('has no general message when every problem is at a field', () => {
+    expect(formFailure(refused, (field) => (field === 'owner' ? 'ownerBox' : field)).general).toBeNull();
+  });
+
+  it('gives the whole error as the general message when it names no field', () => {
+    const conflict = apiError(409, { statusCode: 409, message: 'That name is taken' });
+    expect(formFailure(conflict, ['name'])).toEqual({ fields: {}, general: 'That name is taken.' });
   });
 });
 

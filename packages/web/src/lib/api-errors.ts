@@ -66,6 +66,38 @@ export function fieldErrors(error: unknown): Record<string, string> {
   return result;
 }
 
+/** A refused save split for a form: each problem once, at its field when the form has one. */
+export interface FormFailure {
+  /** Messages keyed by the form's own field names, for Formik's `setErrors`. */
+  fields: Record<string, string>;
+  /** The one general message: problems without a field on this form, or the error itself; null when every problem is at its field. */
+  general: string | null;
+}
+
+/**
+ * Splits a failed save between a form's fields and its general message, so no problem is shown
+ * twice (PRODUCT.md "One voice": one message per problem, placed at the field). `formField`
+ * names the form's field for a server field path (`undefined` when the form has none); a list of
+ * names means the server paths are the form's own names.
+ */
+export function formFailure(error: unknown, formField: readonly string[] | ((serverField: string) => string | undefined)): FormFailure {
+  const toForm = typeof formField === 'function' ? formField : (field: string) => (formField.includes(field) ? field : undefined);
+  const problems =
+    axios.isAxiosError(error) && isApiErrorBody(error.response?.data) && (error.response?.status ?? 500) < 500
+      ? (error.response.data.errors ?? []).filter((item) => item && typeof item.field === 'string' && typeof item.message === 'string')
+      : [];
+  if (problems.length === 0) return { fields: {}, general: errorMessage(error) };
+  const fields: Record<string, string> = {};
+  const unplaced: ApiFieldError[] = [];
+  for (const item of problems) {
+    const key = toForm(item.field);
+    if (key === undefined) unplaced.push(item);
+    else if (!(key in fields)) fields[key] = item.message;
+  }
+  const general = unplaced.length ? `Some fields need attention — ${[...new Set(unplaced.map(problemText))].join('; ')}.` : null;
+  return { fields, general };
+}
+
 /** The HTTP status of a failed API call, if the server answered. */
 export function errorStatus(error: unknown): number | undefined {
   return axios.isAxiosError(error) ? error.response?.status : undefined;

@@ -1,5 +1,8 @@
 import { Catch, HttpException, HttpStatus, Logger, type ArgumentsHost, type ExceptionFilter } from '@nestjs/common';
+import type { UnitSystem } from '@tacet/vibration';
 import type { Request, Response } from 'express';
+import { readerUnitSystem } from '../units/reader-units.interceptor.js';
+import { wordsInReaderUnits } from '../units/reader-words.js';
 import { storageFailureOf } from './storage-failure.js';
 
 export interface FieldError {
@@ -65,7 +68,9 @@ export class AllExceptionsFilter implements ExceptionFilter {
     const http = host.switchToHttp();
     const request = http.getRequest<Request>();
     const response = http.getResponse<Response>();
-    const body = toErrorBody(exception);
+    // Figures in the words (a bound "at most ⟦mass:…⟧", a refusal's reason) in the reader's units,
+    // as the ReaderUnitsInterceptor writes them in answers; errors never pass through interceptors.
+    const body = wordsInReaderUnits(toErrorBody(exception), readerUnitSystem(request as { user?: { unitSystem?: UnitSystem } }));
     const storage = exception instanceof HttpException ? null : storageFailureOf(exception);
     if (storage) {
       // Expected in operation (full disk, read-only volume, database restart): one line, no stack.

@@ -18,6 +18,7 @@ import {
   Min,
   ValidateNested,
 } from 'class-validator';
+import { measure } from '../../common/units/reader-words.js';
 import { MOUNT_TYPES, type MountType } from '../../catalog/mount-rules.js';
 import { RestraintInputDto } from './restraint.dto.js';
 import { OperatingSourceDto, SkipBandDto } from './operating-source.dto.js';
@@ -160,7 +161,7 @@ export class ComponentDto {
   })
   @IsOptional()
   @IsFiniteNumber()
-  @IsPositive({ message: 'altMassKg must be a mass above 0 kg (leave it out when the component has one mass)' })
+  @IsPositive({ message: `altMassKg must be a mass above ${measure('mass', 0)} (leave it out when the component has one mass)` })
   @Max(SELECTION_LIMITS.massKg)
   altMassKg?: number;
 
@@ -210,7 +211,7 @@ export class MountPointDto {
   })
   @IsOptional()
   @IsFiniteNumber()
-  @IsPositive({ message: 'supportStiffnessNPerMm must be a stiffness above 0 N/mm (leave it out for a rigid support)' })
+  @IsPositive({ message: `supportStiffnessNPerMm must be a stiffness above ${measure('stiffness', 0)} (leave it out for a rigid support)` })
   @Max(SELECTION_LIMITS.supportStiffnessNPerMm)
   supportStiffnessNPerMm?: number;
 }
@@ -388,8 +389,8 @@ export class CriteriaDto {
   })
   @IsOptional()
   @IsFiniteNumber({ message: 'The largest motion on start-up must be a number of millimetres' })
-  @IsPositive({ message: 'The largest motion on start-up must be more than 0 mm' })
-  @Max(1000, { message: 'The largest motion on start-up must be at most 1000 mm' })
+  @IsPositive({ message: `The largest motion on start-up must be more than ${measure('deflection', 0)}` })
+  @Max(1000, { message: `The largest motion on start-up must be at most ${measure('deflection', 1)}` })
   maxResonantMotionMm?: number;
 }
 

@@ -13,6 +13,7 @@ import {
   ValidateIf,
   ValidateNested,
 } from 'class-validator';
+import { measure } from '../../common/units/reader-words.js';
 import { IsAbove, IsFiniteNumber, OnlyWhen } from './validators.js';
 
 /**
@@ -32,20 +33,20 @@ const LABEL_LENGTH = 40;
 export class SourcePointDto {
   @ApiProperty({ example: 0.65, description: 'm, along the skid' })
   @IsFiniteNumber({ message: 'The position along the skid must be a number in metres' })
-  @Min(-COORDINATE, { message: `The position must lie within ${COORDINATE} m of the origin` })
-  @Max(COORDINATE, { message: `The position must lie within ${COORDINATE} m of the origin` })
+  @Min(-COORDINATE, { message: `The position must lie within ${measure('position', COORDINATE)} of the origin` })
+  @Max(COORDINATE, { message: `The position must lie within ${measure('position', COORDINATE)} of the origin` })
   x: number;
 
   @ApiProperty({ example: 0, description: 'm, lateral' })
   @IsFiniteNumber({ message: 'The lateral position must be a number in metres' })
-  @Min(-COORDINATE, { message: `The position must lie within ${COORDINATE} m of the origin` })
-  @Max(COORDINATE, { message: `The position must lie within ${COORDINATE} m of the origin` })
+  @Min(-COORDINATE, { message: `The position must lie within ${measure('position', COORDINATE)} of the origin` })
+  @Max(COORDINATE, { message: `The position must lie within ${measure('position', COORDINATE)} of the origin` })
   y: number;
 
   @ApiProperty({ example: 0.5, description: 'm, up' })
   @IsFiniteNumber({ message: 'The height must be a number in metres' })
-  @Min(-COORDINATE, { message: `The position must lie within ${COORDINATE} m of the origin` })
-  @Max(COORDINATE, { message: `The position must lie within ${COORDINATE} m of the origin` })
+  @Min(-COORDINATE, { message: `The position must lie within ${measure('position', COORDINATE)} of the origin` })
+  @Max(COORDINATE, { message: `The position must lie within ${measure('position', COORDINATE)} of the origin` })
   z: number;
 }
 
@@ -87,7 +88,7 @@ export class OperatingSourceDto {
   @OnlyWhen('kind', ['unbalance'], { message: 'Only an unbalance has a rotor mass' })
   @IsFiniteNumber({ message: 'The rotor mass must be a number in kg' })
   @IsPositive({ message: 'The rotor mass must be greater than zero' })
-  @Max(1e7, { message: 'The rotor mass is at most 10,000 t' })
+  @Max(1e7, { message: `The rotor mass is at most ${measure('mass', 1e7)}` })
   rotorMassKg?: number;
 
   @ApiPropertyOptional({ example: 6.3, default: 6.3, description: 'mm/s, balance grade G = e·Ω (ISO 21940-11); unbalance only' })
@@ -104,7 +105,7 @@ export class OperatingSourceDto {
   @OnlyWhen('kind', ['force'], { message: 'Only a force has an amplitude; an unbalance follows from its rotor mass and balance grade' })
   @IsFiniteNumber({ message: 'The amplitude must be a number in N' })
   @IsPositive({ message: 'The amplitude must be greater than zero' })
-  @Max(1e8, { message: 'The amplitude is at most 100 MN' })
+  @Max(1e8, { message: `The amplitude is at most ${measure('force', 1e8)}` })
   amplitudeN?: number;
 
   @ApiPropertyOptional({ example: 100, description: 'Hz, a force at a fixed frequency (e.g. twice the supply) instead of an order' })

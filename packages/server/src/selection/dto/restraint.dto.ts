@@ -2,6 +2,7 @@ import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
 import { IsIn, IsOptional, Max, Min } from 'class-validator';
 import { SEISMIC_INPUT_LIMITS, VIBRATION_ISOLATED_COEFFICIENTS } from '@tacet/vibration';
 import { IsFiniteNumber } from './validators.js';
+import { measure } from '../../common/units/reader-words.js';
 
 /** The component importance factors of ASCE 7-16 §13.1.3. */
 export const IMPORTANCE_FACTORS = [1, 1.5] as const;
@@ -64,7 +65,9 @@ export class RestraintInputDto {
   @IsOptional()
   @IsFiniteNumber({ message: 'The gap to the restraints must be a number of millimetres' })
   @Min(0, { message: 'The gap to the restraints cannot be negative' })
-  @Max(MAX_SNUBBER_GAP_MM, { message: `The gap to the restraints must be at most ${MAX_SNUBBER_GAP_MM} mm` })
+  @Max(MAX_SNUBBER_GAP_MM, {
+    message: `The gap to the restraints must be at most ${measure('deflection', MAX_SNUBBER_GAP_MM / 1000)}`,
+  })
   snubberGapMm?: number;
 }
 

@@ -5,7 +5,7 @@ import { useState } from 'react';
 
 import { FormError } from '@/components/form/form-error';
 import { TextField } from '@/components/form/text-field';
-import { errorMessage, fieldErrors } from '@/lib/api-errors';
+import { formFailure } from '@/lib/api-errors';
 import { useUser } from '@/lib/auth';
 import { ROLE_LABELS } from '@/lib/authorization';
 
@@ -48,8 +48,9 @@ export function ProfileForm() {
       setSaved(true);
       helpers.resetForm({ values: { name, unitSystem: values.unitSystem } });
     } catch (error) {
-      helpers.setErrors(fieldErrors(error));
-      setFailure(errorMessage(error));
+      const { fields, general } = formFailure(error, ['name']);
+      helpers.setErrors(fields);
+      setFailure(general);
     }
   };
 

@@ -5,7 +5,7 @@ import { useMemo, useState } from 'react';
 import { FormError } from '@/components/form/form-error';
 import { SelectField } from '@/components/form/select-field';
 import { TextField } from '@/components/form/text-field';
-import { errorMessage, errorStatus, fieldErrors } from '@/lib/api-errors';
+import { errorStatus, formFailure } from '@/lib/api-errors';
 import { useUnits } from '@/lib/units';
 
 import { useCreateMount } from '../api/create-mount';
@@ -39,14 +39,8 @@ const SERVER_FIELDS: Record<string, keyof MountFormValues> = {
   leadTimeDays: 'leadTimeDays',
 };
 
-function formErrors(error: unknown): Partial<Record<keyof MountFormValues, string>> {
-  const result: Partial<Record<keyof MountFormValues, string>> = {};
-  for (const [field, message] of Object.entries(fieldErrors(error))) {
-    const key = SERVER_FIELDS[field];
-    if (key && !result[key]) result[key] = message;
-  }
-  return result;
-}
+/** The form's field for a server field path, when the form has one. */
+const formFieldOf = (field: string): string | undefined => (Object.hasOwn(SERVER_FIELDS, field) ? SERVER_FIELDS[field] : undefined);
 
 function DampingModelField() {
   const [field, , helpers] = useField<MountFormValues['dampingModel']>('dampingModel');
@@ -124,11 +118,12 @@ export function MountFormDialog({ isOpen, mount, suppliers, onClose, onSaved }: 
       onSaved?.(saved);
       close();
     } catch (error) {
-      helpers.setErrors(formErrors(error));
+      const { fields, general } = formFailure(error, formFieldOf);
+      helpers.setErrors(fields);
       setFailure(
         errorStatus(error) === 409 && !editing
           ? 'This supplier already has a mount with that part number. Edit that mount instead, or use another part number.'
-          : errorMessage(error),
+          : general,
       );
     }
   };

@@ -4,7 +4,7 @@ import { useState } from 'react';
 
 import { FormError } from '@/components/form/form-error';
 import { TextField } from '@/components/form/text-field';
-import { errorMessage, fieldErrors } from '@/lib/api-errors';
+import { formFailure } from '@/lib/api-errors';
 import type { Design } from '@/types/design-api';
 
 import { useCreateDesign } from '../api/create-design';
@@ -34,8 +34,9 @@ export function CreateDesignDialog({ projectId, isOpen, onClose, onCreated }: Cr
       close();
       onCreated?.(design);
     } catch (error) {
-      helpers.setErrors(fieldErrors(error));
-      setFailure(errorMessage(error));
+      const { fields, general } = formFailure(error, ['name']);
+      helpers.setErrors(fields);
+      setFailure(general);
     }
   };
 

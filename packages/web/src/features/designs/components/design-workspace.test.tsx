@@ -201,6 +201,31 @@ describe('Design page — saving', () => {
     expect(fake.calls('put', `/designs/${DESIGN_ID}`)).toHaveLength(0);
   });
 
+  it('places the server’s problems at their fields and names in the general message only what has no field', async () => {
+    const { user, fake } = openDesign();
+    await waitForPage();
+    fake.on('put', '/designs/:id', {
+      status: 400,
+      data: {
+        statusCode: 400,
+        message: 'Validation failed',
+        errors: [
+          { field: 'input.components.1.massKg', message: 'Mass must be at most 10000000 kg' },
+          { field: 'input.surprise', message: 'Surprise is not expected here' },
+        ],
+      },
+    });
+    const mass = screen.getByLabelText('Mass of Motor');
+    await user.clear(mass);
+    await user.type(mass, '480');
+    await user.click(screen.getByRole('button', { name: 'Save' }));
+
+    const notSaved = await screen.findByText('Not saved');
+    expect(notSaved.closest('.bp6-callout')).toHaveTextContent('Some fields need attention — Surprise is not expected here.');
+    expect(notSaved.closest('.bp6-callout')).not.toHaveTextContent('10000000');
+    await waitFor(() => expect(screen.getByLabelText('Mass of Motor')).toHaveAttribute('aria-invalid', 'true'));
+  });
+
   it('tells the user when someone else saved first, and reloads their version', async () => {
     const { user, fake, server } = openDesign();
     await waitForPage();

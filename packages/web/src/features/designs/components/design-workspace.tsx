@@ -7,7 +7,7 @@ import { useBlocker } from 'react-router-dom';
 
 import { PageHeader } from '@/components/page-header';
 import { SafetyCautions } from '@/components/safety-cautions';
-import { errorMessage, fieldErrors } from '@/lib/api-errors';
+import { errorMessage, formFailure } from '@/lib/api-errors';
 import { useUser, type SessionUser } from '@/lib/auth';
 import { canDesign } from '@/lib/authorization';
 import { formatDateTime } from '@/lib/dates';
@@ -404,11 +404,14 @@ export function DesignWorkspace({
       helpers.resetForm({ values: toFormValues(saved.input, units) });
       return saved;
     } catch (error) {
-      // Problems the server found go to their fields, one message each (the list above the tabs names them).
-      const placed = serverErrorsToForm(Object.entries(fieldErrors(error)).map(([field, message]) => ({ field, message })));
+      // Problems the server found go to their fields, one message each (the list above the tabs names them);
+      // the general message says only what has no field on the form.
+      const onForm = (field: string) => (Object.keys(serverErrorsToForm([{ field, message: field }])).length > 0 ? field : undefined);
+      const { fields, general } = formFailure(error, onForm);
+      const placed = serverErrorsToForm(Object.entries(fields).map(([field, message]) => ({ field, message })));
       if (Object.keys(placed).length > 0) {
         helpers.setErrors(placed);
-        setFailure('The server did not accept some input; the fields are marked.');
+        setFailure(general ?? 'The server did not accept some input; the fields are marked.');
       } else fail(error);
       return null;
     }

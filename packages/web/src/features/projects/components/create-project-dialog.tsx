@@ -5,7 +5,7 @@ import { useState } from 'react';
 import { FormError } from '@/components/form/form-error';
 import { TextAreaField } from '@/components/form/text-area-field';
 import { TextField } from '@/components/form/text-field';
-import { errorMessage, fieldErrors } from '@/lib/api-errors';
+import { formFailure } from '@/lib/api-errors';
 import type { CreateProjectInput, Project } from '@/types/design-api';
 
 import { useCreateProject } from '../api/create-project';
@@ -46,8 +46,9 @@ export function CreateProjectDialog({ isOpen, onClose, onCreated }: CreateProjec
       close();
       onCreated?.(project);
     } catch (error) {
-      helpers.setErrors(fieldErrors(error));
-      setFailure(errorMessage(error));
+      const { fields, general } = formFailure(error, ['name', 'site', 'client', 'description']);
+      helpers.setErrors(fields);
+      setFailure(general);
     }
   };
 

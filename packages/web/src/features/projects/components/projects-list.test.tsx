@@ -138,7 +138,9 @@ describe('Projects page', () => {
     const dialog = await screen.findByRole('dialog', { name: 'New project' });
     await user.type(within(dialog).getByLabelText('Name'), 'Something');
     await user.click(within(dialog).getByRole('button', { name: 'Create project' }));
-    expect(await within(dialog).findByRole('alert')).toHaveTextContent('Name is too long');
+    // once, beside the name (no general message repeating it)
+    expect(await within(dialog).findByText('Name is too long')).toBeInTheDocument();
+    expect(within(dialog).getAllByText(/Name is too long/)).toHaveLength(1);
   });
 
   it('says so when there are no projects yet', async () => {

@@ -4,7 +4,7 @@ import { useMemo, useState } from 'react';
 
 import { FormError } from '@/components/form/form-error';
 import { TextField } from '@/components/form/text-field';
-import { errorMessage, errorStatus, fieldErrors } from '@/lib/api-errors';
+import { errorStatus, formFailure } from '@/lib/api-errors';
 
 import { useCreateSupplier } from '../api/create-supplier';
 import { useUpdateSupplier } from '../api/update-supplier';
@@ -94,11 +94,12 @@ export function SupplierFormDialog({ isOpen, supplier, onClose }: SupplierFormDi
       }
       close();
     } catch (error) {
-      helpers.setErrors(fieldErrors(error));
+      const { fields, general } = formFailure(error, ['name', 'contactEmail', 'phone', 'notes']);
+      helpers.setErrors(fields);
       setFailure(
         errorStatus(error) === 409
           ? 'A supplier with this name already exists (names are compared without regard to case or spacing).'
-          : errorMessage(error),
+          : general,
       );
     }
   };

@@ -5,7 +5,7 @@ import { useState } from 'react';
 import { FormError } from '@/components/form/form-error';
 import { SelectField } from '@/components/form/select-field';
 import { TextField } from '@/components/form/text-field';
-import { errorMessage, fieldErrors } from '@/lib/api-errors';
+import { formFailure } from '@/lib/api-errors';
 
 import { useCreateUser } from '../api/create-user';
 import { createUserSchema, PASSWORD_MIN_LENGTH, type CreateUserValues } from '../schemas/user-schemas';
@@ -42,8 +42,9 @@ export function CreateUserDialog({ isOpen, onClose, onCreated }: CreateUserDialo
       onCreated?.(user);
       close();
     } catch (error) {
-      helpers.setErrors(fieldErrors(error));
-      setFailure(errorMessage(error));
+      const { fields, general } = formFailure(error, ['email', 'name', 'role', 'unitSystem', 'password']);
+      helpers.setErrors(fields);
+      setFailure(general);
     }
   };
 

@@ -5,7 +5,7 @@ import { useState } from 'react';
 import { FormError } from '@/components/form/form-error';
 import { SelectField } from '@/components/form/select-field';
 import { TextField } from '@/components/form/text-field';
-import { errorMessage, fieldErrors } from '@/lib/api-errors';
+import { formFailure } from '@/lib/api-errors';
 import { useAuth } from '@/lib/auth';
 
 import { useUpdateUser } from '../api/update-user';
@@ -69,8 +69,9 @@ export function EditUserDialog({ user, isSelf, onClose }: EditUserDialogProps) {
       if (isSelf) setUser(updated);
       close();
     } catch (error) {
-      helpers.setErrors(fieldErrors(error));
-      setFailure(errorMessage(error));
+      const { fields, general } = formFailure(error, ['name', 'role', 'unitSystem']);
+      helpers.setErrors(fields);
+      setFailure(general);
     }
   };
 
