@@ -41,9 +41,9 @@ export class CreateVerificationDto {
   })
   @IsOptional()
   @Transform(toNumber)
-  @IsNumber({ allowNaN: false, allowInfinity: false }, { message: 'tolerancePct must be a number of per cent' })
-  @Min(1, { message: 'tolerancePct must be at least 1 %' })
-  @Max(50, { message: 'tolerancePct must be at most 50 %' })
+  @IsNumber({ allowNaN: false, allowInfinity: false }, { message: 'The tolerance must be a number of per cent' })
+  @Min(1, { message: 'The tolerance must be at least 1 %' })
+  @Max(50, { message: 'The tolerance must be at most 50 %' })
   tolerancePct?: number;
 
   @ApiPropertyOptional({ description: 'Where and how it was measured (hit and accelerometer positions, direction)', maxLength: 500 })
