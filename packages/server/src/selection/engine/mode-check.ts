@@ -8,7 +8,7 @@
  * the mount vertically (§15); the second mass case gets its own modes (§18). Keeps, per candidate
  * judged, the modes and the conflict found (reasons.ts words them).
  */
-import { isVibrationInputError, rigidBodyModes, type ResilientMount } from '@tacet/vibration';
+import { isVibrationInputError, rigidBodyModes, seriesStiffness, type ResilientMount } from '@tacet/vibration';
 import type { SelectionProblem } from '../selection-problem.js';
 import type { CandidateMode } from '../selection.types.js';
 import type { CandidateStore } from './candidate-store.js';
@@ -65,7 +65,7 @@ export class ModeCheck implements FinalistCheck {
         points.map((m, i) => {
           const p = problem.points[i];
           const kd = m.verticalStiffnessNPerM * m.dynamicStiffnessRatio;
-          const vertical = 1 / (1 / kd + problem.supportCompliance[i]);
+          const vertical = seriesStiffness(kd, 1 / problem.supportCompliance[i]);
           const kh = Number.isNaN(m.horizontalStiffnessNPerM) ? missingRatio * m.verticalStiffnessNPerM : m.horizontalStiffnessNPerM;
           const horizontal = kh * m.dynamicStiffnessRatio;
           return { position: { x: p.x, y: p.y, z: p.z }, stiffness: { x: horizontal, y: horizontal, z: vertical } };

@@ -64,3 +64,20 @@ export function governingFactor(
 export function bandFactors(pct: number): number[] {
   return pct > 0 ? [1 - pct / 100, 1, 1 + pct / 100] : [1];
 }
+
+/**
+ * The running speed n = n′·√φ of a worst point found at the nominal-equivalent speed n′, exactly a
+ * range end or skip-band edge when it is one but for rounding (1480/√1.1·√1.1 is not 1480 in
+ * floating point), so that the answer and the points listed at those speeds name it once.
+ */
+export function runningSpeed(
+  nominalRpm: number,
+  factor: number,
+  min: number,
+  max: number,
+  bands: readonly { min: number; max: number }[],
+): number {
+  const n = nominalRpm * Math.sqrt(factor);
+  for (const exact of [min, max, ...bands.flatMap((b) => [b.min, b.max])]) if (Math.abs(n - exact) <= 1e-9 * exact) return exact;
+  return n;
+}

@@ -21,6 +21,7 @@ import {
   isolationEfficiencyPct,
   isVibrationInputError,
   prepareWholeMachine,
+  seriesStiffness,
   sourceAmplitudeN,
   sourceFrequencyHz,
   speedSweep,
@@ -39,7 +40,14 @@ import { HORIZONTAL_RATIO_WHEN_MISSING } from './assumptions.js';
 import type { CandidateStore, PointMount } from './candidate-store.js';
 import { FAIL } from './checks.js';
 import type { FinalistCheck } from './ranking.js';
-import { bandFactors, DEFAULT_STIFFNESS_TOLERANCE_PCT, FALLBACK_TOLERANCE_PCT, governingFactor, snapFactor } from './stiffness-band.js';
+import {
+  bandFactors,
+  DEFAULT_STIFFNESS_TOLERANCE_PCT,
+  FALLBACK_TOLERANCE_PCT,
+  governingFactor,
+  runningSpeed,
+  snapFactor,
+} from './stiffness-band.js';
 
 /** The shaft speed used for fixed-frequency sources when the input gives no speed (T does not depend on it). */
 const NO_SPEED_RPM = 60;
@@ -155,7 +163,7 @@ export class WholeMachineCheck implements FinalistCheck {
   modelMounts(points: readonly PointMount[], missingRatio: number = HORIZONTAL_RATIO_WHEN_MISSING.high): WholeMachineMount[] {
     return points.map((m, i) => {
       const p = this.problem.points[i];
-      const vertical = 1 / (1 / (m.verticalStiffnessNPerM * m.dynamicStiffnessRatio) + this.problem.supportCompliance[i]);
+      const vertical = seriesStiffness(m.verticalStiffnessNPerM * m.dynamicStiffnessRatio, 1 / this.problem.supportCompliance[i]);
       const horizontal =
         (Number.isNaN(m.horizontalStiffnessNPerM) ? missingRatio * m.verticalStiffnessNPerM : m.horizontalStiffnessNPerM) *
         m.dynamicStiffnessRatio;
@@ -239,9 +247,7 @@ export class WholeMachineCheck implements FinalistCheck {
         speeds.add(min);
         speeds.add(max);
         for (const x of result.crossings) if (x.sourceIndex === s) speeds.add(x.speedRpm);
-        // the worst point, unless it is one of the speeds above but for rounding (n'·√φ at a fixed speed)
-        const worstRpm = result.worstSpeedBySource[s];
-        if (![...speeds].some((n) => Math.abs(n - worstRpm) <= 1e-9 * n)) speeds.add(worstRpm);
+        speeds.add(result.worstSpeedBySource[s]);
       }
       for (const n of [...speeds].sort((a, b) => a - b)) {
         const frequencyHz = sourceFrequencyHz(source, n);
@@ -323,7 +329,7 @@ export class WholeMachineCheck implements FinalistCheck {
           modeFrequenciesHz,
         });
         const factor = governingFactor(sweep.worst.speedRpm, min, max, skipBandsRpm, lo, hi);
-        const speedRpm = sweep.worst.speedRpm * Math.sqrt(factor);
+        const speedRpm = runningSpeed(sweep.worst.speedRpm, factor, min, max, skipBandsRpm);
         point = {
           transmissibility: sweep.worst.transmissibility,
           efficiencyPct: isolationEfficiencyPct(sweep.worst.transmissibility),
