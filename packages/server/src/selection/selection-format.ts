@@ -10,6 +10,9 @@ export function formatNumber(value: number, digits = 2): string {
 /** A frequency as the reasons name it: "24.67 Hz", "148 Hz". */
 export const formatHz = (hz: number): string => `${formatNumber(hz, hz >= 100 ? 1 : 2)} Hz`;
 
+/** A shaft speed as the reasons name it: "1480 rpm". */
+export const formatRpm = (rpm: number): string => `${formatNumber(rpm, 0)} rpm`;
+
 /** A ratio as a whole percentage: 1.12 → "112 %". */
 export const formatPct = (ratio: number): string => `${Math.round(ratio * 100)} %`;
 

@@ -11,7 +11,7 @@
  * model (inertia unknown) there are no findings and the candidate shows no passage.
  */
 import { describeModeMotion, isVibrationInputError, resonancePassage, wholeMachineModes } from '@tacet/vibration';
-import { formatHz, formatNumber } from '../selection-format.js';
+import { formatHz, formatNumber, formatRpm } from '../selection-format.js';
 import type { SelectionProblem } from '../selection-problem.js';
 import type { CandidatePassage } from '../selection.types.js';
 import type { CandidateStore } from './candidate-store.js';
@@ -175,8 +175,4 @@ export function formatMotionMm(mm: number): string {
   if (!Number.isFinite(mm) || mm <= 0) return `${formatNumber(mm, 1)} mm`;
   const digits = Math.max(1, 1 - Math.floor(Math.log10(mm)));
   return `${formatNumber(mm, digits)} mm`;
-}
-
-function formatRpm(rpm: number): string {
-  return `${formatNumber(rpm, 0)} rpm`;
 }

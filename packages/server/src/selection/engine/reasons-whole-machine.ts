@@ -4,25 +4,39 @@
  * notes of one it passes, the band end and the assumed horizontal ratio that governed. reasons.ts
  * places them among the other checks' words.
  */
-import { formatHz, formatNumber, formatPctValue } from '../selection-format.js';
+import { formatHz, formatNumber, formatPctValue, formatRpm } from '../selection-format.js';
 import { FAIL } from './checks.js';
+import type { CandidateWholeMachine } from '../selection.types.js';
 import type { WordingContext } from './reasons.js';
 
 /** The worst whole-machine point against the requirement, then every crossing inside the running range. */
 export function wholeMachine({ problem, wholeMachine: w }: WordingContext): string[] {
   if (!w) return [];
-  const { worst } = w;
-  const at = worst.speedRpm === null ? formatHz(worst.frequencyHz) : `${formatRpm(worst.speedRpm)}, ${formatHz(worst.frequencyHz)}`;
-  const band = bandWords(worst.stiffnessFactor, w.stiffnessTolerancePct) + assumedRatioWords(w.assumedHorizontalRatio);
-  const required = `${formatNumber(problem.criteria.minIsolationPct, 1)} %`;
-  const reasons = [
-    worst.transmissibility > 1
-      ? `Whole machine, ${worst.source}: at ${at}${band} the mounts amplify the force (transmissibility ` +
+  const bandAndRatio = bandWords(w.worst.stiffnessFactor, w.stiffnessTolerancePct) + assumedRatioWords(w.assumedHorizontalRatio);
+  return [worstPointWords('Whole machine', w.worst, bandAndRatio, problem.criteria.minIsolationPct), ...w.crossings.map(crossingWords)];
+}
+
+/**
+ * The sentence of a worst point above the requirement: amplification above T = 1, otherwise the
+ * isolation reached. `lead` names the case ("Whole machine", or the second mass case).
+ */
+export function worstPointWords(
+  lead: string,
+  worst: CandidateWholeMachine['worst'],
+  bandAndRatio: string,
+  minIsolationPct: number,
+): string {
+  const at = atWords(worst);
+  const required = `${formatNumber(minIsolationPct, 1)} %`;
+  return worst.transmissibility > 1
+    ? `${lead}, ${worst.source}: at ${at}${bandAndRatio} the mounts amplify the force (transmissibility ` +
         `${formatNumber(worst.transmissibility, 2)}) instead of isolating it; ${required} isolation is required.`
-      : `Whole machine, ${worst.source}: isolation ${formatPctValue(worst.efficiencyPct)} at ${at}${band}, below the ${required} required.`,
-  ];
-  for (const x of w.crossings) reasons.push(crossingWords(x));
-  return reasons;
+    : `${lead}, ${worst.source}: isolation ${formatPctValue(worst.efficiencyPct)} at ${at}${bandAndRatio}, below the ${required} required.`;
+}
+
+/** Where a worst point lies: "1480 rpm, 24.67 Hz", or the frequency alone without a speed. */
+function atWords(worst: CandidateWholeMachine['worst']): string {
+  return worst.speedRpm === null ? formatHz(worst.frequencyHz) : `${formatRpm(worst.speedRpm)}, ${formatHz(worst.frequencyHz)}`;
 }
 
 function crossingWords(x: { mode: string; modeFrequencyHz: number; source: string; order: number; speedRpm: number }): string {
@@ -45,9 +59,8 @@ export function wholeMachineNotes({ store, c, wholeMachine: w, modes }: WordingC
   const notes: string[] = [];
   if (!(store.fail[c] & FAIL.wholeMachine)) {
     const { worst } = w;
-    const at = worst.speedRpm === null ? formatHz(worst.frequencyHz) : `${formatRpm(worst.speedRpm)}, ${formatHz(worst.frequencyHz)}`;
     notes.push(
-      `Whole machine: worst isolation ${formatPctValue(worst.efficiencyPct)}, ${worst.source} at ${at}` +
+      `Whole machine: worst isolation ${formatPctValue(worst.efficiencyPct)}, ${worst.source} at ${atWords(worst)}` +
         `${bandWords(worst.stiffnessFactor, w.stiffnessTolerancePct)}${assumedRatioWords(w.assumedHorizontalRatio)}; ` +
         'the isolation per frequency above is the bounce estimate.',
     );
@@ -69,8 +82,4 @@ export function bandWords(factor: number, tolerancePct: number): string {
   if (factor === 1) return ' (nominal stiffness)';
   const pct = formatNumber(Math.abs(factor - 1) * 100, 1);
   return factor < 1 ? ` (stiffness ${pct} % below nominal)` : ` (stiffness ${pct} % above nominal)`;
-}
-
-export function formatRpm(rpm: number): string {
-  return `${formatNumber(rpm, 0)} rpm`;
 }

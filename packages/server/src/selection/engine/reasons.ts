@@ -19,7 +19,7 @@ import { catalogAssumptionsFor } from './assumptions.js';
 import { MODE_SEPARATION, type ModeConflict, type ModeFindings } from './mode-check.js';
 import { passageNotes, passageReasons, type PassageFindings } from './passage-check.js';
 import type { WholeMachineFindings } from './whole-machine-check.js';
-import { bandWords, formatRpm, wholeMachine, wholeMachineNotes } from './reasons-whole-machine.js';
+import { bandWords, wholeMachine, wholeMachineNotes, worstPointWords } from './reasons-whole-machine.js';
 import { SPRING_MIN_HORIZONTAL_RATIO, SPRING_RESERVE } from './spring-checks.js';
 
 /** What the wording reads about one candidate. */
@@ -291,24 +291,17 @@ function massCase({ problem, store, points, altMassCase: alt, wholeMachine: w }:
         `the springs or their travel at ${bad.map((p) => `point ${p.label} (${formatPct(p.utilization)}, ${measure('deflection', p.staticDeflectionMm / 1000)})`).join(', ')}.`,
     );
   }
-  const required = `${formatNumber(problem.criteria.minIsolationPct, 1)} %`;
   const whole = alt.wholeMachineWorst;
   if (whole && whole.transmissibility > problem.transmissibilityTarget) {
-    const at = whole.speedRpm === null ? formatHz(whole.frequencyHz) : `${formatRpm(whole.speedRpm)}, ${formatHz(whole.frequencyHz)}`;
     const band = bandWords(whole.stiffnessFactor, w?.stiffnessTolerancePct ?? 0);
-    reasons.push(
-      whole.transmissibility > 1
-        ? `${head}, whole machine, ${whole.source}: at ${at}${band} the mounts amplify the force (transmissibility ` +
-            `${formatNumber(whole.transmissibility, 2)}) instead of isolating it; ${required} isolation is required.`
-        : `${head}, whole machine, ${whole.source}: isolation ${formatPctValue(whole.efficiencyPct)} at ${at}${band}, below the ${required} required.`,
-    );
+    reasons.push(worstPointWords(`${head}, whole machine`, whole, band, problem.criteria.minIsolationPct));
   } else if (!whole) {
     // the model could not be built: the bounce estimate decides (selection.md §9)
     const worst = alt.isolation.reduce((x, row) => (row.transmissibility > x.transmissibility ? row : x), alt.isolation[0]);
     if (worst && worst.transmissibility > problem.transmissibilityTarget) {
       reasons.push(
         `${head} the natural frequency rises to ${formatHz(alt.verticalNaturalFrequencyHz)}: isolation at ${formatHz(worst.frequencyHz)} is ` +
-          `${formatPctValue(worst.efficiencyPct)}, below the ${required} target.`,
+          `${formatPctValue(worst.efficiencyPct)}, below the ${formatNumber(problem.criteria.minIsolationPct, 1)} % target.`,
       );
     }
   }
