@@ -1,3 +1,4 @@
+import { catalogRow } from '../../../test/factories/catalog-row.factory.js';
 import { wordsInReaderUnits } from '../../common/units/reader-words.js';
 import { prepareProblem, type SelectionInput } from '../selection-problem.js';
 import { toCatalogTuple, type CatalogRow } from './catalog-tuple.js';
@@ -15,25 +16,7 @@ const CORNERS = [
   { label: 'D', x: -0.8, y: -0.45, z: 0 },
 ];
 const G = 9.80665;
-const elastomer: CatalogRow = {
-  id: 1,
-  supplierId: 1,
-  partNumber: 'E-1',
-  series: null,
-  mountType: 'elastomer_mount',
-  ratedLoadN: 4000,
-  verticalStiffnessNPerM: 1e5,
-  horizontalStiffnessNPerM: 1e5,
-  dynamicStiffnessRatio: 1,
-  dampingRatio: null,
-  lossFactor: 0.1,
-  maxDeflectionMm: 50,
-  tempMinC: null,
-  tempMaxC: null,
-  unitPrice: 50,
-  currency: 'USD',
-  leadTimeDays: 10,
-};
+const elastomer: CatalogRow = catalogRow({ id: 1, partNumber: 'E-1', ratedLoadN: 4000 });
 const names = new Map([[1, 'Invented Rubber']]);
 
 function judged(input: Partial<SelectionInput>, row: CatalogRow = elastomer) {

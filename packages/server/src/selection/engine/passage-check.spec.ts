@@ -1,3 +1,4 @@
+import { catalogRow } from '../../../test/factories/catalog-row.factory.js';
 import { describe, expect, it } from '@jest/globals';
 import { prepareWholeMachine, resonancePassage, wholeMachineModes, type WholeMachineModel } from '@tacet/vibration';
 import { prepareProblem, type SelectionInput } from '../selection-problem.js';
@@ -25,25 +26,15 @@ const G = 6.3e-3;
 const RANGE = { min: 1200, max: 1500 };
 const E = G / ((2 * Math.PI * RANGE.max) / 60);
 
-const ROW: CatalogRow = {
+const ROW: CatalogRow = catalogRow({
   id: 1,
-  supplierId: 1,
   partNumber: 'PASS-1',
-  series: null,
-  mountType: 'elastomer_mount',
-  ratedLoadN: 3000,
   verticalStiffnessNPerM: K,
   horizontalStiffnessNPerM: K,
-  dynamicStiffnessRatio: 1,
-  dampingRatio: null,
-  lossFactor: 0.1,
   maxDeflectionMm: 30,
-  tempMinC: null,
-  tempMaxC: null,
   unitPrice: 10,
-  currency: 'USD',
   leadTimeDays: 5,
-};
+});
 const FAN = {
   label: 'Fan',
   kind: 'unbalance' as const,

@@ -1,3 +1,4 @@
+import { catalogRow } from '../../../test/factories/catalog-row.factory.js';
 import { wordsInReaderUnits } from '../../common/units/reader-words.js';
 import { massProperties, rigidBodyModes } from '@tacet/vibration';
 import { prepareProblem, type SelectionInput } from '../selection-problem.js';
@@ -21,30 +22,7 @@ const G = 9.80665;
 const W4 = (1000 * G) / 4;
 const MACHINE = { name: 'Machine', massKg: 1000, cg: { x: 0, y: 0, z: 0.3 }, box: { lx: 1.6, ly: 0.9, lz: 0.6 } };
 
-let nextId = 1;
-function row(fields: Partial<CatalogRow>): CatalogRow {
-  const id = fields.id ?? nextId++;
-  return {
-    id,
-    supplierId: 1,
-    partNumber: `R-${id}`,
-    series: null,
-    mountType: 'elastomer_mount',
-    ratedLoadN: 3000,
-    verticalStiffnessNPerM: 1e5,
-    horizontalStiffnessNPerM: 1e5,
-    dynamicStiffnessRatio: 1,
-    dampingRatio: null,
-    lossFactor: 0.1,
-    maxDeflectionMm: 50,
-    tempMinC: null,
-    tempMaxC: null,
-    unitPrice: 50,
-    currency: 'USD',
-    leadTimeDays: 10,
-    ...fields,
-  };
-}
+const row = catalogRow;
 
 function problem(overrides: Partial<SelectionInput> = {}) {
   return prepareProblem({

@@ -1,3 +1,4 @@
+import { catalogRow } from '../../../test/factories/catalog-row.factory.js';
 import { describe, expect, it } from '@jest/globals';
 import { massProperties, prepareWholeMachine, speedSweep, type SpeedSource } from '@tacet/vibration';
 import { prepareProblem } from '../selection-problem.js';
@@ -15,25 +16,18 @@ const COMPONENTS = [
   { name: 'Pump', massKg: 500, cg: { x: 0.6, y: 0.05, z: 0.55 }, box: { lx: 0.8, ly: 0.5, lz: 0.6 } },
   { name: 'Motor', massKg: 700, cg: { x: -0.4, y: 0, z: 0.5 }, box: { lx: 1.0, ly: 0.5, lz: 0.5 } },
 ];
-const ROW: CatalogRow = {
+const ROW: CatalogRow = catalogRow({
   id: 1,
-  supplierId: 1,
   partNumber: 'BAND-1',
-  series: null,
-  mountType: 'elastomer_mount',
   ratedLoadN: 2600,
   verticalStiffnessNPerM: 6e5,
   horizontalStiffnessNPerM: 4.5e5,
   dynamicStiffnessRatio: 1.2,
-  dampingRatio: null,
   lossFactor: 0.12,
   maxDeflectionMm: null,
-  tempMinC: null,
-  tempMaxC: null,
   unitPrice: 10,
-  currency: 'USD',
   leadTimeDays: 5,
-};
+});
 const OPERATING = {
   speedRangeRpm: { min: 700, max: 1500 },
   orders: [1],
