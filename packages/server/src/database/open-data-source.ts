@@ -1,5 +1,6 @@
 import { DataSource, type DataSourceOptions } from 'typeorm';
 import { useUtcTimestamps } from './postgres-utc.js';
+import { bindNumberParameters } from './sqlite-bound-numbers.js';
 import { withStartupLock } from './startup-lock.js';
 
 /** The part of pg's Pool we use (pg-pool emits `remove` once a client's socket has closed). */
@@ -50,7 +51,11 @@ export class ClosingDataSource extends DataSource {
  * nothing pending. On SQLite (one process) TypeORM runs them while connecting (`migrationsRun`).
  */
 export async function openDataSource(options: DataSourceOptions): Promise<DataSource> {
-  if (options.type !== 'postgres') return new ClosingDataSource(options).initialize();
+  if (options.type !== 'postgres') {
+    const sqlite = new ClosingDataSource(options);
+    bindNumberParameters(sqlite);
+    return sqlite.initialize();
+  }
   const dataSource = new ClosingDataSource({ ...options, migrationsRun: false });
   useUtcTimestamps(dataSource);
   await dataSource.initialize();
