@@ -218,19 +218,19 @@ describe('projects and designs (e2e)', () => {
       // design for a moment so that all 10 read version 1 before the first one writes, as
       // requests on several API instances would.
       const repo = t.app.get(DataSource).getRepository(Design);
-      const findOne = repo.findOne;
+      const find = repo.find;
       let reads = 0;
-      repo.findOne = async function (this: typeof repo, ...args: Parameters<typeof findOne>) {
-        const found = await findOne.apply(this, args);
+      repo.find = async function (this: typeof repo, ...args: Parameters<typeof find>) {
+        const found = await find.apply(this, args);
         reads++;
         await new Promise((resolve) => setTimeout(resolve, 50));
         return found;
-      } as typeof findOne;
+      } as typeof find;
       let responses: Awaited<ReturnType<typeof put>>[];
       try {
         responses = await Promise.all(Array.from({ length: 10 }, (_, i) => put(design.id, { version: 1, name: `Writer ${i}` })));
       } finally {
-        repo.findOne = findOne;
+        repo.find = find;
       }
       expect(reads).toBeGreaterThanOrEqual(10);
       const statuses = responses.map((r) => r.status).sort();

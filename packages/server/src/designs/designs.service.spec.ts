@@ -23,7 +23,7 @@ describe('DesignsService.update', () => {
       execute: async () => ({ affected }),
     };
     const repo = {
-      findOne: async () => stored,
+      find: async () => [stored],
       createQueryBuilder: () => builder,
     } as unknown as Repository<Design>;
     const service = new DesignsService(

@@ -89,7 +89,9 @@ export class DesignsService {
 
   /** The last selection run on the design's current input, or null (none, or run on another input). */
   private async lastSelection(design: Design): Promise<StoredSelectionDto | null> {
-    const stored = await this.selections.findOne({ where: { designId: design.id }, relations: { ranBy: true } });
+    // find, not findOne: findOne's LIMIT 1 with a join makes TypeORM run two queries (the ids
+    // first); designId is the key, so one query without a limit does (DEVELOPERS.md "Queries on hot paths")
+    const [stored] = await this.selections.find({ where: { designId: design.id }, relations: { ranBy: true } });
     if (!stored || stored.inputFingerprint !== inputFingerprint(design.input)) return null;
     return {
       ranAt: stored.ranAt.toISOString(),
@@ -212,7 +214,8 @@ export class DesignsService {
 
   /** The design with its project and people, or 404 (also for a purchaser and an unreleased design). */
   async getVisible(user: User, id: number): Promise<Design> {
-    const design = await this.designs.findOne({ where: { id }, relations: { project: true, author: true, checker: true } });
+    // one query by the primary key (findOne with relations would run two; see lastSelection)
+    const [design] = await this.designs.find({ where: { id }, relations: { project: true, author: true, checker: true } });
     if (!design || !visibleStatuses(user).includes(design.status)) throw new NotFoundException('Design not found');
     return design;
   }
