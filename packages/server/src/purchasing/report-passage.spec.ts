@@ -2,6 +2,7 @@ import { describe, expect, it } from '@jest/globals';
 import type { Design } from '../designs/design.entity.js';
 import { pdfHasText } from '../../test/utils/pdf-text.js';
 import { designReportPdf } from './design-report.js';
+import { inReaderUnits } from '../common/units/reader-words.js';
 import { passageReportLines } from './report-passage.js';
 
 /** The start-up passage in the calculation report (docs/engineering/start-up-passage.md §4). */
@@ -12,13 +13,21 @@ const passage = [
 
 describe('passageReportLines', () => {
   it('one line per mode passed, the one above the limit marked, then the limit and what the figures mean', () => {
-    const lines = passageReportLines(undefined, { passage, passageLimitMm: 6 } as never);
+    const lines = passageReportLines(undefined, { passage, passageLimitMm: 6 } as never).map((line) => inReaderUnits(line, 'SI'));
     expect(lines).toEqual([
       'Start-up and coast-down: the modes passed below the lowest running speed, with the unbalance at that speed.',
       'Passage: the sway mode at 3.20 Hz, passed at 192 rpm: steady peak motion at the mounts 0.41 mm.',
       'Passage: the roll + sway (mixed) mode at 9.87 Hz, passed at 592 rpm: steady peak motion at the mounts 7.4 mm - above the limit.',
-      expect.stringMatching(/^Largest motion allowed: 6\.0 mm\. The figures are steady motions at each mode/),
+      expect.stringMatching(/^Largest motion allowed: 6 mm\. The figures are steady motions at each mode/),
     ]);
+  });
+
+  it("the motions in a US reader's units (1 in = 25.4 mm exactly, NIST SP 811 Appendix B)", () => {
+    const lines = passageReportLines(undefined, { passage, passageLimitMm: 6 } as never).map((line) => inReaderUnits(line, 'US'));
+    // 0.41 mm = 0.0161 in; 7.44 mm = 0.2929 in; 6 mm = 0.2362 in
+    expect(lines[1]).toMatch(/steady peak motion at the mounts 0\.016 in\.$/);
+    expect(lines[2]).toMatch(/steady peak motion at the mounts 0\.29 in - above the limit\.$/);
+    expect(lines[3]).toMatch(/^Largest motion allowed: 0\.24 in\./);
   });
 
   it('the frozen figures win over the candidate; nothing passed says so; a candidate without passage prints nothing', () => {
@@ -68,7 +77,7 @@ describe('designReportPdf: the passage under the whole machine', () => {
       // the line may break across a page: its two halves
       'Passage: the roll + sway (mixed) mode at 9.87 Hz, passed at 592 rpm',
       '7.4 mm - above the limit',
-      'Largest motion allowed: 6.0 mm.',
+      'Largest motion allowed: 6 mm.',
     ];
     expect(wanted.filter((text) => !pdfHasText(pdf, text))).toEqual([]);
   }, 20000);

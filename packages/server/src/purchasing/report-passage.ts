@@ -1,10 +1,12 @@
+import { motionMeasure } from '../selection/selection-format.js';
 import type { Candidate, CandidatePassage, DesignSnapshot } from '../selection/selection.types.js';
 
 /**
  * The start-up passage lines of the calculation report, printed under the speed chart
  * (docs/engineering/start-up-passage.md): each rigid-body mode passed below the running range with
  * its speed and the steady peak motion at the mounts, against the limit, as frozen at the choice
- * (or from the chosen candidate). Plain text, no Greek letters or math signs (the report fonts lack them).
+ * (or from the chosen candidate). Plain text, no Greek letters or math signs (the report fonts lack them);
+ * motions as figure marks, which the report writes in the reader's units (common/units/reader-words.ts).
  */
 export function passageReportLines(frozen: DesignSnapshot['wholeMachine'] | undefined, candidate: Candidate | null | undefined): string[] {
   const passage: CandidatePassage[] | undefined = frozen?.passage ?? candidate?.passage;
@@ -31,10 +33,7 @@ export function passageReportLines(frozen: DesignSnapshot['wholeMachine'] | unde
   return lines;
 }
 
-/** Two significant digits, at least one decimal: 0.081 mm, 7.4 mm. */
+/** Two significant digits, at least one decimal, in the reader's units (the report renders the marks). */
 function motionText(mm: number): string {
-  if (!Number.isFinite(mm)) return 'unbounded (no damping)';
-  if (mm <= 0) return '0 mm';
-  const digits = Math.min(6, Math.max(1, 1 - Math.floor(Math.log10(mm))));
-  return `${mm.toFixed(digits)} mm`;
+  return Number.isFinite(mm) ? motionMeasure(mm) : 'unbounded (no damping)';
 }

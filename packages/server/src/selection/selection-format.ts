@@ -1,3 +1,5 @@
+import { measure } from '../common/units/reader-words.js';
+
 /** Number formatting for the words of reasons and labels (not for the figures, which stay unrounded). */
 
 /** At most `digits` decimals, trailing zeros dropped: 24.6667 → "24.67", 100 → "100". */
@@ -19,4 +21,9 @@ export const formatPct = (ratio: number): string => `${Math.round(ratio * 100)} 
 /** A percentage value with one decimal: 85.14 → "85.1 %". */
 export const formatPctValue = (pct: number): string => `${formatNumber(pct, 1)} %`;
 
-export const formatMm = (mm: number): string => `${formatNumber(mm, 1)} mm`;
+/**
+ * A motion at the mounts, given in mm (the API's unit for it), as a figure mark written in the
+ * reader's units with two significant digits and at least one decimal: 0.0812 mm → "0.081 mm" or
+ * "0.0032 in", 7.44 mm → "7.4 mm" or "0.29 in". A motion of a few micrometres stays readable.
+ */
+export const motionMeasure = (mm: number): string => measure('deflection', mm / 1000, { significant: 2 });

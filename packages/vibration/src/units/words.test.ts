@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { exportNumber, formatDecimal, formatMeasure, withoutBinaryNoise } from './index.js';
+import { exportNumber, formatDecimal, formatMeasure, significantDecimals, withoutBinaryNoise } from './index.js';
 
 // Conversion facts: NIST SP 811 (2008), Appendix B — 1 in = 25.4 mm, 1 lb = 0.45359237 kg,
 // 1 lbf = 4.4482216152605 N (all exact); °F = °C × 1.8 + 32 (definition of the Fahrenheit scale).
@@ -34,6 +34,25 @@ describe('formatMeasure: figures in sentences follow the reader', () => {
     expect(formatMeasure('deflection', 0.006_63, 'US', 3)).toBe('0.261 in');
     expect(formatDecimal(-0.0004, 2)).toBe('0');
     expect(formatDecimal(2.5, 0)).toBe('3');
+  });
+
+  it("or significant digits, counted in the reader's unit, with at least one decimal", () => {
+    // 1 in = 25.4 mm exactly (NIST SP 811, Appendix B): 0.08 mm = 0.00315 in, 7.44 mm = 0.293 in
+    expect(formatMeasure('deflection', 0.000_08, 'SI', { significant: 2 })).toBe('0.08 mm');
+    expect(formatMeasure('deflection', 0.000_08, 'US', { significant: 2 })).toBe('0.0031 in');
+    expect(formatMeasure('deflection', 0.007_44, 'US', { significant: 2 })).toBe('0.29 in');
+    expect(formatMeasure('deflection', 0.123_4, 'SI', { significant: 2 })).toBe('123.4 mm');
+    expect(formatMeasure('deflection', 0, 'SI', { significant: 2 })).toBe('0 mm');
+  });
+
+  it('significantDecimals: the decimals that show that many significant digits', () => {
+    expect(significantDecimals(0.0812, 2)).toBe(3);
+    expect(significantDecimals(7.44, 2)).toBe(1);
+    expect(significantDecimals(7.44, 2, 0)).toBe(1);
+    expect(significantDecimals(74.4, 2, 0)).toBe(0);
+    expect(significantDecimals(-0.0812, 2)).toBe(3);
+    expect(significantDecimals(0, 2)).toBe(1);
+    expect(significantDecimals(Number.NaN, 2)).toBe(1);
   });
 });
 

@@ -21,12 +21,32 @@ export function formatDecimal(value: number, decimals: number): string {
 }
 
 /**
- * An SI value as a sentence names it in the reader's units: `formatMeasure('deflection', 0.0066, 'SI')`
- * → "6.6 mm", `(…, 'US')` → "0.26 in". `decimals` overrides the sentence precision of the quantity.
+ * How precisely a figure is written in a sentence: a number of decimals, or a number of
+ * significant digits for a figure that spans decades (a motion of a few micrometres or of several
+ * millimetres), which then keeps at least one decimal.
  */
-export function formatMeasure(quantity: Quantity, si: number, system: UnitSystem, decimals?: number): string {
+export type FigurePrecision = number | { significant: number };
+
+/** Decimals that show `significant` significant digits of `value`, at least `minDecimals`: (0.0812, 2) → 3, (7.44, 2) → 1. */
+export function significantDecimals(value: number, significant: number, minDecimals = 1): number {
+  if (!Number.isFinite(value) || value === 0) return minDecimals;
+  return Math.max(minDecimals, significant - 1 - Math.floor(Math.log10(Math.abs(value))));
+}
+
+/**
+ * An SI value as a sentence names it in the reader's units: `formatMeasure('deflection', 0.0066, 'SI')`
+ * → "6.6 mm", `(…, 'US')` → "0.26 in". `precision` overrides the sentence precision of the quantity:
+ * decimals, or `{ significant }` digits counted in the reader's unit (0.08 mm → "0.08 mm", "0.0031 in").
+ */
+export function formatMeasure(quantity: Quantity, si: number, system: UnitSystem, precision?: FigurePrecision): string {
   const display = toDisplay(quantity, si, system);
-  return `${formatDecimal(display, decimals ?? SENTENCE_DECIMALS[system][quantity])} ${unitLabel(quantity, system)}`;
+  const decimals =
+    precision === undefined
+      ? SENTENCE_DECIMALS[system][quantity]
+      : typeof precision === 'number'
+        ? precision
+        : significantDecimals(display, precision.significant);
+  return `${formatDecimal(display, decimals)} ${unitLabel(quantity, system)}`;
 }
 
 /** Significant digits an exported number keeps: enough for every double that came from a short decimal. */

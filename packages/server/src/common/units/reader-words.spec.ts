@@ -19,6 +19,10 @@ describe('reader-words', () => {
 
   it('keeps a stated precision and leaves text without marks, or with marks it does not know, alone', () => {
     expect(inReaderUnits(measure('deflection', 0.00663, 3), 'US')).toBe('0.261 in');
+    // significant digits in the reader's unit: 0.00008 m = 0.08 mm = 0.0031 in (1 in = 25.4 mm, NIST SP 811)
+    expect(measure('deflection', 0.00008, { significant: 2 })).toBe('\u27e6deflection:0.00008:s2\u27e7');
+    expect(inReaderUnits(measure('deflection', 0.00008, { significant: 2 }), 'SI')).toBe('0.08 mm');
+    expect(inReaderUnits(measure('deflection', 0.00008, { significant: 2 }), 'US')).toBe('0.0031 in');
     expect(inReaderUnits('plain 6.6 mm', 'US')).toBe('plain 6.6 mm');
     expect(inReaderUnits('\u27e6colour:1\u27e7 \u27e6force:abc\u27e7', 'US')).toBe('\u27e6colour:1\u27e7 \u27e6force:abc\u27e7');
   });

@@ -1,4 +1,4 @@
-import { DISPLAY_UNITS, formatMeasure, type Quantity, type UnitSystem } from '@tacet/vibration';
+import { DISPLAY_UNITS, formatMeasure, type FigurePrecision, type Quantity, type UnitSystem } from '@tacet/vibration';
 
 /**
  * Words with figures in the reader's units. The server words reasons and notes once (and keeps
@@ -12,20 +12,26 @@ import { DISPLAY_UNITS, formatMeasure, type Quantity, type UnitSystem } from '@t
 const OPEN = '\u27e6';
 const CLOSE = '\u27e7';
 const QUANTITIES = new Set<string>(Object.keys(DISPLAY_UNITS.SI));
-const MARK = /\u27e6([a-z]+):([^:\u27e6\u27e7]+)(?::(\d))?\u27e7/g;
+const MARK = /\u27e6([a-z]+):([^:\u27e6\u27e7]+)(?::(s?)(\d))?\u27e7/g;
 
-/** A figure inside words, written in the reader's units when the words are read (`decimals`: the sentence precision otherwise). */
-export function measure(quantity: Quantity, si: number, decimals?: number): string {
-  return `${OPEN}${quantity}:${si}${decimals === undefined ? '' : `:${decimals}`}${CLOSE}`;
+/**
+ * A figure inside words, written in the reader's units when the words are read. `precision`:
+ * decimals (`:1`) or significant digits (`{ significant: 2 }` → `:s2`); the quantity's sentence
+ * precision otherwise.
+ */
+export function measure(quantity: Quantity, si: number, precision?: FigurePrecision): string {
+  const tail = precision === undefined ? '' : typeof precision === 'number' ? `:${precision}` : `:s${precision.significant}`;
+  return `${OPEN}${quantity}:${si}${tail}${CLOSE}`;
 }
 
 /** The words with every figure mark written in `system` ("6.6 mm" / "0.26 in"); other text as it is. */
 export function inReaderUnits(text: string, system: UnitSystem): string {
   if (!text.includes(OPEN)) return text;
-  return text.replace(MARK, (whole, quantity: string, value: string, decimals: string | undefined) => {
+  return text.replace(MARK, (whole, quantity: string, value: string, significant: string | undefined, digits: string | undefined) => {
     const si = Number(value);
     if (!QUANTITIES.has(quantity) || Number.isNaN(si)) return whole;
-    return formatMeasure(quantity as Quantity, si, system, decimals === undefined ? undefined : Number(decimals));
+    const precision = digits === undefined ? undefined : significant ? { significant: Number(digits) } : Number(digits);
+    return formatMeasure(quantity as Quantity, si, system, precision);
   });
 }
 

@@ -3,7 +3,9 @@ import { describe, expect, it } from '@jest/globals';
 import { prepareWholeMachine, resonancePassage, wholeMachineModes, type WholeMachineModel } from '@tacet/vibration';
 import { prepareProblem, type SelectionInput } from '../selection-problem.js';
 import { toCatalogTuple, type CatalogRow } from './catalog-tuple.js';
-import { DEFAULT_MAX_RESONANT_MOTION_MM, formatMotionMm } from './passage-check.js';
+import { inReaderUnits } from '../../common/units/reader-words.js';
+import { motionMeasure } from '../selection-format.js';
+import { DEFAULT_MAX_RESONANT_MOTION_MM } from './passage-check.js';
 import { SelectionEvaluation } from './selection-evaluation.js';
 
 /**
@@ -108,9 +110,11 @@ describe('start-up passage (docs/engineering/start-up-passage.md)', () => {
     expect(c.passes).toBe(false);
     expect(c.passageLimitMm).toBe(0.05);
     expect(c.reasons).toHaveLength(3); // the three translational modes at 0.080 mm
-    expect(c.reasons[0]).toMatch(
+    expect(inReaderUnits(c.reasons[0], 'SI')).toMatch(
       /^Start-up and coast-down: passing the .+ mode at 5\.03 Hz \(302 rpm\), Fan moves the mounts 0\.08 mm \(steady peak\), more than the 0\.05 mm allowed\./,
     );
+    // a US reader: 0.080214 mm / 25.4 mm/in (exact, NIST SP 811 App. B) = 0.003158 in; 0.05 mm = 0.001969 in
+    expect(inReaderUnits(c.reasons[0], 'US')).toMatch(/moves the mounts 0\.0032 in \(steady peak\), more than the 0\.002 in allowed\./);
     // the same candidate passes with the limit just above its largest motion
     expect(judge({ speedRangeRpm: RANGE, orders: [1], sources: [FAN] }, ROW, { maxResonantMotionMm: 0.0803 }).passes).toBe(true);
   });
@@ -190,10 +194,16 @@ describe('start-up passage (docs/engineering/start-up-passage.md)', () => {
     }
   });
 
-  it('motions read with two significant digits', () => {
-    expect(formatMotionMm(0.080214)).toBe('0.08 mm');
-    expect(formatMotionMm(0.0123)).toBe('0.012 mm');
-    expect(formatMotionMm(7.44)).toBe('7.4 mm');
-    expect(formatMotionMm(12.3)).toBe('12.3 mm');
+  it("motions read with two significant digits (at least one decimal) in the reader's units", () => {
+    const si = (mm: number) => inReaderUnits(motionMeasure(mm), 'SI');
+    const us = (mm: number) => inReaderUnits(motionMeasure(mm), 'US');
+    expect(si(0.080214)).toBe('0.08 mm');
+    expect(si(0.0123)).toBe('0.012 mm');
+    expect(si(7.44)).toBe('7.4 mm');
+    expect(si(12.3)).toBe('12.3 mm');
+    // 1 in = 25.4 mm exactly (NIST SP 811, Appendix B): 0.0123 mm = 0.000484 in, 7.44 mm = 0.2929 in, 12.3 mm = 0.4843 in
+    expect(us(0.0123)).toBe('0.00048 in');
+    expect(us(7.44)).toBe('0.29 in');
+    expect(us(12.3)).toBe('0.48 in');
   });
 });

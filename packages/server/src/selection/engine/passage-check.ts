@@ -11,7 +11,7 @@
  * model (inertia unknown) there are no findings and the candidate shows no passage.
  */
 import { describeModeMotion, isVibrationInputError, resonancePassage, wholeMachineModes } from '@tacet/vibration';
-import { formatHz, formatNumber, formatRpm } from '../selection-format.js';
+import { formatHz, formatRpm, motionMeasure } from '../selection-format.js';
 import type { SelectionProblem } from '../selection-problem.js';
 import type { CandidatePassage } from '../selection.types.js';
 import type { CandidateStore } from './candidate-store.js';
@@ -131,7 +131,7 @@ export function passageReasons(findings: PassageFindings | undefined): string[] 
     .map(
       (x) =>
         `Start-up and coast-down: passing the ${x.mode} mode at ${formatHz(x.modeFrequencyHz)} (${formatRpm(x.speedRpm)}), ${x.source} ` +
-        `moves the mounts ${motionWords(x.motionMm)}, more than the ${formatMotionMm(findings.limitMm)} allowed${limitWords(findings)}. ` +
+        `moves the mounts ${motionWords(x.motionMm)}, more than the ${motionMeasure(findings.limitMm)} allowed${limitWords(findings)}. ` +
         'Stiffer or better-damped mounts, a finer balance grade or limit stops are needed.',
     );
 }
@@ -154,8 +154,8 @@ export function passageNotes(findings: PassageFindings | undefined): string[] {
   const largest = findings.crossings.reduce((a, b) => (b.motionMm > a.motionMm ? b : a));
   return [
     `Start-up and coast-down: ${findings.crossings.length === 1 ? 'one mode is' : `${findings.crossings.length} modes are`} passed below ` +
-      `the running range; the largest motion at the mounts is ${formatMotionMm(largest.motionMm)} (the ${largest.mode} mode at ` +
-      `${formatRpm(largest.speedRpm)}, ${largest.source}), within the ${formatMotionMm(findings.limitMm)} allowed${limitWords(findings)}. ` +
+      `the running range; the largest motion at the mounts is ${motionMeasure(largest.motionMm)} (the ${largest.mode} mode at ` +
+      `${formatRpm(largest.speedRpm)}, ${largest.source}), within the ${motionMeasure(findings.limitMm)} allowed${limitWords(findings)}. ` +
       'It is the steady motion there; a quick run-up passes with less.',
   ];
 }
@@ -167,12 +167,5 @@ function limitWords(findings: PassageFindings): string {
 }
 
 function motionWords(mm: number): string {
-  return Number.isFinite(mm) ? `${formatMotionMm(mm)} (steady peak)` : 'without bound (the mounts have no damping)';
-}
-
-/** A motion in mm with two significant digits (a motion of a few micrometres stays readable): "0.081 mm", "7.4 mm". */
-export function formatMotionMm(mm: number): string {
-  if (!Number.isFinite(mm) || mm <= 0) return `${formatNumber(mm, 1)} mm`;
-  const digits = Math.max(1, 1 - Math.floor(Math.log10(mm)));
-  return `${formatNumber(mm, digits)} mm`;
+  return Number.isFinite(mm) ? `${motionMeasure(mm)} (steady peak)` : 'without bound (the mounts have no damping)';
 }
