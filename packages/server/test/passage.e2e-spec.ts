@@ -101,6 +101,20 @@ describe('start-up passage (e2e)', () => {
     }
   });
 
+  it("the reason's motions in inches for a US reader (1 in = 25.4 mm exactly, NIST SP 811 Appendix B)", async () => {
+    const setUnits = (unitSystem: 'SI' | 'US') => t.http().patch('/api/auth/me').set(as(engineer)).send({ unitSystem }).expect(200);
+    await setUnits('US');
+    try {
+      const c = await select({ maxResonantMotionMm: 0.05 });
+      // 0.0802 mm = 0.00316 in; 0.05 mm = 0.00197 in
+      expect(c.reasons.find((r) => r.startsWith('Start-up and coast-down'))).toMatch(
+        /moves the mounts 0\.0032 in \(steady peak\), more than the 0\.002 in allowed/,
+      );
+    } finally {
+      await setUnits('SI');
+    }
+  });
+
   it.each([
     [-1, 'The largest motion on start-up must be more than 0 mm'],
     [0, 'The largest motion on start-up must be more than 0 mm'],
