@@ -30,3 +30,8 @@ export function catalogRow(fields: Partial<CatalogRow> = {}): CatalogRow {
     ...fields,
   };
 }
+
+/** An open spring with viscous damping (ζ = 0.05), otherwise as `catalogRow`; `fields` override. */
+export function springRow(fields: Partial<CatalogRow> = {}): CatalogRow {
+  return catalogRow({ mountType: 'open_spring', dampingRatio: 0.05, lossFactor: null, ...fields });
+}

@@ -1,3 +1,4 @@
+import { springRow } from '../../../test/factories/catalog-row.factory.js';
 import { seismicRestraintDemand } from '@tacet/vibration';
 import { prepareProblem } from '../selection-problem.js';
 import { toCatalogTuple, type CatalogRow, type DetailsLoader } from './catalog-tuple.js';
@@ -26,32 +27,7 @@ const SKID = [
 ];
 const RESTRAINT = { sdsG: 1.0, importanceFactor: 1, zOverH: 0.5, snubberGapMm: 5 };
 
-let nextId = 1;
-function row(fields: Partial<CatalogRow>): CatalogRow {
-  const id = fields.id ?? nextId++;
-  return {
-    id,
-    supplierId: 1,
-    partNumber: `P-${id}`,
-    series: null,
-    mountType: 'open_spring',
-    ratedLoadN: 3000,
-    verticalStiffnessNPerM: 1e5,
-    horizontalStiffnessNPerM: 1e5,
-    dynamicStiffnessRatio: 1,
-    dampingRatio: 0.05,
-    lossFactor: null,
-    maxDeflectionMm: 50,
-    tempMinC: null,
-    tempMaxC: null,
-    unitPrice: 50,
-    currency: 'USD',
-    leadTimeDays: 10,
-    restraintCapacityN: null,
-    upliftCapacityN: null,
-    ...fields,
-  };
-}
+const row = (fields: Partial<CatalogRow>): CatalogRow => springRow({ restraintCapacityN: null, upliftCapacityN: null, ...fields });
 
 const problem = (restraint: typeof RESTRAINT | null = RESTRAINT) =>
   prepareProblem({

@@ -1,3 +1,4 @@
+import { springRow } from '../../../test/factories/catalog-row.factory.js';
 import { prepareProblem, type SelectionInput } from '../selection-problem.js';
 import {
   CATALOG_COLUMN_INDEX,
@@ -26,29 +27,8 @@ const CORNERS = [
 ];
 const W4 = (1000 * 9.80665) / 4;
 
-let nextId = 1;
 function row(fields: Partial<CatalogRow>): CatalogRow {
-  const id = fields.id ?? nextId++;
-  const created: CatalogRow = {
-    id,
-    supplierId: 1,
-    partNumber: `P-${id}`,
-    series: null,
-    mountType: 'open_spring',
-    ratedLoadN: 3000,
-    verticalStiffnessNPerM: 1e5,
-    horizontalStiffnessNPerM: 1e5,
-    dynamicStiffnessRatio: 1,
-    dampingRatio: 0.05,
-    lossFactor: null,
-    maxDeflectionMm: 50,
-    tempMinC: null,
-    tempMaxC: null,
-    unitPrice: 50,
-    currency: 'USD',
-    leadTimeDays: 10,
-    ...fields,
-  };
+  const created = springRow(fields);
   allRows.push(created);
   return created;
 }
