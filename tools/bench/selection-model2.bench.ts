@@ -42,6 +42,7 @@ import {
   type AssemblyComponent,
   type WholeMachineMount,
 } from '../../packages/vibration/src/index.js';
+import { DEFAULT_STIFFNESS_TOLERANCE_PCT, FALLBACK_TOLERANCE_PCT } from '../../packages/server/src/selection/engine/stiffness-band.js';
 import { writeDemoCatalog } from '../catalog/generate-demo-catalog.js';
 import { signIn } from '../harness/fixtures.mjs';
 import type { TacetServer } from '../harness/server.mjs';
@@ -90,16 +91,6 @@ const OPERATING = {
 };
 /** `--min-isolation 99.5` shows the cost when few or no candidates pass (every one is then judged, selection.md §21). */
 const CRITERIA = { minIsolationPct: arg('min-isolation', 85), minUtilization: 0.5, maxUtilization: 1.0 };
-/** docs/engineering/selection.md §20 (common practice). */
-const TOLERANCE: Record<string, number> = {
-  elastomer_pad: 20,
-  elastomer_mount: 15,
-  open_spring: 10,
-  housed_spring: 10,
-  restrained_spring: 10,
-  air_spring: 10,
-  wire_rope: 20,
-};
 
 const fmt = (ms: number) => ms.toFixed(1).padStart(7);
 
@@ -288,7 +279,7 @@ function bareSelection(rows: Rows): { judged: number; passing: number } {
       damping,
     }));
     rigidBodyModes({ massKg: mass.massKg, inertia: mass.inertia, cg: mass.cg, mounts });
-    const tol = TOLERANCE[rows.type[r]] ?? 20;
+    const tol = (DEFAULT_STIFFNESS_TOLERANCE_PCT as Record<string, number>)[rows.type[r]] ?? FALLBACK_TOLERANCE_PCT;
     const lo = 1 - tol / 100;
     const hi = 1 + tol / 100;
     // one sweep per source over the stretched range covers the band (selection.md §20)
