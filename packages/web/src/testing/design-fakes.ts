@@ -1,5 +1,7 @@
 import { isolationDb, isolationEfficiencyPct, transmissibilityAt, viscousDamping } from '@tacet/vibration';
 
+import { designFormSchema, type DesignFormValues } from '@/features/designs/schemas/design-form';
+import type { Units } from '@/lib/units';
 import type { Candidate, Design, DesignInput, DesignListItem, Project, SelectionResult, UpdateDesignInput } from '@/types/design-api';
 
 import { TEST_USERS } from './factories';
@@ -280,4 +282,16 @@ export function serveDesign(fake: FakeApi, initial: Design, candidates = demoCan
       ],
     });
   return state;
+}
+
+/** The design form's problems per field path (the first message of each), as the form shows them; {} when valid. */
+export function designFormErrors(values: DesignFormValues, units: Units): Record<string, string> {
+  try {
+    designFormSchema(units).validateSync(values, { abortEarly: false });
+    return {};
+  } catch (error) {
+    const out: Record<string, string> = {};
+    for (const inner of (error as { inner: { path: string; message: string }[] }).inner) out[inner.path] ??= inner.message;
+    return out;
+  }
 }

@@ -1,11 +1,10 @@
 import { lbToKg } from '@tacet/vibration';
 
 import { unitsFor } from '@/lib/units';
-import { demoInput } from '@/testing/design-fakes';
+import { demoInput, designFormErrors } from '@/testing/design-fakes';
 
 import {
   describeErrors,
-  designFormSchema,
   numberText,
   parseList,
   serverErrorsToForm,
@@ -17,16 +16,7 @@ import {
 const SI = unitsFor('SI');
 const US = unitsFor('US');
 
-function errorsOf(values: DesignFormValues, units = SI): Record<string, unknown> {
-  try {
-    designFormSchema(units).validateSync(values, { abortEarly: false });
-    return {};
-  } catch (error) {
-    const out: Record<string, unknown> = {};
-    for (const inner of (error as { inner: { path: string; message: string }[] }).inner) out[inner.path] ??= inner.message;
-    return out;
-  }
-}
+const errorsOf = (values: DesignFormValues, units = SI) => designFormErrors(values, units);
 
 describe('design form values', () => {
   it('round-trips the saved SI input exactly in SI units', () => {

@@ -1,8 +1,8 @@
 import { unitsFor } from '@/lib/units';
-import { demoInput } from '@/testing/design-fakes';
+import { demoInput, designFormErrors } from '@/testing/design-fakes';
 import type { DesignInput } from '@/types/design-api';
 
-import { designFormSchema, describeErrors, serverErrorsToForm, toDesignInput, toFormValues, type DesignFormValues } from './design-form';
+import { describeErrors, serverErrorsToForm, toDesignInput, toFormValues, type DesignFormValues } from './design-form';
 
 const SI = unitsFor('SI');
 const US = unitsFor('US');
@@ -16,16 +16,7 @@ function withExtras(): DesignInput {
   return input;
 }
 
-function errorsOf(values: DesignFormValues): Record<string, string> {
-  try {
-    designFormSchema(SI).validateSync(values, { abortEarly: false });
-    return {};
-  } catch (error) {
-    const out: Record<string, string> = {};
-    for (const inner of (error as { inner: { path: string; message: string }[] }).inner) out[inner.path] ??= inner.message;
-    return out;
-  }
-}
+const errorsOf = (values: DesignFormValues) => designFormErrors(values, SI);
 
 describe('second mass and support stiffness in the design form', () => {
   it('shows the saved values and sends them back unchanged in SI', () => {

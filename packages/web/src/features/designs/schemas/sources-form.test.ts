@@ -1,25 +1,16 @@
 import { inToM, lbfToN, lbToKg } from '@tacet/vibration';
 
 import { unitsFor } from '@/lib/units';
-import { demoInput } from '@/testing/design-fakes';
+import { demoInput, designFormErrors } from '@/testing/design-fakes';
 import type { DesignInput } from '@/types/design-api';
 
-import { designFormSchema, toDesignInput, toFormValues, type DesignFormValues } from './design-form';
+import { toDesignInput, toFormValues, type DesignFormValues } from './design-form';
 import { proposeSources, ROTATING_SHARE } from './sources-form';
 
 const SI = unitsFor('SI');
 const US = unitsFor('US');
 
-function errorsOf(values: DesignFormValues): Record<string, string> {
-  try {
-    designFormSchema(SI).validateSync(values, { abortEarly: false });
-    return {};
-  } catch (error) {
-    const out: Record<string, string> = {};
-    for (const inner of (error as { inner: { path: string; message: string }[] }).inner) out[inner.path] ??= inner.message;
-    return out;
-  }
-}
+const errorsOf = (values: DesignFormValues) => designFormErrors(values, SI);
 
 /** The demo skid on a drive, with an unbalance, a force at twice the supply, a skip band, poles and a stiffness tolerance. */
 function wholeMachineInput(): DesignInput {
