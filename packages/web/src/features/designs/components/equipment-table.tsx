@@ -1,12 +1,12 @@
 import { Button, HTMLTable } from '@blueprintjs/core';
-import { PlusIcon, TrashIcon } from '@blueprintjs/icons';
+import { PlusIcon } from '@blueprintjs/icons';
 import { INPUT_LABELS } from '@tacet/vibration';
 import { FieldArray, useFormikContext } from 'formik';
 
 import { useUnits } from '@/lib/units';
 
 import { blankComponent, type DesignFormValues } from '../schemas/design-form';
-import { CellInput, ListError } from './form-cells';
+import { CellInput, ListError, RemoveRowCell } from './form-cells';
 
 function rowName(name: string, index: number): string {
   return name.trim() || `component ${index + 1}`;
@@ -98,19 +98,12 @@ export function EquipmentTable({ readOnly }: { readOnly: boolean }) {
                           />
                         </td>
                       ))}
-                      {readOnly ? null : (
-                        <td className="tc-table-actions">
-                          <Button
-                            variant="minimal"
-                            size="small"
-                            icon={<TrashIcon />}
-                            aria-label={`Remove ${name}`}
-                            title="Remove"
-                            disabled={values.components.length <= 1}
-                            onClick={() => remove(index)}
-                          />
-                        </td>
-                      )}
+                      <RemoveRowCell
+                        label={`Remove ${name}`}
+                        readOnly={readOnly}
+                        disabled={values.components.length <= 1}
+                        onRemove={() => remove(index)}
+                      />
                     </tr>
                   );
                 })}

@@ -1,4 +1,5 @@
-import { FormGroup, InputGroup } from '@blueprintjs/core';
+import { Button, FormGroup, InputGroup } from '@blueprintjs/core';
+import { TrashIcon } from '@blueprintjs/icons';
 import { getIn, useField, useFormikContext } from 'formik';
 import type { ReactNode } from 'react';
 
@@ -97,5 +98,32 @@ export function ListError({ name }: { name: string }) {
     <p className="tc-list-error" role="alert">
       {error}
     </p>
+  );
+}
+
+export interface RemoveRowCellProps {
+  /** Accessible name, e.g. "Remove point A". */
+  label: string;
+  readOnly: boolean;
+  /** E.g. when the table holds the fewest rows it may. */
+  disabled?: boolean;
+  onRemove: () => void;
+}
+
+/** The last cell of an editable design table's row: its remove button (no cell when read-only). */
+export function RemoveRowCell({ label, readOnly, disabled, onRemove }: RemoveRowCellProps) {
+  if (readOnly) return null;
+  return (
+    <td className="tc-table-actions">
+      <Button
+        variant="minimal"
+        size="small"
+        icon={<TrashIcon />}
+        aria-label={label}
+        title="Remove"
+        disabled={disabled}
+        onClick={onRemove}
+      />
+    </td>
   );
 }

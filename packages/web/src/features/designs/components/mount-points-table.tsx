@@ -1,12 +1,12 @@
 import { Button, HTMLTable } from '@blueprintjs/core';
-import { PlusIcon, TrashIcon } from '@blueprintjs/icons';
+import { PlusIcon } from '@blueprintjs/icons';
 import { INPUT_LABELS } from '@tacet/vibration';
 import { FieldArray, useFormikContext } from 'formik';
 
 import { useUnits } from '@/lib/units';
 
 import { blankMountPoint, type DesignFormValues } from '../schemas/design-form';
-import { CellInput, ListError } from './form-cells';
+import { CellInput, ListError, RemoveRowCell } from './form-cells';
 
 /** The next free label: A, B, … Z, then P27, P28 … */
 export function nextPointLabel(existing: readonly string[]): string {
@@ -89,19 +89,12 @@ export function MountPointsTable({ readOnly, loadsN }: MountPointsTableProps) {
                       <td className={`tc-number${load !== undefined && load < 0 ? ' tc-text-danger' : ''}`}>
                         {load === undefined ? '—' : units.format('force', load)}
                       </td>
-                      {readOnly ? null : (
-                        <td className="tc-table-actions">
-                          <Button
-                            variant="minimal"
-                            size="small"
-                            icon={<TrashIcon />}
-                            aria-label={`Remove point ${name}`}
-                            title="Remove"
-                            disabled={values.mountPoints.length <= 3}
-                            onClick={() => remove(index)}
-                          />
-                        </td>
-                      )}
+                      <RemoveRowCell
+                        label={`Remove point ${name}`}
+                        readOnly={readOnly}
+                        disabled={values.mountPoints.length <= 3}
+                        onRemove={() => remove(index)}
+                      />
                     </tr>
                   );
                 })}

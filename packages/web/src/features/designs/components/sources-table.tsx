@@ -1,5 +1,5 @@
 import { Button, Callout, HTMLSelect, HTMLTable } from '@blueprintjs/core';
-import { LightbulbIcon, PlusIcon, TrashIcon } from '@blueprintjs/icons';
+import { LightbulbIcon, PlusIcon } from '@blueprintjs/icons';
 import { FieldArray, useField, useFormikContext } from 'formik';
 import { useState } from 'react';
 
@@ -9,7 +9,7 @@ import { SOURCE_AXES } from '@/types/model2-api';
 
 import type { DesignFormValues } from '../schemas/design-form';
 import { blankSource, proposeSources, ROTATING_SHARE, SOURCE_LIMITS } from '../schemas/sources-form';
-import { CellInput, ListError } from './form-cells';
+import { CellInput, ListError, RemoveRowCell } from './form-cells';
 
 const KIND_OPTIONS = [
   { value: 'unbalance', label: 'Unbalance' },
@@ -197,18 +197,7 @@ export function SourcesTable({ readOnly, components }: SourcesTableProps) {
                             <NotUsed />
                           )}
                         </td>
-                        {readOnly ? null : (
-                          <td className="tc-table-actions">
-                            <Button
-                              variant="minimal"
-                              size="small"
-                              icon={<TrashIcon />}
-                              aria-label={`Remove ${name}`}
-                              title="Remove"
-                              onClick={() => remove(index)}
-                            />
-                          </td>
-                        )}
+                        <RemoveRowCell label={`Remove ${name}`} readOnly={readOnly} onRemove={() => remove(index)} />
                       </tr>
                     );
                   })}
