@@ -1,6 +1,6 @@
 import { AxiosError, AxiosHeaders } from 'axios';
 
-import { errorMessage, errorStatus, fieldErrors, fieldLabel, formFailure } from './api-errors';
+import { errorMessage, errorStatus, fieldLabel, formFailure } from './api-errors';
 
 function apiError(status: number, data: unknown, code = 'ERR_BAD_REQUEST'): AxiosError {
   const config = { headers: new AxiosHeaders() };
@@ -65,27 +65,6 @@ describe('errorMessage', () => {
   });
 });
 
-describe('fieldErrors', () => {
-  it('maps the first problem of each field for a form', () => {
-    const error = apiError(400, {
-      statusCode: 400,
-      message: 'Validation failed',
-      errors: [
-        { field: 'email', message: 'email must be an email' },
-        { field: 'email', message: 'email should not be empty' },
-        { field: 'name', message: 'name must be shorter' },
-      ],
-    });
-    expect(fieldErrors(error)).toEqual({ email: 'email must be an email', name: 'name must be shorter' });
-    expect(errorStatus(error)).toBe(400);
-  });
-
-  it('is empty for errors without field problems', () => {
-    expect(fieldErrors(apiError(409, { statusCode: 409, message: 'taken' }))).toEqual({});
-    expect(fieldErrors(new Error('x'))).toEqual({});
-  });
-});
-
 describe('formFailure', () => {
   const refused = apiError(400, {
     statusCode: 400,
@@ -110,6 +89,24 @@ describe('formFailure', () => {
   it('gives the whole error as the general message when it names no field', () => {
     const conflict = apiError(409, { statusCode: 409, message: 'That name is taken' });
     expect(formFailure(conflict, ['name'])).toEqual({ fields: {}, general: 'That name is taken.' });
+    expect(formFailure(new Error('x'), ['name']).fields).toEqual({});
+  });
+
+  it('keeps the first problem of each field', () => {
+    const error = apiError(400, {
+      statusCode: 400,
+      message: 'Validation failed',
+      errors: [
+        { field: 'email', message: 'email must be an email' },
+        { field: 'email', message: 'email should not be empty' },
+        { field: 'name', message: 'name must be shorter' },
+      ],
+    });
+    expect(formFailure(error, ['email', 'name'])).toEqual({
+      fields: { email: 'email must be an email', name: 'name must be shorter' },
+      general: null,
+    });
+    expect(errorStatus(error)).toBe(400);
   });
 });
 

@@ -53,19 +53,6 @@ function problemText(item: ApiFieldError): string {
   return place ? `${place.charAt(0).toUpperCase()}${place.slice(1)}: ${message}` : message;
 }
 
-/**
- * The server's field problems keyed by field path (first message per field), ready for
- * Formik's `setErrors`. Empty when the error carries none.
- */
-export function fieldErrors(error: unknown): Record<string, string> {
-  if (!axios.isAxiosError(error) || !isApiErrorBody(error.response?.data)) return {};
-  const result: Record<string, string> = {};
-  for (const item of error.response.data.errors ?? []) {
-    if (item && typeof item.field === 'string' && !(item.field in result)) result[item.field] = item.message;
-  }
-  return result;
-}
-
 /** A refused save split for a form: each problem once, at its field when the form has one. */
 export interface FormFailure {
   /** Messages keyed by the form's own field names, for Formik's `setErrors`. */

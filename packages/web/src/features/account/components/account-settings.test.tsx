@@ -13,6 +13,16 @@ function serveProfile() {
     })
     .on('post', '/auth/me/password', ({ body }) => {
       const { currentPassword } = body as { currentPassword: string };
+      if (currentPassword === 'refused by the rules') {
+        return {
+          status: 400,
+          data: {
+            statusCode: 400,
+            message: 'Validation failed',
+            errors: [{ field: 'newPassword', message: 'New password must not contain the email address' }],
+          },
+        };
+      }
       if (currentPassword !== 'the old secret') {
         return { status: 400, data: { statusCode: 400, message: 'Current password is incorrect' } };
       }
@@ -94,6 +104,20 @@ describe('Account page', () => {
 
     const form = screen.getByRole('form', { name: 'Change password' });
     expect(await within(form).findByRole('alert')).toHaveTextContent('Current password is incorrect.');
+  });
+
+  it('shows a refused new password once, at its field', async () => {
+    serveProfile();
+    const { user } = renderApp({ signedInAs: 'engineer', path: '/account' });
+
+    await user.type(await screen.findByLabelText('Current password'), 'refused by the rules');
+    await user.type(screen.getByLabelText('New password'), 'a brand new secret');
+    await user.type(screen.getByLabelText('New password again'), 'a brand new secret');
+    await user.click(screen.getByRole('button', { name: 'Change password' }));
+
+    const form = screen.getByRole('form', { name: 'Change password' });
+    expect(await within(form).findByText('New password must not contain the email address')).toBeInTheDocument();
+    expect(within(form).getAllByText(/must not contain the email address/)).toHaveLength(1);
   });
 
   it('changes the password and clears the form', async () => {

@@ -4,7 +4,7 @@ import { useState } from 'react';
 
 import { FormError } from '@/components/form/form-error';
 import { TextField } from '@/components/form/text-field';
-import { errorMessage, fieldErrors } from '@/lib/api-errors';
+import { formFailure } from '@/lib/api-errors';
 
 import { useChangePassword } from '../api/change-password';
 import { changePasswordSchema, PASSWORD_MIN_LENGTH, type ChangePasswordValues } from '../schemas/account-schemas';
@@ -29,8 +29,9 @@ export function ChangePasswordForm({ temporary = false, onChanged }: { temporary
       setChanged(true);
       onChanged?.();
     } catch (error) {
-      helpers.setErrors(fieldErrors(error));
-      setFailure(errorMessage(error));
+      const { fields, general } = formFailure(error, ['currentPassword', 'newPassword', 'confirmPassword']);
+      helpers.setErrors(fields);
+      setFailure(general);
     }
   };
 
