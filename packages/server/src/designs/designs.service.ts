@@ -148,8 +148,10 @@ export class DesignsService {
     }
     if (!affected) throw new ConflictException(STALE_VERSION);
     // the last selection belongs to the old input (GET would no longer return it anyway)
-    if (inputChanged) await this.selections.delete({ designId: id });
-    return this.findOne(user, id);
+    if (!inputChanged) return this.findOne(user, id);
+    await this.selections.delete({ designId: id });
+    const saved = await this.getVisible(user, id);
+    return DesignDto.from(saved, frequenciesOrNone(saved.input), null);
   }
 
   /**
